@@ -1,0 +1,268 @@
+using PlaneLateral.Assembly;
+using PlaneLateral.Elements;
+using PlaneLateral.Model;
+using PlaneLateral.Solvers;
+
+namespace PlaneLateral.Analysis;
+
+/// <summary>Settings of a linear static analysis.</summary>
+public sealed record AnalysisOptions
+{
+    /// <summary>The sparse SPD solver; null picks the default sparse solver.</summary>
+    public ISparseSpdSolver? Solver { get; init; }
+
+    /// <summary>A pivot below this fraction of its original diagonal marks a mechanism.</summary>
+    public double PivotTolerance { get; init; } = 1e-10;
+}
+
+/// <summary>
+/// Linear static analysis of a planar frame model: assemble K once, factorise once, solve every load case and
+/// every stiffness point on that factor, superpose the combinations, and check each result (residual and global
+/// equilibrium).
+/// </summary>
+public static class LinearStaticAnalysis
+{
+    /// <exception cref="UnstableModelException">The model is a mechanism.</exception>
+    /// <exception cref="ModelInputException">A load acts on a DOF that nothing can resist (e.g. a moment at a pinned-only joint).</exception>
+    public static AnalysisResult Run(StructureModel model, AnalysisOptions? options = null)
+    {
+        options ??= new AnalysisOptions();
+        var solver = options.Solver ?? DefaultSolver.Create();
+        var elements = model.Members.Select(m => new FrameElement(m, model.Nodes[m.Start], model.Nodes[m.End])).ToArray();
+        var dofs = DofMap.Build(model, elements);
+        CheckLoadsOnHeldRotations(model, dofs);
+
+        var k = Assemble(model, elements, dofs);
+        var factor = solver.Factorize(k, options.PivotTolerance);
+        if (factor.PivotFailures.Count > 0) throw Unstable(model, dofs, factor);
+
+        var memberLoads = model.LoadCases.Select(c => GroupByMember(c, model.Members.Count)).ToArray();
+        var loadVectors = model.LoadCases.Select((c, i) => LoadVector(model, elements, dofs, c, memberLoads[i])).ToArray();
+
+        var cases = new List<CaseResult>();
+        var solutions = new List<double[]>();
+        for (int i = 0; i < model.LoadCases.Count; i++)
+        {
+            var u = new double[dofs.FreeCount];
+            factor.Solve(loadVectors[i], u);
+            solutions.Add(u);
+            var lc = model.LoadCases[i];
+            cases.Add(Recover(model, elements, dofs, k, lc.Id, lc.Description, false, u, loadVectors[i], memberLoads[i], Applied(model, elements, lc)));
+        }
+
+        foreach (var combo in model.Combinations)
+        {
+            var u = new double[dofs.FreeCount];
+            var f = new double[dofs.FreeCount];
+            var loads = Enumerable.Range(0, model.Members.Count).Select(_ => new List<MemberLoad>()).ToArray();
+            var applied = new double[3];
+            foreach (var (ci, factorValue) in combo.Factors)
+            {
+                for (int j = 0; j < u.Length; j++) { u[j] += factorValue * solutions[ci][j]; f[j] += factorValue * loadVectors[ci][j]; }
+                for (int m = 0; m < loads.Length; m++)
+                    foreach (var ml in memberLoads[ci][m])
+                        loads[m].Add(ml with { WStart = factorValue * ml.WStart, WEnd = factorValue * ml.WEnd });
+                var a = Applied(model, elements, model.LoadCases[ci]);
+                for (int d = 0; d < 3; d++) applied[d] += factorValue * a[d];
+            }
+            var grouped = loads.Select(l => (IReadOnlyList<MemberLoad>)l).ToArray();
+            cases.Add(Recover(model, elements, dofs, k, combo.Id, combo.Description, true, u, f, grouped, applied));
+        }
+
+        var stiffness = new List<StiffnessResult>();
+        foreach (var p in model.StiffnessPoints)
+        {
+            int eq = dofs.Equation(p.Node, p.Direction);
+            var b = new double[dofs.FreeCount];
+            var u = new double[dofs.FreeCount];
+            b[eq] = 1.0;
+            factor.Solve(b, u);
+            stiffness.Add(new StiffnessResult(p, u[eq], 1.0 / u[eq]));
+        }
+
+        return new AnalysisResult
+        {
+            Model = model,
+            Dofs = dofs,
+            Solve = new SolveSummary(solver.Description, dofs.FreeCount, k.NonZerosLower, factor.FactorNonZeros, model.LoadCases.Count + model.StiffnessPoints.Count),
+            Cases = cases,
+            Stiffness = stiffness,
+            Notes = Notes(model, dofs),
+        };
+    }
+
+    /// <summary>Assembles the global stiffness of the unknowns (members and support springs).</summary>
+    public static SymmetricSparseMatrix Assemble(StructureModel model, IReadOnlyList<FrameElement> elements, DofMap dofs)
+    {
+        var builder = new SymmetricMatrixBuilder(dofs.FreeCount, 21 * elements.Count + dofs.FreeCount);
+        foreach (var e in elements) builder.AddElement(dofs.ElementEquations(e.Member), e.GlobalStiffness);
+        foreach (var s in model.Supports)
+            for (int d = 0; d < 3; d++)
+            {
+                double ks = s.Spring((Dof)d);
+                int eq = dofs.Equation(s.Node, (Dof)d);
+                if (ks > 0 && eq >= 0) builder.AddDiagonal(eq, ks);
+            }
+        return builder.Build();
+    }
+
+    private static IReadOnlyList<MemberLoad>[] GroupByMember(LoadCase c, int memberCount)
+    {
+        var lists = Enumerable.Range(0, memberCount).Select(_ => new List<MemberLoad>()).ToArray();
+        foreach (var ml in c.MemberLoads) lists[ml.Member].Add(ml);
+        return lists.Select(l => (IReadOnlyList<MemberLoad>)l).ToArray();
+    }
+
+    private static double[] LoadVector(StructureModel model, FrameElement[] elements, DofMap dofs, LoadCase c, IReadOnlyList<MemberLoad>[] memberLoads)
+    {
+        var f = new double[dofs.FreeCount];
+        foreach (var nl in c.NodalLoads)
+        {
+            AddAt(f, dofs.Equation(nl.Node, Dof.X), nl.Fx);
+            AddAt(f, dofs.Equation(nl.Node, Dof.Y), nl.Fy);
+            AddAt(f, dofs.Equation(nl.Node, Dof.RZ), nl.Mz);
+        }
+        for (int m = 0; m < elements.Length; m++)
+        {
+            if (memberLoads[m].Count == 0) continue;
+            var fe = elements[m].GlobalEquivalentLoads(memberLoads[m]);
+            var eqs = dofs.ElementEquations(elements[m].Member);
+            for (int d = 0; d < 6; d++) AddAt(f, eqs[d], fe[d]);
+        }
+        return f;
+
+        static void AddAt(double[] v, int eq, double value) { if (eq >= 0) v[eq] += value; }
+    }
+
+    /// <summary>Total applied Fx, Fy and moment about the origin, from the loads as written (not from element vectors).</summary>
+    private static double[] Applied(StructureModel model, FrameElement[] elements, LoadCase c)
+    {
+        double fx = 0, fy = 0, mz = 0;
+        foreach (var nl in c.NodalLoads)
+        {
+            var n = model.Nodes[nl.Node];
+            fx += nl.Fx; fy += nl.Fy; mz += nl.Mz + n.X * nl.Fy - n.Y * nl.Fx;
+        }
+        foreach (var ml in c.MemberLoads)
+        {
+            // Integrate the load as written along the member's geometry: the integrand is at most quadratic in s,
+            // so the three-point Gauss rule is exact.
+            var e = elements[ml.Member];
+            var start = model.Nodes[e.Member.Start];
+            var (qx1, qx2, qy1, qy2) = e.LocalIntensity(ml);
+            for (int g = 0; g < 3; g++)
+            {
+                double xi = Gauss3.Points[g], w = Gauss3.Weights[g] * e.Length;
+                double qx = qx1 + (qx2 - qx1) * xi, qy = qy1 + (qy2 - qy1) * xi;
+                double px = qx * e.Cos - qy * e.Sin, py = qx * e.Sin + qy * e.Cos;   // local x = (c, s), local y = (−s, c)
+                double x = start.X + xi * e.Length * e.Cos, y = start.Y + xi * e.Length * e.Sin;
+                fx += w * px; fy += w * py; mz += w * (x * py - y * px);
+            }
+        }
+        return [fx, fy, mz];
+    }
+
+    private static CaseResult Recover(StructureModel model, FrameElement[] elements, DofMap dofs, SymmetricSparseMatrix k,
+        string id, string description, bool isCombination, double[] u, double[] f, IReadOnlyList<MemberLoad>[] memberLoads, double[] applied)
+    {
+        int n = model.Nodes.Count;
+        var full = new double[3 * n];
+        for (int eq = 0; eq < u.Length; eq++)
+        {
+            var (node, dof) = dofs.DofOf(eq);
+            full[3 * node + (int)dof] = u[eq];
+        }
+
+        // Residual of the solve.
+        var ku = new double[u.Length];
+        k.Multiply(u, ku);
+        double rr = 0, ff = 0;
+        for (int i = 0; i < u.Length; i++) { rr += (ku[i] - f[i]) * (ku[i] - f[i]); ff += f[i] * f[i]; }
+        double residual = ff == 0 ? Math.Sqrt(rr) : Math.Sqrt(rr / ff);
+
+        // Member end forces and the forces members take from each node.
+        var nodeForce = new double[3 * n];
+        var memberForces = new MemberEndForces[elements.Length];
+        for (int m = 0; m < elements.Length; m++)
+        {
+            var e = elements[m];
+            var ue = new double[6];
+            for (int d = 0; d < 3; d++) { ue[d] = full[3 * e.Member.Start + d]; ue[d + 3] = full[3 * e.Member.End + d]; }
+            var fl = e.LocalEndForces(ue, memberLoads[m]);
+            memberForces[m] = new MemberEndForces(m, fl[0], fl[1], fl[2], fl[3], fl[4], fl[5]);
+            var fg = e.GlobalNodeForces(ue, memberLoads[m]);
+            for (int d = 0; d < 3; d++) { nodeForce[3 * e.Member.Start + d] += fg[d]; nodeForce[3 * e.Member.End + d] += fg[d + 3]; }
+        }
+
+        // Reactions: what the members take from a supported node, less the load applied straight to it; springs push back with −k·u.
+        var reactions = new List<Reaction>();
+        double rxSum = 0, rySum = 0, rmSum = 0;
+        foreach (var s in model.Supports)
+        {
+            var r = new double[3];
+            for (int d = 0; d < 3; d++)
+            {
+                double spring = s.Spring((Dof)d);
+                if (s.Restrains((Dof)d)) r[d] = nodeForce[3 * s.Node + d] - DirectNodalLoad(model, id, isCombination, s.Node, d);
+                else if (spring > 0) r[d] = -spring * full[3 * s.Node + d];
+            }
+            reactions.Add(new Reaction(s.Node, r[0], r[1], r[2]));
+            var node = model.Nodes[s.Node];
+            rxSum += r[0]; rySum += r[1]; rmSum += r[2] + node.X * r[1] - node.Y * r[0];
+        }
+
+        return new CaseResult
+        {
+            Id = id,
+            IsCombination = isCombination,
+            Description = description,
+            Displacements = full,
+            Reactions = reactions,
+            MemberForces = memberForces,
+            Equilibrium = new EquilibriumCheck(applied[0], applied[1], applied[2], rxSum, rySum, rmSum),
+            RelativeResidual = residual,
+        };
+    }
+
+    /// <summary>The nodal load applied directly at (node, dof) in a case or, for a combination, the factored sum.</summary>
+    private static double DirectNodalLoad(StructureModel model, string id, bool isCombination, int node, int dof)
+    {
+        double Of(LoadCase c) => c.NodalLoads.Where(l => l.Node == node).Sum(l => dof == 0 ? l.Fx : dof == 1 ? l.Fy : l.Mz);
+        if (!isCombination) return Of(model.LoadCases.First(c => c.Id == id));
+        var combo = model.Combinations.First(c => c.Id == id);
+        return combo.Factors.Sum(f => f.Factor * Of(model.LoadCases[f.Case]));
+    }
+
+    private static void CheckLoadsOnHeldRotations(StructureModel model, DofMap dofs)
+    {
+        var problems = new List<ModelDiagnostic>();
+        foreach (var c in model.LoadCases)
+            foreach (var nl in c.NodalLoads)
+                if (nl.Mz != 0 && dofs.State(nl.Node, Dof.RZ) == DofState.Unattached)
+                    problems.Add(new ModelDiagnostic(model.SourcePath, 0, 0, $"load case \"{c.Id}\"",
+                        $"a moment is applied at node \"{model.Nodes[nl.Node].Id}\", where no member, support or spring resists rotation (every member there is a brace or released)",
+                        "apply the moment where a member without a release meets the node, or remove a moment release there"));
+        if (problems.Count > 0) throw new ModelInputException(problems);
+    }
+
+    private static IReadOnlyList<string> Notes(StructureModel model, DofMap dofs)
+    {
+        var held = Enumerable.Range(0, model.Nodes.Count).Where(i => dofs.State(i, Dof.RZ) == DofState.Unattached).Select(i => model.Nodes[i].Id).ToList();
+        if (held.Count == 0) return [];
+        return [$"Rotation held at {held.Count} node(s) where only braces or released members meet ({string.Join(", ", held.Take(10))}{(held.Count > 10 ? ", ..." : "")}); nothing there resists rotation, so holding it changes no result."];
+    }
+
+    private static UnstableModelException Unstable(StructureModel model, DofMap dofs, ISparseSpdFactor factor)
+    {
+        NamedDof Name(int eq) { var (node, dof) = dofs.DofOf(eq); return new NamedDof(model.Nodes[node].Id, dof); }
+        var list = new List<Mechanism>();
+        for (int i = 0; i < factor.PivotFailures.Count; i++)
+        {
+            var z = factor.MechanismShape(i);
+            var moving = Enumerable.Range(0, z.Length).Where(j => Math.Abs(z[j]) > 1e-6)
+                .OrderByDescending(j => Math.Abs(z[j])).ThenBy(j => j).Select(Name).ToList();
+            list.Add(new Mechanism(Name(factor.PivotFailures[i].Dof), moving));
+        }
+        return new UnstableModelException(model.SourcePath, list);
+    }
+}

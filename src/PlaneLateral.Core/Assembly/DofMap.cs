@@ -1,0 +1,90 @@
+using PlaneLateral.Elements;
+using PlaneLateral.Model;
+
+namespace PlaneLateral.Assembly;
+
+/// <summary>State of one nodal DOF.</summary>
+public enum DofState
+{
+    /// <summary>An unknown of the system.</summary>
+    Free,
+    /// <summary>Held at zero by a support.</summary>
+    Restrained,
+    /// <summary>
+    /// A rotation that no member, support or spring stiffens (every member meeting there is a brace or released);
+    /// held at zero, which changes nothing else, and reported.
+    /// </summary>
+    Unattached,
+}
+
+/// <summary>
+/// Numbering of the model's nodal DOFs (3 per node: ux, uy, rz) into equations. Built once, then immutable.
+/// Note: equation numbers are not node numbers; use <see cref="Equation"/> and <see cref="DofOf"/> to go between them.
+/// </summary>
+public sealed class DofMap
+{
+    private readonly int[] _equation;   // node*3+dof → equation or −1
+    private readonly DofState[] _state;
+    private readonly int[] _dofOfEquation;
+
+    private DofMap(int[] equation, DofState[] state, int[] dofOfEquation)
+    {
+        _equation = equation;
+        _state = state;
+        _dofOfEquation = dofOfEquation;
+    }
+
+    /// <summary>Number of unknowns.</summary>
+    public int FreeCount => _dofOfEquation.Length;
+
+    public int NodeCount => _equation.Length / 3;
+
+    /// <summary>Equation of (node, dof), or −1 when it is not an unknown.</summary>
+    public int Equation(int node, Dof dof) => _equation[3 * node + (int)dof];
+
+    public DofState State(int node, Dof dof) => _state[3 * node + (int)dof];
+
+    /// <summary>(node, dof) of an equation.</summary>
+    public (int Node, Dof Dof) DofOf(int equation)
+    {
+        int k = _dofOfEquation[equation];
+        return (k / 3, (Dof)(k % 3));
+    }
+
+    /// <summary>Global equations of an element's six DOFs (−1 where not an unknown).</summary>
+    public int[] ElementEquations(Member m) =>
+    [
+        Equation(m.Start, Dof.X), Equation(m.Start, Dof.Y), Equation(m.Start, Dof.RZ),
+        Equation(m.End, Dof.X), Equation(m.End, Dof.Y), Equation(m.End, Dof.RZ),
+    ];
+
+    /// <summary>Numbers the DOFs: supports restrain, unattached rotations are held, the rest are unknowns in node order.</summary>
+    public static DofMap Build(StructureModel model, IReadOnlyList<FrameElement> elements)
+    {
+        int n = model.Nodes.Count;
+        var state = new DofState[3 * n];
+        var stiffened = new bool[3 * n];
+        foreach (var e in elements)
+            for (int d = 0; d < 6; d++)
+                if (e.Stiffens(d))
+                    stiffened[3 * (d < 3 ? e.Member.Start : e.Member.End) + d % 3] = true;
+        foreach (var s in model.Supports)
+            for (int d = 0; d < 3; d++)
+            {
+                if (s.Restrains((Dof)d)) state[3 * s.Node + d] = DofState.Restrained;
+                if (s.Spring((Dof)d) > 0) stiffened[3 * s.Node + d] = true;
+            }
+        for (int k = 0; k < 3 * n; k++)
+            if (state[k] == DofState.Free && !stiffened[k] && k % 3 == (int)Dof.RZ)
+                state[k] = DofState.Unattached;
+
+        var equation = new int[3 * n];
+        var dofOf = new List<int>(3 * n);
+        for (int k = 0; k < 3 * n; k++)
+        {
+            if (state[k] == DofState.Free) { equation[k] = dofOf.Count; dofOf.Add(k); }
+            else equation[k] = -1;
+        }
+        return new DofMap(equation, state, dofOf.ToArray());
+    }
+}

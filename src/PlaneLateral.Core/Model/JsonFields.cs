@@ -1,0 +1,153 @@
+using System.Globalization;
+using Newtonsoft.Json;
+using Newtonsoft.Json.Linq;
+
+namespace PlaneLateral.Model;
+
+/// <summary>
+/// Reads the fields of one JSON object with line-aware problem reporting. Every read that fails records a
+/// <see cref="ModelDiagnostic"/> and returns a placeholder, so a whole file is checked in one pass.
+/// </summary>
+internal sealed class JsonFields
+{
+    private readonly JObject _obj;
+    private readonly DiagnosticSink _sink;
+    private readonly HashSet<string> _known = new(StringComparer.Ordinal);
+
+    public JsonFields(JObject obj, DiagnosticSink sink)
+    {
+        _obj = obj;
+        _sink = sink;
+    }
+
+    public JObject Object => _obj;
+
+    public bool Has(string key) { _known.Add(key); return _obj.TryGetValue(key, out var t) && t.Type != JTokenType.Null; }
+
+    public JToken? Token(string key) { _known.Add(key); return _obj.TryGetValue(key, out var t) && t.Type != JTokenType.Null ? t : null; }
+
+    /// <summary>Reports keys that none of the reads asked for (most often a typo).</summary>
+    public void RejectUnknownKeys()
+    {
+        foreach (var p in _obj.Properties())
+            if (!_known.Contains(p.Name))
+                _sink.Add(p, $"unknown key '{p.Name}'", $"use one of: {string.Join(", ", _known.Order(StringComparer.Ordinal))}; or remove it");
+    }
+
+    public string? RequiredString(string key, string fix)
+    {
+        var t = Token(key);
+        if (t is null) { _sink.Add(_obj, $"missing required key '{key}'", fix); return null; }
+        if (t.Type != JTokenType.String) { _sink.Add(t, $"'{key}' must be a string, found {Describe(t)}", fix); return null; }
+        var s = (string)t!;
+        if (string.IsNullOrWhiteSpace(s)) { _sink.Add(t, $"'{key}' is empty", fix); return null; }
+        return s;
+    }
+
+    public string? OptionalString(string key, string fix)
+    {
+        var t = Token(key);
+        if (t is null) return null;
+        if (t.Type != JTokenType.String) { _sink.Add(t, $"'{key}' must be a string, found {Describe(t)}", fix); return null; }
+        return (string)t!;
+    }
+
+    public double RequiredNumber(string key, string fix) =>
+        Token(key) is { } t ? Number(t, key, fix) : Missing(key, fix);
+
+    public double OptionalNumber(string key, double fallback, string fix) =>
+        Token(key) is { } t ? Number(t, key, fix) : fallback;
+
+    public bool OptionalBool(string key, bool fallback, string fix)
+    {
+        var t = Token(key);
+        if (t is null) return fallback;
+        if (t.Type != JTokenType.Boolean) { _sink.Add(t, $"'{key}' must be true or false, found {Describe(t)}", fix); return fallback; }
+        return (bool)t;
+    }
+
+    /// <summary>An array of objects (empty when absent and not required).</summary>
+    public IReadOnlyList<JObject> Objects(string key, bool required, string fix)
+    {
+        var t = Token(key);
+        if (t is null)
+        {
+            if (required) _sink.Add(_obj, $"missing required key '{key}'", fix);
+            return [];
+        }
+        if (t is not JArray arr) { _sink.Add(t, $"'{key}' must be an array, found {Describe(t)}", fix); return []; }
+        var list = new List<JObject>();
+        foreach (var item in arr)
+        {
+            if (item is JObject o) list.Add(o);
+            else _sink.Add(item, $"each entry of '{key}' must be an object {{...}}, found {Describe(item)}", fix);
+        }
+        return list;
+    }
+
+    public JObject? OptionalObject(string key, string fix)
+    {
+        var t = Token(key);
+        if (t is null) return null;
+        if (t is JObject o) return o;
+        _sink.Add(t, $"'{key}' must be an object {{...}}, found {Describe(t)}", fix);
+        return null;
+    }
+
+    private double Missing(string key, string fix)
+    {
+        _sink.Add(_obj, $"missing required key '{key}'", fix);
+        return double.NaN;
+    }
+
+    private double Number(JToken t, string key, string fix)
+    {
+        if (t.Type is JTokenType.Integer or JTokenType.Float)
+        {
+            double v = t.Type == JTokenType.Integer ? (double)t : t.Value<double>();
+            if (double.IsFinite(v)) return v;
+            _sink.Add(t, $"'{key}' is {v.ToString(CultureInfo.InvariantCulture)}, not a finite number", fix);
+            return double.NaN;
+        }
+        _sink.Add(t, $"'{key}' must be a number, found {Describe(t)}", fix);
+        return double.NaN;
+    }
+
+    public static string Describe(JToken t) => t.Type switch
+    {
+        JTokenType.String => $"the string \"{Truncate((string)t!)}\"",
+        JTokenType.Integer or JTokenType.Float => $"the number {t.ToString(Formatting.None)}",
+        JTokenType.Boolean => $"{t.ToString(Formatting.None)}",
+        JTokenType.Array => "an array",
+        JTokenType.Object => "an object",
+        JTokenType.Null => "null",
+        _ => t.Type.ToString().ToLowerInvariant(),
+    };
+
+    private static string Truncate(string s) => s.Length <= 40 ? s : s[..37] + "...";
+}
+
+/// <summary>Collects diagnostics for one file.</summary>
+internal sealed class DiagnosticSink(string file)
+{
+    private readonly List<ModelDiagnostic> _items = [];
+
+    public string File { get; } = file;
+    public IReadOnlyList<ModelDiagnostic> Items => _items;
+    public bool Any => _items.Count > 0;
+
+    public void Add(JToken? at, string problem, string fix)
+    {
+        int line = 0, col = 0;
+        if (at is IJsonLineInfo li && li.HasLineInfo()) { line = li.LineNumber; col = li.LinePosition; }
+        _items.Add(new ModelDiagnostic(File, line, col, at is null ? "" : PathOf(at), problem, fix));
+    }
+
+    /// <summary>JSON path in "$.members[3].section" form.</summary>
+    public static string PathOf(JToken t)
+    {
+        string p = t.Path;
+        if (p.Length == 0) return "$";
+        return p.StartsWith('[') ? "$" + p : "$." + p;
+    }
+}

@@ -1,0 +1,134 @@
+using PlaneLateral.Units;
+
+namespace PlaneLateral.Model;
+
+/// <summary>
+/// A validated planar structural model. All quantities are in SI (N, m, rad) whatever units the file used;
+/// <see cref="Units"/> remembers those units so results can be reported back in them.
+/// Global axes: X to the right, Y up, rotations counter-clockwise positive.
+/// </summary>
+public sealed class StructureModel
+{
+    public required string Title { get; init; }
+    public required string SourcePath { get; init; }
+    public required UnitSystem Units { get; init; }
+    public required IReadOnlyList<Material> Materials { get; init; }
+    public required IReadOnlyList<Section> Sections { get; init; }
+    public required IReadOnlyList<Node> Nodes { get; init; }
+    public required IReadOnlyList<Member> Members { get; init; }
+    public required IReadOnlyList<Support> Supports { get; init; }
+    public required IReadOnlyList<LoadCase> LoadCases { get; init; }
+    public required IReadOnlyList<Combination> Combinations { get; init; }
+    public required IReadOnlyList<StiffnessPoint> StiffnessPoints { get; init; }
+
+    /// <summary>Index of the node with the given id, or −1.</summary>
+    public int NodeIndex(string id)
+    {
+        for (int i = 0; i < Nodes.Count; i++) if (Nodes[i].Id == id) return i;
+        return -1;
+    }
+}
+
+/// <summary>A nodal degree of freedom: translation along X or Y, rotation about Z.</summary>
+public enum Dof { X = 0, Y = 1, RZ = 2 }
+
+public static class DofNames
+{
+    public static string Name(Dof d) => d switch { Dof.X => "ux", Dof.Y => "uy", _ => "rz" };
+}
+
+/// <summary>An isotropic linear elastic material. E and G in N/m².</summary>
+/// <param name="Nu">Poisson's ratio (from E and G when the file gave G).</param>
+public sealed record Material(string Id, double E, double G, double Nu);
+
+/// <summary>How a section's shear area is found.</summary>
+public enum ShearAreaRule
+{
+    /// <summary>Given directly (general section), or infinite when absent (no shear deformation).</summary>
+    Given,
+    /// <summary>A / f with a given shear form factor f (1.2 for a rectangle by default).</summary>
+    FormFactor,
+    /// <summary>κ·A with Cowper's κ = 10(1+ν)/(12+11ν) for a rectangle (Cowper, J. Appl. Mech. 33:335–340, 1966).</summary>
+    CowperRectangle,
+}
+
+/// <summary>
+/// Cross-section properties: area A (m²), second moment of area I (m⁴) about the bending axis and, for
+/// shear deformation, the rule for the shear area.
+/// </summary>
+/// <param name="ShearAreaValue">Given shear area (m²) for <see cref="ShearAreaRule.Given"/>, +∞ for none.</param>
+/// <param name="FormFactor">Shear form factor f for <see cref="ShearAreaRule.FormFactor"/>.</param>
+/// <param name="Shape">"rectangle", "I" or "general", for reports.</param>
+/// <param name="Depth">Depth in the plane of bending (m), NaN for a general section.</param>
+public sealed record Section(string Id, string Shape, double A, double I, ShearAreaRule Rule, double ShearAreaValue, double FormFactor, double Depth)
+{
+    /// <summary>Shear area in m² for a material of Poisson's ratio <paramref name="nu"/>; +∞ when shear deformation is ignored.</summary>
+    public double ShearArea(double nu) => Rule switch
+    {
+        ShearAreaRule.Given => ShearAreaValue,
+        ShearAreaRule.FormFactor => A / FormFactor,
+        ShearAreaRule.CowperRectangle => A * 10.0 * (1.0 + nu) / (12.0 + 11.0 * nu),
+        _ => throw new InvalidOperationException(),
+    };
+}
+
+/// <summary>A node at (X, Y) in metres.</summary>
+public sealed record Node(int Index, string Id, double X, double Y);
+
+/// <summary>How a member resists load.</summary>
+public enum MemberKind
+{
+    /// <summary>Shear-deformable (Timoshenko) beam-column: axial, shear and bending.</summary>
+    BeamColumn,
+    /// <summary>Axial force only (pin-ended brace or link).</summary>
+    Brace,
+}
+
+/// <summary>Multipliers on section properties, e.g. for cracked concrete (1 = as the section gives).</summary>
+public sealed record StiffnessModifiers(double I, double A, double ShearArea)
+{
+    public static StiffnessModifiers None { get; } = new(1, 1, 1);
+}
+
+/// <summary>
+/// A line member from node <see cref="Start"/> to node <see cref="End"/> (node indices).
+/// Properties are effective values, modifiers applied, in SI.
+/// </summary>
+/// <param name="RigidStart">Length (m) of the rigid zone at the start, along the member axis.</param>
+/// <param name="RigidEnd">Length (m) of the rigid zone at the end.</param>
+/// <param name="Role">Free-text role for reports and later presets ("wall", "column", "beam", ...).</param>
+public sealed record Member(
+    int Index, string Id, int Start, int End, MemberKind Kind,
+    string SectionId, string MaterialId,
+    double E, double G, double A, double I, double ShearArea,
+    bool ReleaseStart, bool ReleaseEnd, double RigidStart, double RigidEnd,
+    StiffnessModifiers Modifiers, string Role);
+
+/// <summary>A support at a node: restrained DOFs and elastic springs (N/m or N·m/rad) on the others.</summary>
+public sealed record Support(int Node, string Type, bool RestrainX, bool RestrainY, bool RestrainRZ, double SpringX, double SpringY, double SpringRZ)
+{
+    public bool Restrains(Dof d) => d switch { Dof.X => RestrainX, Dof.Y => RestrainY, _ => RestrainRZ };
+    public double Spring(Dof d) => d switch { Dof.X => SpringX, Dof.Y => SpringY, _ => SpringRZ };
+}
+
+/// <summary>Forces (N) and moment (N·m) applied at a node.</summary>
+public sealed record NodalLoad(int Node, double Fx, double Fy, double Mz);
+
+/// <summary>Axes a member load is given in.</summary>
+public enum LoadAxes { Global, Local }
+
+/// <summary>
+/// A distributed load along a whole member, varying linearly from <see cref="WStart"/> at the start node to
+/// <see cref="WEnd"/> at the end node (N/m, per unit length of the member axis, not of its projection).
+/// Direction: Global → 0 = X, 1 = Y; Local → 0 = axial (local x), 1 = transverse (local y).
+/// </summary>
+public sealed record MemberLoad(int Member, LoadAxes Axes, int Direction, double WStart, double WEnd);
+
+/// <summary>A load case: loads applied together.</summary>
+public sealed record LoadCase(string Id, string Description, IReadOnlyList<NodalLoad> NodalLoads, IReadOnlyList<MemberLoad> MemberLoads);
+
+/// <summary>A combination: a factored sum of load cases (index into the model's load cases, factor).</summary>
+public sealed record Combination(string Id, string Description, IReadOnlyList<(int Case, double Factor)> Factors);
+
+/// <summary>A point where the lateral stiffness is reported: 1 / displacement under a unit force there.</summary>
+public sealed record StiffnessPoint(string Label, int Node, Dof Direction);

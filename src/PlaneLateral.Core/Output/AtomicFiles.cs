@@ -1,0 +1,57 @@
+using System.Text;
+
+namespace PlaneLateral.Output;
+
+/// <summary>
+/// Writes a set of files so that each appears whole or not at all: every file is first written beside its
+/// target under a temporary name and only then renamed over it. If any file fails, no target is touched.
+/// </summary>
+public static class AtomicFiles
+{
+    private static readonly UTF8Encoding Utf8NoBom = new(false);
+
+    /// <summary>Writes <paramref name="files"/> (file name → text) into <paramref name="directory"/>, creating it if needed.</summary>
+    /// <returns>Full paths written, in the order given.</returns>
+    /// <exception cref="IOException">The folder cannot be created or written; nothing was replaced.</exception>
+    public static IReadOnlyList<string> WriteAll(string directory, IReadOnlyList<(string Name, string Text)> files)
+    {
+        try
+        {
+            Directory.CreateDirectory(directory);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException or NotSupportedException or ArgumentException)
+        {
+            throw new IOException($"cannot create the output folder '{directory}': {e.Message}", e);
+        }
+
+        var temps = new List<(string Temp, string Final)>();
+        try
+        {
+            foreach (var (name, text) in files)
+            {
+                string final = Path.Combine(directory, name);
+                string temp = Path.Combine(directory, $".{name}.{Guid.NewGuid():N}.partial");
+                temps.Add((temp, final));
+                using (var fs = new FileStream(temp, FileMode.CreateNew, FileAccess.Write, FileShare.None))
+                {
+                    var bytes = Utf8NoBom.GetBytes(text);
+                    fs.Write(bytes);
+                    fs.Flush(flushToDisk: true);
+                }
+            }
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            foreach (var (temp, _) in temps) TryDelete(temp);
+            throw new IOException($"cannot write into the output folder '{directory}': {e.Message}", e);
+        }
+
+        foreach (var (temp, final) in temps) File.Move(temp, final, overwrite: true);
+        return temps.Select(t => t.Final).ToArray();
+    }
+
+    private static void TryDelete(string path)
+    {
+        try { File.Delete(path); } catch (IOException) { } catch (UnauthorizedAccessException) { }
+    }
+}

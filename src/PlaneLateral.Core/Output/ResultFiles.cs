@@ -1,0 +1,205 @@
+using System.Globalization;
+using System.Reflection;
+using System.Text;
+using Newtonsoft.Json;
+using PlaneLateral.Analysis;
+using PlaneLateral.Model;
+using PlaneLateral.Units;
+
+namespace PlaneLateral.Output;
+
+/// <summary>
+/// Turns an <see cref="AnalysisResult"/> into the results files: one JSON file with everything and CSV tables
+/// (displacements, reactions, member forces, checks, stiffness), all in the model's own units. The text depends
+/// only on the model, so the same input gives byte-identical files.
+/// </summary>
+public static class ResultFiles
+{
+    /// <summary>The caution carried by every output.</summary>
+    public const string Caution =
+        "Computed results for checking by a licensed engineer; they do not show compliance with any code. The governing local building code and the engineer of record decide.";
+
+    public static string Version =>
+        typeof(ResultFiles).Assembly.GetCustomAttribute<AssemblyInformationalVersionAttribute>()?.InformationalVersion.Split('+')[0] ?? "0.0.0";
+
+    /// <summary>File name → text of every results file.</summary>
+    public static IReadOnlyList<(string Name, string Text)> Render(AnalysisResult result) =>
+    [
+        ("results.json", Json(result)),
+        ("displacements.csv", Displacements(result)),
+        ("reactions.csv", Reactions(result)),
+        ("member-forces.csv", MemberForces(result)),
+        ("checks.csv", Checks(result)),
+        ("stiffness.csv", Stiffness(result)),
+    ];
+
+    private static string F(double v) => v.ToString("G12", CultureInfo.InvariantCulture);
+
+    private static string Csv(string s) => s.IndexOfAny([',', '"', '\n']) >= 0 ? "\"" + s.Replace("\"", "\"\"") + "\"" : s;
+
+    private static string Displacements(AnalysisResult r)
+    {
+        var u = r.Model.Units;
+        var sb = new StringBuilder($"case,node,ux [{u.LengthSymbol}],uy [{u.LengthSymbol}],rz [rad]\n");
+        foreach (var c in r.Cases)
+            foreach (var n in r.Model.Nodes)
+                sb.Append($"{Csv(c.Id)},{Csv(n.Id)},{F(u.FromSI(c.Displacement(n.Index, Dof.X), Quantity.Length))},{F(u.FromSI(c.Displacement(n.Index, Dof.Y), Quantity.Length))},{F(c.Displacement(n.Index, Dof.RZ))}\n");
+        return sb.ToString();
+    }
+
+    private static string Reactions(AnalysisResult r)
+    {
+        var u = r.Model.Units;
+        var sb = new StringBuilder($"case,node,Fx [{u.ForceSymbol}],Fy [{u.ForceSymbol}],Mz [{u.Label(Quantity.Moment)}]\n");
+        foreach (var c in r.Cases)
+            foreach (var re in c.Reactions)
+                sb.Append($"{Csv(c.Id)},{Csv(r.Model.Nodes[re.Node].Id)},{F(u.FromSI(re.Fx, Quantity.Force))},{F(u.FromSI(re.Fy, Quantity.Force))},{F(u.FromSI(re.Mz, Quantity.Moment))}\n");
+        return sb.ToString();
+    }
+
+    private static string MemberForces(AnalysisResult r)
+    {
+        var u = r.Model.Units;
+        string fu = u.ForceSymbol, mu = u.Label(Quantity.Moment);
+        var sb = new StringBuilder($"case,member,N1 [{fu}],V1 [{fu}],M1 [{mu}],N2 [{fu}],V2 [{fu}],M2 [{mu}]\n");
+        foreach (var c in r.Cases)
+            foreach (var m in c.MemberForces)
+                sb.Append($"{Csv(c.Id)},{Csv(r.Model.Members[m.Member].Id)},{F(u.FromSI(m.N1, Quantity.Force))},{F(u.FromSI(m.V1, Quantity.Force))},{F(u.FromSI(m.M1, Quantity.Moment))},{F(u.FromSI(m.N2, Quantity.Force))},{F(u.FromSI(m.V2, Quantity.Force))},{F(u.FromSI(m.M2, Quantity.Moment))}\n");
+        return sb.ToString();
+    }
+
+    private static string Checks(AnalysisResult r)
+    {
+        var u = r.Model.Units;
+        string fu = u.ForceSymbol, mu = u.Label(Quantity.Moment);
+        var sb = new StringBuilder($"case,kind,relative residual,applied Fx [{fu}],applied Fy [{fu}],applied Mz about origin [{mu}],reaction Fx [{fu}],reaction Fy [{fu}],reaction Mz about origin [{mu}],relative force imbalance,relative moment imbalance\n");
+        foreach (var c in r.Cases)
+        {
+            var e = c.Equilibrium;
+            sb.Append($"{Csv(c.Id)},{(c.IsCombination ? "combination" : "load case")},{F(c.RelativeResidual)},{F(u.FromSI(e.AppliedFx, Quantity.Force))},{F(u.FromSI(e.AppliedFy, Quantity.Force))},{F(u.FromSI(e.AppliedMz, Quantity.Moment))},{F(u.FromSI(e.ReactionFx, Quantity.Force))},{F(u.FromSI(e.ReactionFy, Quantity.Force))},{F(u.FromSI(e.ReactionMz, Quantity.Moment))},{F(e.RelativeForceError)},{F(e.RelativeMomentError)}\n");
+        }
+        return sb.ToString();
+    }
+
+    private static string Stiffness(AnalysisResult r)
+    {
+        var u = r.Model.Units;
+        var sb = new StringBuilder($"label,node,direction,stiffness [{u.Label(Quantity.TranslationalStiffness)}],flexibility [{u.LengthSymbol}/{u.ForceSymbol}]\n");
+        foreach (var s in r.Stiffness)
+            sb.Append($"{Csv(s.Point.Label)},{Csv(r.Model.Nodes[s.Point.Node].Id)},{DofNames.Name(s.Point.Direction)[1..]},{F(u.FromSI(s.Stiffness, Quantity.TranslationalStiffness))},{F(s.Flexibility * u.ForceScale / u.LengthScale)}\n");
+        return sb.ToString();
+    }
+
+    private static string Json(AnalysisResult r)
+    {
+        var u = r.Model.Units;
+        var sw = new StringWriter(CultureInfo.InvariantCulture) { NewLine = "\n" };
+        using (var w = new JsonTextWriter(sw) { Formatting = Formatting.Indented, Indentation = 2, FloatFormatHandling = FloatFormatHandling.String })
+        {
+            w.WriteStartObject();
+            w.WritePropertyName("producedBy"); w.WriteValue($"PlaneLateral {Version}");
+            w.WritePropertyName("caution"); w.WriteValue(Caution);
+            w.WritePropertyName("model");
+            w.WriteStartObject();
+            w.WritePropertyName("title"); w.WriteValue(r.Model.Title);
+            w.WritePropertyName("file"); w.WriteValue(Path.GetFileName(r.Model.SourcePath));
+            w.WritePropertyName("nodes"); w.WriteValue(r.Model.Nodes.Count);
+            w.WritePropertyName("members"); w.WriteValue(r.Model.Members.Count);
+            w.WriteEndObject();
+            w.WritePropertyName("units");
+            w.WriteStartObject();
+            w.WritePropertyName("length"); w.WriteValue(u.LengthSymbol);
+            w.WritePropertyName("force"); w.WriteValue(u.ForceSymbol);
+            w.WritePropertyName("moment"); w.WriteValue(u.Label(Quantity.Moment));
+            w.WritePropertyName("rotation"); w.WriteValue("rad");
+            w.WritePropertyName("stiffness"); w.WriteValue(u.Label(Quantity.TranslationalStiffness));
+            w.WriteEndObject();
+            w.WritePropertyName("solver");
+            w.WriteStartObject();
+            w.WritePropertyName("method"); w.WriteValue(r.Solve.Solver);
+            w.WritePropertyName("unknowns"); w.WriteValue(r.Solve.Unknowns);
+            w.WritePropertyName("matrixNonZerosLower"); w.WriteValue(r.Solve.MatrixNonZerosLower);
+            w.WritePropertyName("factorNonZeros"); w.WriteValue(r.Solve.FactorNonZeros);
+            w.WritePropertyName("rightHandSides"); w.WriteValue(r.Solve.RightHandSides);
+            w.WriteEndObject();
+            w.WritePropertyName("notes");
+            w.WriteStartArray(); foreach (var n in r.Notes) w.WriteValue(n); w.WriteEndArray();
+            w.WritePropertyName("signConvention"); w.WriteValue("Global X right, Y up, rotations counter-clockwise. Member end forces act on the member's flexible segment at its end faces, in local axes (x from start to end node, y 90° counter-clockwise): N, V positive along local x, y; M counter-clockwise. Axial force, tension positive, is N2.");
+
+            w.WritePropertyName("stiffness");
+            w.WriteStartArray();
+            foreach (var s in r.Stiffness)
+            {
+                w.WriteStartObject();
+                w.WritePropertyName("label"); w.WriteValue(s.Point.Label);
+                w.WritePropertyName("node"); w.WriteValue(r.Model.Nodes[s.Point.Node].Id);
+                w.WritePropertyName("direction"); w.WriteValue(DofNames.Name(s.Point.Direction)[1..]);
+                w.WritePropertyName("stiffness"); w.WriteValue(u.FromSI(s.Stiffness, Quantity.TranslationalStiffness));
+                w.WritePropertyName("definition"); w.WriteValue("force per unit displacement at this node and direction when a single force acts there and every other load is absent");
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
+
+            w.WritePropertyName("cases");
+            w.WriteStartArray();
+            foreach (var c in r.Cases)
+            {
+                w.WriteStartObject();
+                w.WritePropertyName("id"); w.WriteValue(c.Id);
+                w.WritePropertyName("kind"); w.WriteValue(c.IsCombination ? "combination" : "load case");
+                w.WritePropertyName("description"); w.WriteValue(c.Description);
+                w.WritePropertyName("checks");
+                w.WriteStartObject();
+                w.WritePropertyName("relativeResidual"); w.WriteValue(c.RelativeResidual);
+                w.WritePropertyName("relativeForceImbalance"); w.WriteValue(c.Equilibrium.RelativeForceError);
+                w.WritePropertyName("relativeMomentImbalance"); w.WriteValue(c.Equilibrium.RelativeMomentError);
+                w.WritePropertyName("appliedFx"); w.WriteValue(u.FromSI(c.Equilibrium.AppliedFx, Quantity.Force));
+                w.WritePropertyName("appliedFy"); w.WriteValue(u.FromSI(c.Equilibrium.AppliedFy, Quantity.Force));
+                w.WritePropertyName("reactionFx"); w.WriteValue(u.FromSI(c.Equilibrium.ReactionFx, Quantity.Force));
+                w.WritePropertyName("reactionFy"); w.WriteValue(u.FromSI(c.Equilibrium.ReactionFy, Quantity.Force));
+                w.WriteEndObject();
+                w.WritePropertyName("displacements");
+                w.WriteStartArray();
+                foreach (var n in r.Model.Nodes)
+                {
+                    w.WriteStartObject();
+                    w.WritePropertyName("node"); w.WriteValue(n.Id);
+                    w.WritePropertyName("ux"); w.WriteValue(u.FromSI(c.Displacement(n.Index, Dof.X), Quantity.Length));
+                    w.WritePropertyName("uy"); w.WriteValue(u.FromSI(c.Displacement(n.Index, Dof.Y), Quantity.Length));
+                    w.WritePropertyName("rz"); w.WriteValue(c.Displacement(n.Index, Dof.RZ));
+                    w.WriteEndObject();
+                }
+                w.WriteEndArray();
+                w.WritePropertyName("reactions");
+                w.WriteStartArray();
+                foreach (var re in c.Reactions)
+                {
+                    w.WriteStartObject();
+                    w.WritePropertyName("node"); w.WriteValue(r.Model.Nodes[re.Node].Id);
+                    w.WritePropertyName("Fx"); w.WriteValue(u.FromSI(re.Fx, Quantity.Force));
+                    w.WritePropertyName("Fy"); w.WriteValue(u.FromSI(re.Fy, Quantity.Force));
+                    w.WritePropertyName("Mz"); w.WriteValue(u.FromSI(re.Mz, Quantity.Moment));
+                    w.WriteEndObject();
+                }
+                w.WriteEndArray();
+                w.WritePropertyName("memberForces");
+                w.WriteStartArray();
+                foreach (var m in c.MemberForces)
+                {
+                    w.WriteStartObject();
+                    w.WritePropertyName("member"); w.WriteValue(r.Model.Members[m.Member].Id);
+                    foreach (var (name, v, q) in new[] { ("N1", m.N1, Quantity.Force), ("V1", m.V1, Quantity.Force), ("M1", m.M1, Quantity.Moment), ("N2", m.N2, Quantity.Force), ("V2", m.V2, Quantity.Force), ("M2", m.M2, Quantity.Moment) })
+                    {
+                        w.WritePropertyName(name); w.WriteValue(u.FromSI(v, q));
+                    }
+                    w.WriteEndObject();
+                }
+                w.WriteEndArray();
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
+            w.WriteEndObject();
+        }
+        return sw.ToString() + "\n";
+    }
+}
