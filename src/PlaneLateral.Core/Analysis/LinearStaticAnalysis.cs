@@ -35,6 +35,7 @@ public static class LinearStaticAnalysis
         var k = Assemble(model, elements, dofs);
         var factor = solver.Factorize(k, options.PivotTolerance);
         if (factor.PivotFailures.Count > 0) throw Unstable(model, dofs, factor);
+        double kNorm = InfinityNorm(k);
 
         var memberLoads = model.LoadCases.Select(c => GroupByMember(c, model.Members.Count)).ToArray();
         var loadVectors = model.LoadCases.Select((c, i) => LoadVector(model, elements, dofs, c, memberLoads[i])).ToArray();
@@ -47,7 +48,7 @@ public static class LinearStaticAnalysis
             factor.Solve(loadVectors[i], u);
             solutions.Add(u);
             var lc = model.LoadCases[i];
-            cases.Add(Recover(model, elements, dofs, k, lc.Id, lc.Description, false, u, loadVectors[i], memberLoads[i], Applied(model, elements, lc)));
+            cases.Add(Recover(model, elements, dofs, k, kNorm, lc.Id, lc.Description, false, u, loadVectors[i], memberLoads[i], Applied(model, elements, lc)));
         }
 
         foreach (var combo in model.Combinations)
@@ -66,7 +67,7 @@ public static class LinearStaticAnalysis
                 for (int d = 0; d < 3; d++) applied[d] += factorValue * a[d];
             }
             var grouped = loads.Select(l => (IReadOnlyList<MemberLoad>)l).ToArray();
-            cases.Add(Recover(model, elements, dofs, k, combo.Id, combo.Description, true, u, f, grouped, applied));
+            cases.Add(Recover(model, elements, dofs, k, kNorm, combo.Id, combo.Description, true, u, f, grouped, applied));
         }
 
         var stiffness = new List<StiffnessResult>();
@@ -104,6 +105,21 @@ public static class LinearStaticAnalysis
                 if (ks > 0 && eq >= 0) builder.AddDiagonal(eq, ks);
             }
         return builder.Build();
+    }
+
+    /// <summary>‖K‖∞ = max row sum of |K_ij| of the full symmetric matrix.</summary>
+    private static double InfinityNorm(SymmetricSparseMatrix k)
+    {
+        var rowSum = new double[k.Size];
+        for (int j = 0; j < k.Size; j++)
+            for (int p = k.ColumnPointers[j]; p < k.ColumnPointers[j + 1]; p++)
+            {
+                int i = k.RowIndices[p];
+                double a = Math.Abs(k.Values[p]);
+                rowSum[i] += a;
+                if (i != j) rowSum[j] += a;
+            }
+        return rowSum.Length == 0 ? 0 : rowSum.Max();
     }
 
     private static IReadOnlyList<MemberLoad>[] GroupByMember(LoadCase c, int memberCount)
@@ -162,7 +178,7 @@ public static class LinearStaticAnalysis
         return [fx, fy, mz];
     }
 
-    private static CaseResult Recover(StructureModel model, FrameElement[] elements, DofMap dofs, SymmetricSparseMatrix k,
+    private static CaseResult Recover(StructureModel model, FrameElement[] elements, DofMap dofs, SymmetricSparseMatrix k, double kNormInf,
         string id, string description, bool isCombination, double[] u, double[] f, IReadOnlyList<MemberLoad>[] memberLoads, double[] applied)
     {
         int n = model.Nodes.Count;
@@ -176,9 +192,16 @@ public static class LinearStaticAnalysis
         // Residual of the solve.
         var ku = new double[u.Length];
         k.Multiply(u, ku);
-        double rr = 0, ff = 0;
-        for (int i = 0; i < u.Length; i++) { rr += (ku[i] - f[i]) * (ku[i] - f[i]); ff += f[i] * f[i]; }
+        double rr = 0, ff = 0, rInf = 0, uInf = 0, fInf = 0;
+        for (int i = 0; i < u.Length; i++)
+        {
+            double ri = ku[i] - f[i];
+            rr += ri * ri; ff += f[i] * f[i];
+            rInf = Math.Max(rInf, Math.Abs(ri)); uInf = Math.Max(uInf, Math.Abs(u[i])); fInf = Math.Max(fInf, Math.Abs(f[i]));
+        }
         double residual = ff == 0 ? Math.Sqrt(rr) : Math.Sqrt(rr / ff);
+        double denominator = kNormInf * uInf + fInf;
+        double backward = denominator == 0 ? 0 : rInf / denominator;
 
         // Member end forces and the forces members take from each node.
         var nodeForce = new double[3 * n];
@@ -221,6 +244,7 @@ public static class LinearStaticAnalysis
             MemberForces = memberForces,
             Equilibrium = new EquilibriumCheck(applied[0], applied[1], applied[2], rxSum, rySum, rmSum),
             RelativeResidual = residual,
+            BackwardError = backward,
         };
     }
 

@@ -72,11 +72,11 @@ public static class ResultFiles
     {
         var u = r.Model.Units;
         string fu = u.ForceSymbol, mu = u.Label(Quantity.Moment);
-        var sb = new StringBuilder($"case,kind,relative residual,applied Fx [{fu}],applied Fy [{fu}],applied Mz about origin [{mu}],reaction Fx [{fu}],reaction Fy [{fu}],reaction Mz about origin [{mu}],relative force imbalance,relative moment imbalance\n");
+        var sb = new StringBuilder($"case,kind,relative residual,backward error,applied Fx [{fu}],applied Fy [{fu}],applied Mz about origin [{mu}],reaction Fx [{fu}],reaction Fy [{fu}],reaction Mz about origin [{mu}],relative force imbalance,relative moment imbalance\n");
         foreach (var c in r.Cases)
         {
             var e = c.Equilibrium;
-            sb.Append($"{Csv(c.Id)},{(c.IsCombination ? "combination" : "load case")},{F(c.RelativeResidual)},{F(u.FromSI(e.AppliedFx, Quantity.Force))},{F(u.FromSI(e.AppliedFy, Quantity.Force))},{F(u.FromSI(e.AppliedMz, Quantity.Moment))},{F(u.FromSI(e.ReactionFx, Quantity.Force))},{F(u.FromSI(e.ReactionFy, Quantity.Force))},{F(u.FromSI(e.ReactionMz, Quantity.Moment))},{F(e.RelativeForceError)},{F(e.RelativeMomentError)}\n");
+            sb.Append($"{Csv(c.Id)},{(c.IsCombination ? "combination" : "load case")},{F(c.RelativeResidual)},{F(c.BackwardError)},{F(u.FromSI(e.AppliedFx, Quantity.Force))},{F(u.FromSI(e.AppliedFy, Quantity.Force))},{F(u.FromSI(e.AppliedMz, Quantity.Moment))},{F(u.FromSI(e.ReactionFx, Quantity.Force))},{F(u.FromSI(e.ReactionFy, Quantity.Force))},{F(u.FromSI(e.ReactionMz, Quantity.Moment))},{F(e.RelativeForceError)},{F(e.RelativeMomentError)}\n");
         }
         return sb.ToString();
     }
@@ -151,6 +151,7 @@ public static class ResultFiles
                 w.WritePropertyName("checks");
                 w.WriteStartObject();
                 w.WritePropertyName("relativeResidual"); w.WriteValue(c.RelativeResidual);
+                w.WritePropertyName("backwardError"); w.WriteValue(c.BackwardError);
                 w.WritePropertyName("relativeForceImbalance"); w.WriteValue(c.Equilibrium.RelativeForceError);
                 w.WritePropertyName("relativeMomentImbalance"); w.WriteValue(c.Equilibrium.RelativeMomentError);
                 w.WritePropertyName("appliedFx"); w.WriteValue(u.FromSI(c.Equilibrium.AppliedFx, Quantity.Force));
