@@ -1,1 +1,6 @@
-﻿Console.WriteLine("Hello, World!");
+namespace PlaneLateral.Cli;
+
+public static class Program
+{
+    public static int Main(string[] args) => CliApp.Run(args, Console.Out, Console.Error);
+}

@@ -1,0 +1,108 @@
+using System.CommandLine;
+using PlaneLateral.Analysis;
+using PlaneLateral.Model;
+using PlaneLateral.Output;
+
+namespace PlaneLateral.Cli;
+
+/// <summary>The command line: wires the library's steps together and prints; no engineering happens here.</summary>
+public static class CliApp
+{
+    /// <summary>Path of the demo model shipped beside the program.</summary>
+    public static string DemoModelPath => Path.Combine(AppContext.BaseDirectory, "models", "demo-clinic.json");
+
+    public static int Run(string[] args, TextWriter stdout, TextWriter stderr)
+    {
+        var root = BuildCommands(stdout, stderr);
+        var parse = root.Parse(args);
+        return parse.Invoke(new InvocationConfiguration { Output = stdout, Error = stderr, EnableDefaultExceptionHandler = false });
+    }
+
+    private static RootCommand BuildCommands(TextWriter stdout, TextWriter stderr)
+    {
+        var modelArg = new Argument<string>("model") { Description = "Model file (JSON, format described in docs/model-format.md)." };
+        var outOption = new Option<string?>("--out", "-o")
+        {
+            Description = "Folder for the results files (created if missing). Default: planelateral-results/<model name> in the current folder.",
+        };
+
+        var solve = new Command("solve", "Solve every load case and combination of a model; print a summary and write results (JSON and CSV).")
+        {
+            modelArg, outOption,
+        };
+        solve.SetAction(p => Solve(p.GetValue(modelArg)!, p.GetValue(outOption), stdout, stderr));
+
+        var validateArg = new Argument<string>("model") { Description = "Model file to check." };
+        var validate = new Command("validate", "Read and check a model file without solving it; list every problem found.") { validateArg };
+        validate.SetAction(p => Validate(p.GetValue(validateArg)!, stdout, stderr));
+
+        var root = new RootCommand(
+            "PlaneLateral: lateral stiffness, load sharing and drift of walls and frames by shear-deformable finite elements, " +
+            "beside the hand methods. Run with no command to solve the shipped demo model.")
+        {
+            solve, validate,
+        };
+        root.SetAction(_ =>
+        {
+            stdout.Write($"No model given: solving the shipped demo model ({DemoModelPath}).\nUse 'planelateral solve <model.json>' for your own model, 'planelateral --help' for all commands.\n\n");
+            return Solve(DemoModelPath, null, stdout, stderr);
+        });
+        return root;
+    }
+
+    private static string DefaultOutputFolder(string modelPath) =>
+        Path.Combine(Directory.GetCurrentDirectory(), "planelateral-results", Path.GetFileNameWithoutExtension(modelPath));
+
+    private static int Solve(string modelPath, string? outDir, TextWriter stdout, TextWriter stderr)
+    {
+        StructureModel model;
+        AnalysisResult result;
+        try
+        {
+            model = ModelReader.ReadFile(modelPath);
+            result = LinearStaticAnalysis.Run(model);
+        }
+        catch (ModelInputException e)
+        {
+            stderr.Write(e.Message + "\nNothing was written.\n");
+            return ExitCodes.BadModel;
+        }
+        catch (UnstableModelException e)
+        {
+            stderr.Write(e.Message + "\nNothing was written.\n");
+            return ExitCodes.Unstable;
+        }
+
+        string folder = outDir ?? DefaultOutputFolder(modelPath);
+        IReadOnlyList<string> written;
+        try
+        {
+            written = AtomicFiles.WriteAll(folder, ResultFiles.Render(result));
+        }
+        catch (IOException e)
+        {
+            stderr.Write($"{e.Message}\nFix: choose a writable folder with --out. No results file was replaced.\n");
+            return ExitCodes.OutputFailed;
+        }
+
+        stdout.Write($"PlaneLateral {ResultFiles.Version}: linear static analysis\n\n");
+        stdout.Write(SolveReport.Render(result, modelPath));
+        stdout.Write($"\nResults written to {folder}: {string.Join(", ", written.Select(Path.GetFileName))}\n");
+        return ExitCodes.Success;
+    }
+
+    private static int Validate(string modelPath, TextWriter stdout, TextWriter stderr)
+    {
+        try
+        {
+            var m = ModelReader.ReadFile(modelPath);
+            stdout.Write($"{modelPath}: valid. {m.Nodes.Count} nodes, {m.Members.Count} members, {m.Supports.Count} supports, {m.LoadCases.Count} load cases, {m.Combinations.Count} combinations, units {m.Units}.\n");
+            return ExitCodes.Success;
+        }
+        catch (ModelInputException e)
+        {
+            stderr.Write(e.Message + "\n");
+            return ExitCodes.BadModel;
+        }
+    }
+}
