@@ -207,7 +207,8 @@ public static class PerforatedWall
             EndFixity ends, double d, int sign) =>
             Steps.Add(new WallStep(depth, kind, label, x0, x1, y0, y1, ends, d, p / d, sign));
 
-        public double Region(double x0, double x1, double y0, double y1, EndFixity ends, List<Op> ops, int depth, string label)
+        public double Region(double x0, double x1, double y0, double y1, EndFixity ends, List<Op> ops, int depth, string label,
+            string? leftNeighbour = null, string? rightNeighbour = null)
         {
             double d = Solid(x1 - x0, y1 - y0, ends);
             Log(depth, WallStepKind.SolidRegion, label, x0, x1, y0, y1, ends, d, +1);
@@ -217,25 +218,29 @@ public static class PerforatedWall
                 var inBand = ops.Where(o => o.Y0 >= b0 - eps && o.Y1 <= b1 + eps).ToList();
                 double ds = Solid(x1 - x0, b1 - b0, bandEnds);
                 Log(depth, WallStepKind.StripRemoved, $"strip holding {Names(inBand)}", x0, x1, b0, b1, bandEnds, ds, -1);
-                double db = Band(x0, x1, b0, b1, bandEnds, inBand, depth + 1);
-                Log(depth, WallStepKind.BandAdded, $"piers of that strip, together", x0, x1, b0, b1, bandEnds, db, +1);
+                bool sliced = !inBand.Any(o => Math.Abs(o.Y0 - b0) <= eps && Math.Abs(o.Y1 - b1) <= eps);
+                double db = Band(x0, x1, b0, b1, bandEnds, inBand, depth + 1, leftNeighbour, rightNeighbour);
+                Log(depth, WallStepKind.BandAdded,
+                    sliced ? "slices of that strip, in series (deflections add)" : "piers of that strip, in parallel (rigidities add)",
+                    x0, x1, b0, b1, bandEnds, db, +1);
                 d += db - ds;
             }
             return d;
         }
 
-        private double Band(double x0, double x1, double y0, double y1, EndFixity ends, List<Op> ops, int depth)
+        private double Band(double x0, double x1, double y0, double y1, EndFixity ends, List<Op> ops, int depth,
+            string? leftNeighbour, string? rightNeighbour)
         {
             var cuts = ops.Where(o => Math.Abs(o.Y0 - y0) <= eps && Math.Abs(o.Y1 - y1) <= eps).OrderBy(o => o.X0).ToList();
             if (cuts.Count > 0)
             {
                 double sumR = 0;
                 double start = x0;
-                string? leftName = null;
+                string? leftName = leftNeighbour;
                 for (int k = 0; k <= cuts.Count; k++)
                 {
                     double end = k < cuts.Count ? cuts[k].X0 : x1;
-                    string? rightName = k < cuts.Count ? cuts[k].Name : null;
+                    string? rightName = k < cuts.Count ? cuts[k].Name : rightNeighbour;
                     string where = PierPlace(leftName, rightName);
                     if (end - start <= eps)
                         throw new ArgumentException($"The pier {where} has zero width.");
@@ -248,7 +253,8 @@ public static class PerforatedWall
                     }
                     else
                     {
-                        dp = Region(start, end, y0, y1, ends, inner, depth + 1, $"pier {where}, solid, before its openings {Names(inner)}");
+                        dp = Region(start, end, y0, y1, ends, inner, depth + 1, $"pier {where}, solid, before its openings {Names(inner)}",
+                            leftName, rightName);
                         Log(depth, WallStepKind.SubWall, $"pier {where}, with its openings", start, end, y0, y1, ends, dp, 0);
                     }
                     sumR += p / dp;
@@ -268,11 +274,11 @@ public static class PerforatedWall
                 var sliceEnds = ends == EndFixity.Cantilever && Math.Abs(s1 - y1) <= eps ? EndFixity.Cantilever : EndFixity.FixedFixed;
                 var across = ops.Where(o => o.Y0 < s1 - eps && o.Y1 > s0 + eps).OrderBy(o => o.X0).ToList();
                 double sumR = 0, start = x0;
-                string? leftName = null;
+                string? leftName = leftNeighbour;
                 for (int k = 0; k <= across.Count; k++)
                 {
                     double end = k < across.Count ? across[k].X0 : x1;
-                    string? rightName = k < across.Count ? across[k].Name : null;
+                    string? rightName = k < across.Count ? across[k].Name : rightNeighbour;
                     string where = PierPlace(leftName, rightName);
                     if (end - start <= eps)
                         throw new ArgumentException($"The pier {where} has zero width.");
@@ -282,7 +288,7 @@ public static class PerforatedWall
                     if (k < across.Count) { start = across[k].X1; leftName = across[k].Name; }
                 }
                 double dsl = p / sumR;
-                Log(depth, WallStepKind.Slice, $"slice of staggered openings {Names(across)}, its piers together", x0, x1, s0, s1, sliceEnds, dsl, +1);
+                Log(depth, WallStepKind.Slice, $"slice across {Names(across)}, its piers in parallel", x0, x1, s0, s1, sliceEnds, dsl, +1);
                 total += dsl;
             }
             return total;
