@@ -76,8 +76,8 @@ public sealed record PerforatedWallResult(double Load, double Deflection, IReadO
     /// <summary>Wall stiffness (rigidity) P/Δ (F/L).</summary>
     public double Stiffness => Load / Deflection;
 
-    /// <summary>The breakdown as plain text, one line per step, ending with the total.</summary>
-    public string Breakdown => string.Join(Environment.NewLine, Steps.Select(s => s.Text)) + Environment.NewLine +
+    /// <summary>The breakdown as plain text, one line per step ("\n" between lines), ending with the total.</summary>
+    public string Breakdown => string.Join("\n", Steps.Select(s => s.Text)) + "\n" +
         string.Create(CultureInfo.InvariantCulture, $"= wall deflection {Deflection:G6}, rigidity {Stiffness:G6}");
 }
 
