@@ -111,7 +111,7 @@ public class FrameStoryTests
         // 2·12a = 24(0.5 + β)/(2 + β) against the portal's 24(1 + 6β)/(4 + 6β). Derived by hand, cross-multiplying:
         // (0.5 + β)(4 + 6β) = 2 + 7β + 6β² ≤ 2 + 13β + 6β² = (1 + 6β)(2 + β), so the D-value
         // never exceeds the portal's exact slope-deflection stiffness; equality only at β = 0 and β → ∞.
-        // (The D-value assumes the ground-story column continues into a story above that shares the beam's
+        // (Presumably because the D-value assumes the ground-story column continues into a story above that shares the beam's
         // restraint; the one-story portal gives its beam to the ground story alone.)
         // Hand at β = 1: D-value 24·1.5/3 = 12; portal 16.8.
         var d = FrameStory.DValues(E, H, [Ic, Ic], [1], [beta], null, StoryPosition.FixedBase).Stiffness;

@@ -66,6 +66,28 @@ public class PerforatedWallTests
     }
 
     [Fact]
+    public void OneWindowInFixedFixedWallByHand()
+    {
+        // Derived by hand: the wall of OneWindowWorkedByHand held against rotation at its top.
+        //   solid wall, fixed-fixed, r = 0.6: 0.216/1000 + 0.0018 = 0.002016
+        //   minus strip 0.000608, plus piers 0.00081525 (both as before, fixed-fixed)
+        //   wall: 0.002016 − 0.000608 + 0.00081525 = 0.00222325.
+        var r = PerforatedWall.Analyze(20, 12, T, E, G, EndFixity.FixedFixed, [new WallOpening(6, 4, 4, 4, "W")]);
+        Assert.Equal(0.00222325, r.Deflection, 8);
+    }
+
+    [Fact]
+    public void TopLevelLinesOfTheBreakdownAddUpToTheTotal()
+    {
+        // A reviewer adds the depth-0 lines with their signs and must land on the total (the procedure's definition).
+        var r = PerforatedWall.Analyze(24, 14, T, E, G, EndFixity.Cantilever,
+            [new WallOpening(2, 0, 3, 8, "D"), new WallOpening(12, 4, 4, 4, "W1"), new WallOpening(18, 10, 3, 2, "W2")]);
+        double sum = r.Steps.Where(s => s.Depth == 0).Sum(s => s.Sign * s.Deflection);
+        Assert.Equal(r.Deflection, sum, 14);
+        Assert.Equal(r.Load / r.Deflection, r.Stiffness, 12);
+    }
+
+    [Fact]
     public void DoorAndWindowWithRecursionWorkedByHand()
     {
         // Derived by hand (invented wall). Cantilever wall l = 20, h = 12.
