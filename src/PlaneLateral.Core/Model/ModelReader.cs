@@ -88,6 +88,8 @@ public static class ModelReader
             var f = new JsonFields(root, sink);
             f.Has("$schema");
             f.OptionalString("description", "give a short description as a string");
+            // Expected values and their published source, for verification models; read by the tests, not by the analysis.
+            f.OptionalObject("reference", "give \"reference\" as an object {\"source\": ..., \"values\": [...]}");
             var title = f.OptionalString("title", "give the model a title as a string") ?? Path.GetFileNameWithoutExtension(fileName);
             ReadFormatVersion(f);
             ReadUnits(f);
