@@ -11,8 +11,8 @@ public sealed record ModelDiagnostic(string File, int Line, int Column, string J
     {
         string where = Line > 0 ? $"{File}:{Line}:{Column}" : File;
         string path = string.IsNullOrEmpty(JsonPath) ? "" : $" at {JsonPath}";
-        string fix = string.IsNullOrEmpty(Fix) ? "" : $" Fix: {Fix}";
-        return $"{where}:{path}: {Problem}{fix}";
+        string fix = string.IsNullOrEmpty(Fix) ? "" : $" Fix: {Fix.TrimEnd('.')}.";
+        return $"{where}:{path}: {Problem.TrimEnd('.')}.{fix}";
     }
 }
 

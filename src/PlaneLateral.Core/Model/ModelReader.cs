@@ -326,7 +326,10 @@ public static class ModelReader
 
         private static string Suggest(string id, IEnumerable<string> known)
         {
-            var near = known.Where(k => string.Equals(k, id, StringComparison.OrdinalIgnoreCase) || Distance(k, id) <= 2).Take(3).ToList();
+            // Same id but for case, or a typo or two away (one for short ids); never every short id.
+            int allowed = id.Length >= 5 ? 2 : 1;
+            var near = known.Where(k => string.Equals(k, id, StringComparison.OrdinalIgnoreCase)).ToList();
+            if (near.Count == 0) near = known.Where(k => Distance(k, id) <= allowed && Distance(k, id) < Math.Min(k.Length, id.Length)).Take(3).ToList();
             return near.Count == 0 ? "" : $" (did you mean {string.Join(" or ", near.Select(n => $"\"{n}\""))}?)";
         }
 
@@ -435,7 +438,7 @@ public static class ModelReader
                 var f = new JsonFields(o, sink);
                 int n = NodeRef(f, "node", "supported node");
                 var type = f.RequiredString("type", "give \"type\": \"fixed\", \"pinned\", \"roller-x\", \"roller-y\" or \"custom\"");
-                bool rx = false, ry = false, rr = false;
+                bool rx = false, ry = false, rr = false, knownType = true;
                 switch (type)
                 {
                     case "fixed": rx = ry = rr = true; break;
@@ -445,6 +448,7 @@ public static class ModelReader
                     case "custom": break;
                     case null: break;
                     default:
+                        knownType = false;
                         sink.Add(f.Token("type"), $"unknown support type \"{type}\"",
                             "use \"fixed\", \"pinned\", \"roller-x\" (free to move along x), \"roller-y\" (free along y) or \"custom\" (with \"restrain\" and/or \"springs\")");
                         break;
@@ -480,7 +484,7 @@ public static class ModelReader
                     sf.RejectUnknownKeys();
                 }
                 f.RejectUnknownKeys();
-                if (n < 0 || type is null) continue;
+                if (n < 0 || type is null || !knownType) continue;
                 if (!seen.Add(n)) { sink.Add(o, "a second support on the same node", "give each node at most one support entry; combine the restraints in one"); continue; }
                 if (!(rx || ry || rr) && kx == 0 && ky == 0 && kr == 0)
                     sink.Add(o, "this support holds nothing (no restraint, no spring)", "restrain at least one direction or give a spring, or remove the entry");
