@@ -81,6 +81,7 @@ public static class LinearStaticAnalysis
             stiffness.Add(new StiffnessResult(p, u[eq], 1.0 / u[eq]));
         }
 
+        CheckFinite(model, cases, stiffness);
         return new AnalysisResult
         {
             Model = model,
@@ -105,6 +106,20 @@ public static class LinearStaticAnalysis
                 if (ks > 0 && eq >= 0) builder.AddDiagonal(eq, ks);
             }
         return builder.Build();
+    }
+
+    /// <summary>
+    /// Refuses results that overflowed: numbers in the model so far apart in magnitude that double precision cannot
+    /// hold the answer. The message says where to look instead of returning NaN.
+    /// </summary>
+    private static void CheckFinite(StructureModel model, List<CaseResult> cases, List<StiffnessResult> stiffness)
+    {
+        var bad = cases.Where(c => c.Displacements.Any(v => !double.IsFinite(v)) || c.MemberForces.Any(f => !double.IsFinite(f.M1 + f.M2 + f.V1 + f.N1))).Select(c => c.Id)
+            .Concat(stiffness.Where(s => !double.IsFinite(s.Stiffness) || s.Stiffness <= 0).Select(s => s.Point.Label)).ToList();
+        if (bad.Count == 0) return;
+        throw new ModelInputException([new ModelDiagnostic(model.SourcePath, 0, 0, "",
+            $"the results of {string.Join(", ", bad.Select(b => $"\"{b}\""))} overflow double precision: loads, stiffnesses or sizes in the model differ by too many orders of magnitude",
+            "check the units and exponents of loads, E, A, I and springs")]);
     }
 
     /// <summary>‖K‖∞ = max row sum of |K_ij| of the full symmetric matrix.</summary>

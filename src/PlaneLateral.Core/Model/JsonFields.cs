@@ -20,6 +20,9 @@ internal sealed class JsonFields
         _sink = sink;
     }
 
+    /// <summary>Largest magnitude accepted for any number in a model file, in the model's units.</summary>
+    public const double MaxMagnitude = 1e15;
+
     public JObject Object => _obj;
 
     public bool Has(string key) { _known.Add(key); return _obj.TryGetValue(key, out var t) && t.Type != JTokenType.Null; }
@@ -105,6 +108,11 @@ internal sealed class JsonFields
         if (t.Type is JTokenType.Integer or JTokenType.Float)
         {
             double v = t.Type == JTokenType.Integer ? (double)t : t.Value<double>();
+            if (double.IsFinite(v) && Math.Abs(v) > MaxMagnitude)
+            {
+                _sink.Add(t, $"'{key}' is {v.ToString("G6", CultureInfo.InvariantCulture)}, beyond the range accepted (magnitude up to 1e15 in the model's units)", fix + "; check the units and the exponent");
+                return double.NaN;
+            }
             if (double.IsFinite(v)) return v;
             _sink.Add(t, $"'{key}' is {v.ToString(CultureInfo.InvariantCulture)}, not a finite number", fix);
             return double.NaN;

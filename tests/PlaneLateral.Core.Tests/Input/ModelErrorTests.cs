@@ -216,6 +216,15 @@ public class ModelErrorTests
     }
 
     [Fact]
+    public void AbsurdMagnitudesAreRefused()
+    {
+        // Found by the property-based fuzzer (Fuzz/ReaderPropertyTests): a load of 1e308 overflowed to NaN displacements.
+        var m = Good();
+        m["loadCases"]![0]!["nodalLoads"]![0]!["fx"] = 1e308;
+        Assert.Equal("$.loadCases[0].nodalLoads[0].fx", Single(Fails(m), "beyond the range accepted").JsonPath);
+    }
+
+    [Fact]
     public void SpringOnRestrainedDirection()
     {
         var m = Good();
