@@ -9,7 +9,7 @@ namespace PlaneLateral.Model;
 /// <see cref="StructureModel"/> in SI units. Every problem in the file is collected and reported together
 /// in one <see cref="ModelInputException"/>; the file is only read, never changed.
 /// </summary>
-public static class ModelReader
+public static partial class ModelReader
 {
     /// <summary>The format version this reader understands.</summary>
     public const int FormatVersion = 1;
@@ -72,7 +72,7 @@ public static class ModelReader
         return (i > 0 ? message[..i] : message).TrimEnd('.', ' ');
     }
 
-    private sealed class Builder(DiagnosticSink sink, string fileName)
+    private sealed partial class Builder(DiagnosticSink sink, string fileName)
     {
         private UnitSystem _units = UnitSystem.KipInch;
         private readonly Dictionary<string, Material> _materials = new(StringComparer.Ordinal);
