@@ -49,45 +49,38 @@ public sealed class DenseLdlSolver : ISparseSpdSolver
 
         public void Solve(ReadOnlySpan<double> b, Span<double> x)
         {
-            for (int i = 0; i < n; i++)
-            {
-                double s = failed[i] ? 0 : b[i];
-                if (!failed[i]) for (int p = 0; p < i; p++) s -= l[i, p] * x[p];
-                x[i] = s;
-            }
-            for (int i = 0; i < n; i++) x[i] /= d[i];
-            for (int i = n - 1; i >= 0; i--)
+            b.CopyTo(x);
+            Substitute(x, n);
+        }
+
+        /// <summary>Solves L·D·Lᵀ·x = x in place over the leading <paramref name="m"/> equations; failed DOFs give zero.</summary>
+        private void Substitute(Span<double> x, int m)
+        {
+            for (int i = 0; i < m; i++)
             {
                 if (failed[i]) { x[i] = 0; continue; }
                 double s = x[i];
-                for (int p = i + 1; p < n; p++) s -= l[p, i] * x[p];
+                for (int p = 0; p < i; p++) s -= l[i, p] * x[p];
+                x[i] = s;
+            }
+            for (int i = 0; i < m; i++) x[i] /= d[i];
+            for (int i = m - 1; i >= 0; i--)
+            {
+                if (failed[i]) { x[i] = 0; continue; }
+                double s = x[i];
+                for (int p = i + 1; p < m; p++) s -= l[p, i] * x[p];
                 x[i] = s;
             }
         }
 
         public double[] MechanismShape(int failureIndex)
         {
-            // z = [−K11⁻¹·K12·e; 1; 0]: K11 the block eliminated before the failed DOF.
+            // z = [−K11⁻¹·K12·e; 1; 0], K11 the block eliminated before the failed DOF f.
             int f = failures[failureIndex].Dof;
             var dense = k.ToDense();
-            var rhs = new double[n];
-            for (int i = 0; i < f; i++) rhs[i] = -dense[i, f];
             var z = new double[n];
-            // Solve with the leading block only: forward/back substitution limited to rows < f.
-            for (int i = 0; i < f; i++)
-            {
-                double s = failed[i] ? 0 : rhs[i];
-                if (!failed[i]) for (int p = 0; p < i; p++) s -= l[i, p] * z[p];
-                z[i] = s;
-            }
-            for (int i = 0; i < f; i++) z[i] /= d[i];
-            for (int i = f - 1; i >= 0; i--)
-            {
-                if (failed[i]) { z[i] = 0; continue; }
-                double s = z[i];
-                for (int p = i + 1; p < f; p++) s -= l[p, i] * z[p];
-                z[i] = s;
-            }
+            for (int i = 0; i < f; i++) z[i] = -dense[i, f];
+            Substitute(z, f);
             z[f] = 1;
             double max = z.Max(Math.Abs);
             for (int i = 0; i < n; i++) z[i] /= max;
