@@ -96,6 +96,24 @@ public class SchemaTests
         ModelReader.Parse(Base, "base.json");
     }
 
+    [Fact]
+    public void TheWorkedExampleInTheDocsIsValidAndGivesItsHandResult()
+    {
+        // The JSON block of "Worked example" in docs/model-format.md, checked as written there.
+        string doc = File.ReadAllText(Path.Combine(RepositoryFiles.Root, "docs", "model-format.md"));
+        int section = doc.IndexOf("## Worked example", StringComparison.Ordinal);
+        Assert.True(section >= 0, "docs/model-format.md has no worked example");
+        int start = doc.IndexOf("```json", section, StringComparison.Ordinal) + "```json".Length;
+        string json = doc[start..doc.IndexOf("```", start, StringComparison.Ordinal)];
+        var errors = Validate(json);
+        Assert.True(errors.Count == 0, $"the worked example breaks the schema:\n{Describe(errors)}");
+        var result = LinearStaticAnalysis.Run(ModelReader.Parse(json, "worked-example.json"));
+        TestModels.AssertChecks(result);
+        // By hand (docs/model-format.md): PL³/(3EI) + PL/(G·A_s) = 0.0096 + 0.0048 = 0.0144 in.
+        var m = result.Model;
+        TestModels.Near(0.0144, m.Units.FromSI(result.Cases[0].Displacement(m.NodeIndex("T"), Dof.X), PlaneLateral.Units.Quantity.Length), 1e-9, "worked example tip");
+    }
+
     private static readonly Dictionary<string, Action<JObject>> Mistakes = new()
     {
         ["unknown top-level key"] = m => m["unitz"] = new JObject(),
