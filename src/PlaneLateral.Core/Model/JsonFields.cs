@@ -25,9 +25,19 @@ internal sealed class JsonFields
 
     public JObject Object => _obj;
 
-    public bool Has(string key) { _known.Add(key); return _obj.TryGetValue(key, out var t) && t.Type != JTokenType.Null; }
+    public bool Has(string key) => Token(key) is not null;
 
-    public JToken? Token(string key) { _known.Add(key); return _obj.TryGetValue(key, out var t) && t.Type != JTokenType.Null ? t : null; }
+    /// <summary>The value of <paramref name="key"/>, or null when absent. A JSON null is reported once and read as absent.</summary>
+    public JToken? Token(string key)
+    {
+        _known.Add(key);
+        if (!_obj.TryGetValue(key, out var t)) return null;
+        if (t.Type != JTokenType.Null) return t;
+        if (_nullsReported.Add(key)) _sink.Add(t, $"'{key}' is null", "give a value, or leave the key out to take its default");
+        return null;
+    }
+
+    private readonly HashSet<string> _nullsReported = new(StringComparer.Ordinal);
 
     /// <summary>Reports keys that none of the reads asked for (most often a typo).</summary>
     public void RejectUnknownKeys()

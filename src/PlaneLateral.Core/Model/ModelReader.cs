@@ -81,12 +81,15 @@ public static partial class ModelReader
         private readonly Dictionary<string, int> _members = new(StringComparer.Ordinal);
         private readonly Dictionary<string, int> _cases = new(StringComparer.Ordinal);
 
+        // Ids of entries that were declared but failed to read: references to them are not reported again.
+        private readonly HashSet<string> _unusable = new(StringComparer.Ordinal);
+
         private double SI(double v, Quantity q) => _units.ToSI(v, q);
 
         public StructureModel? Build(JObject root)
         {
             var f = new JsonFields(root, sink);
-            f.Has("$schema");
+            f.OptionalString("$schema", "give \"$schema\" as the path or address of the schema file, a string");
             f.OptionalString("description", "give a short description as a string");
             // Expected values and their published source, for verification models; read by the tests, not by the analysis.
             f.OptionalObject("reference", "give \"reference\" as an object {\"source\": ..., \"values\": [...]}");
@@ -147,10 +150,16 @@ public static partial class ModelReader
             var length = LengthUnit.Inch;
             string fs = u.OptionalString("force", "use one of: " + string.Join(", ", UnitSystem.ForceSymbols)) ?? "kip";
             if (!UnitSystem.TryParseForce(fs, out force))
+            {
+                force = ForceUnit.Kip; // keep the default for the wording of later messages
                 sink.Add(u.Token("force"), $"unknown force unit \"{fs}\"", "use one of: " + string.Join(", ", UnitSystem.ForceSymbols));
+            }
             string ls = u.OptionalString("length", "use one of: " + string.Join(", ", UnitSystem.LengthSymbols)) ?? "in";
             if (!UnitSystem.TryParseLength(ls, out length))
+            {
+                length = LengthUnit.Inch;
                 sink.Add(u.Token("length"), $"unknown length unit \"{ls}\"", "use one of: " + string.Join(", ", UnitSystem.LengthSymbols));
+            }
             u.RejectUnknownKeys();
             _units = new UnitSystem(force, length);
         }
@@ -189,7 +198,7 @@ public static partial class ModelReader
                     g = Positive(f, "G", Quantity.Stress, "shear modulus", $"give G > 0 in {_units.Label(Quantity.Stress)}");
                     nu = e / (2 * g) - 1;
                     if (double.IsFinite(nu) && !(nu > -1 && nu < 0.5))
-                        sink.Add(f.Token("G"), $"E and G imply Poisson's ratio {nu:0.###}, outside (−1, 0.5)", "check E and G: an isotropic material needs E/3 < G < E/0 with E/(2G) − 1 between −1 and 0.5");
+                        sink.Add(f.Token("G"), $"E and G imply Poisson's ratio {nu:0.###}, outside (−1, 0.5)", "check E and G: an isotropic material needs G > E/3 (Poisson's ratio E/(2G) − 1 between −1 and 0.5)");
                 }
                 else if (hasNu)
                 {
@@ -230,7 +239,8 @@ public static partial class ModelReader
                     null => null,
                     _ => Unknown(f, shape),
                 };
-                f.RejectUnknownKeys();
+                if (s is not null) f.RejectUnknownKeys(); // with an unknown shape, its keys cannot be judged
+                else if (id is not null) _unusable.Add("section:" + id);
                 if (id is not null && s is not null)
                 {
                     _sections[id] = (s, o);
@@ -362,7 +372,7 @@ public static partial class ModelReader
 
                 var secId = f.RequiredString("section", "give the id of a section listed under \"sections\"");
                 (Section Section, JObject At) sec = default;
-                if (secId is not null && !_sections.TryGetValue(secId, out sec))
+                if (secId is not null && !_sections.TryGetValue(secId, out sec) && !_unusable.Contains("section:" + secId))
                     sink.Add(f.Token("section"), $"unknown section \"{secId}\"", $"use the id of a section listed under \"sections\"{Suggest(secId, _sections.Keys)}");
                 var matId = f.RequiredString("material", "give the id of a material listed under \"materials\"");
                 Material? mat = null;
@@ -407,6 +417,7 @@ public static partial class ModelReader
                 var role = f.OptionalString("role", "give a role such as \"wall\", \"column\", \"beam\", \"coupling-beam\" or \"brace\"") ?? (kind == MemberKind.Brace ? "brace" : "");
                 f.RejectUnknownKeys();
 
+                if (id is not null) _unusable.Add("member:" + id); // until it reads whole
                 if (id is null || a < 0 || b < 0 || sec.Section is null || mat is null) continue;
                 double length = Math.Sqrt(Math.Pow(nodes[b].X - nodes[a].X, 2) + Math.Pow(nodes[b].Y - nodes[a].Y, 2));
                 if (a == b || length == 0)
@@ -420,6 +431,7 @@ public static partial class ModelReader
                         "make the rigid zones shorter than the member");
                     continue;
                 }
+                _unusable.Remove("member:" + id);
                 var s = sec.Section;
                 double shearArea = s.ShearArea(mat.Nu) * mods.ShearArea;
                 _members[id] = list.Count;
@@ -529,7 +541,8 @@ public static partial class ModelReader
         {
             var mid = f.RequiredString("member", "give the id of the loaded member");
             int m = -1;
-            if (mid is not null && !_members.TryGetValue(mid, out m))
+            if (mid is not null && !_members.TryGetValue(mid, out m) && _unusable.Contains("member:" + mid)) m = -1;
+            else if (mid is not null && !_members.TryGetValue(mid, out m))
             {
                 sink.Add(f.Token("member"), $"unknown member \"{mid}\"", $"use the id of a member listed under \"members\"{Suggest(mid, _members.Keys)}");
                 m = -1;
