@@ -88,6 +88,34 @@ public class ModelErrorTests
     }
 
     [Fact]
+    public void AMemberThatFailsToReadIsNotReportedAgainWhereItIsLoaded()
+    {
+        var m = Good();
+        m["members"]![1]!["end"] = "N1";
+        m["loadCases"]![0]!["memberLoads"] = JArray.FromObject(new[] { new { member = "M1", direction = "x", w = 1.0 } });
+        var e = Fails(m);
+        Single(e, "zero length");
+        Assert.DoesNotContain(e.Diagnostics, d => d.Problem.Contains("unknown member"));
+    }
+
+    [Fact]
+    public void AnUnknownShapeIsOneMessage()
+    {
+        var m = Good();
+        m["sections"]![0]!["shape"] = "rect";
+        var d = Assert.Single(Fails(m).Diagnostics);
+        Assert.Contains("unknown section shape \"rect\"", d.Problem);
+    }
+
+    [Fact]
+    public void NullValuesAreReported()
+    {
+        var m = Good();
+        m["title"] = JValue.CreateNull();
+        Assert.Equal("$.title", Single(Fails(m), "'title' is null").JsonPath);
+    }
+
+    [Fact]
     public void CoincidentNodes()
     {
         var m = Good();
