@@ -18,13 +18,20 @@ internal static class DenseKernels
 {
     private const int Block = 8; // two Vector256<double> accumulators
 
+    /// <summary>Name of the AppContext switch that forces the scalar kernels (for measuring what the vector ones gain).</summary>
+    public const string ScalarKernelsSwitch = "PlaneLateral.Solvers.ScalarKernels";
+
+    /// <summary>Vector kernels are used when the CPU runs 256-bit vectors and the switch above is not set. Read once.</summary>
+    internal static readonly bool UseVectors =
+        Vector256.IsHardwareAccelerated && !(AppContext.TryGetSwitch(ScalarKernelsSwitch, out bool scalar) && scalar);
+
     /// <summary>Σ a[k]·b[k] over the common length (spans must have equal length).</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public static double Dot(ReadOnlySpan<double> a, ReadOnlySpan<double> b)
     {
         int n = a.Length;
         if (n < Block) return DotShort(a, b);
-        return Vector256.IsHardwareAccelerated ? DotVector(a, b) : DotScalar8(a, b);
+        return UseVectors ? DotVector(a, b) : DotScalar8(a, b);
     }
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
@@ -87,7 +94,7 @@ internal static class DenseKernels
         int n = y.Length;
         if (x.Length < n) throw new ArgumentException("Spans differ in length.");
         int k = 0;
-        if (Vector256.IsHardwareAccelerated && n >= 4)
+        if (UseVectors && n >= 4)
         {
             ref double ry = ref MemoryMarshal.GetReference(y);
             ref double rx = ref MemoryMarshal.GetReference(x);

@@ -87,6 +87,26 @@ public class EnvelopeSolverTests
     }
 
     [Fact]
+    public void SmallerEnvelopeOption_PicksTheSmallerOfRcmAndNatural()
+    {
+        // Row-by-row numbering of an 8-neighbour grid along its shorter side is close to ideal (rows of width nx), while a
+        // scrambled numbering is far worse than RCM; the option must pick natural for the first and RCM for the second.
+        var solver = new EnvelopeCholeskySolver(EnvelopeOrdering.SmallerEnvelope);
+        foreach (int seed in new[] { -1, 9 })
+        {
+            var a = QuadCellGrid(12, 40, scrambleSeed: seed);
+            long envRcm = Orderings.EnvelopeSize(a, Orderings.ReverseCuthillMcKee(a));
+            long envNat = Orderings.EnvelopeSize(a, Orderings.Natural(a.Size));
+            var f = (EnvelopeFactor)solver.Factorize(a);
+            Assert.Equal(Math.Min(envRcm, envNat), f.EnvelopeSize);
+            if (seed < 0) Assert.True(envNat <= envRcm, $"row by row {envNat}, RCM {envRcm}");
+            else Assert.True(envRcm < envNat);
+            AssertMatchesDenseCholesky(a, solver, 3, rhsCount: 1);
+        }
+        Assert.Contains("smaller envelope", solver.Description);
+    }
+
+    [Fact]
     public void NaturalOrder_UsesTheIdentityPermutation()
     {
         var a = RandomLaplacianPlusDiagonal(40, 3);

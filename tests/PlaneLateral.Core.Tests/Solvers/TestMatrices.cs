@@ -75,6 +75,28 @@ internal static class TestMatrices
         return b.Build();
     }
 
+    /// <summary>
+    /// An nx×ny node grid of 4-node cells, each coupling all its corners (a complete-graph Laplacian per cell, like the
+    /// sparsity of bilinear quadrilaterals: 8 neighbours per node), plus a diagonal shift; numbering scrambled by a seeded
+    /// permutation (seed &lt; 0: row by row).
+    /// </summary>
+    public static SymmetricSparseMatrix QuadCellGrid(int nx, int ny, int scrambleSeed, double shift = 0.1)
+    {
+        int n = nx * ny;
+        var label = scrambleSeed >= 0 ? RandomPermutation(n, scrambleSeed) : Orderings.Natural(n);
+        var b = new SymmetricMatrixBuilder(n);
+        for (int y = 0; y + 1 < ny; y++)
+            for (int x = 0; x + 1 < nx; x++)
+            {
+                int n0 = x + nx * y;
+                int[] c = { label[n0], label[n0 + 1], label[n0 + nx], label[n0 + nx + 1] };
+                for (int i = 0; i < 4; i++)
+                    for (int j = 0; j < i; j++) AddSpring(b, c[i], c[j], 1.0);
+            }
+        for (int i = 0; i < n; i++) b.AddDiagonal(i, shift);
+        return b.Build();
+    }
+
     /// <summary>Dense MathNet matrix of the full symmetric matrix.</summary>
     public static Matrix<double> Dense(SymmetricSparseMatrix a) => Matrix<double>.Build.DenseOfArray(a.ToDense());
 
