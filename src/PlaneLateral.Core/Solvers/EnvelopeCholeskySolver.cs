@@ -1,4 +1,5 @@
 using System.Buffers;
+using System.Runtime.CompilerServices;
 
 namespace PlaneLateral.Solvers;
 
@@ -140,6 +141,9 @@ public sealed class EnvelopeFactor : ISparseSpdFactor
     /// <inheritdoc />
     public IReadOnlyList<PivotFailure> PivotFailures => _failures;
 
+    // AggressiveOptimization: these run a few times per model with long loops, so tiered compilation would leave them in
+    // on-stack-replaced code; compiling them fully optimised up front gives steady timings from the first call.
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static EnvelopeFactor Create(SymmetricSparseMatrix a, int[] perm, double tol)
     {
         int n = a.Size;
@@ -229,6 +233,7 @@ public sealed class EnvelopeFactor : ISparseSpdFactor
     }
 
     /// <inheritdoc />
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public void Solve(ReadOnlySpan<double> b, Span<double> x)
     {
         if (b.Length != _n || x.Length != _n) throw new ArgumentException("Vector length differs from the factor size.");
