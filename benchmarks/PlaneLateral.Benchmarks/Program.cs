@@ -1,1 +1,21 @@
-﻿Console.WriteLine("Hello, World!");
+using BenchmarkDotNet.Running;
+using PlaneLateral.Benchmarks;
+using PlaneLateral.Solvers;
+
+// "fill" prints the size and fill of each benchmark case; anything else goes to BenchmarkDotNet,
+// e.g. `dotnet run -c Release -- --filter '*EnvelopeSolver*' --job short`.
+if (args.Length > 0 && args[0] == "fill")
+{
+    Console.WriteLine("case                 ordering   n       nnz(K lower)  env(L)       nnz(L)       bandwidth");
+    foreach (string c in EnvelopeSolverBenchmarks.Cases)
+    {
+        var a = EnvelopeSolverBenchmarks.BuildCase(c);
+        foreach (var (name, perm) in new[] { ("RCM", Orderings.ReverseCuthillMcKee(a)), ("natural", Orderings.Natural(a.Size)) })
+        {
+            var f = EnvelopeCholeskySolver.Factorize(a, perm);
+            Console.WriteLine($"{c,-20} {name,-10} {a.Size,-7} {a.NonZerosLower,-13} {f.EnvelopeSize,-12} {f.FactorNonZeros,-12} {Orderings.Bandwidth(a, perm)}");
+        }
+    }
+    return;
+}
+BenchmarkSwitcher.FromAssembly(typeof(EnvelopeSolverBenchmarks).Assembly).Run(args);
