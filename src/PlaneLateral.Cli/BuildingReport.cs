@@ -53,6 +53,20 @@ internal static class BuildingReport
                 sb.Append(lt.Render());
             }
 
+            var split = LineAlone.SplitAll(r, br.Cases, out var skipped);
+            var loadCaseSplit = split.Where(x => !br.Cases.First(c => c.CaseId == x.CaseId).IsCombination).ToList();
+            if (loadCaseSplit.Count > 0)
+            {
+                sb.Append("\nStory shear split: each line's story stiffness alone (same level forces) and the split it implies, beside the split in the structure\n");
+                var st = new TextTable("case", "story", "line", $"k alone [{ku}]", "share by k alone", "share in structure").Numeric(1, 3, 4, 5);
+                foreach (var (id, rows) in loadCaseSplit)
+                    foreach (var x in rows)
+                        st.Add(id, x.Story.ToString(CultureInfo.InvariantCulture), x.Line, TextTable.Num(u.FromSI(x.AloneStiffness, Quantity.TranslationalStiffness)), Pct(x.AloneShare), Pct(x.InStructureShare));
+                sb.Append(st.Render());
+                sb.Append("  the difference is the interaction the diaphragms force between lines that deform differently (combinations: line-split.csv).\n");
+            }
+            foreach (var id in skipped) sb.Append($"  {id}: a line alone is a mechanism, so no split by stiffness alone.\n");
+
             sb.Append("\nStiffness (soft story) irregularity, ASCE 7-16 Table 12.3-2 Types 1a/1b: k below 70 % (60 %) of the story above or 80 % (70 %) of the mean of the three above\n");
             var it = new TextTable("case", "story", $"stiffness [{ku}]", "k / k above", "k / mean of 3 above", "1a soft", "1b extreme").Numeric(1, 2, 3, 4);
             foreach (var i in br.Irregularity)
@@ -88,6 +102,8 @@ internal static class BuildingReport
         }
         return sb.ToString();
     }
+
+    private static string Pct(double v) => double.IsFinite(v) ? (100 * v).ToString("0.0", CultureInfo.InvariantCulture) + " %" : "n/a";
 
     private static string Ratio(double v) => double.IsFinite(v) ? v.ToString("0.000", CultureInfo.InvariantCulture) : "n/a";
 }

@@ -25,6 +25,8 @@ public static class BuildingFiles
             files.Add(("stories.csv", Stories(r, br)));
             files.Add(("story-lines.csv", StoryLines(r, br)));
             files.Add(("soft-story.csv", SoftStory(r, br)));
+            var split = LineAlone.SplitAll(r, br.Cases, out _);
+            if (split.Count > 0) files.Add(("line-split.csv", Split(r, split)));
         }
         if (b.DriftChecks.Count > 0) files.Add(("drift-checks.csv", Drift(r, br)));
         files.Add(("member-stiffness.csv", MemberStiffness(r)));
@@ -57,6 +59,16 @@ public static class BuildingFiles
             foreach (var s in c.Stories)
                 foreach (var l in s.Lines)
                     sb.Append($"{Csv(c.CaseId)},{s.Index},{Csv(LineName(l.Line))},{F(u.FromSI(l.Shear, Quantity.Force))},{F(l.Share)},{F(u.FromSI(l.Drift, Quantity.Length))},{F(u.FromSI(l.Stiffness, Quantity.TranslationalStiffness))}\n");
+        return sb.ToString();
+    }
+
+    private static string Split(AnalysisResult r, IReadOnlyList<(string CaseId, IReadOnlyList<LineSplitRow> Rows)> split)
+    {
+        var u = r.Model.Units;
+        var sb = new StringBuilder($"case,story,line,stiffness of the line alone [{u.Label(Quantity.TranslationalStiffness)}],share by stiffness alone,share in the structure\n");
+        foreach (var (id, rows) in split)
+            foreach (var x in rows)
+                sb.Append($"{Csv(id)},{x.Story},{Csv(x.Line)},{F(u.FromSI(x.AloneStiffness, Quantity.TranslationalStiffness))},{F(x.AloneShare)},{F(x.InStructureShare)}\n");
         return sb.ToString();
     }
 
