@@ -198,10 +198,10 @@ public static class LinearStaticAnalysis
     {
         int n = model.Nodes.Count;
         var full = new double[3 * n];
-        for (int eq = 0; eq < u.Length; eq++)
+        for (int j = 0; j < full.Length; j++)   // through each DOF's equation: nodes tied by a diaphragm read the shared one
         {
-            var (node, dof) = dofs.DofOf(eq);
-            full[3 * node + (int)dof] = u[eq];
+            int eq = dofs.Equation(j / 3, (Dof)(j % 3));
+            if (eq >= 0) full[j] = u[eq];
         }
 
         // Residual of the solve.

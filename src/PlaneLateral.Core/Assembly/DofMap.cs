@@ -44,7 +44,7 @@ public sealed class DofMap
 
     public DofState State(int node, Dof dof) => _state[3 * node + (int)dof];
 
-    /// <summary>(node, dof) of an equation.</summary>
+    /// <summary>(node, dof) of an equation; for an equation shared by a rigid diaphragm, the master node's ux.</summary>
     public (int Node, Dof Dof) DofOf(int equation)
     {
         int k = _dofOfEquation[equation];
@@ -80,9 +80,12 @@ public sealed class DofMap
 
         var equation = new int[3 * n];
         var dofOf = new List<int>(3 * n);
+        // Rigid diaphragms: a tied node's ux shares the equation of its level's master (lowest-numbered, so numbered first).
+        var master = model.Building.DiaphragmMasters(n);
         for (int k = 0; k < 3 * n; k++)
         {
-            if (state[k] == DofState.Free) { equation[k] = dofOf.Count; dofOf.Add(k); }
+            if (state[k] == DofState.Free && k % 3 == (int)Dof.X && master[k / 3] >= 0 && master[k / 3] != k / 3 && equation[3 * master[k / 3]] >= 0) equation[k] = equation[3 * master[k / 3]];
+            else if (state[k] == DofState.Free) { equation[k] = dofOf.Count; dofOf.Add(k); }
             else equation[k] = -1;
         }
         return new DofMap(equation, state, dofOf.ToArray());

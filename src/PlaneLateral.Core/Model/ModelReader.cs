@@ -108,6 +108,7 @@ public static partial class ModelReader
             var cases = ReadLoadCases(f.Objects("loadCases", false, "give \"loadCases\" as an array of objects"), members);
             var combos = ReadCombinations(f.Objects("combinations", false, "give \"combinations\" as an array of objects"), cases);
             var points = ReadStiffnessPoints(f.Objects("stiffnessAt", false, "give \"stiffnessAt\" as an array of {\"node\": \"...\", \"direction\": \"x\"}"), supports);
+            var building = ReadBuilding(f, root, nodes, members, supports, cases, combos);
             f.RejectUnknownKeys();
 
             CheckConnectivity(nodes, members);
@@ -129,6 +130,7 @@ public static partial class ModelReader
                 LoadCases = cases,
                 Combinations = combos,
                 StiffnessPoints = points,
+                Building = building,
             };
         }
 
@@ -414,6 +416,7 @@ public static partial class ModelReader
                             sink.Add(mt, $"stiffness modifier '{k}' must be greater than zero, found {mt}", fix);
                     mf.RejectUnknownKeys();
                 }
+                ReadLineTag(f);
                 var role = f.OptionalString("role", "give a role such as \"wall\", \"column\", \"beam\", \"coupling-beam\" or \"brace\"") ?? (kind == MemberKind.Brace ? "brace" : "");
                 f.RejectUnknownKeys();
 

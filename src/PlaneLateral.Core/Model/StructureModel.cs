@@ -21,6 +21,9 @@ public sealed class StructureModel
     public required IReadOnlyList<Combination> Combinations { get; init; }
     public required IReadOnlyList<StiffnessPoint> StiffnessPoints { get; init; }
 
+    /// <summary>Levels, diaphragms, lines of resistance, cracked-section assignments and drift checks (empty when absent).</summary>
+    public BuildingData Building { get; init; } = BuildingData.Empty;
+
     /// <summary>Index of the node with the given id, or −1.</summary>
     public int NodeIndex(string id)
     {

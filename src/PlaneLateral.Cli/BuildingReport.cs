@@ -1,0 +1,109 @@
+using System.Globalization;
+using System.Text;
+using PlaneLateral.Analysis;
+using PlaneLateral.Model;
+using PlaneLateral.Units;
+
+namespace PlaneLateral.Cli;
+
+/// <summary>The building tables the solve command prints: stories, line shares, drift checks, soft story, modifiers.</summary>
+internal static class BuildingReport
+{
+    public static string Render(AnalysisResult r)
+    {
+        var m = r.Model;
+        var b = m.Building;
+        if (ReferenceEquals(b, BuildingData.Empty)) return "";
+        var u = m.Units;
+        string len = u.LengthSymbol, force = u.ForceSymbol, ku = u.Label(Quantity.TranslationalStiffness);
+        double L(double v) => u.FromSI(v, Quantity.Length);
+        var br = BuildingResult.Of(r);
+        var sb = new StringBuilder();
+
+        if (b.Levels.Count > 0)
+        {
+            sb.Append("\nLevels (rigid: the level's nodes share one horizontal displacement, exactly)\n");
+            var t = new TextTable("level", "name", $"elevation [{len}]", "diaphragm", "nodes").Numeric(2);
+            foreach (var l in b.Levels)
+                t.Add(l.Id, l.Name, TextTable.Num(L(l.Elevation)), l.Rigid ? "rigid" : "none", $"{l.Nodes.Count} ({l.Selection})");
+            sb.Append(t.Render());
+        }
+
+        var lateral = br.Cases.Where(c => c.Lateral).ToList();
+        if (br.HasStories)
+        {
+            sb.Append("\nStories (lateral cases; gravity-only cases are in stories.csv)\n");
+            var t = new TextTable("case", "story", "levels", $"height [{len}]", $"top ux [{len}]", $"drift [{len}]", "drift ratio", $"shear [{force}]", $"stiffness [{ku}]")
+                .Numeric(1, 3, 4, 5, 6, 7, 8);
+            foreach (var c in lateral)
+                foreach (var s in c.Stories)
+                    t.Add(c.CaseId, s.Index.ToString(CultureInfo.InvariantCulture), $"{s.Bottom.Id}-{s.Top.Id}", TextTable.Num(L(s.Height)), TextTable.Num(L(s.TopDisplacement)),
+                        TextTable.Num(L(s.Drift)), TextTable.Num(s.DriftRatio), TextTable.Num(u.FromSI(s.Shear, Quantity.Force)), TextTable.Num(u.FromSI(s.Stiffness, Quantity.TranslationalStiffness)));
+            sb.Append(t.Render());
+
+            if (b.Lines.Count > 0)
+            {
+                sb.Append("\nStory shear by line of resistance (from member end forces; stiffness = line shear / line drift, within the whole structure)\n");
+                var lt = new TextTable("case", "story", "line", $"shear [{force}]", "share", $"stiffness [{ku}]").Numeric(1, 3, 4, 5);
+                foreach (var c in lateral)
+                    foreach (var s in c.Stories)
+                        foreach (var l in s.Lines)
+                            lt.Add(c.CaseId, s.Index.ToString(CultureInfo.InvariantCulture), l.Line.Length == 0 ? "(no line)" : l.Line, TextTable.Num(u.FromSI(l.Shear, Quantity.Force)),
+                                double.IsFinite(l.Share) ? (100 * l.Share).ToString("0.0", CultureInfo.InvariantCulture) + " %" : "n/a", TextTable.Num(u.FromSI(l.Stiffness, Quantity.TranslationalStiffness)));
+                sb.Append(lt.Render());
+            }
+
+            var split = LineAlone.SplitAll(r, br.Cases, out var skipped);
+            var loadCaseSplit = split.Where(x => !br.Cases.First(c => c.CaseId == x.CaseId).IsCombination).ToList();
+            if (loadCaseSplit.Count > 0)
+            {
+                sb.Append("\nStory shear split: each line's story stiffness alone (same level forces) and the split it implies, beside the split in the structure\n");
+                var st = new TextTable("case", "story", "line", $"k alone [{ku}]", "share by k alone", "share in structure").Numeric(1, 3, 4, 5);
+                foreach (var (id, rows) in loadCaseSplit)
+                    foreach (var x in rows)
+                        st.Add(id, x.Story.ToString(CultureInfo.InvariantCulture), x.Line, TextTable.Num(u.FromSI(x.AloneStiffness, Quantity.TranslationalStiffness)), Pct(x.AloneShare), Pct(x.InStructureShare));
+                sb.Append(st.Render());
+                sb.Append("  the difference is the interaction the diaphragms force between lines that deform differently (combinations: line-split.csv).\n");
+            }
+            foreach (var id in skipped) sb.Append($"  {id}: a line alone is a mechanism, so no split by stiffness alone.\n");
+
+            sb.Append("\nStiffness (soft story) irregularity, ASCE 7-16 Table 12.3-2 Types 1a/1b: k below 70 % (60 %) of the story above or 80 % (70 %) of the mean of the three above\n");
+            var it = new TextTable("case", "story", $"stiffness [{ku}]", "k / k above", "k / mean of 3 above", "1a soft", "1b extreme").Numeric(1, 2, 3, 4);
+            foreach (var i in br.Irregularity)
+                it.Add(i.CaseId, i.Story.Index.ToString(CultureInfo.InvariantCulture), TextTable.Num(u.FromSI(i.Stiffness, Quantity.TranslationalStiffness)), Ratio(i.RatioToAbove), Ratio(i.RatioToAverageAbove),
+                    i.Soft ? "yes" : "no", i.ExtremelySoft ? "yes" : "no");
+            sb.Append(it.Render());
+        }
+
+        if (br.DriftChecks.Count > 0)
+        {
+            sb.Append("\nDrift check: amplified drift = Cd·elastic drift / Ie (ASCE 7-16 eq. 12.8-15) against the allowable drift ratio\n");
+            var t = new TextTable("check", "case", "story", $"elastic [{len}]", "Cd", "Ie", $"amplified [{len}]", "ratio", "allowed", "result", "margin").Numeric(2, 3, 4, 5, 6, 7, 8, 10);
+            foreach (var d in br.DriftChecks)
+                t.Add(d.Check.Id, d.CaseId, d.Story.Index.ToString(CultureInfo.InvariantCulture), TextTable.Num(L(d.ElasticDrift)), TextTable.Num(d.Check.Cd), TextTable.Num(d.Check.Ie),
+                    TextTable.Num(L(d.AmplifiedDrift)), TextTable.Num(d.Ratio), TextTable.Num(d.Allowed), d.Passes ? "within" : "EXCEEDS",
+                    (100 * d.Margin).ToString("0.0", CultureInfo.InvariantCulture) + " %");
+            sb.Append(t.Render());
+            foreach (var c in b.DriftChecks) sb.Append($"  {c.Id}: allowable ratio {TextTable.Num(c.AllowedRatio)}, {c.LimitSource}.\n");
+            sb.Append("  margin: share of the allowable drift left. A computed aid, not a code check: the governing code decides.\n");
+        }
+
+        if (b.Modifiers.Count > 0 && (b.CrackedSections is not null || b.Modifiers.Any(a => a.Modifiers != StiffnessModifiers.None)))
+        {
+            sb.Append("\nStiffness modifiers by member (I, A, shear area multipliers, and why)\n");
+            var t = new TextTable("members", "role", "I", "A", "As", "source").Numeric(2, 3, 4);
+            foreach (var g in b.Modifiers.GroupBy(a => (m.Members[a.Member].Role, a.Modifiers, a.Source)))
+            {
+                var ids = g.Select(a => m.Members[a.Member].Id).ToList();
+                string who = ids.Count <= 3 ? string.Join(", ", ids) : $"{ids[0]} … {ids[^1]} ({ids.Count})";
+                t.Add(who, g.Key.Role, TextTable.Num(g.Key.Modifiers.I), TextTable.Num(g.Key.Modifiers.A), TextTable.Num(g.Key.Modifiers.ShearArea), g.Key.Source);
+            }
+            sb.Append(t.Render());
+        }
+        return sb.ToString();
+    }
+
+    private static string Pct(double v) => double.IsFinite(v) ? (100 * v).ToString("0.0", CultureInfo.InvariantCulture) + " %" : "n/a";
+
+    private static string Ratio(double v) => double.IsFinite(v) ? v.ToString("0.000", CultureInfo.InvariantCulture) : "n/a";
+}

@@ -1,0 +1,127 @@
+using PlaneLateral.Model;
+
+namespace PlaneLateral.Analysis;
+
+/// <summary>One line's story stiffness when it stands alone, and the split of story shear those stiffnesses imply.</summary>
+/// <param name="AloneStiffness">Story stiffness of the line analysed alone (N/m; NaN when not defined).</param>
+/// <param name="AloneShare">AloneStiffness / Σ AloneStiffness over the lines in that story: the split by relative rigidity.</param>
+/// <param name="InStructureShare">The share the line takes in the whole structure (from <see cref="StoryAnalysis"/>).</param>
+public sealed record LineSplitRow(int Story, string Line, double AloneStiffness, double AloneShare, double InStructureShare);
+
+/// <summary>
+/// Each line of resistance analysed by itself: its members, the nodes they use, the supports at those nodes and the
+/// levels restricted to those nodes, loaded with the case's level forces (the sum of the nodal fx applied at each
+/// level's nodes, all lines together) at the line's first node on each level. Member loads and vertical loads are left
+/// out: this is the lateral stiffness of the line under the story-force pattern, the quantity a relative-rigidity
+/// distribution divides by. Set beside <see cref="LineStoryResult.Share"/> it shows how far interaction (a wall
+/// pulling back a frame near the top) moves the split away from relative rigidity.
+/// <para>The comparison layer (hand methods against FE) is the intended caller; Core itself does not compare.</para>
+/// </summary>
+public static class LineAlone
+{
+    /// <summary>Story results of <paramref name="line"/> standing alone under the level forces of case <paramref name="caseId"/>.</summary>
+    /// <exception cref="ArgumentException">The model has no such line, or fewer than two levels.</exception>
+    /// <exception cref="UnstableModelException">The line alone is a mechanism (e.g. it leans on another line).</exception>
+    public static CaseStories Stories(AnalysisResult r, string caseId, string line)
+    {
+        var model = r.Model;
+        var b = model.Building;
+        if (!b.Lines.Contains(line)) throw new ArgumentException($"the model has no line \"{line}\"", nameof(line));
+        if (b.Levels.Count < 2) throw new ArgumentException("the model has fewer than two levels, so no stories", nameof(r));
+        var source = r.Case(caseId);
+
+        var memberIdx = Enumerable.Range(0, model.Members.Count).Where(i => b.MemberLines[i] == line).ToList();
+        var usedNodes = memberIdx.SelectMany(i => new[] { model.Members[i].Start, model.Members[i].End }).Distinct().Order().ToList();
+        var newIndex = usedNodes.Select((n, k) => (n, k)).ToDictionary(p => p.n, p => p.k);
+        var nodes = usedNodes.Select((n, k) => model.Nodes[n] with { Index = k }).ToList();
+        var members = memberIdx.Select((i, k) => model.Members[i] with { Index = k, Start = newIndex[model.Members[i].Start], End = newIndex[model.Members[i].End] }).ToList();
+        var supports = model.Supports.Where(s => newIndex.ContainsKey(s.Node)).Select(s => s with { Node = newIndex[s.Node] }).ToList();
+
+        var levels = new List<Level>();
+        var loads = new List<NodalLoad>();
+        var applied = AppliedFx(model, source);
+        foreach (var l in b.Levels)
+        {
+            var at = l.Nodes.Where(newIndex.ContainsKey).Select(n => newIndex[n]).ToList();
+            var tied = l.Rigid ? at : [];
+            levels.Add(l with { Nodes = at, TiedNodes = tied });
+            double fx = l.Nodes.Sum(n => applied[n]);
+            if (fx != 0 && at.Count > 0) loads.Add(new NodalLoad(at[0], fx, 0, 0));
+        }
+        var sub = new StructureModel
+        {
+            Title = $"{model.Title}, line {line} alone",
+            SourcePath = model.SourcePath,
+            Units = model.Units,
+            Materials = model.Materials,
+            Sections = model.Sections,
+            Nodes = nodes,
+            Members = members,
+            Supports = supports,
+            LoadCases = [new LoadCase(caseId, $"level forces of {caseId}", loads, [])],
+            Combinations = [],
+            StiffnessPoints = [],
+            Building = new BuildingData
+            {
+                Levels = levels,
+                MemberLines = members.Select(_ => line).ToList(),
+                Lines = [line],
+                Modifiers = memberIdx.Select((i, k) => b.Modifiers.Count > i ? b.Modifiers[i] with { Member = k } : new ModifierAssignment(k, members[k].Modifiers, "")).ToList(),
+            },
+        };
+        var result = LinearStaticAnalysis.Run(sub);
+        return StoryAnalysis.ForCase(result, result.Cases[0]);
+    }
+
+    /// <summary>
+    /// For every story of case <paramref name="caseId"/>: each line's stiffness alone, the split those stiffnesses give, and
+    /// the share the line takes in the whole structure.
+    /// </summary>
+    public static IReadOnlyList<LineSplitRow> Split(AnalysisResult r, string caseId)
+    {
+        var whole = StoryAnalysis.ForCase(r, r.Case(caseId));
+        var alone = r.Model.Building.Lines.ToDictionary(l => l, l => Stories(r, caseId, l));
+        var rows = new List<LineSplitRow>();
+        foreach (var s in whole.Stories)
+        {
+            var k = alone.ToDictionary(p => p.Key, p => p.Value.Stories[s.Index - 1].Stiffness);
+            double sum = k.Values.Where(double.IsFinite).Sum();
+            foreach (var line in r.Model.Building.Lines)
+            {
+                double share = s.Lines.FirstOrDefault(x => x.Line == line)?.Share ?? 0;
+                rows.Add(new LineSplitRow(s.Index, line, k[line], double.IsFinite(k[line]) && sum != 0 ? k[line] / sum : double.NaN, share));
+            }
+        }
+        return rows;
+    }
+
+    /// <summary>
+    /// <see cref="Split"/> for every lateral case with two or more lines; a case where some line alone is a mechanism is
+    /// left out and named in <paramref name="skipped"/>.
+    /// </summary>
+    public static IReadOnlyList<(string CaseId, IReadOnlyList<LineSplitRow> Rows)> SplitAll(AnalysisResult r, IReadOnlyList<CaseStories> stories, out IReadOnlyList<string> skipped)
+    {
+        var list = new List<(string, IReadOnlyList<LineSplitRow>)>();
+        var skip = new List<string>();
+        if (r.Model.Building.Lines.Count >= 2 && r.Model.Building.Levels.Count >= 2)
+            foreach (var c in stories.Where(c => c.Lateral))
+            {
+                try { list.Add((c.CaseId, Split(r, c.CaseId))); }
+                catch (UnstableModelException) { skip.Add(c.CaseId); }
+            }
+        skipped = skip;
+        return list;
+    }
+
+    /// <summary>Nodal fx applied at each node in a case or combination (N).</summary>
+    private static double[] AppliedFx(StructureModel model, CaseResult c)
+    {
+        var fx = new double[model.Nodes.Count];
+        IEnumerable<(LoadCase Case, double Factor)> parts = c.IsCombination
+            ? model.Combinations.First(x => x.Id == c.Id).Factors.Select(p => (model.LoadCases[p.Case], p.Factor))
+            : [(model.LoadCases.First(x => x.Id == c.Id), 1.0)];
+        foreach (var (lc, factor) in parts)
+            foreach (var nl in lc.NodalLoads) fx[nl.Node] += factor * nl.Fx;
+        return fx;
+    }
+}
