@@ -1,0 +1,165 @@
+using PlaneLateral.Analysis;
+using PlaneLateral.Hand;
+using PlaneLateral.Model;
+
+namespace PlaneLateral.Studies;
+
+/// <summary>
+/// Moment-frame stories: hand rigid-beam stiffness Σ12EI/(h³(1+Φ)) and D-values beside the FE story stiffness of the
+/// frame's members on the model's supports, under the check's lateral pattern (story shear / interstory drift).
+/// </summary>
+internal static class FrameStoryStudy
+{
+    /// <summary>Factor on beam I, A and A_s for the "beams made rigid" FE estimate.</summary>
+    public const double RigidFactor = 1e4;
+
+    /// <summary>The frame's geometry, story by story.</summary>
+    internal sealed record Story(int Number, double Bottom, double Top, IReadOnlyList<Member> Columns,
+        IReadOnlyList<double> BeamIAbove, IReadOnlyList<double> BeamIBelow, IReadOnlyList<double> Spans);
+
+    public static IEnumerable<ComparisonRow> Rows(StructureModel model, FrameStoriesCheck c, double tol)
+    {
+        var u = model.Units;
+        var stories = Stories(model, c);
+        var fe = StoryStiffness(model, c, rigidBeams: false);
+        var feRigid = StoryStiffness(model, c, rigidBeams: true);
+        string pattern = "lateral pattern " + string.Join(", ", c.Pattern.Select(p => ComparisonStudy.G4(u.FromSI(p, Units.Quantity.Force)))) + $" {u.ForceSymbol} at the levels, bottom first, shared equally by each level's column joints";
+        foreach (int s in c.Stories)
+        {
+            var st = stories[s - 1];
+            double h = st.Top - st.Bottom;
+            var rigid = RigidBeams(st);
+            var dv = DValue(model, c, st);
+            var feAsBuilt = new FeEstimate("frame members on their supports", ComparisonStudy.Stiffness(u, fe[s - 1]),
+                $"the check's {c.Members.Count} members with the model's supports, {pattern}; story stiffness = story shear / interstory drift (mean of the joints at each level)");
+            var feStiffBeams = new FeEstimate("same frame, beams made rigid", ComparisonStudy.Stiffness(u, feRigid[s - 1]),
+                $"as the first, with every beam's I, A and shear area multiplied by {RigidFactor:G3}: what is left of the gap is column shear and axial shortening");
+            string subject = $"story {s} (h = {ComparisonStudy.G4(u.FromSI(h, Units.Quantity.Length))} {u.LengthSymbol})";
+            double r1 = fe[s - 1] / rigid.Stiffness;
+            yield return new ComparisonRow(c.Id, "frame-stories", subject, ComparedQuantity.Stiffness, ComparisonStudy.StiffnessUnit(u),
+                new HandEstimate(ComparisonStudy.Stiffness(u, rigid.Stiffness), rigid.Method),
+                [feAsBuilt, feStiffBeams], null, tol, RigidCause(r1, feRigid[s - 1] / rigid.Stiffness, tol));
+            double r2 = fe[s - 1] / dv.Stiffness;
+            yield return new ComparisonRow(c.Id, "frame-stories", subject, ComparedQuantity.Stiffness, ComparisonStudy.StiffnessUnit(u),
+                new HandEstimate(ComparisonStudy.Stiffness(u, dv.Stiffness), dv.Method,
+                    Detail: string.Join("\n", dv.Columns.Select((col, j) => $"column {st.Columns[j].Id}: k̄ = {ComparisonStudy.G4(col.BeamToColumnRatio)}, a = {ComparisonStudy.G4(col.Coefficient)}"))),
+                [feAsBuilt, feStiffBeams], null, tol, DValueCause(r2, tol, s, stories.Count));
+        }
+    }
+
+    /// <summary>Cause rules for the rigid-beam row (docs/comparisons.md).</summary>
+    internal static string RigidCause(double ratio, double ratioRigidBeams, double tol)
+    {
+        var v = ComparisonRow.Judge(ratio, tol);
+        if (v == Verdict.WithinTolerance) return "beams stiff enough for the rigid-beam assumption";
+        if (v == Verdict.HandLower) return "the frame is stiffer than rigid beams allow: something else in the listed members restrains the story; check the member list";
+        double beamPart = ratioRigidBeams - ratio;   // share of the hand value lost to beam bending
+        double otherPart = 1 - ratioRigidBeams;      // lost to column shear and axial shortening
+        return beamPart >= otherPart
+            ? $"beam flexibility: rigid-beam assumption is too stiff (with rigid beams the FE gives {ComparisonStudy.Pct(ratioRigidBeams)} of the hand value)"
+            : $"column axial shortening and shear: with rigid beams the FE still gives only {ComparisonStudy.Pct(ratioRigidBeams)} of the hand value; overturning shortens and lengthens the columns";
+    }
+
+    /// <summary>Cause rules for the D-value row (docs/comparisons.md).</summary>
+    internal static string DValueCause(double ratio, double tol, int story, int stories)
+    {
+        var v = ComparisonRow.Judge(ratio, tol);
+        if (v == Verdict.WithinTolerance) return "flexible-beam estimate holds: joints at the level rotate alike and the stories next to this one drift alike";
+        string where = story == stories
+            ? "the top story has no story above to share its beams' restraint"
+            : story == 1 ? "the fixed or pinned bases and the story above restrain the ground story's joints otherwise than the method assumes"
+            : "the stories above and below drift otherwise than this one, so they restrain its joints otherwise than the method assumes";
+        return v == Verdict.HandHigher
+            ? $"frame softer than the D-value: {where}, or the columns shorten axially under overturning"
+            : $"frame stiffer than the D-value: {where}";
+    }
+
+    internal static FrameStoryResult RigidBeams(Story st)
+    {
+        var cols = st.Columns.Select(m => double.IsFinite(m.ShearArea) ? new FrameColumn(m.E, m.I, m.G, m.ShearArea) : new FrameColumn(m.E, m.I)).ToArray();
+        return FrameStory.RigidBeams(st.Top - st.Bottom, cols);
+    }
+
+    internal static DValueResult DValue(StructureModel model, FrameStoriesCheck c, Story st)
+    {
+        StoryPosition pos = StoryPosition.Upper;
+        if (st.Number == 1)
+        {
+            var baseNode = LowerNode(model, st.Columns[0]);
+            var sup = model.Supports.First(s => s.Node == baseNode);
+            pos = sup.RestrainRZ ? StoryPosition.FixedBase : StoryPosition.PinnedBase;
+        }
+        return FrameStory.DValues(st.Columns[0].E, st.Top - st.Bottom, st.Columns.Select(m => m.I).ToArray(), st.Spans,
+            st.BeamIAbove, pos == StoryPosition.Upper ? st.BeamIBelow : null, pos);
+    }
+
+    internal static int LowerNode(StructureModel model, Member m) => model.Nodes[m.Start].Y <= model.Nodes[m.End].Y ? m.Start : m.End;
+    internal static int UpperNode(StructureModel model, Member m) => model.Nodes[m.Start].Y <= model.Nodes[m.End].Y ? m.End : m.Start;
+
+    internal static List<Story> Stories(StructureModel model, FrameStoriesCheck c)
+    {
+        var members = c.Members.Select(i => model.Members[i]).ToList();
+        bool Vertical(Member m) => model.Nodes[m.Start].X == model.Nodes[m.End].X || Math.Abs(model.Nodes[m.Start].X - model.Nodes[m.End].X) < 1e-9 * Math.Abs(model.Nodes[m.Start].Y - model.Nodes[m.End].Y);
+        var columns = members.Where(Vertical).ToList();
+        var beams = members.Where(m => !Vertical(m)).ToList();
+        var list = new List<Story>();
+        for (int s = 1; s < c.Levels.Count; s++)
+        {
+            double y0 = c.Levels[s - 1], y1 = c.Levels[s];
+            var cols = columns.Where(m => Near(model.Nodes[LowerNode(model, m)].Y, y0)).OrderBy(m => model.Nodes[m.Start].X).ToList();
+            var spans = new List<double>();
+            var above = new List<double>();
+            var below = new List<double>();
+            for (int j = 0; j + 1 < cols.Count; j++)
+            {
+                spans.Add(model.Nodes[cols[j + 1].Start].X - model.Nodes[cols[j].Start].X);
+                above.Add(BeamI(UpperNode(model, cols[j]), UpperNode(model, cols[j + 1])));
+                below.Add(BeamI(LowerNode(model, cols[j]), LowerNode(model, cols[j + 1])));
+            }
+            list.Add(new Story(s, y0, y1, cols, above, below, spans));
+        }
+        return list;
+
+        double BeamI(int a, int b) => beams.FirstOrDefault(m => (m.Start == a && m.End == b) || (m.Start == b && m.End == a))?.I ?? 0.0;
+        static bool Near(double a, double b) => Math.Abs(a - b) <= 1e-9 * Math.Max(1.0, Math.Abs(a));
+    }
+
+    /// <summary>FE story stiffness of every story: story shear / interstory drift, SI.</summary>
+    internal static double[] StoryStiffness(StructureModel model, FrameStoriesCheck c, bool rigidBeams)
+    {
+        var sub = new SubModel($"{c.Id}: frame alone", model.SourcePath, model.Units);
+        var map = new Dictionary<int, int>();
+        int N(int n) => map.TryGetValue(n, out int k) ? k : map[n] = sub.NodeAt(model.Nodes[n].X, model.Nodes[n].Y, model.Nodes[n].Id);
+        var stories = Stories(model, c);
+        var columnMembers = stories.SelectMany(s => s.Columns).ToHashSet();
+        foreach (int mi in c.Members)
+        {
+            var m = model.Members[mi];
+            bool beam = !columnMembers.Contains(m);
+            sub.Copy(beam && rigidBeams ? m with { I = m.I * RigidFactor, A = m.A * RigidFactor, ShearArea = m.ShearArea * RigidFactor } : m, N(m.Start), N(m.End));
+        }
+        foreach (var s in model.Supports.Where(s => map.ContainsKey(s.Node)))
+            sub.Support(map[s.Node], s.RestrainX, s.RestrainY, s.RestrainRZ);
+        // Joints at each level: the column ends there.
+        var joints = new List<int>[c.Levels.Count];
+        for (int l = 0; l < c.Levels.Count; l++) joints[l] = [];
+        foreach (var st in stories)
+            foreach (var col in st.Columns)
+            {
+                int lo = map[LowerNode(model, col)], hi = map[UpperNode(model, col)];
+                if (!joints[st.Number - 1].Contains(lo)) joints[st.Number - 1].Add(lo);
+                if (!joints[st.Number].Contains(hi)) joints[st.Number].Add(hi);
+            }
+        for (int l = 1; l < c.Levels.Count; l++)
+            foreach (int j in joints[l]) sub.Load(j, c.Pattern[l - 1] / joints[l].Count);
+        var r = LinearStaticAnalysis.Run(sub.Build()).Cases[0];
+        double Mean(int l) => joints[l].Average(j => r.Displacement(j, Dof.X));
+        var k = new double[stories.Count];
+        for (int s = 1; s < c.Levels.Count; s++)
+        {
+            double shear = c.Pattern.Skip(s - 1).Sum();
+            k[s - 1] = shear / (Mean(s) - Mean(s - 1));
+        }
+        return k;
+    }
+}

@@ -1,0 +1,61 @@
+using PlaneLateral.Analysis;
+using PlaneLateral.Hand;
+using PlaneLateral.Model;
+
+namespace PlaneLateral.Studies;
+
+/// <summary>
+/// A wall with openings: the hand perforated-wall method (solid minus strips plus piers; rigid spandrels) beside an
+/// equivalent frame generated from the same geometry, once with the spandrels as built and once made rigid, so the
+/// gap can be split into spandrel flexibility and the frame's other idealisations.
+/// </summary>
+internal static class PerforatedWallStudy
+{
+    public static IEnumerable<ComparisonRow> Rows(StructureModel model, PerforatedWallCheck c, double tol)
+    {
+        var u = model.Units;
+        var fixity = c.Ends == CheckEnds.Cantilever ? EndFixity.Cantilever : EndFixity.FixedFixed;
+        var hand = PerforatedWall.Analyze(c.Length, c.Height, c.Thickness, c.Material.E, c.Material.G, fixity,
+            c.Openings.Select(o => new WallOpening(o.X, o.Y, o.Width, o.Height, o.Label)).ToArray(), 1.0, c.FormFactor);
+        var asBuilt = EquivalentFrame.Build(c, u, model.SourcePath, rigidSpandrels: false);
+        var rigid = EquivalentFrame.Build(c, u, model.SourcePath, rigidSpandrels: true);
+        double fe = Stiffness(asBuilt), feRigid = Stiffness(rigid);
+        string how = $"generated from the wall's geometry: {asBuilt.PierCount} pier member(s), {asBuilt.SpandrelCount} spandrel(s) of their real depth, rigid zones where piers and spandrels overlap; {(c.Ends == CheckEnds.Cantilever ? "base fixed, top free" : "base fixed, top held against rotation")}; unit force shared by the top joints, stiffness 1/(mean top deflection)";
+        var estimates = new List<FeEstimate>
+        {
+            new("equivalent frame", ComparisonStudy.Stiffness(u, fe), how),
+        };
+        if (asBuilt.SpandrelCount > 0)
+            estimates.Add(new FeEstimate("equivalent frame, spandrels made rigid", ComparisonStudy.Stiffness(u, feRigid),
+                $"the same frame with every spandrel's I, A and shear area multiplied by {EquivalentFrame.RigidFactor:G3}: the gap left is the frame's own idealisation (pier heights, joints), not spandrel bending"));
+        double aspect = c.Height / c.Length;
+        yield return new ComparisonRow(c.Id, "perforated-wall", c.Ends == CheckEnds.Cantilever ? "cantilever" : "fixed-fixed",
+            ComparedQuantity.Stiffness, ComparisonStudy.StiffnessUnit(u),
+            new HandEstimate(ComparisonStudy.Stiffness(u, hand.Stiffness), hand.Method, Detail: hand.Breakdown),
+            estimates, aspect, tol, Cause(fe / hand.Stiffness, feRigid / hand.Stiffness, tol, asBuilt.SpandrelCount, aspect));
+    }
+
+    internal static double Stiffness(EquivalentFrame frame)
+    {
+        var r = LinearStaticAnalysis.Run(frame.Model).Cases[0];
+        double mean = frame.LoadNodes.Average(n => r.Displacement(n, Dof.X));
+        return 1.0 / mean;
+    }
+
+    /// <summary>Cause rules for a perforated wall (docs/comparisons.md).</summary>
+    internal static string Cause(double ratio, double ratioRigidSpandrels, double tol, int spandrels, double aspect)
+    {
+        var v = ComparisonRow.Judge(ratio, tol);
+        string squat = aspect < WallLineStudy.SquatAspectRatio ? $" The wall is squat (h/l = {ComparisonStudy.G4(aspect)}): a panel model is the better reference." : "";
+        if (v == Verdict.WithinTolerance)
+            return (spandrels > 0 ? "spandrels deep enough to hold the piers nearly fixed-fixed, as the hand method assumes" : "no spandrel above the piers to bend; the frame and the hand method idealise the wall alike") + squat;
+        if (v == Verdict.HandHigher)
+        {
+            double spandrelPart = ratioRigidSpandrels - ratio, otherPart = 1 - ratioRigidSpandrels;
+            if (spandrels > 0 && spandrelPart >= otherPart)
+                return $"spandrel flexibility: the fixed-fixed pier assumption is too stiff; the piers interact through the coupling of flexible spandrels (with rigid spandrels the frame gives {ComparisonStudy.Pct(ratioRigidSpandrels)} of the hand value)" + squat;
+            return $"frame idealisation: the frame's piers bend over the full height beside their openings, where the hand method takes shorter piers and rigid wall around them{(spandrels > 0 ? $" (with rigid spandrels the frame still gives {ComparisonStudy.Pct(ratioRigidSpandrels)})" : "")}; a panel model is the better reference" + squat;
+        }
+        return "frame stiffer than the hand method: the rigid zones and rigid links of the frame hold more wall rigid than the hand method's pier heights do; a panel model is the better reference" + squat;
+    }
+}
