@@ -21,7 +21,7 @@ namespace PlaneLateral.Studies;
 /// </summary>
 internal sealed class EquivalentFrame
 {
-    /// <summary>Factor on spandrel I, A and A_s for the "spandrels made rigid" estimate.</summary>
+    /// <summary>Factor on spandrel I and A_s for the "spandrels made rigid" estimate.</summary>
     public const double RigidFactor = 1e4;
 
     private const double RigidLinkFraction = 0.499; // each end; 0.2% flexible in the middle

@@ -10,7 +10,7 @@ namespace PlaneLateral.Studies;
 /// </summary>
 internal static class FrameStoryStudy
 {
-    /// <summary>Factor on beam I, A and A_s for the "beams made rigid" FE estimate.</summary>
+    /// <summary>For the "beams made rigid" FE estimate: each beam's I/L is raised to this multiple of the stiffest column's I/h.</summary>
     public const double RigidFactor = 1e4;
 
     /// <summary>The frame's geometry, story by story.</summary>
@@ -33,7 +33,7 @@ internal static class FrameStoryStudy
             var feAsBuilt = new FeEstimate("frame members on their supports", ComparisonStudy.Stiffness(u, fe[s - 1]),
                 $"the check's {c.Members.Count} members with the model's supports, {pattern}; story stiffness = story shear / interstory drift (mean of the joints at each level)");
             var feStiffBeams = new FeEstimate("same frame, beams made rigid", ComparisonStudy.Stiffness(u, feRigid[s - 1]),
-                $"as the first, with every beam's I, A and shear area multiplied by {RigidFactor:G3}: what is left of the gap is column shear and axial shortening");
+                $"as the first, with every beam's I/L raised to {RigidFactor:G3} times the stiffest column's I/h: what is left of the gap is column shear and axial shortening");
             string subject = $"story {s} (h = {ComparisonStudy.G4(u.FromSI(h, Units.Quantity.Length))} {u.LengthSymbol})";
             double r1 = fe[s - 1] / rigid.Stiffness;
             yield return new ComparisonRow(c.Id, "frame-stories", subject, ComparedQuantity.Stiffness, ComparisonStudy.StiffnessUnit(u),
@@ -132,11 +132,14 @@ internal static class FrameStoryStudy
         int N(int n) => map.TryGetValue(n, out int k) ? k : map[n] = sub.NodeAt(model.Nodes[n].X, model.Nodes[n].Y, model.Nodes[n].Id);
         var stories = Stories(model, c);
         var columnMembers = stories.SelectMany(s => s.Columns).ToHashSet();
+        // "Rigid" beams: I_b/L at least RigidFactor times the stiffest column's I_c/h (bending only, so the system stays well conditioned).
+        double rigidI = RigidFactor * columnMembers.Max(m => m.I / Length(m));
+        double Length(Member m) => Math.Sqrt(Math.Pow(model.Nodes[m.End].X - model.Nodes[m.Start].X, 2) + Math.Pow(model.Nodes[m.End].Y - model.Nodes[m.Start].Y, 2));
         foreach (int mi in c.Members)
         {
             var m = model.Members[mi];
             bool beam = !columnMembers.Contains(m);
-            sub.Copy(beam && rigidBeams ? m with { I = m.I * RigidFactor, A = m.A * RigidFactor, ShearArea = m.ShearArea * RigidFactor } : m, N(m.Start), N(m.End));
+            sub.Copy(beam && rigidBeams ? m with { I = Math.Max(m.I, rigidI * Length(m)) } : m, N(m.Start), N(m.End));
         }
         foreach (var s in model.Supports.Where(s => map.ContainsKey(s.Node)))
             sub.Support(map[s.Node], s.RestrainX, s.RestrainY, s.RestrainRZ);

@@ -27,12 +27,12 @@ internal static class PerforatedWallStudy
         };
         if (asBuilt.SpandrelCount > 0)
             estimates.Add(new FeEstimate("equivalent frame, spandrels made rigid", ComparisonStudy.Stiffness(u, feRigid),
-                $"the same frame with every spandrel's I, A and shear area multiplied by {EquivalentFrame.RigidFactor:G3}: the gap left is the frame's own idealisation (pier heights, joints), not spandrel bending"));
+                $"the same frame with every spandrel's I and shear area multiplied by {EquivalentFrame.RigidFactor:G3}: the gap left is the frame's own idealisation (pier heights, joints), not spandrel bending"));
         double aspect = c.Height / c.Length;
         yield return new ComparisonRow(c.Id, "perforated-wall", c.Ends == CheckEnds.Cantilever ? "cantilever" : "fixed-fixed",
             ComparedQuantity.Stiffness, ComparisonStudy.StiffnessUnit(u),
             new HandEstimate(ComparisonStudy.Stiffness(u, hand.Stiffness), hand.Method, Detail: hand.Breakdown),
-            estimates, aspect, tol, Cause(fe / hand.Stiffness, feRigid / hand.Stiffness, tol, asBuilt.SpandrelCount, aspect));
+            estimates, aspect, tol, Cause(fe / hand.Stiffness, feRigid / hand.Stiffness, tol, asBuilt.SpandrelCount, c.Openings.Count == 0 ? aspect : double.NaN));
     }
 
     internal static double Stiffness(EquivalentFrame frame)
@@ -43,12 +43,17 @@ internal static class PerforatedWallStudy
     }
 
     /// <summary>Cause rules for a perforated wall (docs/comparisons.md).</summary>
-    internal static string Cause(double ratio, double ratioRigidSpandrels, double tol, int spandrels, double aspect)
+    /// <param name="solidAspect">h/l of a wall without openings (NaN otherwise: then the piers, not the wall, decide whether plane sections hold).</param>
+    internal static string Cause(double ratio, double ratioRigidSpandrels, double tol, int spandrels, double solidAspect)
     {
         var v = ComparisonRow.Judge(ratio, tol);
-        string squat = aspect < WallLineStudy.SquatAspectRatio ? $" The wall is squat (h/l = {ComparisonStudy.G4(aspect)}): a panel model is the better reference." : "";
+        string squat = solidAspect < WallLineStudy.SquatAspectRatio ? $"; squat (h/l = {ComparisonStudy.G4(solidAspect)}): plane sections are doubtful, a panel model is the better reference" : "";
         if (v == Verdict.WithinTolerance)
-            return (spandrels > 0 ? "spandrels deep enough to hold the piers nearly fixed-fixed, as the hand method assumes" : "no spandrel above the piers to bend; the frame and the hand method idealise the wall alike") + squat;
+        {
+            if (spandrels == 0) return "no spandrel above the piers to bend; the frame and the hand method idealise the wall alike" + squat;
+            if (ratioRigidSpandrels - ratio <= tol) return "spandrels deep enough to hold the piers nearly fixed-fixed, as the hand method assumes" + squat;
+            return $"agreement by offsetting idealisations: the spandrels bend (made rigid, the frame gives {ComparisonStudy.Pct(ratioRigidSpandrels)} of the hand value) while the frame's rigid joints hold wall the hand method lets deform; a panel model is the better reference" + squat;
+        }
         if (v == Verdict.HandHigher)
         {
             double spandrelPart = ratioRigidSpandrels - ratio, otherPart = 1 - ratioRigidSpandrels;
@@ -56,6 +61,6 @@ internal static class PerforatedWallStudy
                 return $"spandrel flexibility: the fixed-fixed pier assumption is too stiff; the piers interact through the coupling of flexible spandrels (with rigid spandrels the frame gives {ComparisonStudy.Pct(ratioRigidSpandrels)} of the hand value)" + squat;
             return $"frame idealisation: the frame's piers bend over the full height beside their openings, where the hand method takes shorter piers and rigid wall around them{(spandrels > 0 ? $" (with rigid spandrels the frame still gives {ComparisonStudy.Pct(ratioRigidSpandrels)})" : "")}; a panel model is the better reference" + squat;
         }
-        return "frame stiffer than the hand method: the rigid zones and rigid links of the frame hold more wall rigid than the hand method's pier heights do; a panel model is the better reference" + squat;
+        return "frame stiffer than the hand method: the frame holds the solid wall around the openings rigid (pier-spandrel joints, rigid zones and links), where the hand method lets that wall shear and bend; a panel model is the better reference" + squat;
     }
 }

@@ -40,14 +40,14 @@ internal sealed class SubModel(string title, string source, UnitSystem units)
         return i;
     }
 
-    /// <summary>Adds a rectangular beam-column of depth d (in the plane) and thickness t.</summary>
+    /// <summary>Adds a rectangular beam-column of depth d (in the plane) and thickness t; <paramref name="stiffnessFactor"/> multiplies I and the shear area (not A).</summary>
     public int Rectangle(string id, int start, int end, Material mat, double depth, double thickness, double formFactor,
         double rigidStart, double rigidEnd, string role, double stiffnessFactor = 1.0)
     {
         double a = depth * thickness, i = thickness * depth * depth * depth / 12.0;
         int k = _members.Count;
         _members.Add(new Member(k, id, start, end, MemberKind.BeamColumn, "rectangle", mat.Id, mat.E, mat.G,
-            a * stiffnessFactor, i * stiffnessFactor, a / formFactor * stiffnessFactor, false, false, rigidStart, rigidEnd,
+            a, i * stiffnessFactor, a / formFactor * stiffnessFactor, false, false, rigidStart, rigidEnd,
             StiffnessModifiers.None, role));
         return k;
     }

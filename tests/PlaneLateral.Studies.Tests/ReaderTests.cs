@@ -1,0 +1,127 @@
+using Newtonsoft.Json.Linq;
+using PlaneLateral.Model;
+
+namespace PlaneLateral.Studies.Tests;
+
+/// <summary>Reader diagnostics for the "comparisons" key (common practice: every problem at once, with place and fix).</summary>
+public class ReaderTests
+{
+    private static IReadOnlyList<ModelDiagnostic> Problems(object model)
+    {
+        var e = Assert.Throws<ModelInputException>(() => Models.Parse(model));
+        Assert.All(e.Diagnostics, d =>
+        {
+            Assert.Equal("test.json", d.File);
+            Assert.True(d.Line > 0, $"no line for {d}");
+            Assert.StartsWith("$", d.JsonPath);
+            Assert.False(string.IsNullOrWhiteSpace(d.Fix));
+        });
+        return e.Diagnostics;
+    }
+
+    private static object Wall(params object[] openings) => new
+    {
+        id = "PW", kind = "perforated-wall", length = 200.0, height = 120.0, thickness = 8.0, material = "CMU", openings,
+    };
+
+    [Fact]
+    public void Missing_member_is_named_with_its_path()
+    {
+        var d = Assert.Single(Problems(Models.Carrier([new { id = "W", kind = "wall-line", members = new[] { "stub", "nope" } }])));
+        Assert.Equal("$.comparisons[0].members[1]", d.JsonPath);
+        Assert.Contains("unknown member \"nope\"", d.Problem);
+    }
+
+    [Fact]
+    public void Opening_outside_the_wall_is_rejected()
+    {
+        var d = Assert.Single(Problems(Models.Carrier([Wall(new { label = "far window", x = 150.0, y = 40.0, width = 80.0, height = 40.0 })])));
+        Assert.Equal("$.comparisons[0].openings[0]", d.JsonPath);
+        Assert.Contains("'far window'", d.Problem);
+        Assert.Contains("outside the wall", d.Problem);
+    }
+
+    [Fact]
+    public void Overlapping_openings_are_rejected()
+    {
+        var d = Assert.Single(Problems(Models.Carrier([Wall(
+            new { label = "a", x = 40.0, y = 40.0, width = 40.0, height = 40.0 },
+            new { label = "b", x = 60.0, y = 60.0, width = 40.0, height = 40.0 })])));
+        Assert.Contains("overlap", d.Problem);
+        Assert.Equal("$.comparisons[0].openings[1]", d.JsonPath);
+    }
+
+    [Fact]
+    public void Zero_width_piers_are_rejected()
+    {
+        // An opening reaching the wall's end, and two openings touching side by side.
+        var ds = Problems(Models.Carrier([Wall(
+            new { label = "end", x = 0.0, y = 40.0, width = 30.0, height = 40.0 },
+            new { label = "left", x = 80.0, y = 40.0, width = 30.0, height = 40.0 },
+            new { label = "right", x = 110.0, y = 30.0, width = 30.0, height = 40.0 })]));
+        Assert.Equal(2, ds.Count);
+        Assert.Contains(ds, d => d.Problem.Contains("'end' reaches the end of the wall") && d.Problem.Contains("zero width"));
+        Assert.Contains(ds, d => d.Problem.Contains("'left' and 'right' touch side by side") && d.Problem.Contains("zero width"));
+    }
+
+    [Fact]
+    public void Every_problem_is_listed_at_once()
+    {
+        var ds = Problems(Models.Carrier([
+            new { id = "A", kind = "wall-line", members = new[] { "ghost" } },
+            new { id = "A", kind = "perforated-wall", length = -5.0, height = 120.0, thickness = 8.0, material = "CMU" },
+            new { id = "C", kind = "bridge" },
+            new { id = "D", kind = "shear-split", loadCase = "none", lines = new[] { new { check = "A" } } },
+            new { id = "E", kind = "wall-line", members = new[] { "stub" }, tolerance = 2.0, colour = "red" },
+        ]));
+        Assert.Contains(ds, d => d.JsonPath == "$.comparisons[0].members[0]" && d.Problem.Contains("unknown member"));
+        Assert.Contains(ds, d => d.JsonPath == "$.comparisons[1].id" && d.Problem.Contains("duplicate"));
+        Assert.Contains(ds, d => d.JsonPath == "$.comparisons[1].length" && d.Problem.Contains("greater than zero"));
+        Assert.Contains(ds, d => d.JsonPath == "$.comparisons[2].kind" && d.Problem.Contains("unknown check kind \"bridge\""));
+        Assert.Contains(ds, d => d.JsonPath == "$.comparisons[3].loadCase" && d.Problem.Contains("unknown load case"));
+        Assert.Contains(ds, d => d.JsonPath == "$.comparisons[3].lines" && d.Problem.Contains("at least two lines"));
+        Assert.Contains(ds, d => d.JsonPath == "$.comparisons[4].tolerance" && d.Problem.Contains("outside (0, 1)"));
+        Assert.Contains(ds, d => d.JsonPath == "$.comparisons[4].colour" && d.Problem.Contains("unknown key 'colour'"));
+    }
+
+    [Fact]
+    public void Wall_line_members_must_stand_base_first_in_one_chain()
+    {
+        var model = JObject.FromObject(Models.WallLine(300, 120, 10, 3));
+        model["comparisons"]![0]!["members"] = new JArray("M0", "M2", "M1");
+        var ds = Problems(model);
+        Assert.Contains(ds, d => d.JsonPath == "$.comparisons[0].members[1]" && d.Problem.Contains("does not start where the previous member"));
+    }
+
+    [Fact]
+    public void Split_line_must_name_a_wall_or_frame_check()
+    {
+        var model = JObject.FromObject(Models.WallLine(300, 120, 10, 1));
+        model["loadCases"] = JArray.FromObject(new[] { new { id = "L", nodalLoads = new[] { new { node = "N1", fx = 1.0 } } } });
+        ((JArray)model["comparisons"]!).Add(JObject.FromObject(new { id = "S", kind = "shear-split", loadCase = "L", lines = new[] { new { check = "WL" }, new { check = "WX" } } }));
+        var d = Assert.Single(Problems(model));
+        Assert.Equal("$.comparisons[1].lines[1].check", d.JsonPath);
+        Assert.Contains("unknown check \"WX\"", d.Problem);
+        Assert.Contains("did you mean \"WL\"", d.Fix);
+    }
+
+    [Fact]
+    public void Frame_story_needs_two_columns_and_one_member_per_story()
+    {
+        var model = JObject.FromObject(Models.Portal(156, 300, 999, 999));
+        model["comparisons"]![0]!["members"] = new JArray("CA", "BM");
+        var ds = Problems(model);
+        Assert.Contains(ds, d => d.Problem.Contains("story 1 of the frame has 1 column(s)"));
+    }
+
+    [Fact]
+    public void A_good_model_reads_its_checks_in_SI()
+    {
+        var m = Models.Parse(Models.Carrier([Wall(new { label = "w", x = 50.0, y = 40.0, width = 60.0, height = 40.0 })]));
+        var c = Assert.IsType<PerforatedWallCheck>(Assert.Single(m.Comparisons));
+        Models.Near(200 * 0.0254, c.Length, 1e-12, "length in m");
+        Assert.Equal(CheckEnds.Cantilever, c.Ends);
+        Assert.Equal(1.2, c.FormFactor);
+        Assert.Equal("w", Assert.Single(c.Openings).Label);
+    }
+}
