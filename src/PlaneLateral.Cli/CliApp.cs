@@ -102,7 +102,7 @@ public static class CliApp
         try
         {
             var m = ModelReader.ReadFile(modelPath);
-            stdout.Write($"{modelPath}: valid. {m.Nodes.Count} nodes, {m.Members.Count} members, {m.Supports.Count} supports, {m.LoadCases.Count} load cases, {m.Combinations.Count} combinations, units {m.Units}.\n");
+            stdout.Write($"{modelPath}: valid. {m.Nodes.Count} nodes, {m.Members.Count} members, {m.Supports.Count} supports, {m.LoadCases.Count} load cases, {m.Combinations.Count} combinations, {m.Comparisons.Count} comparison checks, units {m.Units}.\n");
             return ExitCodes.Success;
         }
         catch (ModelInputException e)

@@ -37,6 +37,11 @@ public static class ComparisonStudy
                     _ => throw new InvalidOperationException($"unknown check type {check.GetType().Name}"),
                 });
             }
+            catch (UnstableModelException e) when (check is not ShearSplitCheck)
+            {
+                throw Problem(check, $"the check's FE sub-model (its members alone, with the supports the check implies) is unstable: {e.Message.Split('\n')[0]}",
+                    "list every member the wall or frame needs to stand on its own supports (e.g. all columns and beams of the frame)");
+            }
             catch (ArgumentException e)
             {
                 throw Problem(check, $"the hand method cannot take this check's inputs: {e.Message}", "check the sizes and properties of the members or wall the check names");

@@ -35,9 +35,17 @@ internal static class WallLineStudy
             double ratio = fe / hand.Stiffness;
             yield return new ComparisonRow(c.Id, "wall-line", ends == CheckEnds.Cantilever ? "cantilever" : "fixed-fixed",
                 ComparedQuantity.Stiffness, ComparisonStudy.StiffnessUnit(u),
-                new HandEstimate(ComparisonStudy.Stiffness(u, hand.Stiffness), hand.Method, hand.FlexuralShare, hand.ShearShare),
+                new HandEstimate(ComparisonStudy.Stiffness(u, hand.Stiffness), hand.Method.With(Inputs(m0)), hand.FlexuralShare, hand.ShearShare),
                 [feEstimate], aspect, tol, Cause(ratio, tol, aspect, hand.ShearShare));
         }
+    }
+
+    private static string Inputs(Member m)
+    {
+        var mods = m.Modifiers;
+        string modText = mods == StiffnessModifiers.None ? "no stiffness modifiers"
+            : $"the member's stiffness modifiers applied (I × {ComparisonStudy.G4(mods.I)}, A × {ComparisonStudy.G4(mods.A)}, shear area × {ComparisonStudy.G4(mods.ShearArea)})";
+        return $"E, G, A, I and f = A/A_s are the wall members' own effective values, {modText}";
     }
 
     /// <summary>Cause rules for a wall line (docs/comparisons.md).</summary>
