@@ -21,8 +21,8 @@ internal static class FrameStoryStudy
     {
         var u = model.Units;
         var stories = Stories(model, c);
-        var fe = StoryStiffness(model, c, rigidBeams: false);
-        var feRigid = StoryStiffness(model, c, rigidBeams: true);
+        var (fe, driftRatio) = StoryStiffness(model, c, rigidBeams: false);
+        var (feRigid, _) = StoryStiffness(model, c, rigidBeams: true);
         string pattern = "lateral pattern " + string.Join(", ", c.Pattern.Select(p => ComparisonStudy.G4(u.FromSI(p, Units.Quantity.Force)))) + $" {u.ForceSymbol} at the levels, bottom first, shared equally by each level's column joints";
         foreach (int s in c.Stories)
         {
@@ -43,7 +43,7 @@ internal static class FrameStoryStudy
             yield return new ComparisonRow(c.Id, "frame-stories", subject, ComparedQuantity.Stiffness, ComparisonStudy.StiffnessUnit(u),
                 new HandEstimate(ComparisonStudy.Stiffness(u, dv.Stiffness), dv.Method,
                     Detail: string.Join("\n", dv.Columns.Select((col, j) => $"column {st.Columns[j].Id}: k̄ = {ComparisonStudy.G4(col.BeamToColumnRatio)}, a = {ComparisonStudy.G4(col.Coefficient)}"))),
-                [feAsBuilt, feStiffBeams], null, tol, DValueCause(r2, tol, s, stories.Count));
+                [feAsBuilt], null, tol, DValueCause(r2, tol, s, driftRatio));
         }
     }
 
@@ -60,18 +60,31 @@ internal static class FrameStoryStudy
             : $"column axial shortening and shear: with rigid beams the FE still gives only {ComparisonStudy.Pct(ratioRigidBeams)} of the hand value; overturning shortens and lengthens the columns";
     }
 
-    /// <summary>Cause rules for the D-value row (docs/comparisons.md).</summary>
-    internal static string DValueCause(double ratio, double tol, int story, int stories)
+    /// <summary>
+    /// Cause rules for the D-value row (docs/comparisons.md). The method assumes the stories next to this one drift at
+    /// the same angle, so they share the beams' restraint equally; the FE drift angles of the neighbours say how far
+    /// that holds. <paramref name="driftRatio"/> holds each story's FE drift angle (drift/h), story 1 first.
+    /// </summary>
+    internal static string DValueCause(double ratio, double tol, int story, IReadOnlyList<double> driftRatio)
     {
         var v = ComparisonRow.Judge(ratio, tol);
-        if (v == Verdict.WithinTolerance) return "flexible-beam estimate holds: joints at the level rotate alike and the stories next to this one drift alike";
-        string where = story == stories
-            ? "the top story has no story above to share its beams' restraint"
-            : story == 1 ? "the fixed or pinned bases and the story above restrain the ground story's joints otherwise than the method assumes"
-            : "the stories above and below drift otherwise than this one, so they restrain its joints otherwise than the method assumes";
-        return v == Verdict.HandHigher
-            ? $"frame softer than the D-value: {where}, or the columns shorten axially under overturning"
-            : $"frame stiffer than the D-value: {where}";
+        if (v == Verdict.WithinTolerance) return "flexible-beam estimate holds at this story";
+        var neighbours = new List<(string Name, double Relative)>();
+        if (story > 1) neighbours.Add(("the story below", driftRatio[story - 2] / driftRatio[story - 1]));
+        if (story < driftRatio.Count) neighbours.Add(("the story above", driftRatio[story] / driftRatio[story - 1]));
+        string G(double x) => x.ToString("0.00", System.Globalization.CultureInfo.InvariantCulture);
+        if (v == Verdict.HandLower)
+        {
+            if (neighbours.Count == 0)
+                return "frame stiffer than the D-value: a one-story frame has no story above to share its beams' restraint, which the method assumes";
+            var n = neighbours.MinBy(x => x.Relative);
+            return n.Relative < 1
+                ? $"frame stiffer than the D-value: {n.Name} drifts only {G(n.Relative)} times this story's angle, so it holds the shared joints harder than the method's equal-drift assumption"
+                : "frame stiffer than the D-value: the joints rotate less than the method assumes (the neighbouring stories drift more, so look to the beams' end restraint and the column bases)";
+        }
+        if (neighbours.Count > 0 && neighbours.MaxBy(x => x.Relative) is var m && m.Relative > 1)
+            return $"frame softer than the D-value: {m.Name} drifts {G(m.Relative)} times this story's angle, so it restrains the shared joints less than the method's equal-drift assumption; the columns also shorten axially under overturning";
+        return "frame softer than the D-value: the columns shorten axially under overturning, which the method leaves out";
     }
 
     internal static FrameStoryResult RigidBeams(Story st)
@@ -124,8 +137,8 @@ internal static class FrameStoryStudy
         static bool Near(double a, double b) => Math.Abs(a - b) <= 1e-9 * Math.Max(1.0, Math.Abs(a));
     }
 
-    /// <summary>FE story stiffness of every story: story shear / interstory drift, SI.</summary>
-    internal static double[] StoryStiffness(StructureModel model, FrameStoriesCheck c, bool rigidBeams)
+    /// <summary>FE story stiffness of every story (story shear / interstory drift, SI) and each story's drift angle (drift / h).</summary>
+    internal static (double[] Stiffness, double[] DriftAngle) StoryStiffness(StructureModel model, FrameStoriesCheck c, bool rigidBeams)
     {
         var sub = new SubModel($"{c.Id}: frame alone", model.SourcePath, model.Units);
         var map = new Dictionary<int, int>();
@@ -158,11 +171,14 @@ internal static class FrameStoryStudy
         var r = LinearStaticAnalysis.Run(sub.Build()).Cases[0];
         double Mean(int l) => joints[l].Average(j => r.Displacement(j, Dof.X));
         var k = new double[stories.Count];
+        var angle = new double[stories.Count];
         for (int s = 1; s < c.Levels.Count; s++)
         {
             double shear = c.Pattern.Skip(s - 1).Sum();
-            k[s - 1] = shear / (Mean(s) - Mean(s - 1));
+            double drift = Mean(s) - Mean(s - 1);
+            k[s - 1] = shear / drift;
+            angle[s - 1] = drift / (c.Levels[s] - c.Levels[s - 1]);
         }
-        return k;
+        return (k, angle);
     }
 }

@@ -1,6 +1,7 @@
 using PlaneLateral.Analysis;
 using PlaneLateral.Hand;
 using PlaneLateral.Model;
+using PlaneLateral.Units;
 
 namespace PlaneLateral.Studies;
 
@@ -15,8 +16,12 @@ internal static class PerforatedWallStudy
     {
         var u = model.Units;
         var fixity = c.Ends == CheckEnds.Cantilever ? EndFixity.Cantilever : EndFixity.FixedFixed;
-        var hand = PerforatedWall.Analyze(c.Length, c.Height, c.Thickness, c.Material.E, c.Material.G, fixity,
-            c.Openings.Select(o => new WallOpening(o.X, o.Y, o.Width, o.Height, o.Label)).ToArray(), 1.0, c.FormFactor);
+        // The hand method takes any consistent units: work it in the model's own, so its breakdown reads in them.
+        double Len(double v) => u.FromSI(v, Quantity.Length);
+        double Stress(double v) => u.FromSI(v, Quantity.Stress);
+        var hand = PerforatedWall.Analyze(Len(c.Length), Len(c.Height), Len(c.Thickness), Stress(c.Material.E), Stress(c.Material.G), fixity,
+            c.Openings.Select(o => new WallOpening(Len(o.X), Len(o.Y), Len(o.Width), Len(o.Height), o.Label)).ToArray(), 1.0, c.FormFactor);
+        double handSI = u.ToSI(hand.Stiffness, Quantity.TranslationalStiffness);
         var asBuilt = EquivalentFrame.Build(c, u, model.SourcePath, rigidSpandrels: false);
         var rigid = EquivalentFrame.Build(c, u, model.SourcePath, rigidSpandrels: true);
         double fe = Stiffness(asBuilt), feRigid = Stiffness(rigid);
@@ -29,10 +34,12 @@ internal static class PerforatedWallStudy
             estimates.Add(new FeEstimate("equivalent frame, spandrels made rigid", ComparisonStudy.Stiffness(u, feRigid),
                 $"the same frame with every spandrel's I and shear area multiplied by {EquivalentFrame.RigidFactor:G3}: the gap left is the frame's own idealisation (pier heights, joints), not spandrel bending"));
         double aspect = c.Height / c.Length;
+        // The same wall without openings bounds any wall with openings from above (removing material cannot stiffen an elastic body).
+        double solid = Piers.Rectangular(fixity, 1.0, c.Height, c.Length, c.Thickness, c.Material.E, c.Material.G, c.FormFactor).Stiffness;
         yield return new ComparisonRow(c.Id, "perforated-wall", c.Ends == CheckEnds.Cantilever ? "cantilever" : "fixed-fixed",
             ComparedQuantity.Stiffness, ComparisonStudy.StiffnessUnit(u),
-            new HandEstimate(ComparisonStudy.Stiffness(u, hand.Stiffness), hand.Method, Detail: hand.Breakdown),
-            estimates, aspect, tol, Cause(fe / hand.Stiffness, feRigid / hand.Stiffness, tol, asBuilt.SpandrelCount, c.Openings.Count == 0 ? aspect : double.NaN));
+            new HandEstimate(hand.Stiffness, hand.Method.With($"lengths in {u.LengthSymbol}, forces in {u.ForceSymbol} (the breakdown's units)"), Detail: hand.Breakdown),
+            estimates, aspect, tol, Cause(fe / handSI, feRigid / handSI, tol, asBuilt.SpandrelCount, c.Openings.Count == 0 ? aspect : double.NaN, c.Openings.Count == 0 ? 0 : fe / solid));
     }
 
     internal static double Stiffness(EquivalentFrame frame)
@@ -44,9 +51,12 @@ internal static class PerforatedWallStudy
 
     /// <summary>Cause rules for a perforated wall (docs/comparisons.md).</summary>
     /// <param name="solidAspect">h/l of a wall without openings (NaN otherwise: then the piers, not the wall, decide whether plane sections hold).</param>
-    internal static string Cause(double ratio, double ratioRigidSpandrels, double tol, int spandrels, double solidAspect)
+    /// <param name="ratioToSolid">FE frame stiffness over the same wall without openings (0 when the wall has none).</param>
+    internal static string Cause(double ratio, double ratioRigidSpandrels, double tol, int spandrels, double solidAspect, double ratioToSolid)
     {
         var v = ComparisonRow.Judge(ratio, tol);
+        if (ratioToSolid > 1)
+            return $"frame stiffer than the same wall without openings ({ComparisonStudy.Pct(ratioToSolid)} of it), which no wall with openings can be: the frame takes the solid wall around the openings as rigid joints and links, and here that wall is large; a panel model is needed";
         string squat = solidAspect < WallLineStudy.SquatAspectRatio ? $"; squat (h/l = {ComparisonStudy.G4(solidAspect)}): plane sections are doubtful, a panel model is the better reference" : "";
         if (v == Verdict.WithinTolerance)
         {

@@ -56,13 +56,11 @@ internal static class WallLineStudy
             ? "same beam theory on both sides (plane sections, shear area A/f), so agreement checks the arithmetic, not the theory"
             : "the FE members differ from the hand inputs (supports or loads of the sub-model); check the model";
         if (aspect is double r && r < SquatAspectRatio)
-            return $"squat (h/l = {ComparisonStudy.G4(r)}): plane sections are doubtful; a panel model is the better reference. {Capital(basis)}";
+            return $"squat (h/l = {ComparisonStudy.G4(r)}): plane sections are doubtful; a panel model is the better reference. Here: {basis}";
         if (handShearShare < 0.1 && aspect is double s && s > 3)
-            return $"slender (h/l = {ComparisonStudy.G4(s)}): flexure governs, so the cracked-section I decides the stiffness. {Capital(basis)}";
-        return Capital(basis);
+            return $"slender (h/l = {ComparisonStudy.G4(s)}): flexure governs, so the cracked-section I decides the stiffness. Here: {basis}";
+        return basis;
     }
-
-    private static string Capital(string s) => char.ToUpperInvariant(s[0]) + s[1..];
 
     /// <summary>The wall line's members alone: base fixed, top free or held against rotation, unit force at the top.</summary>
     internal static StructureModel Isolated(StructureModel model, WallLineCheck c, CheckEnds ends, bool withShear)

@@ -114,3 +114,45 @@ public class PerforatedWallTests
         Assert.True(row.Fe[1].Value > row.Reference.Value, "rigid spandrels stiffen the frame");
     }
 }
+
+/// <summary>The generated equivalent frame on many layouts (derived: a valid wall always gives a stable, sensible frame).</summary>
+public class EquivalentFrameLayoutTests
+{
+    [Theory]
+    [InlineData("cantilever")]
+    [InlineData("fixed-fixed")]
+    public void Random_valid_layouts_give_stable_frames_near_the_hand_value(string ends)
+    {
+        var rng = new Random(20261201);
+        int built = 0, aboveSolid = 0;
+        for (int trial = 0; trial < 200 && built < 60; trial++)
+        {
+            double l = 200 + 200 * rng.NextDouble(), h = 100 + 200 * rng.NextDouble();
+            var ops = new List<object>();
+            var boxes = new List<(double X0, double X1, double Y0, double Y1)>();
+            int n = rng.Next(1, 5);
+            for (int k = 0; k < n; k++)
+            {
+                double w = 20 + 40 * rng.NextDouble(), oh = 20 + 0.6 * h * rng.NextDouble();
+                double x = 10 + (l - w - 20) * rng.NextDouble(), y = rng.NextDouble() < 0.2 ? 0 : (h - oh) * rng.NextDouble();
+                // Keep at least 6 in of wall between openings so no pier or strip is vanishingly thin.
+                if (boxes.Any(b => x < b.X1 + 6 && x + w > b.X0 - 6 && y < b.Y1 + 6 && y + oh > b.Y0 - 6)) continue;
+                boxes.Add((x, x + w, y, y + oh));
+                ops.Add(new { x, y, width = w, height = oh });
+            }
+            var report = Models.Compare(Models.Carrier([new { id = "R", kind = "perforated-wall", length = l, height = h, thickness = 8.0, material = "CMU", ends, openings = ops.ToArray() }]));
+            var row = report.Rows.Single();
+            Assert.True(double.IsFinite(row.Reference.Value) && row.Reference.Value > 0, $"trial {trial}: FE {row.Reference.Value}");
+            // Removing material cannot stiffen an elastic wall (energy argument, derived), so the hand value stays below
+            // the solid wall; the frame's rigid joints can break that bound, and then the cause must say so.
+            var solid = Hand.Piers.Rectangular(ends == "cantilever" ? Hand.EndFixity.Cantilever : Hand.EndFixity.FixedFixed, 1, h, l, 8, 1800, 720).Stiffness;
+            Assert.True(row.Hand.Value < solid * (1 + 1e-9), $"trial {trial}: hand {row.Hand.Value} above the solid wall {solid}");
+            if (row.Reference.Value > solid) { Assert.StartsWith("frame stiffer than the same wall without openings", row.Cause); aboveSolid++; }
+            else Assert.DoesNotContain("without openings", row.Cause);
+            Assert.InRange(row.Ratio, 0.15, 2.5);
+            built++;
+        }
+        Assert.True(built >= 40, $"only {built} layouts");
+        Assert.True(aboveSolid < built / 4, $"{aboveSolid} of {built} frames above the solid wall");
+    }
+}
