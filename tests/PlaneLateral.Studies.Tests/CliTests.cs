@@ -129,3 +129,22 @@ public class CliTests
         }
     }
 }
+
+[Collection("current directory")]
+public class CliMoreTests
+{
+    [Fact]
+    public void Model_without_checks_is_refused_without_writing()
+    {
+        string model = Path.Combine(Path.GetTempPath(), $"nochecks-{Guid.NewGuid():N}.json");
+        var demo = Newtonsoft.Json.Linq.JObject.Parse(File.ReadAllText(Path.Combine(AppContext.BaseDirectory, "models", "demo-clinic.json")));
+        demo.Remove("comparisons");
+        File.WriteAllText(model, demo.ToString());
+        string dir = Path.Combine(Path.GetTempPath(), "pl-none-" + Guid.NewGuid().ToString("N"));
+        var o = new StringWriter(); var e = new StringWriter();
+        Assert.Equal(ExitCodes.BadModel, CliApp.Run(["compare", model, "--out", dir], o, e));
+        Assert.Contains("declares no comparison checks", e.ToString());
+        Assert.False(Directory.Exists(dir));
+        File.Delete(model);
+    }
+}

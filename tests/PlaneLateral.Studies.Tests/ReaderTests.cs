@@ -125,3 +125,90 @@ public class ReaderTests
         Assert.Equal("w", Assert.Single(c.Openings).Label);
     }
 }
+
+/// <summary>More reader and work-out errors for comparison checks (common practice: place, problem and fix).</summary>
+public class CheckErrorTests
+{
+    [Fact]
+    public void Empty_lists_that_would_report_nothing_are_rejected()
+    {
+        var wall = JObject.FromObject(Models.WallLine(300, 120, 10, 1));
+        wall["comparisons"]![0]!["ends"] = new JArray();
+        var d = Assert.Single(Assert.Throws<ModelInputException>(() => ModelReader.Parse(wall.ToString(), "t.json")).Diagnostics);
+        Assert.Equal("$.comparisons[0].ends", d.JsonPath);
+
+        var frame = JObject.FromObject(Models.Portal(156, 300, 999, 999));
+        frame["comparisons"]![0]!["stories"] = new JArray();
+        d = Assert.Single(Assert.Throws<ModelInputException>(() => ModelReader.Parse(frame.ToString(), "t.json")).Diagnostics);
+        Assert.Equal("$.comparisons[0].stories", d.JsonPath);
+    }
+
+    [Fact]
+    public void Wall_line_of_two_sections_is_rejected()
+    {
+        var m = JObject.FromObject(Models.WallLine(300, 120, 10, 2));
+        ((JArray)m["sections"]!).Add(JObject.FromObject(new { id = "THIN", shape = "rectangle", b = 6.0, d = 120.0 }));
+        m["members"]![1]!["section"] = "THIN";
+        var d = Assert.Single(Assert.Throws<ModelInputException>(() => ModelReader.Parse(m.ToString(), "t.json")).Diagnostics);
+        Assert.Contains("one section over the height", d.Problem);
+        Assert.Equal("$.comparisons[0].members[1]", d.JsonPath);
+    }
+
+    [Fact]
+    public void Frame_with_mixed_bases_is_rejected()
+    {
+        var m = JObject.FromObject(Models.Portal(156, 300, 999, 999));
+        m["supports"]![1]!["type"] = "pinned";
+        var ds = Assert.Throws<ModelInputException>(() => ModelReader.Parse(m.ToString(), "t.json")).Diagnostics;
+        Assert.Contains(ds, x => x.Problem.Contains("mixes fixed and pinned column bases"));
+    }
+
+    [Fact]
+    public void Frame_check_that_leaves_out_the_beams_is_unstable_and_says_where()
+    {
+        // Pinned columns without their beam are a mechanism: the error is placed at the check, not at the model.
+        var m = JObject.FromObject(Models.Portal(156, 300, 999, 999, bases: "pinned"));
+        m["comparisons"]![0]!["members"] = new JArray("CA", "CB");
+        var model = ModelReader.Parse(m.ToString(), "t.json");
+        var d = Assert.Single(Assert.Throws<ModelInputException>(() => ComparisonStudy.Run(model)).Diagnostics);
+        Assert.Equal("$.comparisons[0]", d.JsonPath);
+        Assert.Contains("comparison check \"P\"", d.Problem);
+        Assert.Contains("unstable", d.Problem);
+    }
+
+    [Fact]
+    public void Split_lines_on_different_floors_are_rejected_at_the_check()
+    {
+        // Two walls, one with floors at 144 and 288 in, the other at 100 and 288 in.
+        var model = new
+        {
+            formatVersion = 1,
+            units = new { force = "kip", length = "in" },
+            materials = new[] { new { id = "C", E = 4031.0, nu = 0.2 } },
+            sections = new object[] { new { id = "W", shape = "rectangle", b = 10.0, d = 120.0 }, new { id = "L", shape = "general", A = 1e5, I = 1.0 } },
+            nodes = new[]
+            {
+                new { id = "a0", x = 0.0, y = 0.0 }, new { id = "a1", x = 0.0, y = 144.0 }, new { id = "a2", x = 0.0, y = 288.0 },
+                new { id = "b0", x = 600.0, y = 0.0 }, new { id = "b1", x = 600.0, y = 100.0 }, new { id = "b2", x = 600.0, y = 288.0 },
+            },
+            members = new object[]
+            {
+                new { id = "wa1", start = "a0", end = "a1", section = "W", material = "C" }, new { id = "wa2", start = "a1", end = "a2", section = "W", material = "C" },
+                new { id = "wb1", start = "b0", end = "b1", section = "W", material = "C" }, new { id = "wb2", start = "b1", end = "b2", section = "W", material = "C" },
+                new { id = "l2", start = "a2", end = "b2", section = "L", material = "C", kind = "brace" },
+            },
+            supports = new[] { new { node = "a0", type = "fixed" }, new { node = "b0", type = "fixed" } },
+            loadCases = new[] { new { id = "L", nodalLoads = new[] { new { node = "a2", fx = 20.0 } } } },
+            comparisons = new object[]
+            {
+                new { id = "A", kind = "wall-line", members = new[] { "wa1", "wa2" } },
+                new { id = "B", kind = "wall-line", members = new[] { "wb1", "wb2" } },
+                new { id = "S", kind = "shear-split", loadCase = "L", lines = new[] { new { check = "A" }, new { check = "B" } } },
+            },
+        };
+        var m = Models.Parse(model);
+        var d = Assert.Single(Assert.Throws<ModelInputException>(() => ComparisonStudy.Run(m)).Diagnostics);
+        Assert.Equal("$.comparisons[2]", d.JsonPath);
+        Assert.Contains("different floor levels", d.Problem);
+    }
+}

@@ -771,6 +771,7 @@ public static class ModelReader
                 else ends.Add(ce);
             }
             if (!f.Has("ends")) ends.AddRange([CheckEnds.Cantilever, CheckEnds.FixedFixed]);
+            else if (f.Token("ends") is JArray { Count: 0 } noEnds) sink.Add(noEnds, "'ends' is empty, so the check would report nothing", efix);
             if (id is null || refs.Count == 0) return null;
 
             var nodes = _nodesList!;
@@ -999,6 +1000,7 @@ public static class ModelReader
                 else storyNumbers.Add((int)v);
             }
             if (!f.Has("stories")) storyNumbers.AddRange(Enumerable.Range(1, stories));
+            else if (f.Token("stories") is JArray { Count: 0 } noStories) { sink.Add(noStories, "'stories' is empty, so the check would report nothing", sfix); ok = false; }
             var forces = new List<double>();
             if (f.Has("pattern"))
             {
