@@ -212,3 +212,38 @@ public class CheckErrorTests
         Assert.Contains("different floor levels", d.Problem);
     }
 }
+
+public class FrameBeamReaderTests
+{
+    [Fact]
+    public void Beam_spanning_past_a_column_is_rejected()
+    {
+        // Three columns and one beam member from the first to the third: the D-value needs a beam per bay.
+        var model = new
+        {
+            formatVersion = 1,
+            units = new { force = "kip", length = "in" },
+            materials = new[] { new { id = "S", E = 29000.0, nu = 0.3 } },
+            sections = new[] { new { id = "G", shape = "general", A = 30.0, I = 900.0 } },
+            nodes = new[]
+            {
+                new { id = "a0", x = 0.0, y = 0.0 }, new { id = "a1", x = 0.0, y = 150.0 },
+                new { id = "b0", x = 300.0, y = 0.0 }, new { id = "b1", x = 300.0, y = 150.0 },
+                new { id = "c0", x = 600.0, y = 0.0 }, new { id = "c1", x = 600.0, y = 150.0 },
+            },
+            members = new[]
+            {
+                new { id = "ca", start = "a0", end = "a1", section = "G", material = "S" },
+                new { id = "cb", start = "b0", end = "b1", section = "G", material = "S" },
+                new { id = "cc", start = "c0", end = "c1", section = "G", material = "S" },
+                new { id = "bm", start = "a1", end = "c1", section = "G", material = "S" },
+            },
+            supports = new[] { new { node = "a0", type = "fixed" }, new { node = "b0", type = "fixed" }, new { node = "c0", type = "fixed" } },
+            stiffnessAt = new[] { new { node = "a1", direction = "x" } },
+            comparisons = new[] { new { id = "F", kind = "frame-stories", members = new[] { "ca", "cb", "cc", "bm" } } },
+        };
+        var d = Assert.Single(Assert.Throws<ModelInputException>(() => Models.Parse(model)).Diagnostics);
+        Assert.Equal("$.comparisons[0].members[3]", d.JsonPath);
+        Assert.Contains("one beam member per bay", d.Problem);
+    }
+}

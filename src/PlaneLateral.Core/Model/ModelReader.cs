@@ -954,12 +954,33 @@ public static class ModelReader
                 }
                 else perStory[l0]++;
             }
+            // Column joints at each level, left to right: a beam must join two neighbours (one beam member per bay).
+            var joints = new List<int>[levels.Count];
+            for (int l = 0; l < levels.Count; l++) joints[l] = [];
+            foreach (var (c, _) in columns)
+                foreach (int nn in new[] { c.Start, c.End })
+                {
+                    int l = Level(nodes[nn].Y);
+                    if (l >= 0 && !joints[l].Contains(nn)) joints[l].Add(nn);
+                }
+            foreach (var j in joints) j.Sort((p, q) => nodes[p].X.CompareTo(nodes[q].X));
             foreach (var (bm, tok) in beams)
-                if (Level(nodes[bm.Start].Y) <= 0)
+            {
+                int l = Level(nodes[bm.Start].Y);
+                if (l <= 0)
                 {
                     sink.Add(tok, $"beam \"{bm.Id}\" is not at a floor level above the base of the frame's columns", "list only the beams that frame into the columns' tops");
                     ok = false;
+                    continue;
                 }
+                int i1 = joints[l].IndexOf(bm.Start), i2 = joints[l].IndexOf(bm.End);
+                if (i1 < 0 || i2 < 0 || Math.Abs(i1 - i2) != 1)
+                {
+                    sink.Add(tok, $"beam \"{bm.Id}\" does not join two neighbouring column joints; the story methods need one beam member per bay, from column to column",
+                        "model each bay's beam as one member from one column's joint to the next");
+                    ok = false;
+                }
+            }
             for (int s = 0; s < stories; s++)
                 if (perStory[s] < 2)
                 {
