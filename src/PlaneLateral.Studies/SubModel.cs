@@ -33,10 +33,10 @@ internal sealed class SubModel(string title, string source, UnitSystem units)
     }
 
     /// <summary>Adds a copy of a model member between new nodes, keeping its properties.</summary>
-    public int Copy(Member m, int start, int end, double shearAreaFactor = 1.0)
+    public int Copy(Member m, int start, int end)
     {
         int i = _members.Count;
-        _members.Add(m with { Index = i, Start = start, End = end, ShearArea = m.ShearArea * shearAreaFactor });
+        _members.Add(m with { Index = i, Start = start, End = end });
         return i;
     }
 
