@@ -85,6 +85,14 @@ public class ReaderTests
     }
 
     [Fact]
+    public void Missing_kind_is_the_only_problem_reported()
+    {
+        var d = Assert.Single(Problems(Models.Carrier([new { id = "K", members = new[] { "stub" } }])));
+        Assert.Equal("$.comparisons[0]", d.JsonPath);
+        Assert.Contains("missing required key 'kind'", d.Problem);
+    }
+
+    [Fact]
     public void Wall_line_members_must_stand_base_first_in_one_chain()
     {
         var model = JObject.FromObject(Models.WallLine(300, 120, 10, 3));

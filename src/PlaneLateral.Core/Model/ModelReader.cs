@@ -714,7 +714,7 @@ public static class ModelReader
                     "perforated-wall" => ReadPerforatedWall(f, id, desc, tol, at),
                     "frame-stories" => ReadFrameStories(f, id, desc, tol, at, members, supports),
                     "shear-split" => ReadShearSplit(f, id, desc, tol, at, splits),
-                    null => null,
+                    null => SkipRest(f),
                     _ => UnknownKind(f, kind),
                 };
                 f.RejectUnknownKeys();
@@ -742,7 +742,12 @@ public static class ModelReader
         private ComparisonCheck? UnknownKind(JsonFields f, string kind)
         {
             sink.Add(f.Token("kind"), $"unknown check kind \"{kind}\"", $"use one of {string.Join(", ", CheckKinds.Select(k => $"\"{k}\""))} (docs/comparisons.md)");
-            // Read nothing more; mark the remaining keys known so only the kind is reported.
+            return SkipRest(f);
+        }
+
+        /// <summary>Without a known kind the other keys cannot be judged: mark them read, so only the kind is reported.</summary>
+        private static ComparisonCheck? SkipRest(JsonFields f)
+        {
             foreach (var p in f.Object.Properties()) f.Has(p.Name);
             return null;
         }
