@@ -2,6 +2,7 @@ using System.CommandLine;
 using PlaneLateral.Analysis;
 using PlaneLateral.Model;
 using PlaneLateral.Output;
+using PlaneLateral.Studies;
 
 namespace PlaneLateral.Cli;
 
@@ -38,14 +39,14 @@ public static class CliApp
 
         var root = new RootCommand(
             "PlaneLateral: lateral stiffness, load sharing and drift of walls and frames by shear-deformable finite elements, " +
-            "beside the hand methods. Run with no command to solve the shipped demo model.")
+            "beside the hand methods. Run with no command to solve the shipped demo model and print its hand-method comparison.")
         {
-            solve, validate,
+            solve, validate, CompareCommand.Build(stdout, stderr),
         };
         root.SetAction(_ =>
         {
             stdout.Write($"No model given: solving the shipped demo model ({DemoModelPath}).\nUse 'planelateral solve <model.json>' for your own model, 'planelateral --help' for all commands.\n\n");
-            return Solve(DemoModelPath, null, stdout, stderr);
+            return Solve(DemoModelPath, null, stdout, stderr, withComparisons: true);
         });
         return root;
     }
@@ -53,14 +54,16 @@ public static class CliApp
     private static string DefaultOutputFolder(string modelPath) =>
         Path.Combine(Directory.GetCurrentDirectory(), "planelateral-results", Path.GetFileNameWithoutExtension(modelPath));
 
-    private static int Solve(string modelPath, string? outDir, TextWriter stdout, TextWriter stderr)
+    private static int Solve(string modelPath, string? outDir, TextWriter stdout, TextWriter stderr, bool withComparisons = false)
     {
         StructureModel model;
         AnalysisResult result;
+        ComparisonReport? comparisons = null;
         try
         {
             model = ModelReader.ReadFile(modelPath);
             result = LinearStaticAnalysis.Run(model);
+            if (withComparisons && model.Comparisons.Count > 0) comparisons = ComparisonStudy.Run(model, ComparisonStudy.DefaultTolerance, result);
         }
         catch (ModelInputException e)
         {
@@ -77,7 +80,9 @@ public static class CliApp
         IReadOnlyList<string> written;
         try
         {
-            written = AtomicFiles.WriteAll(folder, ResultFiles.Render(result));
+            var files = ResultFiles.Render(result).ToList();
+            if (comparisons is not null) files.AddRange(ComparisonFiles.Render(comparisons, $"PlaneLateral {ResultFiles.Version}"));
+            written = AtomicFiles.WriteAll(folder, files);
         }
         catch (IOException e)
         {
@@ -87,6 +92,7 @@ public static class CliApp
 
         stdout.Write($"PlaneLateral {ResultFiles.Version}: linear static analysis\n\n");
         stdout.Write(SolveReport.Render(result, modelPath));
+        if (comparisons is not null) stdout.Write("\n" + CompareReport.Render(comparisons));
         stdout.Write($"\nResults written to {folder}: {string.Join(", ", written.Select(Path.GetFileName))}\n");
         return ExitCodes.Success;
     }
@@ -96,7 +102,7 @@ public static class CliApp
         try
         {
             var m = ModelReader.ReadFile(modelPath);
-            stdout.Write($"{modelPath}: valid. {m.Nodes.Count} nodes, {m.Members.Count} members, {m.Supports.Count} supports, {m.LoadCases.Count} load cases, {m.Combinations.Count} combinations, units {m.Units}.\n");
+            stdout.Write($"{modelPath}: valid. {m.Nodes.Count} nodes, {m.Members.Count} members, {m.Supports.Count} supports, {m.LoadCases.Count} load cases, {m.Combinations.Count} combinations, {m.Comparisons.Count} comparison checks, units {m.Units}.\n");
             return ExitCodes.Success;
         }
         catch (ModelInputException e)

@@ -23,6 +23,8 @@ public sealed class StructureModel
 
     /// <summary>Levels, diaphragms, lines of resistance, cracked-section assignments and drift checks (empty when absent).</summary>
     public BuildingData Building { get; init; } = BuildingData.Empty;
+    /// <summary>Hand-method checks the engineer declared under "comparisons" (docs/comparisons.md); empty when none.</summary>
+    public IReadOnlyList<ComparisonCheck> Comparisons { get; init; } = [];
 
     /// <summary>Index of the node with the given id, or −1.</summary>
     public int NodeIndex(string id)
@@ -135,3 +137,55 @@ public sealed record Combination(string Id, string Description, IReadOnlyList<(i
 
 /// <summary>A point where the lateral stiffness is reported: 1 / displacement under a unit force there.</summary>
 public sealed record StiffnessPoint(string Label, int Node, Dof Direction);
+
+/// <summary>Where in the model file a comparison check was declared, for messages raised when it is worked out.</summary>
+public sealed record CheckLocation(string File, int Line, int Column, string JsonPath);
+
+/// <summary>How the ends of a wall checked against a hand formula are held.</summary>
+public enum CheckEnds
+{
+    /// <summary>Base fixed, top free to translate and rotate.</summary>
+    Cantilever,
+    /// <summary>Base fixed, top free to translate but held against rotation.</summary>
+    FixedFixed,
+}
+
+/// <summary>
+/// One check declared under "comparisons": a hand method set beside the finite-element number.
+/// <paramref name="Tolerance"/> is the check's own band on FE/hand − 1 (null: the run's default).
+/// </summary>
+public abstract record ComparisonCheck(string Id, string Description, double? Tolerance, CheckLocation At);
+
+/// <summary>
+/// A wall line: vertical chain of line members from <see cref="BaseNode"/> to <see cref="TopNode"/>, one section
+/// over the height, checked as a cantilever and/or fixed-fixed pier. Members are listed base first.
+/// </summary>
+public sealed record WallLineCheck(string Id, string Description, double? Tolerance, CheckLocation At,
+    IReadOnlyList<int> Members, int BaseNode, int TopNode, IReadOnlyList<CheckEnds> Ends)
+    : ComparisonCheck(Id, Description, Tolerance, At);
+
+/// <summary>A rectangular opening in a wall elevation: lower-left corner (X, Y) from the wall's left end and base, SI.</summary>
+public sealed record OpeningSpec(string Label, double X, double Y, double Width, double Height);
+
+/// <summary>A wall with openings described by its geometry (SI), checked against the perforated-wall hand method.</summary>
+public sealed record PerforatedWallCheck(string Id, string Description, double? Tolerance, CheckLocation At,
+    double Length, double Height, double Thickness, Material Material, double FormFactor, CheckEnds Ends,
+    IReadOnlyList<OpeningSpec> Openings)
+    : ComparisonCheck(Id, Description, Tolerance, At);
+
+/// <summary>
+/// The stories of a moment frame made of the listed members (vertical columns, horizontal beams).
+/// <see cref="Levels"/> are the floor heights (SI, base first); <see cref="Stories"/> the 1-based stories to check;
+/// <see cref="Pattern"/> the lateral force at each level above the base (SI), for the FE story stiffness.
+/// </summary>
+public sealed record FrameStoriesCheck(string Id, string Description, double? Tolerance, CheckLocation At,
+    IReadOnlyList<int> Members, IReadOnlyList<double> Levels, IReadOnlyList<int> Stories, IReadOnlyList<double> Pattern)
+    : ComparisonCheck(Id, Description, Tolerance, At);
+
+/// <summary>One line of a story-shear split: a label and the id of the wall-line or frame-stories check that describes it.</summary>
+public sealed record SplitLine(string Label, string CheckId);
+
+/// <summary>The story shear of a load case shared among parallel lines, by relative rigidity and by the full FE model.</summary>
+public sealed record ShearSplitCheck(string Id, string Description, double? Tolerance, CheckLocation At,
+    int LoadCase, IReadOnlyList<SplitLine> Lines)
+    : ComparisonCheck(Id, Description, Tolerance, At);

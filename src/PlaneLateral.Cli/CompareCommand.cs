@@ -1,0 +1,141 @@
+using System.CommandLine;
+using System.Globalization;
+using System.Text;
+using PlaneLateral.Analysis;
+using PlaneLateral.Model;
+using PlaneLateral.Output;
+using PlaneLateral.Studies;
+
+namespace PlaneLateral.Cli;
+
+/// <summary>The "compare" command: every hand-method number beside its FE number, with the gap and the reason.</summary>
+internal static class CompareCommand
+{
+    public static Command Build(TextWriter stdout, TextWriter stderr)
+    {
+        var modelArg = new Argument<string>("model") { Description = "Model file (JSON) with a \"comparisons\" list (docs/comparisons.md)." };
+        var outOption = new Option<string?>("--out", "-o")
+        {
+            Description = "Folder for comparisons.json and comparisons.csv (created if missing). Default: planelateral-results/<model name> in the current folder.",
+        };
+        var tolOption = new Option<string?>("--tolerance")
+        {
+            Description = "Band on FE/hand − 1 for checks that set none of their own, as a fraction (0.10) or a percentage (10%). Default 0.10.",
+        };
+        var cmd = new Command("compare", "Set each hand-method number beside the finite-element number for the model's comparison checks, with the gap and its likely cause; print a table and write comparisons.json and comparisons.csv.")
+        {
+            modelArg, outOption, tolOption,
+        };
+        cmd.SetAction(p => Run(p.GetValue(modelArg)!, p.GetValue(outOption), p.GetValue(tolOption), stdout, stderr));
+        return cmd;
+    }
+
+    internal static bool TryTolerance(string? text, out double tol, out string error)
+    {
+        tol = ComparisonStudy.DefaultTolerance;
+        error = "";
+        if (text is null) return true;
+        string s = text.Trim();
+        bool percent = s.EndsWith('%');
+        if (percent) s = s[..^1];
+        if (!double.TryParse(s, NumberStyles.Float, CultureInfo.InvariantCulture, out double v) || !double.IsFinite(v))
+        {
+            error = $"--tolerance '{text}' is not a number. Fix: give a fraction such as 0.10 or a percentage such as 10%.";
+            return false;
+        }
+        if (percent) v /= 100;
+        if (!(v > 0 && v < 1))
+        {
+            error = $"--tolerance '{text}' is outside (0, 1). Fix: give a fraction such as 0.10 (±10%) or a percentage such as 10%.";
+            return false;
+        }
+        tol = v;
+        return true;
+    }
+
+    private static int Run(string modelPath, string? outDir, string? tolText, TextWriter stdout, TextWriter stderr)
+    {
+        if (!TryTolerance(tolText, out double tol, out string error))
+        {
+            stderr.Write(error + "\nNothing was written.\n");
+            return ExitCodes.Usage;
+        }
+        ComparisonReport report;
+        try
+        {
+            var model = ModelReader.ReadFile(modelPath);
+            if (model.Comparisons.Count == 0)
+            {
+                stderr.Write($"{modelPath}: the model declares no comparison checks.\nFix: add \"comparisons\": [...] (see docs/comparisons.md), or run 'planelateral solve {modelPath}'.\nNothing was written.\n");
+                return ExitCodes.BadModel;
+            }
+            report = ComparisonStudy.Run(model, tol);
+        }
+        catch (ModelInputException e)
+        {
+            stderr.Write(e.Message + "\nNothing was written.\n");
+            return ExitCodes.BadModel;
+        }
+        catch (UnstableModelException e)
+        {
+            stderr.Write(e.Message + "\nNothing was written.\n");
+            return ExitCodes.Unstable;
+        }
+        string folder = outDir ?? Path.Combine(Directory.GetCurrentDirectory(), "planelateral-results", Path.GetFileNameWithoutExtension(modelPath));
+        IReadOnlyList<string> written;
+        try
+        {
+            written = AtomicFiles.WriteAll(folder, ComparisonFiles.Render(report, $"PlaneLateral {ResultFiles.Version}"));
+        }
+        catch (IOException e)
+        {
+            stderr.Write($"{e.Message}\nFix: choose a writable folder with --out. No comparison file was replaced.\n");
+            return ExitCodes.OutputFailed;
+        }
+        stdout.Write($"PlaneLateral {ResultFiles.Version}: hand methods beside the finite-element model\n\n");
+        stdout.Write($"Model     {report.ModelTitle}\nFile      {modelPath}\n\n");
+        stdout.Write(CompareReport.Render(report));
+        stdout.Write($"\nComparisons written to {folder}: {string.Join(", ", written.Select(Path.GetFileName))}\n");
+        return ExitCodes.Success;
+    }
+}
+
+/// <summary>The comparison table the CLI prints.</summary>
+internal static class CompareReport
+{
+    public static string Render(ComparisonReport r)
+    {
+        var sb = new StringBuilder();
+        sb.Append($"Hand methods beside the FE model (default tolerance ±{Pct(r.DefaultTolerance)}; ratio = FE/hand)\n");
+        var t = new TextTable("check", "subject", "hand method", "unit", "hand", "FE", "FE/hand", "flex/shear (hand)", "h/l", "verdict", "cause").Numeric(4, 5, 6, 8);
+        int n = 0;
+        var notes = new List<string>();
+        foreach (var row in r.Rows)
+        {
+            n++;
+            string shares = row.Hand.FlexuralShare is double fl && row.Hand.ShearShare is double sh ? $"{Pct(fl)} / {Pct(sh)}" : "-";
+            t.Add(row.CheckId, row.Subject, Short(row.Hand.Method.Name), row.Unit, TextTable.Num(row.Hand.Value), TextTable.Num(row.Reference.Value),
+                row.Ratio.ToString("0.000", CultureInfo.InvariantCulture), shares,
+                row.AspectRatio is double a ? a.ToString("0.00", CultureInfo.InvariantCulture) : "-",
+                row.Tolerance == r.DefaultTolerance ? row.VerdictText : $"{row.VerdictText} (±{Pct(row.Tolerance)})", $"[{n}]");
+            notes.Add($"  [{n}] {row.Cause}");
+            foreach (var other in row.Fe.Skip(1))
+                notes.Add($"      also: {other.Model}: {TextTable.Num(other.Value)} {row.Unit}, FE/hand {(other.Value / row.Hand.Value).ToString("0.000", CultureInfo.InvariantCulture)}");
+        }
+        sb.Append(t.Render());
+        sb.Append("\nCauses\n");
+        foreach (var line in notes) sb.Append(line).Append('\n');
+        sb.Append("  Hand methods, sources and assumptions for every row are in comparisons.json.\n");
+        sb.Append($"\nCaution: {ComparisonReport.Caution}\n");
+        return sb.ToString();
+    }
+
+    private static string Pct(double f) => (100 * f).ToString("0.#", CultureInfo.InvariantCulture) + "%";
+
+    /// <summary>The method's name up to its first comma, for the table (the full name is in the JSON).</summary>
+    private static string Short(string name)
+    {
+        int i = name.IndexOf(", ", StringComparison.Ordinal);
+        return i > 0 && i < 48 ? name[..i] : name.Length <= 48 ? name : name[..45] + "...";
+    }
+}

@@ -1,0 +1,89 @@
+using PlaneLateral.Hand;
+
+namespace PlaneLateral.Studies;
+
+/// <summary>How the FE number stands against the hand number.</summary>
+public enum Verdict
+{
+    /// <summary>|FE/hand − 1| ≤ tolerance.</summary>
+    WithinTolerance,
+    /// <summary>FE/hand &lt; 1 − tolerance: the hand value is the higher (for a stiffness: the hand method is stiffer).</summary>
+    HandHigher,
+    /// <summary>FE/hand &gt; 1 + tolerance: the hand value is the lower (for a stiffness: the hand method is softer).</summary>
+    HandLower,
+}
+
+/// <summary>What a row compares.</summary>
+public enum ComparedQuantity
+{
+    /// <summary>Lateral stiffness, force per length.</summary>
+    Stiffness,
+    /// <summary>Story shear carried by one line, force.</summary>
+    StoryShear,
+}
+
+/// <summary>The hand-method side of a row: the number (model units), its method (name, source, assumptions) and, for a pier, the flexural and shear shares of its deflection.</summary>
+/// <param name="Detail">Extra lines a reviewer would want beside the number (e.g. the perforated-wall breakdown); may be empty.</param>
+public sealed record HandEstimate(double Value, HandMethod Method, double? FlexuralShare = null, double? ShearShare = null, string Detail = "");
+
+/// <summary>
+/// One finite-element estimate of the same quantity, named by the model it came from. A row holds an ordered list of
+/// these, the first being the reference the verdict uses; a later model (e.g. a plane-stress panel) is one more entry.
+/// </summary>
+/// <param name="Model">Short name of the FE model, e.g. "line members, isolated".</param>
+/// <param name="Value">The number, model units.</param>
+/// <param name="Description">How the model was built and loaded, in plain words.</param>
+public sealed record FeEstimate(string Model, double Value, string Description, double? FlexuralShare = null, double? ShearShare = null);
+
+/// <summary>
+/// One line of the comparison: a hand number beside the FE numbers, with the gap and the reason for it.
+/// Values are in the model's units (<see cref="Unit"/>).
+/// </summary>
+/// <param name="CheckId">The id of the check in the model file.</param>
+/// <param name="Kind">The check's kind ("wall-line", "perforated-wall", "frame-stories", "shear-split").</param>
+/// <param name="Subject">What this row is about within the check, e.g. "cantilever" or "story 2".</param>
+/// <param name="AspectRatio">h/l where it applies (l = section depth or wall length), else null.</param>
+/// <param name="Tolerance">The band on FE/hand − 1 used for the verdict.</param>
+/// <param name="Cause">The reason for the gap (or for the agreement), in plain words, chosen by the rules in docs/comparisons.md.</param>
+public sealed record ComparisonRow(
+    string CheckId, string Kind, string Subject, ComparedQuantity Quantity, string Unit,
+    HandEstimate Hand, IReadOnlyList<FeEstimate> Fe, double? AspectRatio, double Tolerance, string Cause)
+{
+    /// <summary>The FE estimate the verdict is based on (the first).</summary>
+    public FeEstimate Reference => Fe[0];
+
+    /// <summary>FE/hand for the reference estimate.</summary>
+    public double Ratio => Reference.Value / Hand.Value;
+
+    public Verdict Verdict => Judge(Ratio, Tolerance);
+
+    /// <summary>The verdict in words that suit the quantity.</summary>
+    public string VerdictText => VerdictWords(Verdict, Quantity);
+
+    public static Verdict Judge(double ratio, double tolerance) =>
+        Math.Abs(ratio - 1) <= tolerance ? Verdict.WithinTolerance : ratio < 1 ? Verdict.HandHigher : Verdict.HandLower;
+
+    public static string VerdictWords(Verdict v, ComparedQuantity q) => (v, q) switch
+    {
+        (Verdict.WithinTolerance, _) => "within tolerance",
+        (Verdict.HandHigher, ComparedQuantity.Stiffness) => "hand stiffer",
+        (Verdict.HandLower, ComparedQuantity.Stiffness) => "hand softer",
+        (Verdict.HandHigher, _) => "hand gives more",
+        _ => "hand gives less",
+    };
+}
+
+/// <summary>Every row of a model's comparison checks.</summary>
+public sealed class ComparisonReport
+{
+    /// <summary>The caution carried by every comparison output.</summary>
+    public const string Caution =
+        "Hand methods set beside finite-element numbers, for verification by a licensed engineer. Neither number shows compliance with any code; the governing local building code and the engineer of record decide.";
+
+    public required string ModelTitle { get; init; }
+    public required string ModelFile { get; init; }
+    public required string ForceUnit { get; init; }
+    public required string LengthUnit { get; init; }
+    public required double DefaultTolerance { get; init; }
+    public required IReadOnlyList<ComparisonRow> Rows { get; init; }
+}

@@ -1,0 +1,128 @@
+using PlaneLateral.Analysis;
+using PlaneLateral.Hand;
+using PlaneLateral.Model;
+using PlaneLateral.Units;
+
+namespace PlaneLateral.Studies;
+
+/// <summary>
+/// A load case's story shears shared among parallel lines: by relative rigidity (each line's hand stiffness at the
+/// top under the case's level forces) beside the shear each line carries in the full FE model, story by story.
+/// </summary>
+internal static class ShearSplitStudy
+{
+    public static IEnumerable<ComparisonRow> Rows(StructureModel model, ShearSplitCheck c, double tol, AnalysisResult full)
+    {
+        var u = model.Units;
+        var checks = c.Lines.Select(l => model.Comparisons.First(x => x.Id == l.CheckId)).ToList();
+        var levels = checks.Select(x => Levels(model, x)).ToList();
+        for (int i = 1; i < levels.Count; i++)
+            if (levels[i].Count != levels[0].Count || levels[i].Zip(levels[0]).Any(p => !Near(p.First, p.Second)))
+                throw ComparisonStudy.Problem(c, $"lines \"{c.Lines[0].Label}\" and \"{c.Lines[i].Label}\" have different floor levels; a story split needs the lines to share their floors",
+                    "split lines that stand on the same base and meet the same floors");
+        var lv = levels[0];
+        int stories = lv.Count - 1;
+        var lc = model.LoadCases[c.LoadCase];
+        var forces = new double[stories];
+        foreach (var nl in lc.NodalLoads.Where(l => l.Fx != 0))
+        {
+            double y = model.Nodes[nl.Node].Y;
+            int k = lv.FindIndex(v => Near(v, y));
+            if (k < 0) throw ComparisonStudy.Problem(c, $"load case \"{lc.Id}\" has a lateral force at node \"{model.Nodes[nl.Node].Id}\", which is not at one of the lines' floor levels",
+                "put the lateral forces of the case at the floor levels the lines share");
+            if (k > 0) forces[k - 1] += nl.Fx;
+        }
+        if (forces.All(f => f == 0))
+            throw ComparisonStudy.Problem(c, $"load case \"{lc.Id}\" has no lateral nodal force above the base", "name a load case with lateral forces at the floors");
+        var storyShear = Enumerable.Range(0, stories).Select(s => forces.Skip(s).Sum()).ToArray();
+        double total = forces.Sum();
+
+        // Hand stiffness of each line at the top under the case's level forces.
+        var hand = new List<(double K, HandMethod Method)>();
+        foreach (var x in checks)
+        {
+            if (x is WallLineCheck w)
+            {
+                var m0 = model.Members[w.Members[0]];
+                var heights = Enumerable.Range(0, stories).Select(s => lv[s + 1] - lv[s]).ToArray();
+                var r = StoryWall.Uniform(heights, forces, m0.E * m0.I, m0.G * m0.A, m0.A / m0.ShearArea);
+                hand.Add((total / r.Displacements[^1], r.Method));
+            }
+            else
+            {
+                var fr = (FrameStoriesCheck)x;
+                var st = FrameStoryStudy.Stories(model, fr);
+                double drift = 0;
+                HandMethod? method = null;
+                for (int s = 0; s < stories; s++)
+                {
+                    var dv = FrameStoryStudy.DValue(model, fr, st[s]);
+                    drift += storyShear[s] / dv.Stiffness;
+                    method = dv.Method;
+                }
+                hand.Add((total / drift, method!.With("stories in series: top deflection = Σ story shear / ΣD of each story")));
+            }
+        }
+        var cr = full.Cases.First(r => r.Id == lc.Id && !r.IsCombination);
+        for (int s = 0; s < stories; s++)
+        {
+            var split = ShearDistribution.ByRelativeRigidity(storyShear[s], hand.Select(h => h.K).ToArray());
+            var feShear = checks.Select(x => LineShear(model, cr, Vertical(model, x), lv[s], lv[s + 1])).ToArray();
+            for (int i = 0; i < checks.Count; i++)
+            {
+                var method = split.Method.With(
+                    $"line stiffness k = (total force)/(top deflection) by \"{hand[i].Method.Name}\" under the case's level forces: " +
+                    string.Join(", ", checks.Select((_, j) => $"{c.Lines[j].Label} {ComparisonStudy.G4(ComparisonStudy.Stiffness(u, hand[j].K))} {ComparisonStudy.StiffnessUnit(u)}")));
+                double handV = u.FromSI(split.Forces[i], Quantity.Force), feV = u.FromSI(feShear[i], Quantity.Force);
+                double ratio = feShear[i] / split.Forces[i];
+                double feShare = feShear[i] / feShear.Sum();
+                yield return new ComparisonRow(c.Id, "shear-split", $"story {s + 1}: {c.Lines[i].Label}", ComparedQuantity.StoryShear, u.ForceSymbol,
+                    new HandEstimate(handV, method),
+                    [new FeEstimate("full model", feV, $"shear carried by the line's vertical members in story {s + 1} under load case \"{lc.Id}\" in the whole model ({ComparisonStudy.Pct(feShare)} of the lines' total; hand share {ComparisonStudy.Pct(split.Shares[i])})")],
+                    null, tol, Cause(ratio, tol, checks.Select(x => x is WallLineCheck).Distinct().Count() > 1));
+            }
+        }
+    }
+
+    /// <summary>Cause rules for a story-shear split (docs/comparisons.md).</summary>
+    internal static string Cause(double ratio, double tol, bool wallsAndFrames)
+    {
+        if (ComparisonRow.Judge(ratio, tol) == Verdict.WithinTolerance) return "relative rigidity holds at this story";
+        return wallsAndFrames
+            ? "wall-frame interaction: the wall bends as a cantilever and the frame sways in shear; tied at every floor they push and pull on each other, so the share changes from story to story and one relative-rigidity split cannot hold at every story"
+            : "the lines deflect in different shapes, so their stiffness ratio changes with height; one relative-rigidity split cannot hold at every story";
+    }
+
+    private static bool Near(double a, double b) => Math.Abs(a - b) <= 1e-9 * Math.Max(1.0, Math.Abs(a));
+
+    private static List<double> Levels(StructureModel model, ComparisonCheck x) => x switch
+    {
+        WallLineCheck w => new[] { w.BaseNode }.Concat(w.Members.Select(m => FrameStoryStudy.UpperNode(model, model.Members[m]))).Select(n => model.Nodes[n].Y).ToList(),
+        FrameStoriesCheck f => f.Levels.ToList(),
+        _ => throw new InvalidOperationException(),
+    };
+
+    private static IEnumerable<Member> Vertical(StructureModel model, ComparisonCheck x) => x switch
+    {
+        WallLineCheck w => w.Members.Select(m => model.Members[m]),
+        FrameStoriesCheck f => FrameStoryStudy.Stories(model, f).SelectMany(s => s.Columns),
+        _ => throw new InvalidOperationException(),
+    };
+
+    /// <summary>Σ global Fx on the upper ends of the members spanning the story: the story shear the line carries (N).</summary>
+    private static double LineShear(StructureModel model, CaseResult r, IEnumerable<Member> members, double y0, double y1)
+    {
+        double sum = 0;
+        foreach (var m in members)
+        {
+            var a = model.Nodes[m.Start]; var b = model.Nodes[m.End];
+            if (!(Math.Min(a.Y, b.Y) <= y0 + 1e-9 && Math.Max(a.Y, b.Y) >= y1 - 1e-9)) continue;
+            double len = Math.Sqrt((b.X - a.X) * (b.X - a.X) + (b.Y - a.Y) * (b.Y - a.Y));
+            double cs = (b.X - a.X) / len, sn = (b.Y - a.Y) / len;
+            var fo = r.MemberForces[m.Index];
+            // Force on the member at its upper end, global x: local x = (c, s), local y = (−s, c).
+            sum += b.Y >= a.Y ? fo.N2 * cs - fo.V2 * sn : fo.N1 * cs - fo.V1 * sn;
+        }
+        return sum;
+    }
+}
