@@ -29,10 +29,12 @@ internal static class BuildingReport
             sb.Append(t.Render());
         }
 
-        var lateral = br.Cases.Where(c => c.Lateral).ToList();
+        // The console shows lateral load cases; combinations (sums of them) and gravity-only cases are in the files.
+        var lateral = br.Cases.Where(c => c.Lateral && !c.IsCombination).ToList();
+        var shown = lateral.Select(c => c.CaseId).ToHashSet();
         if (br.HasStories)
         {
-            sb.Append("\nStories (lateral cases; gravity-only cases are in stories.csv)\n");
+            sb.Append("\nStories (lateral load cases; combinations and gravity-only cases are in stories.csv)\n");
             var t = new TextTable("case", "story", "levels", $"height [{len}]", $"top ux [{len}]", $"drift [{len}]", "drift ratio", $"shear [{force}]", $"stiffness [{ku}]")
                 .Numeric(1, 3, 4, 5, 6, 7, 8);
             foreach (var c in lateral)
@@ -67,9 +69,9 @@ internal static class BuildingReport
             }
             foreach (var id in skipped) sb.Append($"  {id}: a line alone is a mechanism, so no split by stiffness alone.\n");
 
-            sb.Append("\nStiffness (soft story) irregularity, ASCE 7-16 Table 12.3-2 Types 1a/1b: k below 70 % (60 %) of the story above or 80 % (70 %) of the mean of the three above\n");
+            sb.Append("\nStiffness (soft story) irregularity, ASCE 7-16 Table 12.3-2 Types 1a/1b: k below 70 % (60 %) of the story above or 80 % (70 %) of the mean of the three above (load cases; all cases in soft-story.csv)\n");
             var it = new TextTable("case", "story", $"stiffness [{ku}]", "k / k above", "k / mean of 3 above", "1a soft", "1b extreme").Numeric(1, 2, 3, 4);
-            foreach (var i in br.Irregularity)
+            foreach (var i in br.Irregularity.Where(i => shown.Contains(i.CaseId)))
                 it.Add(i.CaseId, i.Story.Index.ToString(CultureInfo.InvariantCulture), TextTable.Num(u.FromSI(i.Stiffness, Quantity.TranslationalStiffness)), Ratio(i.RatioToAbove), Ratio(i.RatioToAverageAbove),
                     i.Soft ? "yes" : "no", i.ExtremelySoft ? "yes" : "no");
             sb.Append(it.Render());
