@@ -21,6 +21,9 @@ public sealed class StructureModel
     public required IReadOnlyList<Combination> Combinations { get; init; }
     public required IReadOnlyList<StiffnessPoint> StiffnessPoints { get; init; }
 
+    /// <summary>Wall panels analysed as plane-stress continua (see docs/panels.md); none by default.</summary>
+    public IReadOnlyList<WallPanel> Panels { get; init; } = [];
+
     /// <summary>Index of the node with the given id, or −1.</summary>
     public int NodeIndex(string id)
     {
