@@ -20,6 +20,9 @@ public sealed class PanelResult
     /// <summary>Horizontal displacement (m) of every level (top last) in every load case, in model case order: [case][level].</summary>
     public required double[][] LevelDisplacements { get; init; }
 
+    /// <summary>The mesh-convergence study of the top stiffness, when the panel's mesh settings ask for more than one mesh.</summary>
+    public PanelConvergenceResult? Convergence { get; init; }
+
     /// <summary>Top horizontal displacement (m) per load case, in model case order.</summary>
     public double TopDisplacement(int caseIndex) => LevelDisplacements[caseIndex][^1];
 }
@@ -33,8 +36,18 @@ public static class PanelAnalysis
 {
     /// <param name="caseIds">The model's load case ids, in order (panel loads refer to them by index).</param>
     /// <exception cref="ArgumentException">The panel cannot be meshed (see <see cref="PanelMesher.Check"/>).</exception>
-    public static PanelResult Run(WallPanel panel, IReadOnlyList<string> caseIds, AnalysisOptions? options = null, string sourcePath = "<panel>") =>
-        Run(panel, PanelMesher.Mesh(panel), caseIds, options, sourcePath);
+    public static PanelResult Run(WallPanel panel, IReadOnlyList<string> caseIds, AnalysisOptions? options = null, string sourcePath = "<panel>")
+    {
+        var mesh = PanelMesher.Mesh(panel);   // checks every problem, the finest study mesh's size included, before any work
+        var result = Run(panel, mesh, caseIds, options, sourcePath);
+        if (panel.Mesh.Refinements < 2) return result;
+        var study = PanelConvergence.Study(panel, panel.Mesh.Refinements, options);
+        return new PanelResult
+        {
+            Panel = result.Panel, Mesh = result.Mesh, Analysis = result.Analysis, TopStiffness = result.TopStiffness,
+            LevelDisplacements = result.LevelDisplacements, Convergence = study,
+        };
+    }
 
     /// <summary>Solves the panel on a given mesh (from <see cref="PanelMesher.Mesh"/>).</summary>
     public static PanelResult Run(WallPanel panel, PanelMesh pm, IReadOnlyList<string> caseIds, AnalysisOptions? options = null, string sourcePath = "<panel>")

@@ -44,16 +44,20 @@ public static class PanelMesher
     /// <summary>Every problem that stops the panel from being meshed (empty when it can be).</summary>
     public static List<PanelProblem> Check(WallPanel p) => Plan(p).Problems;
 
-    /// <summary>Meshes the panel.</summary>
+    /// <summary>
+    /// Meshes the panel; <paramref name="refinement"/> k splits every element of the base mesh into 2ᵏ × 2ᵏ (the nested
+    /// meshes h, h/2, h/4, ... of a convergence study).
+    /// </summary>
     /// <exception cref="ArgumentException">The panel cannot be meshed; the message lists every problem of <see cref="Check"/>.</exception>
-    public static PanelMesh Mesh(WallPanel p)
+    public static PanelMesh Mesh(WallPanel p, int refinement = 0)
     {
+        ArgumentOutOfRangeException.ThrowIfNegative(refinement);
         var plan = Plan(p);
         if (plan.Problems.Count > 0)
             throw new ArgumentException($"wall panel \"{p.Id}\" cannot be meshed: " + string.Join("; ", plan.Problems.Select(q => $"{q.Key}: {q.Problem} ({q.Fix})")));
         IPlaneElement element = p.Mesh.Element == PanelElementKind.Quad4 ? IncompatibleQuad4.Instance : LagrangeQuad9.Instance;
-        var xs = plan.XLines!;
-        var ys = plan.YLines!;
+        var xs = Split(plan.XLines!, 1 << refinement);
+        var ys = Split(plan.YLines!, 1 << refinement);
         bool Solid(int i, int j)
         {
             double cx = 0.5 * (xs[i] + xs[i + 1]), cy = 0.5 * (ys[j] + ys[j + 1]);
@@ -76,7 +80,7 @@ public static class PanelMesher
             Levels = levels,
             LevelNodes = levels.Select(l => Enumerable.Range(0, local.NodeCount).Where(i => Math.Abs(local.Y[i] - l) <= tol).ToArray()).ToArray(),
             LevelEdges = levels.Select(l => LevelEdgesAt(local, l, tol)).ToArray(),
-            ElementSize = plan.Size,
+            ElementSize = plan.Size / (1 << refinement),
             NarrowestStrip = plan.Narrowest,
             LargestAspect = aspect,
         };
@@ -199,12 +203,20 @@ public static class PanelMesher
         size = Math.Min(size, m.MaxAspect * shortest);
         var xl = Subdivide(xs, size);
         var yl = Subdivide(ys, size);
-        int r = m.Element == PanelElementKind.Quad9 ? 2 : 1;
+        if (m.Refinements is < 1 or > 6)
+        {
+            bad.Add(new("mesh", $"{m.Refinements} meshes asked for the convergence study", "give \"refinements\" from 1 (no study) to 6; 3 or more give an observed order"));
+            return plan;
+        }
+        // The finest mesh of a convergence study decides the size limit, checked before any work.
+        int r = (m.Element == PanelElementKind.Quad9 ? 2 : 1) << (m.Refinements - 1);
         long nodes = (long)(r * (xl.Length - 1) + 1) * (r * (yl.Length - 1) + 1);
         if (nodes > m.MaxNodes)
         {
-            bad.Add(new("mesh", $"the mesh would have about {nodes} nodes, more than the limit of {m.MaxNodes}",
-                $"give a larger element size (at least {F(size * Math.Sqrt((double)nodes / m.MaxNodes))}), fewer elements across the narrowest strip, or a higher \"maxNodes\""));
+            string finest = m.Refinements > 1 ? $"the finest of the {m.Refinements} meshes" : "the mesh";
+            bad.Add(new("mesh", $"{finest} would have about {nodes} nodes, more than the limit of {m.MaxNodes}",
+                m.Refinements > 1 ? "ask for fewer \"refinements\", a coarser base mesh, or a higher \"maxNodes\""
+                    : $"give a larger element size (at least {F(size * Math.Sqrt((double)nodes / m.MaxNodes))}), fewer elements across the narrowest strip, or a higher \"maxNodes\""));
             return plan;
         }
         plan.XLines = xl; plan.YLines = yl; plan.Size = size; plan.Narrowest = narrowest; plan.Nodes = (int)nodes;
@@ -216,6 +228,18 @@ public static class PanelMesher
         var list = new List<double>();
         foreach (var v in values.OrderBy(v => v))
             if (list.Count == 0 || v - list[^1] > tol) list.Add(v);
+        return list.ToArray();
+    }
+
+    private static double[] Split(double[] lines, int parts)
+    {
+        if (parts == 1) return lines;
+        var list = new List<double> { lines[0] };
+        for (int i = 0; i + 1 < lines.Length; i++)
+        {
+            for (int k = 1; k < parts; k++) list.Add(lines[i] + (lines[i + 1] - lines[i]) * k / parts);
+            list.Add(lines[i + 1]);
+        }
         return list.ToArray();
     }
 

@@ -96,19 +96,21 @@ public static partial class ModelReader
 
             var materials = ReadMaterials(f.Objects("materials", true, "add \"materials\": [ {\"id\": \"...\", \"E\": ..., \"nu\": ...} ]"));
             var sections = ReadSections(f.Objects("sections", true, "add \"sections\": [ {\"id\": \"...\", \"shape\": \"rectangle\", \"b\": ..., \"d\": ...} ]"));
-            var nodes = ReadNodes(f.Objects("nodes", true, "add \"nodes\": [ {\"id\": \"...\", \"x\": ..., \"y\": ...} ]"));
-            var members = ReadMembers(f.Objects("members", true, "add \"members\": [ {\"id\": \"...\", \"start\": \"...\", \"end\": \"...\", \"section\": \"...\", \"material\": \"...\"} ]"), nodes);
-            var supportsArr = f.Objects("supports", true, "add \"supports\": [ {\"node\": \"...\", \"type\": \"fixed\"} ]");
+            bool panelsOnly = HasPanels(root); // a model of wall panels alone needs no nodes, members or supports (ModelReader.Panels.cs)
+            var nodes = ReadNodes(f.Objects("nodes", !panelsOnly, "add \"nodes\": [ {\"id\": \"...\", \"x\": ..., \"y\": ...} ]"));
+            var members = ReadMembers(f.Objects("members", !panelsOnly, "add \"members\": [ {\"id\": \"...\", \"start\": \"...\", \"end\": \"...\", \"section\": \"...\", \"material\": \"...\"} ]"), nodes);
+            var supportsArr = f.Objects("supports", !panelsOnly, "add \"supports\": [ {\"node\": \"...\", \"type\": \"fixed\"} ]");
             var supports = ReadSupports(supportsArr);
-            if (f.Token("supports") is JArray { Count: 0 } emptySupports)
+            if (f.Token("supports") is JArray { Count: 0 } emptySupports && !panelsOnly)
                 sink.Add(emptySupports, "the model has no supports, so it is free to move as a rigid body", "add at least one support, e.g. {\"node\": \"<base node>\", \"type\": \"fixed\"}");
             var cases = ReadLoadCases(f.Objects("loadCases", false, "give \"loadCases\" as an array of objects"), members);
             var combos = ReadCombinations(f.Objects("combinations", false, "give \"combinations\" as an array of objects"), cases);
             var points = ReadStiffnessPoints(f.Objects("stiffnessAt", false, "give \"stiffnessAt\" as an array of {\"node\": \"...\", \"direction\": \"x\"}"), supports);
+            var panels = ReadPanels(f.Objects("panels", false, "give \"panels\" as an array of objects"), materials);
             f.RejectUnknownKeys();
 
             CheckConnectivity(nodes, members);
-            if (cases.Count == 0 && points.Count == 0)
+            if (cases.Count == 0 && points.Count == 0 && panels.Count == 0)
                 sink.Add(root, "the model has neither load cases nor stiffness points, so there is nothing to solve",
                     "add \"loadCases\" (e.g. a lateral load at the roof) or \"stiffnessAt\": [{\"node\": \"<roof node>\", \"direction\": \"x\"}]");
 
@@ -126,6 +128,7 @@ public static partial class ModelReader
                 LoadCases = cases,
                 Combinations = combos,
                 StiffnessPoints = points,
+                Panels = panels,
             };
         }
 

@@ -31,6 +31,7 @@ public static class ResultFiles
         ("member-forces.csv", MemberForces(result)),
         ("checks.csv", Checks(result)),
         ("stiffness.csv", Stiffness(result)),
+        .. PanelResultFiles.Render(result),
     ];
 
     private static string F(double v) => v.ToString("G12", CultureInfo.InvariantCulture);
