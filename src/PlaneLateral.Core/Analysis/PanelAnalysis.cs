@@ -17,13 +17,13 @@ public sealed class PanelResult
     /// </summary>
     public required double TopStiffness { get; init; }
 
-    /// <summary>Horizontal displacement (m) of every level (top last) in every load case, in model case order: [case][level].</summary>
+    /// <summary>Horizontal displacement (m) of every level (top last) in every load case, then every combination, in model order: [case][level].</summary>
     public required double[][] LevelDisplacements { get; init; }
 
     /// <summary>The mesh-convergence study of the top stiffness, when the panel's mesh settings ask for more than one mesh.</summary>
     public PanelConvergenceResult? Convergence { get; init; }
 
-    /// <summary>Top horizontal displacement (m) per load case, in model case order.</summary>
+    /// <summary>Top horizontal displacement (m) per load case (then combination), in model order.</summary>
     public double TopDisplacement(int caseIndex) => LevelDisplacements[caseIndex][^1];
 }
 
@@ -36,10 +36,11 @@ public static class PanelAnalysis
 {
     /// <param name="caseIds">The model's load case ids, in order (panel loads refer to them by index).</param>
     /// <exception cref="ArgumentException">The panel cannot be meshed (see <see cref="PanelMesher.Check"/>).</exception>
-    public static PanelResult Run(WallPanel panel, IReadOnlyList<string> caseIds, AnalysisOptions? options = null, string sourcePath = "<panel>")
+    /// <param name="combinations">The model's combinations (factored sums of the cases), superposed; null for none.</param>
+    public static PanelResult Run(WallPanel panel, IReadOnlyList<string> caseIds, AnalysisOptions? options = null, string sourcePath = "<panel>", IReadOnlyList<Combination>? combinations = null)
     {
         var mesh = PanelMesher.Mesh(panel);   // checks every problem, the finest study mesh's size included, before any work
-        var result = Run(panel, mesh, caseIds, options, sourcePath);
+        var result = Run(panel, mesh, caseIds, options, sourcePath, combinations);
         if (panel.Mesh.Refinements < 2) return result;
         var study = PanelConvergence.Study(panel, panel.Mesh.Refinements, options);
         return new PanelResult
@@ -50,7 +51,7 @@ public static class PanelAnalysis
     }
 
     /// <summary>Solves the panel on a given mesh (from <see cref="PanelMesher.Mesh"/>).</summary>
-    public static PanelResult Run(WallPanel panel, PanelMesh pm, IReadOnlyList<string> caseIds, AnalysisOptions? options = null, string sourcePath = "<panel>")
+    public static PanelResult Run(WallPanel panel, PanelMesh pm, IReadOnlyList<string> caseIds, AnalysisOptions? options = null, string sourcePath = "<panel>", IReadOnlyList<Combination>? combinations = null)
     {
         var mesh = pm.Mesh;
         var problem = new PlaneStressProblem
@@ -79,12 +80,17 @@ public static class PanelAnalysis
         if (!panel.FloorTies)
             cases.Add(new PlaneLoadCase { Id = "unit top force", EdgeLoads = Spread(pm, pm.Levels.Length - 1, 1, 0) });
 
-        var r = PlaneStressAnalysis.Run(problem, cases, options);
+        var combos = (combinations ?? []).Select(c => (c.Id, (IReadOnlyList<(int, double)>)c.Factors)).ToArray();
+        var r = PlaneStressAnalysis.Run(problem, cases, options, combos);
+        // Results in model order: the cases, then the combinations; without ties the unit-force case (solved after the
+        // model's cases) is taken out.
+        int nc = caseIds.Count;
+        var kept = panel.FloorTies ? r.Cases : [.. r.Cases.Take(nc), .. r.Cases.Skip(nc + 1)];
         // With a tie every node of the level has the same ux (shared equation); without, the level's mean.
         double Level(PlaneCaseResult c, int level) => panel.FloorTies ? c.Ux[pm.LevelNodes[level][0]] : pm.LevelNodes[level].Average(i => c.Ux[i]);
-        var levelDisp = Enumerable.Range(0, caseIds.Count).Select(c => Enumerable.Range(0, pm.Levels.Length).Select(l => Level(r.Cases[c], l)).ToArray()).ToArray();
-        double flex = panel.FloorTies ? r.TieFlexibility[^1] : Level(r.Cases[^1], pm.Levels.Length - 1);
-        var analysis = panel.FloorTies ? r : new PlaneAnalysisResult { Dofs = r.Dofs, Solve = r.Solve, Cases = r.Cases.Take(caseIds.Count).ToArray(), TieFlexibility = r.TieFlexibility };
+        var levelDisp = kept.Select(c => Enumerable.Range(0, pm.Levels.Length).Select(l => Level(c, l)).ToArray()).ToArray();
+        double flex = panel.FloorTies ? r.TieFlexibility[^1] : Level(r.Cases[nc], pm.Levels.Length - 1);
+        var analysis = panel.FloorTies ? r : new PlaneAnalysisResult { Dofs = r.Dofs, Solve = r.Solve, Cases = kept, TieFlexibility = r.TieFlexibility };
         return new PanelResult { Panel = panel, Mesh = pm, Analysis = analysis, TopStiffness = 1 / flex, LevelDisplacements = levelDisp };
     }
 

@@ -85,7 +85,10 @@ public sealed class PlaneAnalysisResult
 public static class PlaneStressAnalysis
 {
     /// <exception cref="UnstableModelException">The mesh is not held against rigid-body motion.</exception>
-    public static PlaneAnalysisResult Run(PlaneStressProblem p, IReadOnlyList<PlaneLoadCase> cases, AnalysisOptions? options = null)
+    /// <param name="combinations">Factored sums of the cases (index into <paramref name="cases"/>, factor), solved by superposition
+    /// and checked like the cases; their results follow the cases'.</param>
+    public static PlaneAnalysisResult Run(PlaneStressProblem p, IReadOnlyList<PlaneLoadCase> cases, AnalysisOptions? options = null,
+        IReadOnlyList<(string Id, IReadOnlyList<(int Case, double Factor)> Factors)>? combinations = null)
     {
         options ??= new AnalysisOptions();
         var solver = options.Solver ?? DefaultSolver.Create();
@@ -132,7 +135,27 @@ public static class PlaneStressAnalysis
         double kNorm = InfinityNorm(k);
 
         var results = new List<PlaneCaseResult>();
-        foreach (var c in cases) results.Add(SolveCase(p, dofs, ke, eqs, k, kNorm, factor, c));
+        var loads = cases.Select(c => Loads(p, dofs, ke, eqs, c)).ToArray();
+        var solutions = new double[cases.Count][];
+        for (int i = 0; i < cases.Count; i++)
+        {
+            solutions[i] = new double[dofs.FreeCount];
+            factor.Solve(loads[i].F, solutions[i]);
+            results.Add(Recover(p, dofs, ke, k, kNorm, cases[i].Id, solutions[i], loads[i].F, loads[i].Fext, loads[i].Prescribed));
+        }
+        foreach (var (id, factors) in combinations ?? [])
+        {
+            var u = new double[dofs.FreeCount];
+            var f = new double[dofs.FreeCount];
+            var fext = new double[2 * n];
+            var pre = new double[2 * n];
+            foreach (var (ci, fac) in factors)
+            {
+                for (int j = 0; j < u.Length; j++) { u[j] += fac * solutions[ci][j]; f[j] += fac * loads[ci].F[j]; }
+                for (int j = 0; j < 2 * n; j++) { fext[j] += fac * loads[ci].Fext[j]; pre[j] += fac * loads[ci].Prescribed[j]; }
+            }
+            results.Add(Recover(p, dofs, ke, k, kNorm, id, u, f, fext, pre));
+        }
 
         var flex = new double[p.HorizontalTies.Count];
         for (int t = 0; t < flex.Length; t++)
@@ -153,7 +176,8 @@ public static class PlaneStressAnalysis
         };
     }
 
-    private static PlaneCaseResult SolveCase(PlaneStressProblem p, DofMap dofs, double[][,] ke, int[][] eqs, SymmetricSparseMatrix k, double kNorm, ISparseSpdFactor factor, PlaneLoadCase c)
+    /// <summary>External nodal forces as applied, prescribed values, and the right-hand side over the unknowns.</summary>
+    private static (double[] Fext, double[] Prescribed, double[] F) Loads(PlaneStressProblem p, DofMap dofs, double[][,] ke, int[][] eqs, PlaneLoadCase c)
     {
         var mesh = p.Mesh;
         int n = mesh.NodeCount, nn = mesh.Element.NodeCount;
@@ -191,9 +215,14 @@ public static class PlaneStressAnalysis
                 for (int a = 0; a < 2 * nn; a++) if (eqs[e][a] >= 0) f[eqs[e][a]] -= ke[e][a, b] * v;
             }
 
-        var u = new double[dofs.FreeCount];
-        factor.Solve(f, u);
+        return (fext, prescribed, f);
+    }
 
+    private static PlaneCaseResult Recover(PlaneStressProblem p, DofMap dofs, double[][,] ke, SymmetricSparseMatrix k, double kNorm,
+        string id, double[] u, double[] f, double[] fext, double[] prescribed)
+    {
+        var mesh = p.Mesh;
+        int n = mesh.NodeCount, nn = mesh.Element.NodeCount;
         var ku = new double[u.Length];
         k.Multiply(u, ku);
         double rr = 0, ff = 0, rInf = 0, uInf = 0, fInf = 0;
@@ -255,7 +284,7 @@ public static class PlaneStressAnalysis
         double denominator = kNorm * uInf + fInf;
         return new PlaneCaseResult
         {
-            Id = c.Id,
+            Id = id,
             Ux = ux,
             Uy = uy,
             NodalStress = stress,

@@ -57,6 +57,30 @@ public class PanelInputTests
         Assert.DoesNotContain(ResultFiles.Render(Solve(Cantilever(144, 100, new { id = "S", shape = "rectangle", b = 12, d = 120 }, new { id = "MAT", E = 3605, nu = 0.2 }))), f => f.Name.StartsWith("panel"));
     }
 
+    [Fact]
+    public void CombinationsAreSuperposedAndChecked()
+    {
+        // Linearity (derived): the combination 1.2·A + 0.5·B moves every level by 1.2·u_A + 0.5·u_B, and its stresses
+        // and equilibrium follow; the combination's residual is checked on its own like a case.
+        var model = new
+        {
+            formatVersion = 1, title = "combo", units = new { force = "kN", length = "m" },
+            materials = new[] { new { id = "C", E = 25e6, nu = 0.2 } }, sections = Array.Empty<object>(),
+            loadCases = new[] { new { id = "A" }, new { id = "B" } },
+            combinations = new[] { new { id = "U", factors = new Dictionary<string, double> { ["A"] = 1.2, ["B"] = 0.5 } } },
+            panels = new[] { Wall(levels: [1.5], forces: [new { @case = "A", level = "top", fx = 100.0 }, new { @case = "B", level = 1.5, fx = -30.0 }]) },
+        };
+        var r = Solve(model);
+        var p = r.Panels[0];
+        Assert.Equal(["A", "B", "U"], p.Analysis.Cases.Select(c => c.Id));
+        PlaneTestSupport.AssertChecks(p.Analysis);
+        for (int l = 0; l < 2; l++)
+            Near(1.2 * p.LevelDisplacements[0][l] + 0.5 * p.LevelDisplacements[1][l], p.LevelDisplacements[2][l], 1e-12, $"level {l}");
+        Near(1.2 * 100e3 - 0.5 * 30e3, p.Analysis.Cases[2].Equilibrium.AppliedFx, 1e-12, "combined story force");
+        int node = p.Mesh.BaseNodes[0];
+        Near(1.2 * p.Analysis.Cases[0].NodalStress[node, 1] + 0.5 * p.Analysis.Cases[1].NodalStress[node, 1], p.Analysis.Cases[2].NodalStress[node, 1], 1e-10, "σy at a base corner");
+    }
+
     [Theory]
     [InlineData("overlap", "$.panels[0].openings[1]", "overlap or touch")]
     [InlineData("outside", "$.panels[0].openings[0]", "reaches or passes the ends")]
