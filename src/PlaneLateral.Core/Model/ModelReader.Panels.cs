@@ -1,5 +1,4 @@
 using Newtonsoft.Json.Linq;
-using PlaneLateral.Meshing;
 using PlaneLateral.Units;
 
 namespace PlaneLateral.Model;
@@ -100,7 +99,7 @@ public static partial class ModelReader
                     Openings = openings, FloorLevels = levels, FloorTies = ties, Mesh = mesh, Loads = loads,
                 };
                 // Geometry and mesh problems, each at its own key, before any work.
-                foreach (var q in PanelMesher.Check(panel))
+                foreach (var q in PanelLayout.Check(panel))
                     sink.Add(o.SelectToken(q.Key) ?? o, $"panel \"{id}\": {q.Problem}", q.Fix);
                 list.Add(panel);
             }
