@@ -51,6 +51,22 @@ public class PlaneElementTests(ITestOutputHelper output)
         }
     }
 
+    [Fact]
+    public void WithoutTaylorsCorrectionTheDistortedPatchTestFails()
+    {
+        // Wilson's Q6 with the local Jacobian in the incompatible modes violates ∫ B_α dA = 0 on non-parallelogram
+        // shapes, so it cannot reproduce constant stress there (Taylor, Beresford & Wilson 1976, §2): the patch test
+        // above has teeth. Same patch, same boundary displacements.
+        var mesh = StructuredMesh.FromCorners(IncompatibleQuad4.Uncorrected, PatchX, PatchY, PatchQuads);
+        var boundary = new[] { 0, 1, 2, 3 };
+        var problem = new PlaneStressProblem { Mesh = mesh, Material = new PlaneStressMaterial(1e6, 0.25, 0.001), Restraints = boundary.SelectMany(i => new[] { (i, Dof.X), (i, Dof.Y) }).ToList() };
+        var load = new PlaneLoadCase { Id = "patch", Prescribed = boundary.SelectMany(i => new[] { (i, Dof.X, 1e-3 * (mesh.X[i] + mesh.Y[i] / 2)), (i, Dof.Y, 1e-3 * (mesh.Y[i] + mesh.X[i] / 2)) }).ToList() };
+        var c = PlaneStressAnalysis.Run(problem, [load]).Cases[0];
+        double worst = c.GaussStress.SelectMany(g => g).Max(pt => Math.Abs(pt.Sx - 1e6 / 0.75 * 1e-3) / (1e6 / 0.75 * 1e-3));
+        output.WriteLine($"Q6 without correction: worst Gauss σx error {worst:E2}");
+        Assert.True(worst > 1e-3, $"worst relative σx error {worst:E2}");
+    }
+
     [Theory]
     [InlineData("QM6")]
     [InlineData("Q9")]

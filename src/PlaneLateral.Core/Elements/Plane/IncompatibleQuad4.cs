@@ -11,9 +11,19 @@ namespace PlaneLateral.Elements.Plane;
 /// </summary>
 public sealed class IncompatibleQuad4 : IPlaneElement
 {
-    public static IncompatibleQuad4 Instance { get; } = new();
+    public static IncompatibleQuad4 Instance { get; } = new(true);
 
-    public string Name => "4-node incompatible-mode quadrilateral (QM6, Taylor et al. 1976), 2x2 Gauss";
+    /// <summary>
+    /// Wilson's element without Taylor's correction (Q6: internal-mode derivatives with the local Jacobian). It fails the
+    /// patch test on non-parallelogram shapes; kept only so the tests can show that the patch test detects this.
+    /// </summary>
+    internal static IncompatibleQuad4 Uncorrected { get; } = new(false);
+
+    private readonly bool _taylor;
+
+    private IncompatibleQuad4(bool taylorCorrection) => _taylor = taylorCorrection;
+
+    public string Name => _taylor ? "4-node incompatible-mode quadrilateral (QM6, Taylor et al. 1976), 2x2 Gauss" : "4-node incompatible-mode quadrilateral without Taylor's correction (Q6)";
     public int NodeCount => 4;
     public int EdgeNodeCount => 2;
 
@@ -23,7 +33,7 @@ public sealed class IncompatibleQuad4 : IPlaneElement
     public int[] EdgeNodes(int edge) => (int[])Edges[edge].Clone();
 
     /// <summary>The 3×8 compatible and 3×4 internal strain matrices at (ξ, η), and det J.</summary>
-    private static (double[,] B, double[,] Bi, double Det) Matrices(ReadOnlySpan<double> x, ReadOnlySpan<double> y, double xi, double eta)
+    private (double[,] B, double[,] Bi, double Det) Matrices(ReadOnlySpan<double> x, ReadOnlySpan<double> y, double xi, double eta)
     {
         Span<double> dxi = stackalloc double[4], deta = stackalloc double[4];
         double j00 = 0, j01 = 0, j10 = 0, j11 = 0, c00 = 0, c01 = 0, c10 = 0, c11 = 0;
@@ -45,6 +55,7 @@ public sealed class IncompatibleQuad4 : IPlaneElement
         }
         var (k00, k01, k10, k11, det0) = PlaneMath.Invert2(c00, c01, c10, c11);
         double s = det0 / det;
+        if (!_taylor) (k00, k01, k10, k11, s) = (i00, i01, i10, i11, 1.0);
         // P1 = 1 − ξ², P2 = 1 − η²: ∂P1/∂ξ = −2ξ, ∂P2/∂η = −2η, mapped with J₀⁻¹ and scaled by det J₀/det J (Taylor et al. 1976).
         double p1x = s * k00 * (-2 * xi), p1y = s * k10 * (-2 * xi);
         double p2x = s * k01 * (-2 * eta), p2y = s * k11 * (-2 * eta);
@@ -54,7 +65,7 @@ public sealed class IncompatibleQuad4 : IPlaneElement
         return (b, bi, det);
     }
 
-    private static (double[,] Kcc, double[,] Kic, double[,] Kii) Blocks(ReadOnlySpan<double> x, ReadOnlySpan<double> y, PlaneStressMaterial m)
+    private (double[,] Kcc, double[,] Kic, double[,] Kii) Blocks(ReadOnlySpan<double> x, ReadOnlySpan<double> y, PlaneStressMaterial m)
     {
         var d = m.D();
         var kcc = new double[8, 8];
@@ -91,7 +102,7 @@ public sealed class IncompatibleQuad4 : IPlaneElement
     }
 
     /// <summary>The condensed internal parameters α = −Kii⁻¹·Kic·ue recovered for element displacements ue.</summary>
-    private static double[] Internal(ReadOnlySpan<double> x, ReadOnlySpan<double> y, PlaneStressMaterial m, ReadOnlySpan<double> ue)
+    private double[] Internal(ReadOnlySpan<double> x, ReadOnlySpan<double> y, PlaneStressMaterial m, ReadOnlySpan<double> ue)
     {
         var (_, kic, kii) = Blocks(x, y, m);
         var rhs = new double[4, 1];
@@ -105,7 +116,7 @@ public sealed class IncompatibleQuad4 : IPlaneElement
         return [a[0, 0], a[1, 0], a[2, 0], a[3, 0]];
     }
 
-    private static PlaneStressPoint StressAt(ReadOnlySpan<double> x, ReadOnlySpan<double> y, double[,] d, ReadOnlySpan<double> ue, double[] alpha, double xi, double eta)
+    private PlaneStressPoint StressAt(ReadOnlySpan<double> x, ReadOnlySpan<double> y, double[,] d, ReadOnlySpan<double> ue, double[] alpha, double xi, double eta)
     {
         var (b, bi, _) = Matrices(x, y, xi, eta);
         double ex = 0, ey = 0, g = 0;
