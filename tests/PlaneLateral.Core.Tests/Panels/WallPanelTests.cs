@@ -76,7 +76,7 @@ public class WallPanelTests(ITestOutputHelper output)
         // Equation sharing is an exact constraint (no penalty): every node of a level has bit-for-bit the same ux,
         // and the tie carries the whole story force (global equilibrium holds to the solve's round-off).
         var loads = new[] { new PanelLoad(0, 3, 100e3, 0, PanelLoadPath.Tie), new PanelLoad(0, 6, 200e3, -50e3, PanelLoadPath.Tie) };
-        var r = PanelAnalysis.Run(Panel(5, 6, levels: [3], loads: loads, openings: [new PanelOpening("D", 1, 0, 1, 2.2)]), ["wind"]);
+        var r = PanelAnalysis.Run(Panel(5, 6, new PanelMeshSettings(PanelElementKind.Quad9, 0, 1), levels: [3], loads: loads, openings: [new PanelOpening("D", 1, 0, 1, 2.2)]), ["wind"]);
         AssertChecks(r.Analysis);
         var c = r.Analysis.Cases[0];
         for (int l = 0; l < 2; l++)
@@ -131,6 +131,21 @@ public class WallPanelTests(ITestOutputHelper output)
         Near(1e5, spread.Analysis.Cases[0].Equilibrium.AppliedFx, 1e-12, "spread total");
         Assert.True(tied.TopDisplacement(0) <= spread.TopDisplacement(0));
         Assert.Single(spread.Analysis.Cases);
+    }
+
+    [Fact]
+    public void ASpreadLoadOnALevelOverADoorCoversTheWholeSolidLength()
+    {
+        // The floor at the door head (2.2 m) has solid wall above the door but a void below it: the spread load must
+        // still act along the full 5 m (edges taken from the elements above where none lie below), so the applied
+        // total equals the force given (derived) and its line of action is the wall's centre line x = 10 + 2.5 m.
+        var loads = new[] { new PanelLoad(0, 2.2, 0, -100e3, PanelLoadPath.Spread) };
+        var p = Panel(5, 4, new PanelMeshSettings(PanelElementKind.Quad4, 0, 2), levels: [2.2], loads: loads, openings: [new PanelOpening("D", 1, 0, 1, 2.2)]);
+        var r = PanelAnalysis.Run(p, ["gravity"]);
+        AssertChecks(r.Analysis);
+        var q = r.Analysis.Cases[0].Equilibrium;
+        Near(-100e3, q.AppliedFy, 1e-12, "total");
+        Near(12.5 * -100e3, q.AppliedMz, 1e-12, "moment about the origin: x̄ = 12.5 m");
     }
 
     [Fact]
