@@ -42,7 +42,7 @@ public static class PanelAnalysis
         var mesh = PanelMesher.Mesh(panel);   // checks every problem, the finest study mesh's size included, before any work
         var result = Run(panel, mesh, caseIds, options, sourcePath, combinations);
         if (panel.Mesh.Refinements < 2) return result;
-        var study = PanelConvergence.Study(panel, panel.Mesh.Refinements, options);
+        var study = PanelConvergence.Study(panel, panel.Mesh.Refinements, options, result);
         return new PanelResult
         {
             Panel = result.Panel, Mesh = result.Mesh, Analysis = result.Analysis, TopStiffness = result.TopStiffness,

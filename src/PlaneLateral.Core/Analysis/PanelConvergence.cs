@@ -22,7 +22,8 @@ public sealed record PanelConvergenceResult(double[] ElementSizes, double[] Stif
 public static class PanelConvergence
 {
     /// <summary>Solves the panel on <paramref name="meshes"/> nested meshes (≥ 2) for its top stiffness and extrapolates.</summary>
-    public static PanelConvergenceResult Study(WallPanel panel, int meshes, AnalysisOptions? options = null)
+    /// <param name="baseMesh">The panel already solved on the base mesh (its stiffness is reused), or null.</param>
+    public static PanelConvergenceResult Study(WallPanel panel, int meshes, AnalysisOptions? options = null, PanelResult? baseMesh = null)
     {
         ArgumentOutOfRangeException.ThrowIfLessThan(meshes, 2);
         var sizes = new double[meshes];
@@ -30,6 +31,11 @@ public static class PanelConvergence
         var unknowns = new int[meshes];
         for (int i = 0; i < meshes; i++)
         {
+            if (i == 0 && baseMesh is not null)
+            {
+                (sizes[0], k[0], unknowns[0]) = (baseMesh.Mesh.ElementSize, baseMesh.TopStiffness, baseMesh.Analysis.Solve.Unknowns);
+                continue;
+            }
             var pm = PanelMesher.Mesh(panel, i);
             var r = PanelAnalysis.Run(panel with { Loads = [] }, pm, [], options);
             sizes[i] = pm.ElementSize;
