@@ -96,12 +96,12 @@ public static partial class ModelReader
 
             var materials = ReadMaterials(f.Objects("materials", true, "add \"materials\": [ {\"id\": \"...\", \"E\": ..., \"nu\": ...} ]"));
             var sections = ReadSections(f.Objects("sections", true, "add \"sections\": [ {\"id\": \"...\", \"shape\": \"rectangle\", \"b\": ..., \"d\": ...} ]"));
-            bool panelsOnly = HasPanels(root); // a model of wall panels alone needs no nodes, members or supports (ModelReader.Panels.cs)
-            var nodes = ReadNodes(f.Objects("nodes", !panelsOnly, "add \"nodes\": [ {\"id\": \"...\", \"x\": ..., \"y\": ...} ]"));
-            var members = ReadMembers(f.Objects("members", !panelsOnly, "add \"members\": [ {\"id\": \"...\", \"start\": \"...\", \"end\": \"...\", \"section\": \"...\", \"material\": \"...\"} ]"), nodes);
-            var supportsArr = f.Objects("supports", !panelsOnly, "add \"supports\": [ {\"node\": \"...\", \"type\": \"fixed\"} ]");
+            bool hasPanels = HasPanels(root); // with wall panels a model no nodes, members or supports (ModelReader.Panels.cs)
+            var nodes = ReadNodes(f.Objects("nodes", !hasPanels, "add \"nodes\": [ {\"id\": \"...\", \"x\": ..., \"y\": ...} ]"));
+            var members = ReadMembers(f.Objects("members", !hasPanels, "add \"members\": [ {\"id\": \"...\", \"start\": \"...\", \"end\": \"...\", \"section\": \"...\", \"material\": \"...\"} ]"), nodes);
+            var supportsArr = f.Objects("supports", !hasPanels, "add \"supports\": [ {\"node\": \"...\", \"type\": \"fixed\"} ]");
             var supports = ReadSupports(supportsArr);
-            if (f.Token("supports") is JArray { Count: 0 } emptySupports && !panelsOnly)
+            if (f.Token("supports") is JArray { Count: 0 } emptySupports && !hasPanels)
                 sink.Add(emptySupports, "the model has no supports, so it is free to move as a rigid body", "add at least one support, e.g. {\"node\": \"<base node>\", \"type\": \"fixed\"}");
             var cases = ReadLoadCases(f.Objects("loadCases", false, "give \"loadCases\" as an array of objects"), members);
             var combos = ReadCombinations(f.Objects("combinations", false, "give \"combinations\" as an array of objects"), cases);
