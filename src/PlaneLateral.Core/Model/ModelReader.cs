@@ -96,7 +96,7 @@ public static partial class ModelReader
 
             var materials = ReadMaterials(f.Objects("materials", true, "add \"materials\": [ {\"id\": \"...\", \"E\": ..., \"nu\": ...} ]"));
             var sections = ReadSections(f.Objects("sections", true, "add \"sections\": [ {\"id\": \"...\", \"shape\": \"rectangle\", \"b\": ..., \"d\": ...} ]"));
-            bool hasPanels = HasPanels(root); // with wall panels a model no nodes, members or supports (ModelReader.Panels.cs)
+            bool hasPanels = HasPanels(root); // a model with wall panels may have no nodes, members or supports (ModelReader.Panels.cs)
             var nodes = ReadNodes(f.Objects("nodes", !hasPanels, "add \"nodes\": [ {\"id\": \"...\", \"x\": ..., \"y\": ...} ]"));
             var members = ReadMembers(f.Objects("members", !hasPanels, "add \"members\": [ {\"id\": \"...\", \"start\": \"...\", \"end\": \"...\", \"section\": \"...\", \"material\": \"...\"} ]"), nodes);
             var supportsArr = f.Objects("supports", !hasPanels, "add \"supports\": [ {\"node\": \"...\", \"type\": \"fixed\"} ]");
