@@ -90,6 +90,7 @@ public static class LinearStaticAnalysis
             Cases = cases,
             Stiffness = stiffness,
             Notes = Notes(model, dofs),
+            Panels = model.Panels.Select(p => PanelAnalysis.Run(p, model.LoadCases.Select(c => c.Id).ToArray(), options, model.SourcePath, model.Combinations)).ToArray(),
         };
     }
 

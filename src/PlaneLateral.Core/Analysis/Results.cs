@@ -18,6 +18,9 @@ public sealed class AnalysisResult
     /// <summary>Plain-sentence notes about the model (e.g. rotations held because nothing stiffens them).</summary>
     public required IReadOnlyList<string> Notes { get; init; }
 
+    /// <summary>Wall panels solved as plane-stress continua, in model order (none for a frame-only model).</summary>
+    public IReadOnlyList<PanelResult> Panels { get; init; } = [];
+
     public CaseResult Case(string id) => Cases.First(c => c.Id == id);
 }
 

@@ -21,7 +21,7 @@ public enum DofState
 /// Numbering of the model's nodal DOFs (3 per node: ux, uy, rz) into equations. Built once, then immutable.
 /// Note: equation numbers are not node numbers; use <see cref="Equation"/> and <see cref="DofOf"/> to go between them.
 /// </summary>
-public sealed class DofMap
+public sealed partial class DofMap
 {
     private readonly int[] _equation;   // node*3+dof → equation or −1
     private readonly DofState[] _state;

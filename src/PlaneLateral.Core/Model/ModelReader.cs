@@ -99,21 +99,23 @@ public static partial class ModelReader
 
             var materials = ReadMaterials(f.Objects("materials", true, "add \"materials\": [ {\"id\": \"...\", \"E\": ..., \"nu\": ...} ]"));
             var sections = ReadSections(f.Objects("sections", true, "add \"sections\": [ {\"id\": \"...\", \"shape\": \"rectangle\", \"b\": ..., \"d\": ...} ]"));
-            var nodes = ReadNodes(f.Objects("nodes", true, "add \"nodes\": [ {\"id\": \"...\", \"x\": ..., \"y\": ...} ]"));
-            var members = ReadMembers(f.Objects("members", true, "add \"members\": [ {\"id\": \"...\", \"start\": \"...\", \"end\": \"...\", \"section\": \"...\", \"material\": \"...\"} ]"), nodes);
-            var supportsArr = f.Objects("supports", true, "add \"supports\": [ {\"node\": \"...\", \"type\": \"fixed\"} ]");
+            bool hasPanels = HasPanels(root); // a model with wall panels may have no nodes, members or supports (ModelReader.Panels.cs)
+            var nodes = ReadNodes(f.Objects("nodes", !hasPanels, "add \"nodes\": [ {\"id\": \"...\", \"x\": ..., \"y\": ...} ]"));
+            var members = ReadMembers(f.Objects("members", !hasPanels, "add \"members\": [ {\"id\": \"...\", \"start\": \"...\", \"end\": \"...\", \"section\": \"...\", \"material\": \"...\"} ]"), nodes);
+            var supportsArr = f.Objects("supports", !hasPanels, "add \"supports\": [ {\"node\": \"...\", \"type\": \"fixed\"} ]");
             var supports = ReadSupports(supportsArr);
-            if (f.Token("supports") is JArray { Count: 0 } emptySupports)
+            if (f.Token("supports") is JArray { Count: 0 } emptySupports && !hasPanels)
                 sink.Add(emptySupports, "the model has no supports, so it is free to move as a rigid body", "add at least one support, e.g. {\"node\": \"<base node>\", \"type\": \"fixed\"}");
             var cases = ReadLoadCases(f.Objects("loadCases", false, "give \"loadCases\" as an array of objects"), members);
             var combos = ReadCombinations(f.Objects("combinations", false, "give \"combinations\" as an array of objects"), cases);
             var points = ReadStiffnessPoints(f.Objects("stiffnessAt", false, "give \"stiffnessAt\" as an array of {\"node\": \"...\", \"direction\": \"x\"}"), supports);
             var building = ReadBuilding(f, root, nodes, members, supports, cases, combos);
             var comparisons = ReadComparisons(f.Objects("comparisons", false, "give \"comparisons\" as an array of checks, e.g. [{\"id\": \"...\", \"kind\": \"wall-line\", \"members\": [...]}] (docs/comparisons.md)"), members, supports, cases);
+            var panels = ReadPanels(f.Objects("panels", false, "give \"panels\" as an array of objects"), materials);
             f.RejectUnknownKeys();
 
             CheckConnectivity(nodes, members);
-            if (cases.Count == 0 && points.Count == 0)
+            if (cases.Count == 0 && points.Count == 0 && panels.Count == 0)
                 sink.Add(root, "the model has neither load cases nor stiffness points, so there is nothing to solve",
                     "add \"loadCases\" (e.g. a lateral load at the roof) or \"stiffnessAt\": [{\"node\": \"<roof node>\", \"direction\": \"x\"}]");
 
@@ -133,6 +135,7 @@ public static partial class ModelReader
                 StiffnessPoints = points,
                 Building = building,
                 Comparisons = comparisons,
+                Panels = panels,
             };
         }
 

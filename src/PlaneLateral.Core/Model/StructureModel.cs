@@ -25,6 +25,8 @@ public sealed class StructureModel
     public BuildingData Building { get; init; } = BuildingData.Empty;
     /// <summary>Hand-method checks the engineer declared under "comparisons" (docs/comparisons.md); empty when none.</summary>
     public IReadOnlyList<ComparisonCheck> Comparisons { get; init; } = [];
+    /// <summary>Wall panels analysed as plane-stress continua (see docs/panels.md); none by default.</summary>
+    public IReadOnlyList<WallPanel> Panels { get; init; } = [];
 
     /// <summary>Index of the node with the given id, or −1.</summary>
     public int NodeIndex(string id)
