@@ -19,7 +19,7 @@ internal static class SolveReport
         sb.Append($"File      {modelPath}\n");
         sb.Append($"Units     force {force}, length {len}\n");
         sb.Append($"Size      {m.Nodes.Count} nodes, {m.Members.Count} members, {m.Supports.Count} supports, {m.LoadCases.Count} load cases, {m.Combinations.Count} combinations\n");
-        sb.Append($"Solver    {r.Solve.Solver}; {r.Solve.Unknowns} unknowns, {r.Solve.FactorNonZeros} entries in the factor, {r.Solve.RightHandSides} right-hand sides on one factorisation\n");
+        if (m.Members.Count > 0) sb.Append($"Solver    {r.Solve.Solver}; {r.Solve.Unknowns} unknowns, {r.Solve.FactorNonZeros} entries in the factor, {r.Solve.RightHandSides} right-hand sides on one factorisation\n");
         foreach (var note in r.Notes) sb.Append($"Note      {note}\n");
 
         if (r.Stiffness.Count > 0)
@@ -31,7 +31,7 @@ internal static class SolveReport
             sb.Append(t.Render());
         }
 
-        if (r.Cases.Count > 0)
+        if (r.Cases.Count > 0 && m.Members.Count > 0)
         {
             sb.Append("\nLoad cases and combinations\n");
             var t = new TextTable("case", "kind", $"max |ux| [{len}]", "at", $"max |uy| [{len}]", "at", $"ΣFx applied [{force}]", $"ΣFx reactions [{force}]", "imbalance", "backward error")
@@ -50,6 +50,7 @@ internal static class SolveReport
             sb.Append("  imbalance: largest relative out-of-balance of ΣF and ΣM (reactions against applied loads); backward error: ‖K·u − f‖ / (‖K‖·‖u‖ + ‖f‖).\n");
         }
         sb.Append(BuildingReport.Render(r));
+        sb.Append(PanelReport.Render(r));
         sb.Append($"\nCaution: {ResultFiles.Caution}\n");
         return sb.ToString();
     }
