@@ -107,15 +107,17 @@ internal static class CompareReport
     {
         var sb = new StringBuilder();
         sb.Append($"Hand methods beside the FE model (default tolerance ±{Pct(r.DefaultTolerance)}; ratio = FE/hand)\n");
-        var t = new TextTable("check", "subject", "hand method", "unit", "hand", "FE", "FE/hand", "flex/shear (hand)", "h/l", "verdict", "cause").Numeric(4, 5, 6, 8);
+        var t = new TextTable("check", "subject", "hand method", "unit", "hand", "FE", "FE/hand", "panel FE", "panel/hand", "flex/shear (hand)", "h/l", "verdict", "cause").Numeric(4, 5, 6, 7, 8, 10);
         int n = 0;
         var notes = new List<string>();
         foreach (var row in r.Rows)
         {
             n++;
             string shares = row.Hand.FlexuralShare is double fl && row.Hand.ShearShare is double sh ? $"{Pct(fl)} / {Pct(sh)}" : "-";
+            var panel = row.Fe.FirstOrDefault(f => f.Model == "plane-stress panel");
             t.Add(row.CheckId, row.Subject, Short(row.Hand.Method.Name), row.Unit, TextTable.Num(row.Hand.Value), TextTable.Num(row.Reference.Value),
-                row.Ratio.ToString("0.000", CultureInfo.InvariantCulture), shares,
+                row.Ratio.ToString("0.000", CultureInfo.InvariantCulture),
+                panel is null ? "-" : TextTable.Num(panel.Value), panel is null ? "-" : (panel.Value / row.Hand.Value).ToString("0.000", CultureInfo.InvariantCulture), shares,
                 row.AspectRatio is double a ? a.ToString("0.00", CultureInfo.InvariantCulture) : "-",
                 row.Tolerance == r.DefaultTolerance ? row.VerdictText : $"{row.VerdictText} (±{Pct(row.Tolerance)})", $"[{n}]");
             notes.Add($"  [{n}] {row.Cause}");

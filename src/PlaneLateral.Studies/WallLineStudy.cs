@@ -1,3 +1,4 @@
+using PlaneLateral.Units;
 using PlaneLateral.Hand;
 using PlaneLateral.Model;
 
@@ -32,11 +33,25 @@ internal static class WallLineStudy
             var feEstimate = new FeEstimate("line members, isolated", ComparisonStudy.Stiffness(u, fe),
                 $"the check's {c.Members.Count} Timoshenko member(s) alone, base fixed, {top}, unit lateral force at the top node; stiffness 1/Δ; shares from a second solve without shear deformation",
                 flexShare, 1 - flexShare);
+            var estimates = new List<FeEstimate> { feEstimate };
+            double thickness = double.IsFinite(depth) && depth > 0 ? m0.A / m0.Modifiers.A / depth : double.NaN;
+            string panelNote = "";
+            if (ends == CheckEnds.Cantilever && double.IsFinite(thickness))
+            {
+                if (m0.Modifiers != StiffnessModifiers.None)
+                    panelNote = PanelEstimate.Verdict(double.NaN, tol, "not modelled, because the wall's members carry stiffness modifiers (cracked-section I) that a continuum of the gross section cannot represent");
+                else
+                {
+                    var (panel, skipped) = PanelEstimate.Cantilever(u, c.Id, depth, h, thickness, m0.E, m0.E / (2 * m0.G) - 1, []);
+                    if (panel is not null) estimates.Add(panel);
+                    panelNote = PanelEstimate.Verdict(panel is null ? double.NaN : u.ToSI(panel.Value, Quantity.TranslationalStiffness) / hand.Stiffness, tol, skipped);
+                }
+            }
             double ratio = fe / hand.Stiffness;
             yield return new ComparisonRow(c.Id, "wall-line", ends == CheckEnds.Cantilever ? "cantilever" : "fixed-fixed",
                 ComparedQuantity.Stiffness, ComparisonStudy.StiffnessUnit(u),
                 new HandEstimate(ComparisonStudy.Stiffness(u, hand.Stiffness), hand.Method.With(Inputs(m0)), hand.FlexuralShare, hand.ShearShare),
-                [feEstimate], aspect, tol, Cause(ratio, tol, aspect, hand.ShearShare));
+                estimates, aspect, tol, Cause(ratio, tol, aspect, hand.ShearShare) + panelNote);
         }
     }
 

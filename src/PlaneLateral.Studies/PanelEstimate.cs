@@ -1,0 +1,73 @@
+using PlaneLateral.Analysis;
+using PlaneLateral.Model;
+using PlaneLateral.Units;
+
+namespace PlaneLateral.Studies;
+
+/// <summary>
+/// The plane-stress continuum estimate of a wall's cantilever stiffness, for the comparison rows: the wall meshed with
+/// 9-node quadrilaterals on three meshes (h, h/2, h/4; one 9-node element across the narrowest strip on the first), base held, top edge tied (a rigid floor: every top node shares
+/// one horizontal displacement), unit force through the tie; the stiffness is Richardson-extrapolated from the mesh
+/// sequence with its estimated discretisation error (docs/panels.md). It shares no assumption with the hand methods
+/// or the line models: no plane sections, no rigid spandrels, no independent piers.
+/// </summary>
+internal static class PanelEstimate
+{
+    public const string ModelName = "plane-stress panel";
+
+    /// <summary>
+    /// The panel estimate, or null with the reason when it does not apply: only cantilever walls are modelled so far, and
+    /// stiffness modifiers on the wall's members (cracked-section I) have no continuum counterpart.
+    /// </summary>
+    public static (FeEstimate? Estimate, string? Skipped) Cantilever(UnitSystem u, string id, double length, double height, double thickness,
+        double e, double nu, IReadOnlyList<OpeningSpec> openings)
+    {
+        PanelResult? r = null;
+        string? problem = null;
+        // Three meshes where the size limit allows, else two, else one (the estimate then says it is not extrapolated).
+        for (int meshes = 3; meshes >= 1 && r is null; meshes--)
+        {
+            var panel = new WallPanel
+            {
+                Id = id, X0 = 0, Y0 = 0, Length = length, Height = height, Thickness = thickness, MaterialId = "",
+                E = e, Nu = nu,
+                Openings = openings.Select(o => new PanelOpening(o.Label, o.X, o.Y, o.Width, o.Height)).ToArray(),
+                FloorTies = true,
+                Mesh = new PanelMeshSettings(PanelElementKind.Quad9, 0, 1, MaxAspect: 4, MaxNodes: 40000, Refinements: meshes),
+            };
+            try
+            {
+                r = PanelAnalysis.Run(panel, []);
+            }
+            catch (ArgumentException ex)
+            {
+                problem = ex.Message;
+            }
+        }
+        if (r is null) return (null, $"no panel estimate: {problem}");
+        var c = r.Convergence;
+        bool extrapolated = c is not null && double.IsFinite(c.Extrapolated) && c.Extrapolated > 0;
+        double k = extrapolated ? c!.Extrapolated : c?.Stiffness[^1] ?? r.TopStiffness;
+        string how = extrapolated
+            ? $"9-node plane-stress quadrilaterals on {c!.Stiffness.Length} meshes (finest {c.Unknowns[^1]} unknowns), base held, top edge tied, unit force through the tie; Richardson-extrapolated (observed order {c.ObservedOrder:0.00}), estimated discretisation error {100 * c.EstimatedError:0.00}%"
+            : $"9-node plane-stress quadrilaterals, finest mesh ({r.Analysis.Dofs.FreeCount} unknowns on the first mesh), base held, top edge tied, unit force through the tie; no extrapolation ({c?.Note ?? "single mesh"})";
+        return (new FeEstimate(ModelName, ComparisonStudy.Stiffness(u, k), how), null);
+    }
+
+    /// <summary>
+    /// What the panel says about the hand value, for the row's cause: the continuum is the reference that shares no
+    /// assumption with the hand method, so its verdict is stated even when the line or frame model agrees.
+    /// </summary>
+    public static string Verdict(double panelOverHand, double tol, string? skipped)
+    {
+        if (skipped is not null) return $"; plane-stress panel: {skipped}";
+        var v = ComparisonRow.Judge(panelOverHand, tol);
+        string words = v switch
+        {
+            Studies.Verdict.WithinTolerance => "within the tolerance of the hand value",
+            Studies.Verdict.HandHigher => "softer than the hand value: by the continuum's measure the hand method is too stiff",
+            _ => "stiffer than the hand value: by the continuum's measure the hand method is too soft",
+        };
+        return $"; plane-stress panel: {panelOverHand:0.000} of the hand value, {words}";
+    }
+}
