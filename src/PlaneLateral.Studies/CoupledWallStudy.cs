@@ -134,7 +134,7 @@ public static class CoupledWallStudy
     }
 
     private static string Smear(CoupledWallCheck c) =>
-        $"the continuous medium smears the {c.Stories} discrete beams (and takes the roof beam's half story as a full one); the gap shrinks as the story count grows";
+        $"the continuous medium smears the {c.Stories} discrete beams over the height; that gap shrinks as the story count grows";
 
     /// <summary>Cause rules for the closed-form stiffness row (docs/comparisons.md).</summary>
     /// <param name="ratio">FE (with shear deformation) / closed form.</param>
@@ -175,7 +175,7 @@ public static class CoupledWallStudy
         if (v == Verdict.WithinTolerance)
             return $"weak coupling: the frame's degree of coupling is {ComparisonStudy.Pct(doc)}, so the piers act nearly as independent cantilevers";
         if (v == Verdict.HandLower)
-            return $"the coupling beams tie the piers: the axial-force couple resists {ComparisonStudy.Pct(doc)} of the overturning moment, which independent cantilevers leave out (flexure only: {ComparisonStudy.Pct(ratioNoShear)})";
+            return $"the coupling beams tie the piers: the axial-force couple resists {ComparisonStudy.Pct(doc)} of the overturning moment, which independent cantilevers leave out (without shear deformation the frame gives {ComparisonStudy.Pct(ratioNoShear)} of the cantilevers' stiffness)";
         return $"shear deformation of the piers, which the flexure-only bound leaves out, outweighs the coupling (without it the frame gives {ComparisonStudy.Pct(ratioNoShear)}); degree of coupling {ComparisonStudy.Pct(doc)}";
     }
 
@@ -186,7 +186,7 @@ public static class CoupledWallStudy
         if (v == Verdict.WithinTolerance)
             return $"beams stiff enough to make the piers act nearly as one section: degree of coupling {ComparisonStudy.Pct(doc)}{(k2 is double k1 ? $" against 1/k² = {ComparisonStudy.Pct(1 / k1)}" : "")}";
         if (v == Verdict.HandHigher)
-            return $"the coupling beams are not rigid: they bend{(ratioNoShear > ratio ? " and shear" : "")}, so plane sections do not hold across the wall; degree of coupling {ComparisonStudy.Pct(doc)}{(k2 is double k2v ? $" (the axial-force couple of a solid section would be 1/k² = {ComparisonStudy.Pct(1 / k2v)})" : "")}; flexure only, the frame gives {ComparisonStudy.Pct(ratioNoShear)}";
+            return $"the coupling beams are not rigid: they bend{(ratioNoShear > ratio ? " and shear" : "")}, so plane sections do not hold across the wall; degree of coupling {ComparisonStudy.Pct(doc)}{(k2 is double k2v ? $" (the axial-force couple of a solid section would be 1/k² = {ComparisonStudy.Pct(1 / k2v)})" : "")}; without shear deformation the frame gives {ComparisonStudy.Pct(ratioNoShear)} of the solid wall's stiffness";
         return $"frame stiffer than the one-section bound, which a frame of these members cannot be unless the loads differ; check the model{limit}";
     }
 
