@@ -73,11 +73,23 @@ public sealed class WideColumnFrame(bool ShearDeformation) : ICoupledWallModel
     /// </summary>
     public const double AxialFactor = 1e4;
 
-    /// <summary>The flexible span of the coupling beam between piers <paramref name="left"/> and left + 1 (m).</summary>
+    /// <summary>
+    /// The rigid arms of the coupling beam between piers <paramref name="left"/> and left + 1, from each pier centroid
+    /// (m): half the pier's length for the clear-span rule; a quarter beam depth less with "clear-plus-half-depth"
+    /// (never below zero).
+    /// </summary>
+    public static (double Start, double End) RigidArms(CoupledWallCheck c, int left)
+    {
+        double a = c.Piers[left].Length / 2, b = c.Piers[left + 1].Length / 2;
+        if (c.BeamSpan == BeamSpanRule.ClearPlusHalfDepth) { a = Math.Max(0, a - c.BeamDepth / 4); b = Math.Max(0, b - c.BeamDepth / 4); }
+        return (a, b);
+    }
+
+    /// <summary>The flexible span b of the coupling beam between piers <paramref name="left"/> and left + 1 (m).</summary>
     public static double BeamSpan(CoupledWallCheck c, int left)
     {
-        double clear = c.Piers[left + 1].X - (c.Piers[left].X + c.Piers[left].Length);
-        return c.BeamSpan == BeamSpanRule.ClearOpening ? clear : Math.Min(clear + c.BeamDepth / 2, c.Piers[left + 1].Centroid - c.Piers[left].Centroid);
+        var (a, b) = RigidArms(c, left);
+        return c.Piers[left + 1].Centroid - c.Piers[left].Centroid - a - b;
     }
 
     /// <summary>The structural model of the frame (SI), with one load case "coupled" holding the load.</summary>
@@ -107,9 +119,7 @@ public sealed class WideColumnFrame(bool ShearDeformation) : ICoupledWallModel
         }
         for (int i = 0; i + 1 < np; i++)
         {
-            double span = BeamSpan(c, i), between = c.Piers[i + 1].Centroid - c.Piers[i].Centroid;
-            double shrink = (c.Piers[i + 1].X - (c.Piers[i].X + c.Piers[i].Length)) - span;   // 0 for the clear span; else d/2, a quarter depth each side
-            double ra = c.Piers[i].Length / 2 + shrink / 2, rb = between - span - ra;
+            var (ra, rb) = RigidArms(c, i);
             double a = c.BeamDepth * c.BeamThickness, ib = c.BeamThickness * Math.Pow(c.BeamDepth, 3) / 12;
             for (int j = 1; j <= ns; j++)
             {
