@@ -43,7 +43,10 @@ public static class ComparisonFiles
         return sb.ToString();
     }
 
-    private static string Quantity(ComparedQuantity q) => q == ComparedQuantity.Stiffness ? "lateral stiffness" : "story shear";
+    private static string Quantity(ComparedQuantity q) => q switch
+    {
+        ComparedQuantity.Stiffness => "lateral stiffness", ComparedQuantity.Fraction => "fraction", ComparedQuantity.Force => "force", _ => "story shear",
+    };
 
     private static string Json(ComparisonReport r, string producedBy)
     {

@@ -20,6 +20,10 @@ public enum ComparedQuantity
     Stiffness,
     /// <summary>Story shear carried by one line, force.</summary>
     StoryShear,
+    /// <summary>A dimensionless share, e.g. a coupled wall's degree of coupling.</summary>
+    Fraction,
+    /// <summary>A force other than a story shear, e.g. a pier's axial force.</summary>
+    Force,
 }
 
 /// <summary>The hand-method side of a row: the number (model units), its method (name, source, assumptions) and, for a pier, the flexural and shear shares of its deflection.</summary>

@@ -34,6 +34,7 @@ public static class ComparisonStudy
                     PerforatedWallCheck p => PerforatedWallStudy.Rows(model, p, tol),
                     FrameStoriesCheck fr => FrameStoryStudy.Rows(model, fr, tol),
                     ShearSplitCheck s => ShearSplitStudy.Rows(model, s, tol, full ??= LinearStaticAnalysis.Run(model)),
+                    CoupledWallCheck cw => CoupledWallStudy.Rows(model, cw, tol),
                     _ => throw new InvalidOperationException($"unknown check type {check.GetType().Name}"),
                 });
             }

@@ -672,7 +672,7 @@ public static partial class ModelReader
 
         // ---- comparisons (docs/comparisons.md) ----
 
-        private static readonly string[] CheckKinds = ["wall-line", "perforated-wall", "frame-stories", "shear-split"];
+        private static readonly string[] CheckKinds = ["wall-line", "perforated-wall", "frame-stories", "shear-split", "coupled-wall"];
 
         private CheckLocation Where(JToken t)
         {
@@ -737,6 +737,7 @@ public static partial class ModelReader
                     "perforated-wall" => ReadPerforatedWall(f, id, desc, tol, at),
                     "frame-stories" => ReadFrameStories(f, id, desc, tol, at, members, supports),
                     "shear-split" => ReadShearSplit(f, id, desc, tol, at, splits),
+                    "coupled-wall" => ReadCoupledWall(f, id, desc, tol, at),
                     null => SkipRest(f),
                     _ => UnknownKind(f, kind),
                 };
@@ -759,7 +760,7 @@ public static partial class ModelReader
 
         private static string KindOf(ComparisonCheck c) => c switch
         {
-            WallLineCheck => "wall-line", PerforatedWallCheck => "perforated-wall", FrameStoriesCheck => "frame-stories", _ => "shear-split",
+            WallLineCheck => "wall-line", PerforatedWallCheck => "perforated-wall", FrameStoriesCheck => "frame-stories", CoupledWallCheck => "coupled-wall", _ => "shear-split",
         };
 
         private ComparisonCheck? UnknownKind(JsonFields f, string kind)

@@ -1,0 +1,92 @@
+using System.CommandLine;
+using System.Globalization;
+using PlaneLateral.Analysis;
+using PlaneLateral.Hand;
+using PlaneLateral.Model;
+using PlaneLateral.Output;
+using PlaneLateral.Studies;
+using PlaneLateral.Units;
+
+namespace PlaneLateral.Cli;
+
+/// <summary>
+/// The "coupling-sweep" command: a coupled-wall check worked out over a range of coupling-beam depths, every model
+/// side by side (closed form, both bounds, wide-column frame with and without shear deformation), written as CSV.
+/// </summary>
+internal static class CouplingSweepCommand
+{
+    public static Command Build(TextWriter stdout, TextWriter stderr)
+    {
+        var modelArg = new Argument<string>("model") { Description = "Model file (JSON) with at least one \"coupled-wall\" check (docs/coupled-walls.md)." };
+        var checkOption = new Option<string?>("--check") { Description = "Id of the coupled-wall check to sweep. Default: the first one." };
+        var depthsOption = new Option<string?>("--depths")
+        {
+            Description = "Beam depths in the model's length unit, comma-separated, each between 0 and the story height. Default: 12 depths from 5% to 90% of the story height.",
+        };
+        var outOption = new Option<string?>("--out", "-o")
+        {
+            Description = "Folder for coupling-sweep.csv (created if missing). Default: planelateral-results/<model name> in the current folder.",
+        };
+        var cmd = new Command("coupling-sweep", "Work out a coupled-wall check over a range of coupling-beam depths and write how the hand methods and the FE models part (coupling-sweep.csv).")
+        {
+            modelArg, checkOption, depthsOption, outOption,
+        };
+        cmd.SetAction(p => Run(p.GetValue(modelArg)!, p.GetValue(checkOption), p.GetValue(depthsOption), p.GetValue(outOption), stdout, stderr));
+        return cmd;
+    }
+
+    private static int Run(string modelPath, string? checkId, string? depthsText, string? outDir, TextWriter stdout, TextWriter stderr)
+    {
+        StructureModel model;
+        try { model = ModelReader.ReadFile(modelPath); }
+        catch (ModelInputException e) { stderr.Write(e.Message + "\nNothing was written.\n"); return ExitCodes.BadModel; }
+        var walls = model.Comparisons.OfType<CoupledWallCheck>().ToList();
+        var check = checkId is null ? walls.FirstOrDefault() : walls.FirstOrDefault(w => w.Id == checkId);
+        if (check is null)
+        {
+            stderr.Write(checkId is null
+                ? $"{modelPath}: the model declares no coupled-wall check.\nFix: add a check with \"kind\": \"coupled-wall\" under \"comparisons\" (docs/coupled-walls.md).\nNothing was written.\n"
+                : $"{modelPath}: no coupled-wall check \"{checkId}\".\nFix: name one of: {string.Join(", ", walls.Select(w => w.Id))}.\nNothing was written.\n");
+            return ExitCodes.BadModel;
+        }
+        var u = model.Units;
+        IReadOnlyList<double> depths = CoupledWallStudy.DefaultDepths(check);
+        if (depthsText is not null)
+        {
+            var list = new List<double>();
+            foreach (var part in depthsText.Split(',', StringSplitOptions.TrimEntries | StringSplitOptions.RemoveEmptyEntries))
+            {
+                if (!double.TryParse(part, NumberStyles.Float, CultureInfo.InvariantCulture, out double v) || !(v > 0) || !(u.ToSI(v, Quantity.Length) < check.StoryHeight))
+                {
+                    stderr.Write($"--depths: '{part}' is not a depth between 0 and the story height ({u.FromSI(check.StoryHeight, Quantity.Length):G6} {u.LengthSymbol}).\nFix: give depths such as 0.3,0.6,0.9 in {u.LengthSymbol}.\nNothing was written.\n");
+                    return ExitCodes.Usage;
+                }
+                list.Add(u.ToSI(v, Quantity.Length));
+            }
+            if (list.Count == 0) { stderr.Write("--depths is empty.\nFix: give depths such as 0.3,0.6,0.9.\nNothing was written.\n"); return ExitCodes.Usage; }
+            depths = list;
+        }
+        var files = new List<(string Name, string Text)>();
+        var text = new System.Text.StringBuilder();
+        try
+        {
+            foreach (var (load, mag) in CoupledWallStudy.Loads(check))
+            {
+                var pts = CoupledWallStudy.OverBeamDepth(check, depths, load, mag, model.SourcePath, u);
+                string csv = CoupledWallStudy.SweepCsv(check, load, pts, u);
+                // One file, both loads: the second load's header and caution lines are dropped.
+                if (text.Length == 0) text.Append(csv[..csv.LastIndexOf("\"# ", StringComparison.Ordinal)]);
+                else { var lines = csv.Split('\n'); text.Append(string.Join("\n", lines.Skip(1).Take(lines.Length - 3))).Append('\n'); }
+            }
+        }
+        catch (UnstableModelException e) { stderr.Write(e.Message + "\nNothing was written.\n"); return ExitCodes.Unstable; }
+        text.Append("\"# ").Append(ComparisonReport.Caution).Append("\"\n");
+        files.Add(("coupling-sweep.csv", text.ToString()));
+        string folder = outDir ?? Path.Combine(Directory.GetCurrentDirectory(), "planelateral-results", Path.GetFileNameWithoutExtension(modelPath));
+        try { AtomicFiles.WriteAll(folder, files); }
+        catch (IOException e) { stderr.Write($"{e.Message}\nFix: choose a writable folder with --out. No file was replaced.\n"); return ExitCodes.OutputFailed; }
+        stdout.Write($"PlaneLateral {ResultFiles.Version}: coupled wall \"{check.Id}\" over {depths.Count} beam depths\n");
+        stdout.Write($"Sweep written to {Path.Combine(folder, "coupling-sweep.csv")}\nCaution: {ComparisonReport.Caution}\n");
+        return ExitCodes.Success;
+    }
+}

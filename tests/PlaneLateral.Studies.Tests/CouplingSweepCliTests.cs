@@ -1,0 +1,60 @@
+using PlaneLateral.Cli;
+
+namespace PlaneLateral.Studies.Tests;
+
+/// <summary>The coupled-wall demo and the coupling-sweep command end to end (common practice: exit codes, byte-identical reruns).</summary>
+[Collection("current directory")]
+public class CouplingSweepCliTests
+{
+    private static string DemoPath => Path.Combine(AppContext.BaseDirectory, "models", "demo-coupled-wall.json");
+
+    private static (int Code, string Out, string Err) Run(params string[] args)
+    {
+        var o = new StringWriter(); var e = new StringWriter();
+        int code = CliApp.Run(args, o, e);
+        return (code, o.ToString(), e.ToString());
+    }
+
+    private static string TempDir() => Path.Combine(Path.GetTempPath(), "pl-sweep-" + Guid.NewGuid().ToString("N"));
+
+    [Fact]
+    public void Sweep_on_the_demo_writes_one_line_per_load_and_depth_and_reruns_identically()
+    {
+        string dir = TempDir();
+        var (code, output, err) = Run("coupling-sweep", DemoPath, "--depths", "0.3,0.75,1.5", "--out", dir);
+        Assert.True(code == 0, err);
+        Assert.Contains("licensed engineer", output);
+        string first = File.ReadAllText(Path.Combine(dir, "coupling-sweep.csv"));
+        var lines = first.TrimEnd('\n').Split('\n');
+        Assert.Equal(1 + 2 * 3 + 1, lines.Length);   // header, two loads × three depths, caution
+        Assert.StartsWith("check,load,beam_depth_m", lines[0]);
+        Assert.Contains("licensed engineer", lines[^1]);
+        Assert.Equal(0, Run("coupling-sweep", DemoPath, "--depths", "0.3,0.75,1.5", "--out", dir).Code);
+        Assert.Equal(first, File.ReadAllText(Path.Combine(dir, "coupling-sweep.csv")));
+        Directory.Delete(dir, true);
+    }
+
+    [Fact]
+    public void Bad_depths_and_unknown_checks_write_nothing()
+    {
+        string dir = TempDir();
+        var (code, _, err) = Run("coupling-sweep", DemoPath, "--depths", "0.3,3.5", "--out", dir);
+        Assert.Equal(1, code);
+        Assert.Contains("'3.5' is not a depth", err);
+        (code, _, err) = Run("coupling-sweep", DemoPath, "--check", "NOPE", "--out", dir);
+        Assert.Equal(2, code);
+        Assert.Contains("CORE-B", err);
+        Assert.False(Directory.Exists(dir));
+    }
+
+    [Fact]
+    public void The_demo_solves_and_compares()
+    {
+        string dir = TempDir();
+        var (code, output, err) = Run("compare", DemoPath, "--out", dir);
+        Assert.True(code == 0, err);
+        Assert.Contains("stiffness, continuous medium", output);
+        Assert.Equal(0, Run("solve", DemoPath, "--out", dir).Code);
+        Directory.Delete(dir, true);
+    }
+}
