@@ -50,6 +50,7 @@ internal static class SolveReport
             sb.Append("  imbalance: largest relative out-of-balance of ΣF and ΣM (reactions against applied loads); backward error: ‖K·u − f‖ / (‖K‖·‖u‖ + ‖f‖).\n");
         }
         sb.Append(BuildingReport.Render(r));
+        sb.Append(SeismicReport.Render(r));
         sb.Append($"\nCaution: {ResultFiles.Caution}\n");
         return sb.ToString();
     }

@@ -106,9 +106,11 @@ public static partial class ModelReader
             if (f.Token("supports") is JArray { Count: 0 } emptySupports)
                 sink.Add(emptySupports, "the model has no supports, so it is free to move as a rigid body", "add at least one support, e.g. {\"node\": \"<base node>\", \"type\": \"fixed\"}");
             var cases = ReadLoadCases(f.Objects("loadCases", false, "give \"loadCases\" as an array of objects"), members);
+            ReadSeismicCase(f, cases);
             var combos = ReadCombinations(f.Objects("combinations", false, "give \"combinations\" as an array of objects"), cases);
             var points = ReadStiffnessPoints(f.Objects("stiffnessAt", false, "give \"stiffnessAt\" as an array of {\"node\": \"...\", \"direction\": \"x\"}"), supports);
             var building = ReadBuilding(f, root, nodes, members, supports, cases, combos);
+            var seismic = ReadSeismic(f, building, nodes, supports, cases, combos);
             var comparisons = ReadComparisons(f.Objects("comparisons", false, "give \"comparisons\" as an array of checks, e.g. [{\"id\": \"...\", \"kind\": \"wall-line\", \"members\": [...]}] (docs/comparisons.md)"), members, supports, cases);
             f.RejectUnknownKeys();
 
@@ -133,6 +135,7 @@ public static partial class ModelReader
                 StiffnessPoints = points,
                 Building = building,
                 Comparisons = comparisons,
+                Seismic = seismic,
             };
         }
 

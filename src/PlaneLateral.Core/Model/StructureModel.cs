@@ -25,6 +25,8 @@ public sealed class StructureModel
     public BuildingData Building { get; init; } = BuildingData.Empty;
     /// <summary>Hand-method checks the engineer declared under "comparisons" (docs/comparisons.md); empty when none.</summary>
     public IReadOnlyList<ComparisonCheck> Comparisons { get; init; } = [];
+    /// <summary>Story weights, base shear, periods and second-order settings under "seismic" (docs/seismic.md); null when absent.</summary>
+    public SeismicData? Seismic { get; init; }
 
     /// <summary>Index of the node with the given id, or −1.</summary>
     public int NodeIndex(string id)
