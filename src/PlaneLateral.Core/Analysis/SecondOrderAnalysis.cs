@@ -85,7 +85,7 @@ public static class SecondOrderAnalysis
         foreach (var p in f2.PivotFailures.Take(5))
         {
             var (node, dof) = dofs.DofOf(p.Dof);
-            problems.Add(new ModelDiagnostic(model.SourcePath, 0, 0, "seismic.secondOrder.gravity",
+            problems.Add(new ModelDiagnostic(model.SourcePath, 0, 0, "$.seismic.secondOrder.gravity",
                 $"the gravity load \"{gravityCase}\" buckles the structure: with the geometric stiffness of the members' axial forces the stiffness loses positive definiteness at node \"{model.Nodes[node].Id}\" {DofNames.Name(dof)}, {StoryOf(model, model.Nodes[node].Y)}",
                 "check the gravity loads and their units, the column and wall sections and the bracing of that story; a second-order analysis needs a gravity load below the buckling load"));
         }

@@ -151,7 +151,7 @@ public static partial class ModelReader
                 double cd = gf.RequiredNumber("Cd", "give the deflection amplification factor C_d, 1 to 6.5");
                 if (double.IsFinite(cd) && (cd < 1 || cd > 6.5)) sink.Add(gf.Token("Cd"), $"'Cd' = {Num(cd)} is out of range", "give C_d from 1 to 6.5 (ASCE 7-16 Table 12.2-1, from memory)");
                 double ie = gf.OptionalNumber("Ie", spectrum?.Ie ?? 1.0, "give the importance factor I_e, 1.0 to 1.5");
-                if (double.IsFinite(ie) && (ie < 1 || ie > 1.5)) sink.Add(gf.Token("Ie"), $"'Ie' = {Num(ie)} is out of range", "give I_e from 1.0 to 1.5");
+                if (gf.Has("Ie") && double.IsFinite(ie) && (ie < 1 || ie > 1.5)) sink.Add(gf.Token("Ie"), $"'Ie' = {Num(ie)} is out of range", "give I_e from 1.0 to 1.5");
                 double beta = gf.OptionalNumber("beta", 1.0, "give β, the ratio of shear demand to shear capacity, > 0 and ≤ 1");
                 if (double.IsFinite(beta) && (beta <= 0 || beta > 1)) sink.Add(gf.Token("beta"), $"'beta' = {Num(beta)} is out of range", "give β > 0 and ≤ 1 (1 when not worked out)");
                 gf.RejectUnknownKeys();
