@@ -82,11 +82,12 @@ public static class SecondOrderAnalysis
         var f2 = DefaultSolver.Create().Factorize(GeometricStiffness.Assemble(model, elements, dofs, axial));
         if (f2.PivotFailures.Count == 0) return f2;
         var problems = new List<ModelDiagnostic>();
-        foreach (var p in f2.PivotFailures.Take(5))
+        // One message per story where pivots failed, naming the DOFs found there (in elimination order).
+        foreach (var g in f2.PivotFailures.Select(p => dofs.DofOf(p.Dof)).GroupBy(d => StoryOf(model, model.Nodes[d.Node].Y)).OrderBy(g => g.Key, StringComparer.Ordinal))
         {
-            var (node, dof) = dofs.DofOf(p.Dof);
+            var at = g.Select(d => $"\"{model.Nodes[d.Node].Id}\" {DofNames.Name(d.Dof)}").ToList();
             problems.Add(new ModelDiagnostic(model.SourcePath, 0, 0, "$.seismic.secondOrder.gravity",
-                $"the gravity load \"{gravityCase}\" buckles the structure: with the geometric stiffness of the members' axial forces the stiffness loses positive definiteness at node \"{model.Nodes[node].Id}\" {DofNames.Name(dof)}, {StoryOf(model, model.Nodes[node].Y)}",
+                $"the gravity load \"{gravityCase}\" buckles the structure {g.Key}: with the geometric stiffness of the members' axial forces the stiffness loses positive definiteness at {string.Join(", ", at.Take(6))}{(at.Count > 6 ? ", ..." : "")}",
                 "check the gravity loads and their units, the column and wall sections and the bracing of that story; a second-order analysis needs a gravity load below the buckling load"));
         }
         throw new ModelInputException(problems);

@@ -32,6 +32,7 @@ public static class ResultFiles
         ("checks.csv", Checks(result)),
         ("stiffness.csv", Stiffness(result)),
         .. BuildingFiles.Render(result),
+        .. SeismicFiles.Render(result),
     ];
 
     private static string F(double v) => v.ToString("G12", CultureInfo.InvariantCulture);
