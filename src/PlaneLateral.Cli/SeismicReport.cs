@@ -20,6 +20,7 @@ internal static class SeismicReport
         double L(double v) => u.FromSI(v, Quantity.Length);
         double F(double v) => u.FromSI(v, Quantity.Force);
         string P(double v) => v.ToString("0.000", CultureInfo.InvariantCulture);
+        string T(double v) => v.ToString("0.0000", CultureInfo.InvariantCulture);
         var f = sr.Forces;
         var levels = m.Building.Levels;
         var sb = new StringBuilder();
@@ -27,14 +28,14 @@ internal static class SeismicReport
         sb.Append($"\nPeriods (masses = story weights / g on the diaphragm equations; K condensed to them exactly)\n");
         var mt = new TextTable(["mode", "period [s]", "mass share", .. levels.Skip(1).Select(l => $"shape {l.Id}")]).Numeric([.. Enumerable.Range(0, levels.Count + 2)]);
         foreach (var md in f.Modes)
-            mt.Add([md.Number.ToString(CultureInfo.InvariantCulture), P(md.Period), (100 * md.MassShare).ToString("0.0", CultureInfo.InvariantCulture) + " %", .. md.LevelShape.Skip(1).Select(P)]);
+            mt.Add([md.Number.ToString(CultureInfo.InvariantCulture), T(md.Period), (100 * md.MassShare).ToString("0.0", CultureInfo.InvariantCulture) + " %", .. md.LevelShape.Skip(1).Select(P)]);
         sb.Append(mt.Render());
         var pt = new TextTable("estimate", "period [s]", "basis").Numeric(1);
-        pt.Add("eigen, mode 1", P(f.Modes.Count > 0 ? f.Modes[0].Period : double.NaN), "K·φ = ω²·M·φ");
-        pt.Add("Rayleigh", P(f.RayleighPeriod), "static deflection under the story forces below (never longer than mode 1)");
-        pt.Add("Ta = Ct·hn^x", P(f.Ta), $"Ct = {f.Ct}, x = {f.X}, hn = {f.HeightFeet.ToString("0.0", CultureInfo.InvariantCulture)} ft ({f.TypeRow}); ASCE 7-16 §12.8.2.1, Table 12.8-2");
-        if (double.IsFinite(f.Cu)) pt.Add("Cu·Ta", P(f.Cu * f.Ta), $"Cu = {f.Cu.ToString("0.00", CultureInfo.InvariantCulture)} for S_D1 = {s.Spectrum!.Sd1}; Table 12.8-1 (linear between rows)");
-        pt.Add("used", P(f.PeriodUsed), f.PeriodNote);
+        pt.Add("eigen, mode 1", T(f.Modes.Count > 0 ? f.Modes[0].Period : double.NaN), "K·φ = ω²·M·φ");
+        pt.Add("Rayleigh", T(f.RayleighPeriod), "static deflection under the story forces below (never longer than mode 1)");
+        pt.Add("Ta = Ct·hn^x", T(f.Ta), $"Ct = {f.Ct}, x = {f.X}, hn = {f.HeightFeet.ToString("0.0", CultureInfo.InvariantCulture)} ft ({f.TypeRow}); ASCE 7-16 §12.8.2.1, Table 12.8-2");
+        if (double.IsFinite(f.Cu)) pt.Add("Cu·Ta", T(f.Cu * f.Ta), $"Cu = {f.Cu.ToString("0.00", CultureInfo.InvariantCulture)} for S_D1 = {s.Spectrum!.Sd1}; Table 12.8-1 (linear between rows)");
+        pt.Add("used", T(f.PeriodUsed), f.PeriodNote);
         sb.Append(pt.Render());
 
         sb.Append($"\nStory forces, case \"{s.CaseId}\": Fx = Cvx·V, Cvx = wx·hx^k / Σ wi·hi^k (ASCE 7-16 §12.8.3), k = {f.Exponent.ToString("0.000", CultureInfo.InvariantCulture)}\n");
@@ -58,7 +59,7 @@ internal static class SeismicReport
                 .Numeric(0, 1, 2, 3, 4, 5, 6, 7, 8);
             foreach (var x in sr.Stability)
                 t.Add(x.Story.Index.ToString(CultureInfo.InvariantCulture), TextTable.Num(F(x.Px)), TextTable.Num(F(x.Vx)), TextTable.Num(L(x.ElasticDrift)), TextTable.Num(L(x.DesignDrift)),
-                    x.Theta.ToString("0.0000", CultureInfo.InvariantCulture), TextTable.Num(L(x.SecondOrderDrift)), x.Ratio.ToString("0.0000", CultureInfo.InvariantCulture),
+                    TextTable.Num(x.Theta), TextTable.Num(L(x.SecondOrderDrift)), x.Ratio.ToString("0.0000", CultureInfo.InvariantCulture),
                     x.Estimate.ToString("0.0000", CultureInfo.InvariantCulture), x.Status);
             sb.Append(t.Render());
             sb.Append("  2nd-order drift: (K + K_G)·u = f with the geometric stiffness of the gravity axial forces; θ ≤ 0.10: P-delta may be neglected (§12.8.7).\n");

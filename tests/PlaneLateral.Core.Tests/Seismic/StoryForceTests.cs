@@ -143,3 +143,24 @@ public class StoryForceTests
         Assert.True(rows[0].ElasticDrift > 0, "the generated case drifts");
     }
 }
+
+/// <summary>
+/// SeismicAnalysis.Prepare copies the model with the generated case filled in; every public property must come across,
+/// so a property added later (another branch) fails here until Prepare copies it too (common practice).
+/// </summary>
+public class PrepareCopiesTheModelTests
+{
+    [Fact]
+    public void EveryPropertyIsCarriedOver()
+    {
+        var json = SeismicModels.ShearBuilding(4.0, [900, 700], [600e3, 400e3], new { baseShear = 300e3 });
+        var model = ModelReader.Parse(json.ToString(), "p.json");
+        var prepared = SeismicAnalysis.Prepare(model);
+        Assert.NotSame(model, prepared);
+        foreach (var p in typeof(StructureModel).GetProperties().Where(p => p.Name != nameof(StructureModel.LoadCases)))
+            Assert.True(ReferenceEquals(p.GetValue(model), p.GetValue(prepared)) || Equals(p.GetValue(model), p.GetValue(prepared)), $"{p.Name} is not carried over by Prepare");
+        Assert.Equal(model.LoadCases.Select(c => c.Id), prepared.LoadCases.Select(c => c.Id));
+        Assert.Empty(model.LoadCases.First(c => c.Id == "ELF").NodalLoads);
+        Assert.Equal(2, prepared.LoadCases.First(c => c.Id == "ELF").NodalLoads.Count);
+    }
+}
