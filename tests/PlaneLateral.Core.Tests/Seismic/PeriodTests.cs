@@ -97,4 +97,26 @@ public class PeriodTests
         Near(mode.Period, modal.RayleighPeriod(f), 1e-9, "Rayleigh = eigen for the mode-shape load");
         Assert.True(modal.RayleighPeriod([0, 1, 1, 1, 1]) < mode.Period * (1 - 1e-6), "a uniform load is not the mode shape: strictly shorter");
     }
+
+    /// <summary>
+    /// Levels without a diaphragm share their mass equally among their nodes. The shear building has no beams, so its
+    /// two column lines are then two independent chains, each of story stiffness 12EI/h³ and floor mass m/2: the same
+    /// k/m as the tied building, so every frequency of the closed form appears twice (derived).
+    /// </summary>
+    [Fact]
+    public void LevelsWithoutDiaphragmSplitTheirMass()
+    {
+        const int n = 3;
+        var m = SeismicModels.ShearBuilding(H, Enumerable.Repeat(I, n).ToArray(), Enumerable.Repeat(W, n).ToArray(), new { baseShear = 1000.0 });
+        foreach (var l in ((Newtonsoft.Json.Linq.JArray)m["levels"]!).Skip(1)) l["diaphragm"] = "none";
+        var modal = SeismicAnalysis.Modal(ModelReader.Parse(m.ToString(), "loose.json"))!;
+        Assert.Equal(2 * n, modal.Masses.Length);
+        var modes = modal.Modes(2 * n);
+        for (int j = 1; j <= n; j++)
+        {
+            double omega = 2 * Math.Sqrt(StoryK / Mass) * Math.Sin((2 * j - 1) * Math.PI / (2 * (2 * n + 1)));
+            Near(omega, modes[2 * j - 2].Omega, 1e-9, $"mode {j}, first chain");
+            Near(omega, modes[2 * j - 1].Omega, 1e-9, $"mode {j}, second chain");
+        }
+    }
 }
