@@ -27,6 +27,7 @@ public static class LinearStaticAnalysis
     public static AnalysisResult Run(StructureModel model, AnalysisOptions? options = null)
     {
         options ??= new AnalysisOptions();
+        model = SeismicAnalysis.Prepare(model);   // fills in the generated story-force case, if any (docs/seismic.md)
         var solver = options.Solver ?? DefaultSolver.Create();
         var elements = model.Members.Select(m => new FrameElement(m, model.Nodes[m.Start], model.Nodes[m.End])).ToArray();
         var dofs = DofMap.Build(model, elements);

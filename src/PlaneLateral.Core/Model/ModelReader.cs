@@ -107,9 +107,11 @@ public static partial class ModelReader
             if (f.Token("supports") is JArray { Count: 0 } emptySupports && !hasPanels)
                 sink.Add(emptySupports, "the model has no supports, so it is free to move as a rigid body", "add at least one support, e.g. {\"node\": \"<base node>\", \"type\": \"fixed\"}");
             var cases = ReadLoadCases(f.Objects("loadCases", false, "give \"loadCases\" as an array of objects"), members);
+            ReadSeismicCase(f, cases);
             var combos = ReadCombinations(f.Objects("combinations", false, "give \"combinations\" as an array of objects"), cases);
             var points = ReadStiffnessPoints(f.Objects("stiffnessAt", false, "give \"stiffnessAt\" as an array of {\"node\": \"...\", \"direction\": \"x\"}"), supports);
             var building = ReadBuilding(f, root, nodes, members, supports, cases, combos);
+            var seismic = ReadSeismic(f, building, nodes, supports, cases, combos);
             var comparisons = ReadComparisons(f.Objects("comparisons", false, "give \"comparisons\" as an array of checks, e.g. [{\"id\": \"...\", \"kind\": \"wall-line\", \"members\": [...]}] (docs/comparisons.md)"), members, supports, cases);
             var panels = ReadPanels(f.Objects("panels", false, "give \"panels\" as an array of objects"), materials);
             f.RejectUnknownKeys();
@@ -136,6 +138,7 @@ public static partial class ModelReader
                 Building = building,
                 Comparisons = comparisons,
                 Panels = panels,
+                Seismic = seismic,
             };
         }
 

@@ -7,7 +7,7 @@ namespace PlaneLateral.Model;
 /// <see cref="Units"/> remembers those units so results can be reported back in them.
 /// Global axes: X to the right, Y up, rotations counter-clockwise positive.
 /// </summary>
-public sealed class StructureModel
+public sealed record StructureModel
 {
     public required string Title { get; init; }
     public required string SourcePath { get; init; }
@@ -27,6 +27,8 @@ public sealed class StructureModel
     public IReadOnlyList<ComparisonCheck> Comparisons { get; init; } = [];
     /// <summary>Wall panels analysed as plane-stress continua (see docs/panels.md); none by default.</summary>
     public IReadOnlyList<WallPanel> Panels { get; init; } = [];
+    /// <summary>Story weights, base shear, periods and second-order settings under "seismic" (docs/seismic.md); null when absent.</summary>
+    public SeismicData? Seismic { get; init; }
 
     /// <summary>Index of the node with the given id, or −1.</summary>
     public int NodeIndex(string id)

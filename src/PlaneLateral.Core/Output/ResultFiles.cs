@@ -33,6 +33,7 @@ public static class ResultFiles
         ("stiffness.csv", Stiffness(result)),
         .. BuildingFiles.Render(result),
         .. PanelResultFiles.Render(result),
+        .. SeismicFiles.Render(result),
     ];
 
     private static string F(double v) => v.ToString("G12", CultureInfo.InvariantCulture);

@@ -1,0 +1,245 @@
+using PlaneLateral.Assembly;
+using PlaneLateral.Elements;
+using PlaneLateral.Model;
+using PlaneLateral.Solvers;
+
+namespace PlaneLateral.Analysis;
+
+/// <summary>
+/// One story of the stability check (ASCE 7-16 §12.8.7, from memory — confirm the edition) beside the second-order
+/// analysis. SI: N, m.
+/// </summary>
+/// <param name="Px">Vertical gravity load at and above the story (N), from the gravity case by statics across the story's cut.</param>
+/// <param name="Vx">Story shear of the story-force case (N).</param>
+/// <param name="ElasticDrift">First-order elastic drift δ_e (m).</param>
+/// <param name="DesignDrift">Δ = C_d·δ_e/I_e (m).</param>
+/// <param name="Theta">θ = P_x·Δ·I_e/(V_x·h_sx·C_d).</param>
+/// <param name="ThetaMax">θ_max = 0.5/(β·C_d), not above 0.25.</param>
+/// <param name="Status">"may be neglected" (θ ≤ 0.10), "P-delta to be included" (0.10 &lt; θ ≤ θ_max), "EXCEEDS theta max".</param>
+/// <param name="SecondOrderDrift">Elastic drift of the second-order analysis (m).</param>
+/// <param name="Ratio">Second- over first-order drift.</param>
+/// <param name="Estimate">1/(1 − θ).</param>
+public sealed record StabilityRow(StoryResult Story, double Px, double Vx, double ElasticDrift, double DesignDrift, double Theta, double ThetaMax,
+    string Status, double SecondOrderDrift, double Ratio, double Estimate);
+
+/// <summary>Everything the seismic block adds: periods and story forces, the story results of the generated case, the
+/// stability coefficient and second-order drifts per story, drift checks on the second-order drift and the gravity load
+/// factor to buckling.</summary>
+public sealed class SeismicResult
+{
+    public required StoryForces Forces { get; init; }
+    public required CaseStories Stories { get; init; }
+    public required IReadOnlyList<StabilityRow> Stability { get; init; }
+    /// <summary>The drift checks that name the story-force case, on its second-order drift (case id "… (2nd order)").</summary>
+    public required IReadOnlyList<DriftCheckRow> SecondOrderDriftChecks { get; init; }
+    /// <summary>Factor on the gravity load at which the structure buckles (dense solve; NaN when not worked out, +∞ when the gravity load does not soften it).</summary>
+    public required double CriticalLoadFactor { get; init; }
+
+    /// <summary>The seismic results of a solved model; null when it has no seismic block.</summary>
+    public static SeismicResult? Of(AnalysisResult r) => SecondOrderAnalysis.Seismic(r);
+}
+
+/// <summary>
+/// Second-order (P-Δ) analysis: the elastic stiffness plus the geometric stiffness of every member under its axial
+/// force from a gravity case or combination, (K + K_G)·u = f, for a lateral case. The gravity case is taken as it
+/// is (no iteration: its axial forces are those of the linear solve).
+/// </summary>
+public static class SecondOrderAnalysis
+{
+    public const double NeglectLimit = 0.10;
+
+    /// <summary>θ_max = 0.5/(β·C_d) ≤ 0.25 (§12.8.7, from memory).</summary>
+    public static double ThetaMax(double beta, double cd) => Math.Min(0.5 / (beta * cd), 0.25);
+
+    /// <summary>θ = P_x·Δ·I_e/(V_x·h_sx·C_d) (§12.8.7, from memory).</summary>
+    public static double Theta(double px, double designDrift, double ie, double vx, double h, double cd) => px * designDrift * ie / (vx * h * cd);
+
+    /// <summary>Full nodal displacements (3 per node) of <paramref name="lateralCase"/> with the geometric stiffness of <paramref name="gravityCase"/>.</summary>
+    /// <exception cref="ModelInputException">The gravity load buckles the structure.</exception>
+    public static double[] Solve(StructureModel model, string gravityCase, string lateralCase)
+    {
+        var elements = model.Members.Select(m => new FrameElement(m, model.Nodes[m.Start], model.Nodes[m.End])).ToArray();
+        var dofs = DofMap.Build(model, elements);
+        var factor = DefaultSolver.Create().Factorize(LinearStaticAnalysis.Assemble(model, elements, dofs));
+        if (factor.PivotFailures.Count > 0) throw new InvalidOperationException("the model is a mechanism; run the linear analysis for the details");
+        var f2 = CheckStable(model, elements, dofs, factor, gravityCase);
+        var f = GeometricStiffness.LoadVector(model, elements, dofs, lateralCase);
+        var u = new double[dofs.FreeCount];
+        f2.Solve(f, u);
+        var full = new double[3 * model.Nodes.Count];
+        for (int j = 0; j < full.Length; j++)
+        {
+            int eq = dofs.Equation(j / 3, (Dof)(j % 3));
+            if (eq >= 0) full[j] = u[eq];
+        }
+        return full;
+    }
+
+    /// <summary>Factorises K + K_G; a failed pivot means the gravity load buckles the structure, reported naming the story.</summary>
+    public static ISparseSpdFactor CheckStable(StructureModel model, IReadOnlyList<FrameElement> elements, DofMap dofs, ISparseSpdFactor elastic, string gravityCase)
+    {
+        var axial = GeometricStiffness.AxialForces(model, elements, dofs, elastic, gravityCase);
+        var f2 = DefaultSolver.Create().Factorize(GeometricStiffness.Assemble(model, elements, dofs, axial));
+        if (f2.PivotFailures.Count == 0) return f2;
+        var problems = new List<ModelDiagnostic>();
+        // One message per story where pivots failed, naming the DOFs found there (in elimination order).
+        foreach (var g in f2.PivotFailures.Select(p => dofs.DofOf(p.Dof)).GroupBy(d => StoryOf(model, model.Nodes[d.Node].Y)).OrderBy(g => g.Key, StringComparer.Ordinal))
+        {
+            var at = g.Select(d => $"\"{model.Nodes[d.Node].Id}\" {DofNames.Name(d.Dof)}").ToList();
+            problems.Add(new ModelDiagnostic(model.SourcePath, 0, 0, "$.seismic.secondOrder.gravity",
+                $"the gravity load \"{gravityCase}\" buckles the structure {g.Key}: with the geometric stiffness of the members' axial forces the stiffness loses positive definiteness at {string.Join(", ", at.Take(6))}{(at.Count > 6 ? ", ..." : "")}",
+                "check the gravity loads and their units, the column and wall sections and the bracing of that story; a second-order analysis needs a gravity load below the buckling load"));
+        }
+        throw new ModelInputException(problems);
+    }
+
+    private static string StoryOf(StructureModel model, double y)
+    {
+        var lv = model.Building.Levels;
+        if (lv.Count < 2) return "(the model has no levels to name a story)";
+        for (int i = 1; i < lv.Count; i++)
+            if (y <= lv[i].Elevation + 1e-9) return $"in story {i} ({lv[i - 1].Id}–{lv[i].Id})";
+        return $"above the top level {lv[^1].Id}";
+    }
+
+    /// <summary>
+    /// The factor λ on the gravity load at which det(K + λ·K_G) = 0, the smallest positive one: from the dense
+    /// eigenproblem L⁻¹(−K_G)L⁻ᵀ·y = (1/λ)·y with K = L·Lᵀ. For models of up to <paramref name="maxUnknowns"/> unknowns; NaN beyond.
+    /// </summary>
+    public static double CriticalLoadFactor(StructureModel model, string gravityCase, int maxUnknowns = 400)
+    {
+        var elements = model.Members.Select(m => new FrameElement(m, model.Nodes[m.Start], model.Nodes[m.End])).ToArray();
+        var dofs = DofMap.Build(model, elements);
+        if (dofs.FreeCount > maxUnknowns) return double.NaN;
+        var ks = LinearStaticAnalysis.Assemble(model, elements, dofs);
+        var factor = DefaultSolver.Create().Factorize(ks);
+        if (factor.PivotFailures.Count > 0) return double.NaN;
+        var axial = GeometricStiffness.AxialForces(model, elements, dofs, factor, gravityCase);
+        var k = ks.ToDense();
+        int n = k.GetLength(0);
+        var kg = GeometricStiffness.Assemble(model, elements, dofs, axial).ToDense();
+        for (int i = 0; i < n; i++) for (int j = 0; j < n; j++) kg[i, j] -= k[i, j];   // K_G alone
+        var l = Cholesky(k);
+        // C = L⁻¹ (−K_G) L⁻ᵀ.
+        var y = new double[n, n];
+        for (int j = 0; j < n; j++)
+        {
+            var col = new double[n];
+            for (int i = 0; i < n; i++) col[i] = -kg[i, j];
+            Forward(l, col);
+            for (int i = 0; i < n; i++) y[i, j] = col[i];
+        }
+        var c = new double[n, n];
+        for (int i = 0; i < n; i++)
+        {
+            var row = new double[n];
+            for (int j = 0; j < n; j++) row[j] = y[i, j];
+            Forward(l, row);
+            for (int j = 0; j < n; j++) c[i, j] = row[j];
+        }
+        for (int i = 0; i < n; i++) for (int j = 0; j < i; j++) c[i, j] = c[j, i] = 0.5 * (c[i, j] + c[j, i]);
+        var (mu, _) = SymmetricEigen.Solve(c);
+        return mu.Length == 0 || mu[0] <= 0 ? double.PositiveInfinity : 1 / mu[0];
+    }
+
+    private static double[,] Cholesky(double[,] a)
+    {
+        int n = a.GetLength(0);
+        var l = new double[n, n];
+        for (int j = 0; j < n; j++)
+        {
+            double d = a[j, j];
+            for (int k = 0; k < j; k++) d -= l[j, k] * l[j, k];
+            l[j, j] = Math.Sqrt(d);
+            for (int i = j + 1; i < n; i++)
+            {
+                double s = a[i, j];
+                for (int k = 0; k < j; k++) s -= l[i, k] * l[j, k];
+                l[i, j] = s / l[j, j];
+            }
+        }
+        return l;
+    }
+
+    private static void Forward(double[,] l, double[] b)
+    {
+        int n = b.Length;
+        for (int i = 0; i < n; i++)
+        {
+            double s = b[i];
+            for (int k = 0; k < i; k++) s -= l[i, k] * b[k];
+            b[i] = s / l[i, i];
+        }
+    }
+
+    /// <summary>
+    /// Vertical force (N, +y) member <paramref name="e"/> carries across a horizontal cut at <paramref name="yc"/>: the
+    /// y-components of its end forces at the upper flexible face, F = N·sin α + V·cos α, plus its distributed load
+    /// between the cut and that face, p_y = q_x·sin α + q_y·cos α (the companion of <see cref="StoryAnalysis.ShearAcrossCut"/>).
+    /// Summed over the members crossing the cut it is the vertical load above the cut.
+    /// </summary>
+    public static double VerticalAcrossCut(StructureModel model, FrameElement e, MemberEndForces f, IReadOnlyList<(MemberLoad Load, double Factor)> loads, double yc)
+    {
+        var m = e.Member;
+        double y1 = model.Nodes[m.Start].Y, y2 = model.Nodes[m.End].Y;
+        double sCut = (yc - y1) / (y2 - y1) * e.Length;
+        double face, from, to;
+        if (y2 > y1) { face = f.N2 * e.Sin + f.V2 * e.Cos; (from, to) = (sCut, e.Length - m.RigidEnd); }
+        else { face = f.N1 * e.Sin + f.V1 * e.Cos; (from, to) = (m.RigidStart, sCut); }
+        double load = 0;
+        foreach (var (ml, factor) in loads)
+        {
+            var (qx1, qx2, qy1, qy2) = e.LocalIntensity(ml);
+            double Py(double s) => (qx1 + (qx2 - qx1) * s / e.Length) * e.Sin + (qy1 + (qy2 - qy1) * s / e.Length) * e.Cos;
+            load += factor * (to - from) * 0.5 * (Py(from) + Py(to));
+        }
+        return face + load;
+    }
+
+    internal static SeismicResult? Seismic(AnalysisResult r)
+    {
+        var model = r.Model;
+        if (model.Seismic is not { } s) return null;
+        var forces = SeismicAnalysis.Forces(model);
+        if (forces is null) return null;
+        var lateral = r.Case(s.CaseId);
+        var stories = StoryAnalysis.ForCase(r, lateral);
+        var rows = new List<StabilityRow>();
+        var drift2 = new List<DriftCheckRow>();
+        double critical = double.NaN;
+        if (s.SecondOrder is { } so)
+        {
+            var u2 = Solve(model, so.GravityCase, s.CaseId);
+            var levels = model.Building.Levels;
+            var ux2 = levels.Select(l => l.Nodes.Count == 0 ? 0 : l.Nodes.Average(n => u2[3 * n])).ToArray();
+            var gravity = r.Case(so.GravityCase);
+            var loads = StoryAnalysis.MemberLoadsOf(model, gravity);
+            var elements = model.Members.Select(m => new FrameElement(m, model.Nodes[m.Start], model.Nodes[m.End])).ToArray();
+            double thetaMax = ThetaMax(so.Beta, so.Cd);
+            foreach (var st in stories.Stories)
+            {
+                double px = 0;
+                for (int m = 0; m < elements.Length; m++)
+                {
+                    double ya = model.Nodes[model.Members[m].Start].Y, yb = model.Nodes[model.Members[m].End].Y;
+                    if (Math.Min(ya, yb) < st.CutElevation && st.CutElevation < Math.Max(ya, yb))
+                        px -= VerticalAcrossCut(model, elements[m], gravity.MemberForces[m], loads[m], st.CutElevation);
+                }
+                double de = st.Drift, design = DriftCheck.Amplified(de, so.Cd, so.Ie);
+                double theta = Theta(px, Math.Abs(design), so.Ie, Math.Abs(st.Shear), st.Height, so.Cd);
+                string status = theta > thetaMax ? "EXCEEDS theta max" : theta > NeglectLimit ? "P-delta to be included" : "may be neglected";
+                double d2 = ux2[st.Top.Index] - ux2[st.Bottom.Index];
+                rows.Add(new StabilityRow(st, px, st.Shear, de, design, theta, thetaMax, status, d2, d2 / de, 1 / (1 - theta)));
+            }
+            foreach (var check in model.Building.DriftChecks.Where(c => c.Cases.Contains(s.CaseId)))
+                foreach (var row in rows)
+                {
+                    double a = DriftCheck.Amplified(row.SecondOrderDrift, check.Cd, check.Ie);
+                    double ratio = Math.Abs(a) / row.Story.Height;
+                    drift2.Add(new DriftCheckRow(check, s.CaseId + " (2nd order)", row.Story, row.SecondOrderDrift, a, ratio, check.AllowedRatio, ratio <= check.AllowedRatio, 1 - ratio / check.AllowedRatio));
+                }
+            critical = CriticalLoadFactor(model, so.GravityCase);
+        }
+        return new SeismicResult { Forces = forces, Stories = stories, Stability = rows, SecondOrderDriftChecks = drift2, CriticalLoadFactor = critical };
+    }
+}
