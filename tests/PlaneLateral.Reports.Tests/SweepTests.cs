@@ -113,7 +113,7 @@ public class SweepTests
         var (code, output, err) = Run("sweep", "--points", "6", "--out", dir);
         Assert.True(code == 0, err);
         Assert.Equal("", err);   // stderr is not a terminal here: no progress line (common practice)
-        Assert.Equal(["sweep-ratio.png", "sweep-shear-share.png", "sweep.csv"], Directory.GetFiles(dir).Select(Path.GetFileName).Order().ToArray());
+        Assert.Equal(["sweep-ratio.png", "sweep-shear-share.png", "sweep.csv"], Directory.GetFiles(dir).Select(f => Path.GetFileName(f)).Order().ToArray());
         foreach (var png in new[] { "sweep-ratio.png", "sweep-shear-share.png" })
             ValidPng(File.ReadAllBytes(Path.Combine(dir, png)), PlotStyle.Width, PlotStyle.Height, png);
         var lines = File.ReadAllLines(Path.Combine(dir, "sweep.csv"));
