@@ -90,7 +90,7 @@ public static class ModelPlots
         plot.Axes.SquareUnits();
         plot.ShowLegend(Alignment.UpperRight);
         return new Figure($"shape-{Slug(caseId)}.png", $"Deflected shape, case {caseId}",
-            $"Undeformed (dashed) and deflected (solid) shape under case {caseId}, displacements drawn {F(scale, "G6")} times their size; {worstText}. Members are drawn straight between their displaced end nodes.",
+            $"Undeformed (dashed) and deflected (solid) shape under case {caseId}, displacements drawn {F(scale, "G6")} times their size; {worstText}. Members are drawn straight between their displaced end nodes; axial-only members (braces, links) in green; supports as red triangles.",
             PlotStyle.Png(plot), PlotStyle.Width, PlotStyle.Height);
     }
 
@@ -206,7 +206,7 @@ public static class ModelPlots
         hand.Color = PlotStyle.Ochre; hand.MarkerShape = MarkerShape.FilledSquare; hand.MarkerSize = 12; hand.LegendText = "hand method";
         var fe = plot.Add.ScatterPoints(new double[] { double.NaN }, new double[] { double.NaN });
         fe.Color = PlotStyle.Ink; fe.MarkerShape = MarkerShape.FilledSquare; fe.MarkerSize = 12; fe.LegendText = "FE (reference model)";
-        plot.ShowLegend(Alignment.LowerRight);
+        plot.ShowLegend(Edge.Bottom);   // below the axes, so it never covers a bar
         int height = Math.Max(PlotStyle.Height, 120 + 70 * n);
         return new Figure($"hand-vs-fe-{Slug(kind)}.png", $"Hand method beside FE: {kind}",
             $"For each {kind} row, the hand-method value (ochre) and the reference FE value (blue) in {unit}, with FE/hand beside them (green within tolerance, red outside).",

@@ -131,9 +131,9 @@ public static class ModelReport
         {
             blocks.Add(new Heading(2, "6. Story displacements, drifts and shears"));
             foreach (var cs in lateral)
-                blocks.Add(new Table($"Stories, {(cs.IsCombination ? "combination" : "load case")} {cs.CaseId}",
+                blocks.Add(new Table($"Stories (story 1 is the lowest), {(cs.IsCombination ? "combination" : "load case")} {cs.CaseId}",
                     ["story", "levels", $"height [{len}]", $"top displacement [{len}]", $"drift [{len}]", "drift ratio", $"shear [{force}]", $"stiffness [{stiff}]"],
-                    cs.Stories.Select(s => (IReadOnlyList<string>)[$"{s.Index + 1}", $"{s.Bottom.Id}–{s.Top.Id}", L(s.Height), L(s.TopDisplacement), L(s.Drift), Pct(s.DriftRatio, "0.000"), Fo(s.Shear), K(s.Stiffness)]).ToList(),
+                    cs.Stories.Select(s => (IReadOnlyList<string>)[$"{s.Index}", $"{s.Bottom.Id}–{s.Top.Id}", L(s.Height), L(s.TopDisplacement), L(s.Drift), Pct(s.DriftRatio, "0.000"), Fo(s.Shear), K(s.Stiffness)]).ToList(),
                     [0, 2, 3, 4, 5, 6, 7]));
             Figure(ModelPlots.DisplacementProfile(r, lateral));
             if (m.Building.DriftChecks.Count == 0) Figure(ModelPlots.DriftProfile(lateral, b.DriftChecks, null, u));
@@ -145,7 +145,7 @@ public static class ModelReport
             blocks.Add(new Heading(2, "7. Drift checks"));
             blocks.Add(new Paragraph("δ = C_d·δe/I_e per story (ASCE 7-16 eq. 12.8-15), ratio |δ|/h against the allowable ratio; margin = 1 − ratio/allowable. The table's footnotes and the rules around it are not applied: check them against the governing code."));
             blocks.Add(new Table("Drift check results", ["check", "case", "story", $"δe [{len}]", $"δ [{len}]", "δ/h", "allowable", "margin", "result"],
-                b.DriftChecks.Select(d => (IReadOnlyList<string>)[d.Check.Id, d.CaseId, $"{d.Story.Index + 1}", L(d.ElasticDrift), L(d.AmplifiedDrift), Pct(d.Ratio, "0.000"), Pct(d.Allowed, "0.##"), Pct(d.Margin, "0"), d.Passes ? "within" : "exceeds"]).ToList(),
+                b.DriftChecks.Select(d => (IReadOnlyList<string>)[d.Check.Id, d.CaseId, $"{d.Story.Index}", L(d.ElasticDrift), L(d.AmplifiedDrift), Pct(d.Ratio, "0.000"), Pct(d.Allowed, "0.##"), Pct(d.Margin, "0"), d.Passes ? "within" : "exceeds"]).ToList(),
                 [2, 3, 4, 5, 6, 7]));
             foreach (var check in m.Building.DriftChecks)
                 Figure(ModelPlots.DriftProfile(lateral.Where(c => check.Cases.Contains(c.CaseId)).ToList(), b.DriftChecks, check, u));
@@ -153,7 +153,7 @@ public static class ModelReport
         if (b.Irregularity.Count > 0)
         {
             blocks.Add(new Table("Stiffness (soft story) irregularity, ASCE 7-16 Table 12.3-2", ["case", "story", $"stiffness [{stiff}]", "k / k above", "k / mean of 3 above", "result"],
-                b.Irregularity.Select(x => (IReadOnlyList<string>)[x.CaseId, $"{x.Story.Index + 1}", K(x.Stiffness), Pct(x.RatioToAbove, "0"), Pct(x.RatioToAverageAbove, "0"),
+                b.Irregularity.Select(x => (IReadOnlyList<string>)[x.CaseId, $"{x.Story.Index}", K(x.Stiffness), Pct(x.RatioToAbove, "0"), Pct(x.RatioToAverageAbove, "0"),
                     x.ExtremelySoft ? "extreme soft story (1b)" : x.Soft ? "soft story (1a)" : "regular"]).ToList(), [1, 2, 3, 4]));
         }
 
@@ -179,8 +179,8 @@ public static class ModelReport
             var worst = g.MaxBy(d => d.Ratio)!;
             int over = g.Count(d => !d.Passes);
             verdicts.Add(over == 0
-                ? $"Drift check '{g.Key}': every story within the allowable {Pct(worst.Allowed, "0.##")}; the largest δ/h is {Pct(worst.Ratio, "0.000")} (case {worst.CaseId}, story {worst.Story.Index + 1})."
-                : $"Drift check '{g.Key}': {over} of {g.Count()} story results exceed the allowable {Pct(worst.Allowed, "0.##")}; the largest δ/h is {Pct(worst.Ratio, "0.000")} (case {worst.CaseId}, story {worst.Story.Index + 1}).");
+                ? $"Drift check '{g.Key}': every story within the allowable {Pct(worst.Allowed, "0.##")}; the largest δ/h is {Pct(worst.Ratio, "0.000")} (case {worst.CaseId}, story {worst.Story.Index})."
+                : $"Drift check '{g.Key}': {over} of {g.Count()} story results exceed the allowable {Pct(worst.Allowed, "0.##")}; the largest δ/h is {Pct(worst.Ratio, "0.000")} (case {worst.CaseId}, story {worst.Story.Index}).");
         }
         if (b.Irregularity.Any(x => x.Soft))
             verdicts.Add($"Soft story flagged in {b.Irregularity.Count(x => x.Soft)} story result(s); see the irregularity table.");
@@ -199,7 +199,6 @@ public static class ModelReport
             "The analysis is linear elastic and planar. Cracked-section modifiers, joint flexibility, foundation flexibility and diaphragm flexibility are modelling decisions made in the model file.",
             "Walls modelled as line members follow plane-section (beam) theory; for squat walls (h/l below about 0.5) and walls with openings that assumption is doubtful, and a panel model is the better reference.",
             "Preset drift limits and stiffness modifiers are table values quoted from the sources named beside them; the governing local code decides which values and definitions apply.",
-            ResultFiles.Caution,
         };
         cautions.AddRange(r.Notes.Select(n => $"Model note: {n}"));
         if (comparisons is not null) cautions.Add(ComparisonReport.Caution);

@@ -126,7 +126,7 @@ public sealed class ReportDocument(string title, IReadOnlyList<Block> blocks)
         h2 { font-size: 20px; color: #1F3A5F; margin-top: 34px; border-bottom: 1px solid #ccd3dc; padding-bottom: 3px; }
         h3 { font-size: 16px; margin-top: 22px; }
         .caution { border-left: 5px solid #B3261E; background: #fbf1ef; padding: 10px 14px; margin: 14px 0; }
-        table { border-collapse: collapse; margin: 10px 0 18px; font-size: 13px; width: 100%; }
+        table { border-collapse: collapse; margin: 10px 0 18px; font-size: 13px; }
         caption { text-align: left; font-weight: bold; padding: 4px 0; }
         th, td { border: 1px solid #d5d9df; padding: 4px 7px; vertical-align: top; text-align: left; }
         th { background: #eef1f5; }

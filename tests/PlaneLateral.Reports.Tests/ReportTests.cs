@@ -73,6 +73,9 @@ public class ReportTests
             Assert.Contains("Przemieniecki", text);
         }
         Assert.Contains("licensed engineer", output);
+        // Story 1 is the lowest, between the demo's first two levels L0 and L1 (the model file's levels; docs/building.md).
+        Assert.Contains("| 1 | L0–L1 | 156 |", md);
+        Assert.DoesNotContain("| 2 | L0–L1 |", md);
     }
 
     [Fact]
