@@ -139,7 +139,8 @@ internal static class SweepCommand
         {
             lock (_gate)
             {
-                if (done <= _shown) return;
+                // Rewrite the line only when the whole percentage changes (or at the end), not for every point.
+                if (done <= _shown || (100L * done / total == 100L * _shown / total && done < total)) return;
                 _shown = done;
                 stderr.Write($"\rsweep: {done} of {total} points");
             }
