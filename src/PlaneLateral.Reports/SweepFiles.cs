@@ -61,7 +61,8 @@ public static class SweepFiles
     public static Figure RatioFigure(SweepResult r)
     {
         var s = r.Spec;
-        var plot = PlotStyle.New("Wall stiffness: FE / hand against aspect ratio", "aspect ratio h/l [-]", "FE stiffness / hand stiffness [-]");
+        bool log = s.Spacing == SweepSpacing.Geometric;
+        var plot = PlotStyle.New("Wall stiffness: FE / hand against aspect ratio", XLabel(log), "FE stiffness / hand stiffness [-]");
         var band = plot.Add.VerticalSpan(1 - s.Tolerance, 1 + s.Tolerance);
         band.FillStyle.Color = PlotStyle.Band.WithAlpha(0.8);
         band.LineStyle.Width = 0;
@@ -71,7 +72,7 @@ public static class SweepFiles
         foreach (var ends in s.Ends)
         {
             var pts = r.Points.Where(p => p.Ends == ends).ToArray();
-            double[] x = pts.Select(p => p.AspectRatio).ToArray();
+            double[] x = pts.Select(p => X(p.AspectRatio, log)).ToArray();
             for (int m = 0; m < r.FeModels.Count; m++)
             {
                 double[] y = pts.Select(p => p.Fe[m].Value / p.Hand.Stiffness).ToArray();
@@ -86,7 +87,8 @@ public static class SweepFiles
                 c++;
             }
         }
-        SquatLine(plot);
+        SquatLine(plot, log);
+        LogTicks(plot, s, log);
         plot.Axes.SetLimitsY(lo - 0.02, hi + 0.02);
         plot.ShowLegend(ScottPlot.Alignment.UpperRight);
         var png = PlotStyle.Png(plot);
@@ -99,12 +101,13 @@ public static class SweepFiles
     public static Figure ShearShareFigure(SweepResult r)
     {
         var s = r.Spec;
-        var plot = PlotStyle.New("Shear share of the top deflection against aspect ratio", "aspect ratio h/l [-]", "shear deflection / total deflection [%]");
+        bool log = s.Spacing == SweepSpacing.Geometric;
+        var plot = PlotStyle.New("Shear share of the top deflection against aspect ratio", XLabel(log), "shear deflection / total deflection [%]");
         int c = 0;
         foreach (var ends in s.Ends)
         {
             var pts = r.Points.Where(p => p.Ends == ends).ToArray();
-            double[] x = pts.Select(p => p.AspectRatio).ToArray();
+            double[] x = pts.Select(p => X(p.AspectRatio, log)).ToArray();
             var color = PlotStyle.Series[c % PlotStyle.Series.Length];
             var hand = plot.Add.Scatter(x, pts.Select(p => 100 * p.Hand.ShearShare).ToArray());
             hand.Color = color;
@@ -123,7 +126,8 @@ public static class SweepFiles
             }
             c++;
         }
-        SquatLine(plot);
+        SquatLine(plot, log);
+        LogTicks(plot, s, log);
         plot.Axes.SetLimitsY(0, 100);
         plot.ShowLegend(ScottPlot.Alignment.UpperRight);
         var png = PlotStyle.Png(plot);
@@ -132,9 +136,36 @@ public static class SweepFiles
             png, PlotStyle.Width, PlotStyle.Height);
     }
 
-    private static void SquatLine(ScottPlot.Plot plot)
+    private static string XLabel(bool log) => log ? "aspect ratio h/l [-], logarithmic scale" : "aspect ratio h/l [-]";
+
+    private static double X(double aspect, bool log) => log ? Math.Log10(aspect) : aspect;
+
+    /// <summary>On a logarithmic axis (geometric spacing): ticks at 1–9 × 10^k, labelled at 1, 2, 3, 5 × 10^k and at the range ends.</summary>
+    private static void LogTicks(ScottPlot.Plot plot, SweepSpec s, bool log)
     {
-        var v = plot.Add.VerticalLine(SquatAspectRatio);
+        if (!log) return;
+        var ticks = new List<ScottPlot.Tick>();
+        for (int k = (int)Math.Floor(Math.Log10(s.From)); k <= (int)Math.Ceiling(Math.Log10(s.To)); k++)
+            for (int m = 1; m <= 9; m++)
+            {
+                double v = m * Math.Pow(10, k);
+                if (v < s.From * 0.999 || v > s.To * 1.001) continue;
+                bool major = m is 1 or 2 or 3 or 5;
+                ticks.Add(new ScottPlot.Tick(Math.Log10(v), major ? v.ToString("G4", CultureInfo.InvariantCulture) : "", major));
+            }
+        foreach (double end in new[] { s.From, s.To })
+        {
+            ticks.RemoveAll(t => Math.Abs(t.Position - Math.Log10(end)) < 1e-9);
+            ticks.Add(new ScottPlot.Tick(Math.Log10(end), end.ToString("G4", CultureInfo.InvariantCulture), true));
+        }
+        plot.Axes.Bottom.TickGenerator = new ScottPlot.TickGenerators.NumericManual(ticks.OrderBy(t => t.Position).ToArray());
+        double pad = 0.03 * (Math.Log10(s.To) - Math.Log10(s.From));
+        plot.Axes.SetLimitsX(Math.Log10(s.From) - pad, Math.Log10(s.To) + pad);
+    }
+
+    private static void SquatLine(ScottPlot.Plot plot, bool log)
+    {
+        var v = plot.Add.VerticalLine(X(SquatAspectRatio, log));
         v.Color = PlotStyle.Slate;
         v.LineWidth = 1.5f;
         v.LinePattern = ScottPlot.LinePattern.Dotted;
