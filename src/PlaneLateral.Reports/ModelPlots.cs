@@ -218,7 +218,7 @@ public static class ModelPlots
     {
         int i = name.IndexOf(", ", StringComparison.Ordinal);
         string s = i > 0 ? name[..i] : name;
-        return s.Length <= 40 ? s : s[..37] + "...";
+        return s.Length <= 56 ? s : s[..53] + "...";
     }
 
     private static string Shorten(string s) => s.Length <= 34 ? s : s[..31] + "...";
