@@ -12,19 +12,19 @@ internal static class SweepCommand
 {
     public static Command Build(TextWriter stdout, TextWriter stderr)
     {
-        var from = new Option<double>("--from") { Description = "Smallest aspect ratio h/l (> 0). Default 0.25.", DefaultValueFactory = _ => 0.25 };
-        var to = new Option<double>("--to") { Description = "Largest aspect ratio h/l (> --from). Default 4.", DefaultValueFactory = _ => 4.0 };
-        var points = new Option<int>("--points") { Description = $"Number of h/l values, 2 to {AspectSweep.MaxPoints}. Default 25.", DefaultValueFactory = _ => 25 };
-        var spacing = new Option<string>("--spacing") { Description = "linear (equal steps) or geometric (equal ratios). Default geometric.", DefaultValueFactory = _ => "geometric" };
-        var ends = new Option<string>("--ends") { Description = "cantilever, fixed-fixed or both. Default both.", DefaultValueFactory = _ => "both" };
-        var units = new Option<string>("--units") { Description = "Force and length units as FORCE,LENGTH, e.g. kip,in or kN,m. Default kip,in.", DefaultValueFactory = _ => "kip,in" };
-        var material = new Option<string>("--material") { Description = $"Named material: {string.Join(" or ", SweepMaterials.Names)}. Default concrete. --E, --G, --nu override it.", DefaultValueFactory = _ => "concrete" };
+        var from = new Option<double>("--from") { Description = "Smallest aspect ratio h/l (> 0).", DefaultValueFactory = _ => 0.25 };
+        var to = new Option<double>("--to") { Description = "Largest aspect ratio h/l (> --from).", DefaultValueFactory = _ => 4.0 };
+        var points = new Option<int>("--points") { Description = $"Number of h/l values, 2 to {AspectSweep.MaxPoints}.", DefaultValueFactory = _ => 25 };
+        var spacing = new Option<string>("--spacing") { Description = "linear (equal steps) or geometric (equal ratios).", DefaultValueFactory = _ => "geometric" };
+        var ends = new Option<string>("--ends") { Description = "cantilever, fixed-fixed or both.", DefaultValueFactory = _ => "both" };
+        var units = new Option<string>("--units") { Description = "Force and length units as FORCE,LENGTH, e.g. kip,in or kN,m.", DefaultValueFactory = _ => "kip,in" };
+        var material = new Option<string>("--material") { Description = $"Named material: {string.Join(" or ", SweepMaterials.Names)}. --E, --G, --nu override it.", DefaultValueFactory = _ => "concrete" };
         var e = new Option<double?>("--E") { Description = "Young's modulus in FORCE/LENGTH² (overrides the material)." };
         var g = new Option<double?>("--G") { Description = "Shear modulus in FORCE/LENGTH² (overrides the material)." };
         var nu = new Option<double?>("--nu") { Description = "Poisson's ratio; G = E/(2(1+ν)) (instead of --G)." };
         var length = new Option<double?>("--length") { Description = "Wall plan length l in LENGTH. Default 20 ft in the chosen unit." };
         var thickness = new Option<double?>("--thickness") { Description = "Wall thickness t in LENGTH. Default 8 in in the chosen unit." };
-        var shearFactor = new Option<double>("--shear-factor") { Description = "Shear form factor f ≥ 1, shear area A/f. Default 1.2.", DefaultValueFactory = _ => ShearForm.RectangleDefault };
+        var shearFactor = new Option<double>("--shear-factor") { Description = "Shear form factor f ≥ 1, shear area A/f.", DefaultValueFactory = _ => ShearForm.RectangleDefault };
         var tol = new Option<string?>("--tolerance") { Description = "Band on FE/hand − 1, as 0.10 or 10%. Default 0.10." };
         var outOption = new Option<string?>("--out", "-o") { Description = "Folder for sweep.csv, sweep-ratio.png and sweep-shear-share.png. Default planelateral-results/sweep." };
         var cmd = new Command("sweep",
