@@ -41,7 +41,7 @@ public static class CliApp
             "PlaneLateral: lateral stiffness, load sharing and drift of walls and frames by shear-deformable finite elements, " +
             "beside the hand methods. Run with no command to solve the shipped demo model and print its hand-method comparison.")
         {
-            solve, validate, CompareCommand.Build(stdout, stderr), CouplingSweepCommand.Build(stdout, stderr),
+            solve, validate, CompareCommand.Build(stdout, stderr), CouplingSweepCommand.Build(stdout, stderr), SweepCommand.Build(stdout, stderr), ReportCommand.Build(stdout, stderr),
         };
         root.SetAction(_ =>
         {

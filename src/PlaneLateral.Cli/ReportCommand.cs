@@ -1,0 +1,75 @@
+using System.CommandLine;
+using PlaneLateral.Analysis;
+using PlaneLateral.Model;
+using PlaneLateral.Output;
+using PlaneLateral.Reports;
+using PlaneLateral.Studies;
+
+namespace PlaneLateral.Cli;
+
+/// <summary>The "report" command: one self-contained HTML report of a solved model, its Markdown twin and the figures.</summary>
+internal static class ReportCommand
+{
+    public static Command Build(TextWriter stdout, TextWriter stderr)
+    {
+        var modelArg = new Argument<string>("model") { Description = "Model file (JSON, format described in docs/model-format.md)." };
+        var outOption = new Option<string?>("--out", "-o")
+        {
+            Description = "Folder for report.html, report.md and the PNG figures (created if missing). Default: planelateral-results/<model name>/report in the current folder.",
+        };
+        var tolOption = new Option<string?>("--tolerance")
+        {
+            Description = "Band on FE/hand − 1 for comparison checks that set none of their own, as 0.10 or 10%. Default 0.10.",
+        };
+        var cmd = new Command("report",
+            "Solve a model and write a report: one self-contained HTML file with the figures embedded, a Markdown twin and the PNG figures (inputs, units, assumptions, formulas and sources, tables, drift checks, hand methods beside FE, verdicts, cautions).")
+        {
+            modelArg, outOption, tolOption,
+        };
+        cmd.SetAction(p => Run(p.GetValue(modelArg)!, p.GetValue(outOption), p.GetValue(tolOption), stdout, stderr));
+        return cmd;
+    }
+
+    private static int Run(string modelPath, string? outDir, string? tolText, TextWriter stdout, TextWriter stderr)
+    {
+        if (!CompareCommand.TryTolerance(tolText, out double tol, out string error))
+        {
+            stderr.Write(error + "\nNothing was written.\n");
+            return ExitCodes.Usage;
+        }
+        ReportDocument doc;
+        try
+        {
+            var model = ModelReader.ReadFile(modelPath);
+            var result = LinearStaticAnalysis.Run(model);
+            var comparisons = model.Comparisons.Count > 0 ? ComparisonStudy.Run(model, tol, result) : null;
+            doc = ModelReport.Build(result, comparisons, Path.GetFileName(modelPath), $"PlaneLateral {ResultFiles.Version}");
+        }
+        catch (ModelInputException e)
+        {
+            stderr.Write(e.Message + "\nNothing was written.\n");
+            return ExitCodes.BadModel;
+        }
+        catch (UnstableModelException e)
+        {
+            stderr.Write(e.Message + "\nNothing was written.\n");
+            return ExitCodes.Unstable;
+        }
+        string folder = outDir ?? Path.Combine(Directory.GetCurrentDirectory(), "planelateral-results", Path.GetFileNameWithoutExtension(modelPath), "report");
+        IReadOnlyList<string> written;
+        try
+        {
+            written = OutputSet.WriteAll(folder, ModelReport.Render(doc));
+        }
+        catch (IOException e)
+        {
+            stderr.Write($"{e.Message}\nFix: choose a writable folder with --out. No report file was replaced.\n");
+            return ExitCodes.OutputFailed;
+        }
+        stdout.Write($"PlaneLateral {ResultFiles.Version}: report\n\n{doc.Title}\n");
+        stdout.Write($"{doc.Tables.Count()} tables, {doc.Figures.Count()} figures.\n");
+        stdout.Write($"\nCaution: {ModelReport.Caution}\n");
+        stdout.Write($"\nReport written to {folder}: {string.Join(", ", written.Select(Path.GetFileName))}\n");
+        return ExitCodes.Success;
+    }
+}

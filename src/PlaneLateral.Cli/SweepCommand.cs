@@ -1,0 +1,154 @@
+using System.CommandLine;
+using System.Globalization;
+using PlaneLateral.Hand;
+using PlaneLateral.Output;
+using PlaneLateral.Reports;
+using PlaneLateral.Units;
+
+namespace PlaneLateral.Cli;
+
+/// <summary>The "sweep" command: a solid wall's aspect ratio varied over a range, hand pier formula beside the FE at every point.</summary>
+internal static class SweepCommand
+{
+    public static Command Build(TextWriter stdout, TextWriter stderr)
+    {
+        var from = new Option<double>("--from") { Description = "Smallest aspect ratio h/l (> 0).", DefaultValueFactory = _ => 0.25 };
+        var to = new Option<double>("--to") { Description = "Largest aspect ratio h/l (> --from).", DefaultValueFactory = _ => 4.0 };
+        var points = new Option<int>("--points") { Description = $"Number of h/l values, 2 to {AspectSweep.MaxPoints}.", DefaultValueFactory = _ => 25 };
+        var spacing = new Option<string>("--spacing") { Description = "linear (equal steps) or geometric (equal ratios).", DefaultValueFactory = _ => "geometric" };
+        var ends = new Option<string>("--ends") { Description = "cantilever, fixed-fixed or both.", DefaultValueFactory = _ => "both" };
+        var units = new Option<string>("--units") { Description = "Force and length units as FORCE,LENGTH, e.g. kip,in or kN,m.", DefaultValueFactory = _ => "kip,in" };
+        var material = new Option<string>("--material") { Description = $"Named material: {string.Join(" or ", SweepMaterials.Names)}. --E, --G, --nu override it.", DefaultValueFactory = _ => "concrete" };
+        var e = new Option<double?>("--E") { Description = "Young's modulus in FORCE/LENGTH² (overrides the material)." };
+        var g = new Option<double?>("--G") { Description = "Shear modulus in FORCE/LENGTH² (overrides the material)." };
+        var nu = new Option<double?>("--nu") { Description = "Poisson's ratio; G = E/(2(1+ν)) (instead of --G)." };
+        var length = new Option<double?>("--length") { Description = "Wall plan length l in LENGTH. Default 20 ft in the chosen unit." };
+        var thickness = new Option<double?>("--thickness") { Description = "Wall thickness t in LENGTH. Default 8 in in the chosen unit." };
+        var shearFactor = new Option<double>("--shear-factor") { Description = "Shear form factor f ≥ 1, shear area A/f.", DefaultValueFactory = _ => ShearForm.RectangleDefault };
+        var tol = new Option<string?>("--tolerance") { Description = "Band on FE/hand − 1, as 0.10 or 10%. Default 0.10." };
+        var outOption = new Option<string?>("--out", "-o") { Description = "Folder for sweep.csv, sweep-ratio.png and sweep-shear-share.png. Default planelateral-results/sweep." };
+        var cmd = new Command("sweep",
+            "Vary a solid wall's aspect ratio h/l over a range, for cantilever and fixed-fixed ends, and set the hand pier formula (flexural, shear, total) beside the finite-element stiffness at every point; write a CSV and two PNG figures.")
+        {
+            from, to, points, spacing, ends, units, material, e, g, nu, length, thickness, shearFactor, tol, outOption,
+        };
+        cmd.SetAction(p =>
+        {
+            var o = new SweepArgs(p.GetValue(from), p.GetValue(to), p.GetValue(points), p.GetValue(spacing)!, p.GetValue(ends)!,
+                p.GetValue(units)!, p.GetValue(material)!, p.GetValue(e), p.GetValue(g), p.GetValue(nu), p.GetValue(length),
+                p.GetValue(thickness), p.GetValue(shearFactor), p.GetValue(tol), p.GetValue(outOption));
+            return Run(o, stdout, stderr);
+        });
+        return cmd;
+    }
+
+    internal sealed record SweepArgs(double From, double To, int Points, string Spacing, string Ends, string Units, string Material,
+        double? E, double? G, double? Nu, double? Length, double? Thickness, double ShearFactor, string? Tolerance, string? Out);
+
+    /// <summary>Turns the command line into a spec, listing every problem at once.</summary>
+    internal static SweepSpec? ToSpec(SweepArgs a, List<string> problems)
+    {
+        var parts = a.Units.Split(',', StringSplitOptions.TrimEntries);
+        UnitSystem u = UnitSystem.KipInch;
+        if (parts.Length != 2 || !UnitSystem.TryParseForce(parts[0], out var fu) || !UnitSystem.TryParseLength(parts[1], out var lu))
+            problems.Add($"--units '{a.Units}' is not FORCE,LENGTH. Fix: give e.g. kip,in or kN,m (force: {string.Join(", ", UnitSystem.ForceSymbols)}; length: {string.Join(", ", UnitSystem.LengthSymbols)}).");
+        else u = new UnitSystem(fu, lu);
+
+        SweepSpacing spacing = SweepSpacing.Geometric;
+        if (a.Spacing == "linear") spacing = SweepSpacing.Linear;
+        else if (a.Spacing != "geometric") problems.Add($"--spacing '{a.Spacing}' is unknown. Fix: give linear or geometric.");
+
+        EndFixity[] ends = a.Ends switch
+        {
+            "both" => [EndFixity.Cantilever, EndFixity.FixedFixed],
+            "cantilever" => [EndFixity.Cantilever],
+            "fixed-fixed" => [EndFixity.FixedFixed],
+            _ => [],
+        };
+        if (ends.Length == 0) problems.Add($"--ends '{a.Ends}' is unknown. Fix: give cantilever, fixed-fixed or both.");
+
+        var mat = SweepMaterials.Get(a.Material, u);
+        if (mat is null) problems.Add($"--material '{a.Material}' is unknown. Fix: give {string.Join(" or ", SweepMaterials.Names)}, or give --E with --G or --nu.");
+        if (a.G is not null && a.Nu is not null) problems.Add("--G and --nu are both given. Fix: give one of them.");
+        if (a.Nu is double n && !(n > -1 && n < 0.5)) problems.Add($"--nu {n.ToString(CultureInfo.InvariantCulture)} is outside (-1, 0.5). Fix: give a Poisson's ratio such as 0.2.");
+        double eVal = a.E ?? mat?.E ?? double.NaN;
+        double gVal = a.G ?? (a.Nu is double nn ? eVal / (2 * (1 + nn)) : a.E is not null && mat is not null ? eVal * mat.G / mat.E : mat?.G ?? double.NaN);
+        string matName = a.E is null && a.G is null && a.Nu is null ? mat?.Name ?? a.Material
+            : $"user values{(mat is null ? "" : $" (starting from {a.Material})")}{(a.G is null && a.Nu is null ? ", G in the material's G/E ratio" : "")}";
+
+        if (!CompareCommand.TryTolerance(a.Tolerance, out double tol, out string tolError)) problems.Add(tolError);
+        double len = a.Length ?? u.FromSI(240 * 0.0254, Quantity.Length);
+        double t = a.Thickness ?? u.FromSI(8 * 0.0254, Quantity.Length);
+        var spec = new SweepSpec(a.From, a.To, a.Points, spacing, u, len, t, eVal, gVal, matName, a.ShearFactor, ends, tol);
+        if (problems.Count == 0) problems.AddRange(AspectSweep.Problems(spec));
+        return problems.Count == 0 ? spec : null;
+    }
+
+    internal static int Run(SweepArgs a, TextWriter stdout, TextWriter stderr)
+    {
+        var problems = new List<string>();
+        var spec = ToSpec(a, problems);
+        if (spec is null)
+        {
+            foreach (var p in problems) stderr.Write($"sweep: {p}\n");
+            stderr.Write("Nothing was written.\n");
+            return ExitCodes.Usage;
+        }
+        int total = spec.Points * spec.Ends.Count;
+        // Progress only for a person watching: stderr is the console and a terminal.
+        bool terminal = ReferenceEquals(stderr, Console.Error) && !Console.IsErrorRedirected;
+        var progress = terminal ? new TerminalProgress(stderr, total) : null;
+        var result = AspectSweep.Run(spec, progress);
+        progress?.Finish();
+
+        string folder = a.Out ?? Path.Combine(Directory.GetCurrentDirectory(), "planelateral-results", "sweep");
+        IReadOnlyList<string> written;
+        try
+        {
+            written = OutputSet.WriteAll(folder, SweepFiles.Render(result, $"PlaneLateral {ResultFiles.Version}"));
+        }
+        catch (IOException ex)
+        {
+            stderr.Write($"{ex.Message}\nFix: choose a writable folder with --out. No sweep file was replaced.\n");
+            return ExitCodes.OutputFailed;
+        }
+        var u = spec.Units;
+        stdout.Write($"PlaneLateral {ResultFiles.Version}: aspect-ratio sweep of a solid wall\n\n");
+        stdout.Write($"Wall      l = {spec.Length.ToString("G6", CultureInfo.InvariantCulture)} {u.LengthSymbol}, t = {spec.Thickness.ToString("G6", CultureInfo.InvariantCulture)} {u.LengthSymbol}, f = {spec.FormFactor.ToString("G4", CultureInfo.InvariantCulture)}\n");
+        stdout.Write($"Material  {spec.MaterialName}: E = {spec.E.ToString("G6", CultureInfo.InvariantCulture)}, G = {spec.G.ToString("G6", CultureInfo.InvariantCulture)} {u.Label(Quantity.Stress)}\n");
+        stdout.Write($"Range     h/l {spec.From.ToString("G6", CultureInfo.InvariantCulture)} to {spec.To.ToString("G6", CultureInfo.InvariantCulture)}, {spec.Points} points ({a.Spacing}), {string.Join(" and ", spec.Ends.Select(SweepFiles.EndsName))}\n\n");
+        var t = new TextTable("ends", "h/l", "hand k", "FE k", "FE/hand", "shear share (hand)", "verdict").Numeric(1, 2, 3, 4, 5);
+        foreach (var p in result.Points)
+            t.Add(SweepFiles.EndsName(p.Ends), p.AspectRatio.ToString("0.000", CultureInfo.InvariantCulture), TextTable.Num(p.Hand.Stiffness), TextTable.Num(p.Fe[0].Value),
+                p.Ratio.ToString("0.0000", CultureInfo.InvariantCulture), (100 * p.Hand.ShearShare).ToString("0.0", CultureInfo.InvariantCulture) + "%",
+                Studies.ComparisonRow.VerdictWords(p.Verdict, Studies.ComparedQuantity.Stiffness));
+        stdout.Write($"Stiffness in {u.Label(Quantity.TranslationalStiffness)}; FE = {result.FeModels[0]}\n");
+        stdout.Write(t.Render());
+        stdout.Write($"\nCaution: {SweepFiles.Caution}\n");
+        stdout.Write($"\nSweep written to {folder}: {string.Join(", ", written.Select(Path.GetFileName))}\n");
+        return ExitCodes.Success;
+    }
+
+    /// <summary>"sweep: 12 of 50 points" on one terminal line, rewritten in place.</summary>
+    private sealed class TerminalProgress(TextWriter stderr, int total) : IProgress<int>
+    {
+        private readonly Lock _gate = new();
+        private int _shown;
+
+        public void Report(int done)
+        {
+            lock (_gate)
+            {
+                // Rewrite the line only when the whole percentage changes (or at the end), not for every point.
+                if (done <= _shown || (100L * done / total == 100L * _shown / total && done < total)) return;
+                _shown = done;
+                stderr.Write($"\rsweep: {done} of {total} points");
+            }
+        }
+
+        public void Finish()
+        {
+            lock (_gate) stderr.Write("\r" + new string(' ', 40) + "\r");
+        }
+    }
+}

@@ -1,0 +1,217 @@
+using System.Globalization;
+using PlaneLateral.Analysis;
+using PlaneLateral.Hand;
+using PlaneLateral.Model;
+using PlaneLateral.Studies;
+using PlaneLateral.Units;
+
+namespace PlaneLateral.Reports;
+
+/// <summary>How the sweep's h/l values are spaced between the ends of the range.</summary>
+public enum SweepSpacing
+{
+    /// <summary>Equal steps in h/l.</summary>
+    Linear,
+    /// <summary>Equal ratios between neighbouring h/l values (even on a log axis).</summary>
+    Geometric,
+}
+
+/// <summary>
+/// What to sweep: a solid rectangular wall of fixed plan length and thickness whose height is varied so that h/l runs
+/// over a range. All quantities are in <see cref="Units"/> (lengths L, moduli F/L²).
+/// </summary>
+/// <param name="From">Smallest h/l, &gt; 0.</param>
+/// <param name="To">Largest h/l, &gt; From.</param>
+/// <param name="Points">Number of h/l values, 2 to <see cref="AspectSweep.MaxPoints"/>.</param>
+/// <param name="Length">Plan length l of the wall, the dimension parallel to the force (L).</param>
+/// <param name="Thickness">Wall thickness t (L).</param>
+/// <param name="E">Young's modulus (F/L²).</param>
+/// <param name="G">Shear modulus (F/L²).</param>
+/// <param name="MaterialName">The material's name for the outputs.</param>
+/// <param name="FormFactor">Shear form factor f ≥ 1 (shear area A/f).</param>
+/// <param name="Ends">End conditions to run, each a curve.</param>
+/// <param name="Tolerance">Band on FE/hand − 1 for the verdict, in (0, 1).</param>
+public sealed record SweepSpec(
+    double From, double To, int Points, SweepSpacing Spacing, UnitSystem Units,
+    double Length, double Thickness, double E, double G, string MaterialName, double FormFactor,
+    IReadOnlyList<EndFixity> Ends, double Tolerance)
+{
+    /// <summary>The h/l values, smallest first.</summary>
+    public double[] AspectRatios()
+    {
+        var a = new double[Points];
+        for (int i = 0; i < Points; i++)
+        {
+            double s = (double)i / (Points - 1);
+            a[i] = Spacing == SweepSpacing.Linear ? From + (To - From) * s : From * Math.Pow(To / From, s);
+        }
+        a[0] = From;
+        a[^1] = To;
+        return a;
+    }
+}
+
+/// <summary>One wall of the sweep, in SI (m, N/m²), handed to each FE model.</summary>
+/// <param name="AspectRatio">h/l.</param>
+/// <param name="Height">h (m).</param>
+/// <param name="Length">l (m).</param>
+/// <param name="Thickness">t (m).</param>
+/// <param name="E">Young's modulus (N/m²).</param>
+/// <param name="G">Shear modulus (N/m²).</param>
+/// <param name="FormFactor">f, shear area A/f.</param>
+public sealed record SweepWall(double AspectRatio, double Height, double Length, double Thickness, double E, double G, double FormFactor, EndFixity Ends);
+
+/// <summary>
+/// A finite-element model of a sweep wall. The sweep holds an ordered list of these; the first is the reference for the
+/// verdict. A plane-stress panel model is one more implementation, added to the list; nothing else changes.
+/// </summary>
+public interface ISweepFeModel
+{
+    /// <summary>Short name for tables and legends, e.g. "Timoshenko line members".</summary>
+    string Name { get; }
+
+    /// <summary>Lateral stiffness (N/m) of the wall under a force at its top, and the shear share of its deflection when the model can measure it.</summary>
+    (double Stiffness, double? ShearShare) Solve(SweepWall wall);
+
+    /// <summary>How the model is built and loaded, in plain words.</summary>
+    string Description { get; }
+}
+
+/// <summary>
+/// The wall as a vertical chain of exact Timoshenko beam-columns on the wall's centre line, base fixed, top free
+/// (cantilever) or held against rotation (fixed-fixed), unit force at the top; stiffness 1/Δ through the normal
+/// analysis path (<see cref="LinearStaticAnalysis"/>). The shear share comes from a second solve without shear deformation.
+/// </summary>
+public sealed class LineMemberWallModel(int segments = 4) : ISweepFeModel
+{
+    public string Name => "Timoshenko line members";
+
+    public string Description =>
+        $"the wall as {segments} exact Timoshenko beam-columns on its centre line (A = t·l, I = t·l³/12, shear area A/f), base fixed, top free or held against rotation, unit force at the top; stiffness 1/Δ; shear share from a second solve without shear deformation";
+
+    public (double Stiffness, double? ShearShare) Solve(SweepWall w)
+    {
+        double k = LinearStaticAnalysis.Run(Build(w, withShear: true)).Stiffness[0].Stiffness;
+        double kFlex = LinearStaticAnalysis.Run(Build(w, withShear: false)).Stiffness[0].Stiffness;
+        return (k, 1 - k / kFlex);   // Δ_flexure/Δ_total = (1/kFlex)/(1/k)
+    }
+
+    internal StructureModel Build(SweepWall w, bool withShear)
+    {
+        var mat = new Material("wall", w.E, w.G, w.E / (2 * w.G) - 1);
+        double a = w.Thickness * w.Length, i = w.Thickness * w.Length * w.Length * w.Length / 12.0;
+        double shearArea = withShear ? a / w.FormFactor : double.PositiveInfinity;
+        var nodes = new List<Node>();
+        for (int n = 0; n <= segments; n++) nodes.Add(new Node(n, $"n{n}", 0, w.Height * n / segments));
+        var members = new List<Member>();
+        for (int m = 0; m < segments; m++)
+            members.Add(new Member(m, $"wall-{m + 1}", m, m + 1, MemberKind.BeamColumn, "wall", mat.Id, w.E, w.G, a, i, shearArea,
+                false, false, 0, 0, StiffnessModifiers.None, "wall"));
+        var supports = new List<Support> { new(0, "fixed", true, true, true, 0, 0, 0) };
+        if (w.Ends == EndFixity.FixedFixed) supports.Add(new Support(segments, "custom", false, false, true, 0, 0, 0));
+        return new StructureModel
+        {
+            Title = $"sweep wall h/l = {w.AspectRatio.ToString("G6", CultureInfo.InvariantCulture)}",
+            SourcePath = "(sweep)",
+            Units = UnitSystem.KilonewtonMetre,
+            Materials = [mat],
+            Sections = [new Section("wall", "rectangle", a, i, ShearAreaRule.Given, shearArea, w.FormFactor, w.Length)],
+            Nodes = nodes,
+            Members = members,
+            Supports = supports,
+            LoadCases = [],
+            Combinations = [],
+            StiffnessPoints = [new StiffnessPoint("top", segments, Dof.X)],
+        };
+    }
+}
+
+/// <summary>One point of the sweep: the hand pier formula and every FE estimate for one wall and end condition. Values in the spec's units.</summary>
+/// <param name="Hand">Piers.Rectangular under a unit force: flexural and shear deflections (L per unit force F), total, stiffness (F/L), shares.</param>
+/// <param name="Fe">FE estimates in the order of the sweep's models; the first is the reference.</param>
+public sealed record SweepPoint(int Index, EndFixity Ends, double AspectRatio, double Height, MemberDeflection Hand, IReadOnlyList<FeEstimate> Fe, double Tolerance)
+{
+    /// <summary>FE/hand stiffness for the reference FE estimate.</summary>
+    public double Ratio => Fe[0].Value / Hand.Stiffness;
+
+    public Verdict Verdict => ComparisonRow.Judge(Ratio, Tolerance);
+}
+
+/// <summary>A finished sweep: the spec, the FE model names in order, and the points (for each end condition in the spec's order, h/l ascending).</summary>
+public sealed record SweepResult(SweepSpec Spec, IReadOnlyList<string> FeModels, IReadOnlyList<string> FeDescriptions, IReadOnlyList<SweepPoint> Points);
+
+/// <summary>
+/// Varies a solid wall's aspect ratio h/l and sets the hand pier formula (flexural, shear, total) beside each FE model at
+/// every point. Points run in parallel; the result depends only on the spec (each point is computed on its own, stored by
+/// its index), so two runs give identical numbers.
+/// </summary>
+public static class AspectSweep
+{
+    /// <summary>The stated limit on h/l values per sweep (each runs once per end condition and FE model).</summary>
+    public const int MaxPoints = 400;
+
+    /// <summary>The problems with a spec, in plain words with a fix each; empty when it can run.</summary>
+    public static IReadOnlyList<string> Problems(SweepSpec s)
+    {
+        var p = new List<string>();
+        if (!(double.IsFinite(s.From) && s.From > 0)) p.Add($"the range start h/l = {G(s.From)} is not a positive number. Fix: give --from above 0, e.g. 0.25.");
+        if (!double.IsFinite(s.To)) p.Add($"the range end h/l = {G(s.To)} is not a number. Fix: give --to, e.g. 4.");
+        if (double.IsFinite(s.From) && double.IsFinite(s.To))
+        {
+            if (s.To == s.From) p.Add($"the range {G(s.From)} to {G(s.To)} is empty. Fix: give --to larger than --from.");
+            else if (s.To < s.From) p.Add($"the range is inverted: --from {G(s.From)} is larger than --to {G(s.To)}. Fix: swap them.");
+        }
+        if (s.Points < 2) p.Add($"{s.Points} point(s) cannot span a range. Fix: give --points 2 or more.");
+        if (s.Points > MaxPoints) p.Add($"{s.Points} points is more than the limit of {MaxPoints}. Fix: give --points {MaxPoints} or fewer.");
+        if (!(double.IsFinite(s.Length) && s.Length > 0)) p.Add($"the wall length {G(s.Length)} is not positive. Fix: give --length above 0.");
+        if (!(double.IsFinite(s.Thickness) && s.Thickness > 0)) p.Add($"the wall thickness {G(s.Thickness)} is not positive. Fix: give --thickness above 0.");
+        if (!(double.IsFinite(s.E) && s.E > 0)) p.Add($"Young's modulus {G(s.E)} is not positive. Fix: give --E above 0 or a --material.");
+        if (!(double.IsFinite(s.G) && s.G > 0)) p.Add($"the shear modulus {G(s.G)} is not positive. Fix: give --G above 0, or --nu in (-1, 0.5).");
+        if (!(double.IsFinite(s.FormFactor) && s.FormFactor >= 1)) p.Add($"the shear form factor {G(s.FormFactor)} is below 1. Fix: give --shear-factor 1 or more (1.2 for a rectangle).");
+        if (s.Ends.Count == 0) p.Add("no end condition. Fix: give --ends cantilever, fixed-fixed or both.");
+        if (!(s.Tolerance > 0 && s.Tolerance < 1)) p.Add($"the tolerance {G(s.Tolerance)} is outside (0, 1). Fix: give a fraction such as 0.10.");
+        return p;
+    }
+
+    /// <summary>Runs the sweep with the Timoshenko line-member model only.</summary>
+    public static SweepResult Run(SweepSpec spec, IProgress<int>? progress = null) => Run(spec, [new LineMemberWallModel()], progress);
+
+    /// <summary>Runs the sweep on every core.</summary>
+    /// <param name="models">FE models in order (the first is the reference); at least one.</param>
+    /// <param name="progress">Told the number of finished points (of Points × Ends) as they finish; may be called from any thread.</param>
+    /// <exception cref="ArgumentException">The spec has problems (<see cref="Problems"/>), all listed.</exception>
+    public static SweepResult Run(SweepSpec spec, IReadOnlyList<ISweepFeModel> models, IProgress<int>? progress = null)
+    {
+        var problems = Problems(spec);
+        if (problems.Count > 0) throw new ArgumentException(string.Join("\n", problems));
+        if (models.Count == 0) throw new ArgumentException("the sweep needs at least one FE model.");
+        var u = spec.Units;
+        double l = u.ToSI(spec.Length, Quantity.Length), t = u.ToSI(spec.Thickness, Quantity.Length);
+        double e = u.ToSI(spec.E, Quantity.Stress), g = u.ToSI(spec.G, Quantity.Stress);
+        var ratios = spec.AspectRatios();
+        int n = ratios.Length * spec.Ends.Count;
+        var points = new SweepPoint[n];
+        int done = 0;
+        Parallel.For(0, n, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, k =>
+        {
+            var ends = spec.Ends[k / ratios.Length];
+            double aspect = ratios[k % ratios.Length];
+            double hUser = aspect * spec.Length;
+            // Hand side in the user's units (the library takes any consistent set): a unit force at the top.
+            var hand = Piers.Rectangular(ends, 1.0, hUser, spec.Length, spec.Thickness, spec.E, spec.G, spec.FormFactor);
+            var wall = new SweepWall(aspect, aspect * l, l, t, e, g, spec.FormFactor, ends);
+            var fe = new FeEstimate[models.Count];
+            for (int m = 0; m < models.Count; m++)
+            {
+                var (k1, share) = models[m].Solve(wall);
+                fe[m] = new FeEstimate(models[m].Name, u.FromSI(k1, Quantity.TranslationalStiffness), models[m].Description,
+                    share is double s ? 1 - s : null, share);
+            }
+            points[k] = new SweepPoint(k, ends, aspect, hUser, hand, fe, spec.Tolerance);
+            progress?.Report(Interlocked.Increment(ref done));
+        });
+        return new SweepResult(spec, models.Select(m => m.Name).ToArray(), models.Select(m => m.Description).ToArray(), points);
+    }
+
+    private static string G(double v) => v.ToString("G6", CultureInfo.InvariantCulture);
+}

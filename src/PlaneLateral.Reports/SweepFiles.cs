@@ -1,0 +1,182 @@
+using System.Globalization;
+using System.Text;
+using PlaneLateral.Hand;
+using PlaneLateral.Studies;
+using PlaneLateral.Units;
+
+namespace PlaneLateral.Reports;
+
+/// <summary>The sweep's outputs: sweep.csv and two figures (FE/hand stiffness ratio and shear share against h/l).</summary>
+public static class SweepFiles
+{
+    /// <summary>The caution carried by every sweep output.</summary>
+    public const string Caution = ComparisonReport.Caution;
+
+    /// <summary>Below this h/l a pier is squat and plane sections are doubtful (common practice; docs/hand-methods.md §2).</summary>
+    public const double SquatAspectRatio = 0.5;
+
+    /// <summary>File name → bytes of every sweep output, in a fixed order.</summary>
+    public static IReadOnlyList<(string Name, byte[] Bytes)> Render(SweepResult r, string producedBy)
+    {
+        var ratio = RatioFigure(r);
+        var share = ShearShareFigure(r);
+        return [OutputSet.Text("sweep.csv", Csv(r, producedBy)), (ratio.FileName, ratio.Png), (share.FileName, share.Png)];
+    }
+
+    public static string EndsName(EndFixity e) => e == EndFixity.Cantilever ? "cantilever" : "fixed-fixed";
+
+    private static string F(double v) => v.ToString("G12", CultureInfo.InvariantCulture);
+
+    private static string CsvField(string s) => s.IndexOfAny([',', '"', '\n']) >= 0 ? "\"" + s.Replace("\"", "\"\"") + "\"" : s;
+
+    /// <summary>One line per point; hand deflections are for a unit force at the top (length per unit force).</summary>
+    public static string Csv(SweepResult r, string producedBy)
+    {
+        var s = r.Spec;
+        var u = s.Units;
+        string len = u.LengthSymbol, k = u.Label(Quantity.TranslationalStiffness), flex = $"{len}/{u.ForceSymbol}";
+        var sb = new StringBuilder();
+        sb.Append($"point,ends,h/l,height [{len}],hand flexural deflection [{flex}],hand shear deflection [{flex}],hand total deflection [{flex}],hand stiffness [{k}],hand flexural share,hand shear share");
+        for (int m = 0; m < r.FeModels.Count; m++)
+            sb.Append($",fe{m + 1} stiffness [{k}],fe{m + 1} FE/hand,fe{m + 1} shear share");
+        sb.Append(",verdict\n");
+        foreach (var p in r.Points)
+        {
+            var h = p.Hand;
+            sb.Append($"{p.Index + 1},{EndsName(p.Ends)},{F(p.AspectRatio)},{F(p.Height)},{F(h.FlexuralDeflection)},{F(h.ShearDeflection)},{F(h.TotalDeflection)},{F(h.Stiffness)},{F(h.FlexuralShare)},{F(h.ShearShare)}");
+            foreach (var fe in p.Fe)
+                sb.Append($",{F(fe.Value)},{F(fe.Value / h.Stiffness)},{(fe.ShearShare is double sh ? F(sh) : "")}");
+            sb.Append(',').Append(ComparisonRow.VerdictWords(p.Verdict, ComparedQuantity.Stiffness)).Append('\n');
+        }
+        for (int m = 0; m < r.FeModels.Count; m++)
+            sb.Append($"# fe{m + 1}: {r.FeModels[m]}: {r.FeDescriptions[m]}\n");
+        sb.Append($"# wall: length {F(s.Length)} {len}, thickness {F(s.Thickness)} {len}; material {s.MaterialName}: E = {F(s.E)} {u.Label(Quantity.Stress)}, G = {F(s.G)} {u.Label(Quantity.Stress)}; shear form factor f = {F(s.FormFactor)}\n");
+        sb.Append($"# hand: Piers.Rectangular, cantilever P h^3/(3EI) or fixed-fixed P h^3/(12EI) plus f P h/(AG), I = t l^3/12, A = t l (elementary beam theory with Timoshenko's shear term; Gere & Timoshenko, Mechanics of Materials)\n");
+        sb.Append($"# tolerance: |FE/hand - 1| <= {F(s.Tolerance)}; {CsvField(producedBy)}\n");
+        sb.Append($"# caution: {Caution}\n");
+        return sb.ToString();
+    }
+
+    /// <summary>FE/hand stiffness against h/l, one curve per end condition and FE model, the tolerance band shaded.</summary>
+    public static Figure RatioFigure(SweepResult r)
+    {
+        var s = r.Spec;
+        bool log = s.Spacing == SweepSpacing.Geometric;
+        var plot = PlotStyle.New("Wall stiffness: FE / hand against aspect ratio", XLabel(log), "FE stiffness / hand stiffness [-]");
+        var band = plot.Add.VerticalSpan(1 - s.Tolerance, 1 + s.Tolerance);
+        band.FillStyle.Color = PlotStyle.Band.WithAlpha(0.8);
+        band.LineStyle.Width = 0;
+        band.LegendText = $"tolerance band ±{Pct(s.Tolerance)}";
+        double lo = 1 - 2 * s.Tolerance, hi = 1 + 2 * s.Tolerance;
+        int c = 0;
+        foreach (var ends in s.Ends)
+        {
+            var pts = r.Points.Where(p => p.Ends == ends).ToArray();
+            double[] x = pts.Select(p => X(p.AspectRatio, log)).ToArray();
+            for (int m = 0; m < r.FeModels.Count; m++)
+            {
+                double[] y = pts.Select(p => p.Fe[m].Value / p.Hand.Stiffness).ToArray();
+                lo = Math.Min(lo, y.Min()); hi = Math.Max(hi, y.Max());
+                var sc = plot.Add.Scatter(x, y);
+                sc.Color = PlotStyle.Series[c % PlotStyle.Series.Length];
+                sc.LineWidth = 2;
+                sc.LinePattern = ends == EndFixity.Cantilever ? ScottPlot.LinePattern.Solid : ScottPlot.LinePattern.Dashed;
+                sc.MarkerSize = 6;
+                sc.MarkerShape = ends == EndFixity.Cantilever ? ScottPlot.MarkerShape.FilledCircle : ScottPlot.MarkerShape.OpenSquare;
+                sc.LegendText = $"{EndsName(ends)}, {r.FeModels[m]}";
+                c++;
+            }
+        }
+        SquatLine(plot, log);
+        LogTicks(plot, s, log);
+        plot.Axes.SetLimitsY(lo - 0.02, hi + 0.02);
+        plot.ShowLegend(ScottPlot.Alignment.UpperRight);
+        var png = PlotStyle.Png(plot);
+        return new Figure("sweep-ratio.png", "FE/hand stiffness against h/l",
+            $"Ratio of each FE model's lateral stiffness to the hand pier formula, {Describe(s)}. Shaded: the tolerance band 1 ± {Pct(s.Tolerance)}. Dotted line: h/l = {SquatAspectRatio}, below which plane sections are doubtful (common practice). Timoshenko line members follow the same beam theory as the hand formula, so their ratio is 1 to rounding: that checks the arithmetic, not the theory; a plane-stress panel model is the estimate expected to depart for squat walls.",
+            png, PlotStyle.Width, PlotStyle.Height);
+    }
+
+    /// <summary>Shear share of the top deflection against h/l: hand formula as lines, FE models as markers.</summary>
+    public static Figure ShearShareFigure(SweepResult r)
+    {
+        var s = r.Spec;
+        bool log = s.Spacing == SweepSpacing.Geometric;
+        var plot = PlotStyle.New("Shear share of the top deflection against aspect ratio", XLabel(log), "shear deflection / total deflection [%]");
+        int c = 0;
+        foreach (var ends in s.Ends)
+        {
+            var pts = r.Points.Where(p => p.Ends == ends).ToArray();
+            double[] x = pts.Select(p => X(p.AspectRatio, log)).ToArray();
+            var color = PlotStyle.Series[c % PlotStyle.Series.Length];
+            var hand = plot.Add.Scatter(x, pts.Select(p => 100 * p.Hand.ShearShare).ToArray());
+            hand.Color = color;
+            hand.LineWidth = 2;
+            hand.MarkerSize = 0;
+            hand.LinePattern = ends == EndFixity.Cantilever ? ScottPlot.LinePattern.Solid : ScottPlot.LinePattern.Dashed;
+            hand.LegendText = $"{EndsName(ends)}, hand formula";
+            for (int m = 0; m < r.FeModels.Count; m++)
+            {
+                if (pts.Any(p => p.Fe[m].ShearShare is null)) continue;
+                var fe = plot.Add.ScatterPoints(x, pts.Select(p => 100 * p.Fe[m].ShearShare!.Value).ToArray());
+                fe.Color = color;
+                fe.MarkerSize = 8;
+                fe.MarkerShape = m == 0 ? ScottPlot.MarkerShape.OpenCircle : ScottPlot.MarkerShape.OpenTriangleUp;
+                fe.LegendText = $"{EndsName(ends)}, {r.FeModels[m]}";
+            }
+            c++;
+        }
+        SquatLine(plot, log);
+        LogTicks(plot, s, log);
+        plot.Axes.SetLimitsY(0, 100);
+        plot.ShowLegend(ScottPlot.Alignment.UpperRight);
+        var png = PlotStyle.Png(plot);
+        return new Figure("sweep-shear-share.png", "Shear share against h/l",
+            $"Share of the top deflection that comes from shear deformation, {Describe(s)}. Lines: the hand formula's f·Ph/(AG) term over the total; markers: the FE models (from a second solve without shear deformation).",
+            png, PlotStyle.Width, PlotStyle.Height);
+    }
+
+    private static string XLabel(bool log) => log ? "aspect ratio h/l [-], logarithmic scale" : "aspect ratio h/l [-]";
+
+    private static double X(double aspect, bool log) => log ? Math.Log10(aspect) : aspect;
+
+    /// <summary>On a logarithmic axis (geometric spacing): ticks at 1–9 × 10^k, labelled at 1, 2, 3, 5 × 10^k and at the range ends.</summary>
+    private static void LogTicks(ScottPlot.Plot plot, SweepSpec s, bool log)
+    {
+        if (!log) return;
+        var ticks = new List<ScottPlot.Tick>();
+        for (int k = (int)Math.Floor(Math.Log10(s.From)); k <= (int)Math.Ceiling(Math.Log10(s.To)); k++)
+            for (int m = 1; m <= 9; m++)
+            {
+                double v = m * Math.Pow(10, k);
+                if (v < s.From * 0.999 || v > s.To * 1.001) continue;
+                bool major = m is 1 or 2 or 3 or 5;
+                ticks.Add(new ScottPlot.Tick(Math.Log10(v), major ? v.ToString("G4", CultureInfo.InvariantCulture) : "", major));
+            }
+        foreach (double end in new[] { s.From, s.To })
+        {
+            ticks.RemoveAll(t => Math.Abs(t.Position - Math.Log10(end)) < 1e-9);
+            ticks.Add(new ScottPlot.Tick(Math.Log10(end), end.ToString("G4", CultureInfo.InvariantCulture), true));
+        }
+        plot.Axes.Bottom.TickGenerator = new ScottPlot.TickGenerators.NumericManual(ticks.OrderBy(t => t.Position).ToArray());
+        double pad = 0.03 * (Math.Log10(s.To) - Math.Log10(s.From));
+        plot.Axes.SetLimitsX(Math.Log10(s.From) - pad, Math.Log10(s.To) + pad);
+    }
+
+    private static void SquatLine(ScottPlot.Plot plot, bool log)
+    {
+        var v = plot.Add.VerticalLine(X(SquatAspectRatio, log));
+        v.Color = PlotStyle.Slate;
+        v.LineWidth = 1.5f;
+        v.LinePattern = ScottPlot.LinePattern.Dotted;
+        v.LegendText = $"h/l = {SquatAspectRatio} (squat below, common practice)";
+    }
+
+    private static string Describe(SweepSpec s)
+    {
+        var u = s.Units;
+        return $"solid wall l = {F(s.Length)} {u.LengthSymbol}, t = {F(s.Thickness)} {u.LengthSymbol}, {s.MaterialName} (E = {F(s.E)}, G = {F(s.G)} {u.Label(Quantity.Stress)}), f = {F(s.FormFactor)}";
+    }
+
+    private static string Pct(double f) => (100 * f).ToString("0.#", CultureInfo.InvariantCulture) + "%";
+}
