@@ -1,0 +1,355 @@
+using System.Buffers;
+using System.Runtime.CompilerServices;
+
+namespace PlaneLateral.Solvers;
+
+/// <summary>Which fill-reducing ordering <see cref="SupernodalCholeskySolver"/> applies.</summary>
+public enum SupernodalOrdering
+{
+    /// <summary>Approximate minimum degree (<see cref="MinimumDegreeOrdering"/>), the default.</summary>
+    ApproximateMinimumDegree = 0,
+
+    /// <summary>The caller's own numbering (postordered, which changes no fill).</summary>
+    Natural = 1,
+
+    /// <summary>Reverse Cuthill–McKee (<see cref="Orderings.ReverseCuthillMcKee(SymmetricSparseMatrix)"/>), for comparison.</summary>
+    ReverseCuthillMcKee = 2,
+}
+
+/// <summary>
+/// Supernodal multifrontal sparse Cholesky solver, P·K·Pᵀ = L·Lᵀ, for large sparse SPD systems (2D meshes and beyond).
+/// </summary>
+/// <remarks>
+/// <para>
+/// Phases: a fill-reducing ordering (approximate minimum degree by default); symbolic analysis (elimination tree, postorder,
+/// column counts, relaxed supernodes and their row patterns, see <see cref="SupernodalSymbolic"/>); numeric factorisation by
+/// the multifrontal method (Duff and Reid, "The multifrontal solution of indefinite sparse symmetric linear equations",
+/// ACM TOMS 9(3), 1983; Liu, "The multifrontal method for sparse matrix solution: theory and practice", SIAM Review 34(1),
+/// 1992): each supernode assembles its frontal matrix from the matrix entries and its children's update matrices
+/// (extend-add), factorises its columns with dense blocked kernels (<see cref="FrontKernels"/>) and passes the Schur
+/// complement to its parent on a stack. Memory: the factor plus the largest front plus the update-matrix stack.
+/// </para>
+/// <para>
+/// Pivot failure, the project's policy: with d the Schur-complement diagonal at column j, a pivot with K_jj ≤ 0,
+/// d ≤ tol·K_jj, or either not finite is recorded (original DOF, d, K_jj); column j of L becomes the unit vector, which
+/// eliminates the DOF with no coupling (held at zero), and the factorisation goes on. The entries of row j of L are kept:
+/// they give <see cref="ISparseSpdFactor.MechanismShape"/> as z = L⁻ᵀ·e_j, scaled.
+/// </para>
+/// <para>Thread safety: the solver and its factors are immutable after construction; solves use per-call scratch.
+/// Determinism: the ordering, the symbolic phase and the numeric kernels give bitwise-equal results for the same input on the
+/// same machine, whatever the number of threads (threads split columns of an update, never a sum).</para>
+/// </remarks>
+public sealed class SupernodalCholeskySolver : ISparseSpdSolver
+{
+    /// <summary>Creates the solver with the given ordering (approximate minimum degree by default).</summary>
+    public SupernodalCholeskySolver(SupernodalOrdering ordering = SupernodalOrdering.ApproximateMinimumDegree, int maxThreads = 0)
+    {
+        if (!Enum.IsDefined(ordering)) throw new ArgumentOutOfRangeException(nameof(ordering));
+        ArgumentOutOfRangeException.ThrowIfNegative(maxThreads);
+        Ordering = ordering;
+        MaxThreads = maxThreads == 0 ? Environment.ProcessorCount : maxThreads;
+    }
+
+    /// <summary>The ordering applied before factorising.</summary>
+    public SupernodalOrdering Ordering { get; }
+
+    /// <summary>Threads the dense updates of large fronts may use.</summary>
+    public int MaxThreads { get; }
+
+    /// <inheritdoc />
+    public string Description => "supernodal multifrontal Cholesky, " + Ordering switch
+    {
+        SupernodalOrdering.ApproximateMinimumDegree => "approximate minimum degree order",
+        SupernodalOrdering.Natural => "natural order",
+        _ => "reverse Cuthill–McKee order",
+    } + $" (managed, {(FrontKernelsInfo.Vectorised ? "256-bit vector kernels" : "scalar kernels")}, {MaxThreads} thread{(MaxThreads == 1 ? "" : "s")})";
+
+    /// <summary>The fill-reducing permutation this solver would use for <paramref name="matrix"/> (<c>perm[new] = old</c>).</summary>
+    public int[] ComputeOrdering(SymmetricSparseMatrix matrix) => Ordering switch
+    {
+        SupernodalOrdering.Natural => Orderings.Natural(matrix.Size),
+        SupernodalOrdering.ReverseCuthillMcKee => Orderings.ReverseCuthillMcKee(matrix),
+        _ => MinimumDegreeOrdering.Compute(matrix),
+    };
+
+    /// <inheritdoc />
+    public ISparseSpdFactor Factorize(SymmetricSparseMatrix matrix, double relativePivotTolerance = 1e-10)
+    {
+        ArgumentNullException.ThrowIfNull(matrix);
+        return SupernodalFactor.Create(matrix, ComputeOrdering(matrix), relativePivotTolerance, MaxThreads);
+    }
+
+    /// <summary>Factorises under a permutation supplied by the caller (<c>perm[new] = old</c>; it is postordered, which
+    /// changes no fill).</summary>
+    public SupernodalFactor Factorize(SymmetricSparseMatrix matrix, int[] permutation, double relativePivotTolerance = 1e-10)
+    {
+        ArgumentNullException.ThrowIfNull(matrix);
+        ArgumentNullException.ThrowIfNull(permutation);
+        if (permutation.Length != matrix.Size || !Orderings.IsPermutation(permutation))
+            throw new ArgumentException("Not a permutation of the matrix's DOFs.", nameof(permutation));
+        return SupernodalFactor.Create(matrix, (int[])permutation.Clone(), relativePivotTolerance, MaxThreads);
+    }
+
+    /// <summary>Symbolic analysis only: the factor's size for a matrix under a permutation (for measurements).</summary>
+    public static SupernodalAnalysis Analyse(SymmetricSparseMatrix matrix, int[] permutation)
+    {
+        var s = SupernodalSymbolic.Analyse(matrix, permutation);
+        return new SupernodalAnalysis(s.ExactNonZeros, s.FactorNonZeros, s.SupernodeCount, s.MaxFront, s.Flops);
+    }
+}
+
+/// <summary>Sizes from the symbolic analysis.</summary>
+/// <param name="ExactNonZeros">nnz(L) of the exact pattern, diagonal included.</param>
+/// <param name="StoredNonZeros">Entries held by the relaxed supernodes (explicit zeros included), diagonal included.</param>
+/// <param name="Supernodes">Number of (relaxed) supernodes.</param>
+/// <param name="LargestFront">Order of the largest frontal matrix.</param>
+/// <param name="Flops">Floating-point operations of the factorisation on the exact pattern.</param>
+public readonly record struct SupernodalAnalysis(long ExactNonZeros, long StoredNonZeros, int Supernodes, int LargestFront, double Flops);
+
+internal static class FrontKernelsInfo
+{
+    public static bool Vectorised => System.Runtime.Intrinsics.Vector256.IsHardwareAccelerated;
+}
+
+/// <summary>The supernodal factor P·K·Pᵀ = L·Lᵀ. Immutable; safe to use from several threads at once.</summary>
+public sealed class SupernodalFactor : ISparseSpdFactor
+{
+    private readonly SupernodalSymbolic _s;
+    private readonly double[] _l;
+    private readonly bool[] _failed;   // by new index
+    private readonly PivotFailure[] _failures;
+    private readonly int[] _failurePosition;
+
+    private SupernodalFactor(SupernodalSymbolic s, double[] l, bool[] failed, PivotFailure[] failures, int[] positions)
+    {
+        _s = s;
+        _l = l;
+        _failed = failed;
+        _failures = failures;
+        _failurePosition = positions;
+    }
+
+    /// <inheritdoc />
+    public int Size => _s.N;
+
+    /// <inheritdoc />
+    /// <remarks>Entries of the relaxed supernodes' lower trapezoids, explicit zeros of the amalgamation included.</remarks>
+    public long FactorNonZeros => _s.FactorNonZeros;
+
+    /// <summary>nnz(L) of the exact (unamalgamated) pattern, diagonal included.</summary>
+    public long ExactNonZeros => _s.ExactNonZeros;
+
+    /// <summary>Number of supernodes.</summary>
+    public int Supernodes => _s.SupernodeCount;
+
+    /// <summary>Order of the largest frontal matrix.</summary>
+    public int LargestFront => _s.MaxFront;
+
+    /// <summary>The ordering used (postordered), <c>perm[new] = old</c> (a copy).</summary>
+    public int[] Permutation => (int[])_s.Perm.Clone();
+
+    /// <inheritdoc />
+    public IReadOnlyList<PivotFailure> PivotFailures => _failures;
+
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    internal static SupernodalFactor Create(SymmetricSparseMatrix a, int[] ordering, double tol, int threads)
+    {
+        var s = SupernodalSymbolic.Analyse(a, ordering);
+        int n = s.N;
+        if (s.StoredEntries > Array.MaxLength)
+            throw new InvalidOperationException($"The factor needs {s.StoredEntries} entries, more than the largest array holds.");
+        var l = new double[s.StoredEntries];
+        var failed = new bool[n];
+        var failures = new List<PivotFailure>();
+        var positions = new List<int>();
+
+        // Matrix entries by column of P·K·Pᵀ (lower), and the original diagonal in the new numbering.
+        SupernodalSymbolic.LowerByColumn(a, s.Inv, out var colPtr, out var rows, out var source);
+        var vals = a.Values;
+        var diag = new double[n];
+        for (int j = 0; j < n; j++)
+            for (int p = colPtr[j]; p < colPtr[j + 1]; p++)
+                if (rows[p] == j) diag[j] += vals[source[p]];
+
+        int maxFront = Math.Max(1, s.MaxFront);
+        var front = new double[(long)maxFront * maxFront];
+        var pack = new double[((maxFront + 7) / 8 + 1) * 8 * FrontKernels.PanelWidth];
+        var map = new int[n];
+        var rel = new int[maxFront];
+        // Update-matrix stack: values and, per entry, (supernode, offset).
+        double[] stack = new double[Math.Max(16, (long)maxFront * maxFront / 2)];
+        long top = 0;
+        var stackSuper = new int[s.SupernodeCount];
+        var stackOffset = new long[s.SupernodeCount];
+        int depth = 0;
+        {
+            for (int t = 0; t < s.SupernodeCount; t++)
+            {
+                int f0 = s.First[t], k = s.First[t + 1] - f0;
+                int ps = s.PatternStart[t], nb = s.PatternStart[t + 1] - ps;
+                int m = k + nb;
+                for (int c = 0; c < k; c++) map[f0 + c] = c;
+                for (int q = 0; q < nb; q++) map[s.PatternRows[ps + q]] = k + q;
+                Array.Clear(front, 0, m * m);
+
+                // Assemble the matrix columns of the supernode.
+                for (int c = 0; c < k; c++)
+                {
+                    int j = f0 + c;
+                    int colBase = c * m;
+                    for (int p = colPtr[j]; p < colPtr[j + 1]; p++) front[colBase + map[rows[p]]] += vals[source[p]];
+                }
+                // Extend-add the children's update matrices (they are on top of the stack).
+                while (depth > 0 && s.Parent[stackSuper[depth - 1]] == t)
+                {
+                    int c = stackSuper[--depth];
+                    long off = stackOffset[depth];
+                    int cps = s.PatternStart[c], cn = s.PatternStart[c + 1] - cps;
+                    for (int q = 0; q < cn; q++) rel[q] = map[s.PatternRows[cps + q]];
+                    for (int ca = 0; ca < cn; ca++)
+                    {
+                        int dstCol = rel[ca] * m;
+                        long srcCol = off + (long)ca * cn;
+                        for (int rb = ca; rb < cn; rb++) front[dstCol + rel[rb]] += stack[srcCol + rb];
+                    }
+                    top = off;
+                }
+
+                FrontKernels.PartialCholesky(front, m, k, diag.AsSpan(f0, k), tol, pack, threads, (c, piv) =>
+                {
+                    int j = f0 + c;
+                    failures.Add(new PivotFailure(s.Perm[j], piv, diag[j]));
+                    positions.Add(j);
+                    failed[j] = true;
+                });
+
+                Array.Copy(front, 0, l, s.FactorOffset[t], (long)m * k);
+
+                if (nb > 0 && s.Parent[t] >= 0)
+                {
+                    long need = top + (long)nb * nb;
+                    if (need > stack.LongLength)
+                    {
+                        long size = Math.Max(need, stack.LongLength * 3 / 2);
+                        if (size > Array.MaxLength) size = Array.MaxLength;
+                        Array.Resize(ref stack, (int)size);
+                    }
+                    for (int c = 0; c < nb; c++)
+                        Array.Copy(front, (long)(k + c) * m + k, stack, top + (long)c * nb, nb);
+                    stackSuper[depth] = t;
+                    stackOffset[depth] = top;
+                    depth++;
+                    top = need;
+                }
+            }
+        }
+        return new SupernodalFactor(s, l, failed, failures.ToArray(), positions.ToArray());
+    }
+
+    /// <inheritdoc />
+    public void Solve(ReadOnlySpan<double> b, Span<double> x)
+    {
+        int n = _s.N;
+        if (b.Length != n || x.Length != n) throw new ArgumentException("Vector length differs from the factor size.");
+        if (n == 0) return;
+        double[] w = ArrayPool<double>.Shared.Rent(n);
+        double[] buf = ArrayPool<double>.Shared.Rent(Math.Max(1, _s.MaxFront));
+        try
+        {
+            var perm = _s.Perm;
+            for (int i = 0; i < n; i++) w[i] = _failed[i] ? 0.0 : b[perm[i]];
+            Forward(w, buf);
+            for (int i = 0; i < _failurePosition.Length; i++) w[_failurePosition[i]] = 0.0;
+            Backward(w, buf);
+            for (int i = 0; i < n; i++) x[perm[i]] = _failed[i] ? 0.0 : w[i];
+        }
+        finally
+        {
+            ArrayPool<double>.Shared.Return(buf);
+            ArrayPool<double>.Shared.Return(w);
+        }
+    }
+
+    /// <summary>Solves K·X = B for several right-hand sides (each column an array of length Size).</summary>
+    public void Solve(double[][] b, double[][] x)
+    {
+        ArgumentNullException.ThrowIfNull(b);
+        ArgumentNullException.ThrowIfNull(x);
+        if (b.Length != x.Length) throw new ArgumentException("Different numbers of right-hand sides and solutions.");
+        for (int c = 0; c < b.Length; c++) Solve(b[c], x[c]);
+    }
+
+    /// <summary>L·y = w in place (new numbering).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private void Forward(double[] w, double[] buf)
+    {
+        var s = _s;
+        for (int t = 0; t < s.SupernodeCount; t++)
+        {
+            int f0 = s.First[t], k = s.First[t + 1] - f0;
+            int ps = s.PatternStart[t], nb = s.PatternStart[t + 1] - ps;
+            int m = k + nb;
+            long off = s.FactorOffset[t];
+            Array.Copy(w, f0, buf, 0, k);
+            Array.Clear(buf, k, nb);
+            for (int c = 0; c < k; c++)
+            {
+                long colBase = off + (long)c * m;
+                double y = buf[c] / _l[colBase + c];
+                buf[c] = y;
+                if (y != 0.0 && c + 1 < m)
+                    DenseKernels.SubtractScaled(buf.AsSpan(c + 1, m - c - 1), y, _l.AsSpan((int)(colBase + c + 1), m - c - 1));
+            }
+            Array.Copy(buf, 0, w, f0, k);
+            for (int q = 0; q < nb; q++) w[s.PatternRows[ps + q]] += buf[k + q];
+        }
+    }
+
+    /// <summary>Lᵀ·z = w in place (new numbering).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private void Backward(double[] w, double[] buf)
+    {
+        var s = _s;
+        for (int t = s.SupernodeCount - 1; t >= 0; t--)
+        {
+            int f0 = s.First[t], k = s.First[t + 1] - f0;
+            int ps = s.PatternStart[t], nb = s.PatternStart[t + 1] - ps;
+            int m = k + nb;
+            long off = s.FactorOffset[t];
+            Array.Copy(w, f0, buf, 0, k);
+            for (int q = 0; q < nb; q++) buf[k + q] = w[s.PatternRows[ps + q]];
+            for (int c = k - 1; c >= 0; c--)
+            {
+                long colBase = off + (long)c * m;
+                double v = buf[c];
+                if (c + 1 < m) v -= DenseKernels.Dot(_l.AsSpan((int)(colBase + c + 1), m - c - 1), buf.AsSpan(c + 1, m - c - 1));
+                buf[c] = v / _l[colBase + c];
+            }
+            Array.Copy(buf, 0, w, f0, k);
+        }
+    }
+
+    /// <inheritdoc />
+    /// <remarks>
+    /// With j the elimination position of the failed pivot, z = L⁻ᵀ·e_j in the new numbering: zero past j, 1 at j, and over
+    /// the DOFs eliminated before j the solution of L₁₁ᵀz₁ = −(row j of L)/L_jj (L_jj = 1 for a failed pivot), which is
+    /// K₁₁z₁ = −K₁ⱼ with earlier failed DOFs held at zero (their columns of L are unit vectors, so their entries come out 0).
+    /// Then z is divided by max |zᵢ| (the failed DOF's entry stays positive).
+    /// </remarks>
+    public double[] MechanismShape(int failureIndex)
+    {
+        if ((uint)failureIndex >= (uint)_failures.Length) throw new ArgumentOutOfRangeException(nameof(failureIndex));
+        int n = _s.N;
+        int k = _failurePosition[failureIndex];
+        var w = new double[n];
+        w[k] = 1.0;
+        var buf = new double[Math.Max(1, _s.MaxFront)];
+        Backward(w, buf);
+        double max = 0.0;
+        for (int i = 0; i < n; i++) max = Math.Max(max, Math.Abs(w[i]));
+        var z = new double[n];
+        var perm = _s.Perm;
+        for (int i = 0; i < n; i++) z[perm[i]] = (_failed[i] && i != k) || i > k ? 0.0 : w[i] / max;
+        return z;
+    }
+}
