@@ -17,7 +17,8 @@ namespace PlaneLateral.Solvers;
 /// eliminated with p), and supervariable detection by a hash of each list followed by exact comparison.
 /// Dense-row handling is not implemented (finite-element stiffness matrices have none).
 /// </para>
-/// <para>Deterministic: ties in degree go to the variable most recently put in its degree list; hash collisions are resolved
+/// <para>Deterministic: the degree lists start filled in increasing index and each takes new entries at its head, so a tie in
+/// degree goes to the variable most recently put in its list (at the start, the highest index); hash collisions are resolved
 /// in a sorted order; no randomness, no parallelism.</para>
 /// </remarks>
 public static class MinimumDegreeOrdering
@@ -96,7 +97,7 @@ public static class MinimumDegreeOrdering
             groupNext[i] = -1;
             groupTail[i] = i;
         }
-        for (int i = n - 1; i >= 0; i--) Insert(i, degree[i]);
+        for (int i = 0; i < n; i++) Insert(i, degree[i]);
         int mindeg = 0;
         var order = new int[n];
         int nel = 0, written = 0;

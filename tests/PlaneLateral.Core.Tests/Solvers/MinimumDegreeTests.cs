@@ -63,8 +63,8 @@ public class MinimumDegreeTests
     public void FillIsBelowTheRcmEnvelope_OnGrids(int nx, int ny, double factor)
     {
         // Fill of the RCM envelope (what the envelope solver stores) against nnz(L) under AMD, both diagonal included,
-        // 2-DOF grids. Measured RCM/AMD ratios: 30×30 1.70, 60×20 1.16 (a narrow strip: RCM's band is short),
-        // 50×50 2.11, 100×100 2.97; asserted: no worse than RCM everywhere, and the squares' ratios with some margin.
+        // 2-DOF grids. Measured RCM/AMD ratios: 30×30 1.68, 60×20 1.20 (a narrow strip: RCM's band is short),
+        // 50×50 2.20, 100×100 2.97; asserted: no worse than RCM everywhere, and the squares' ratios with some margin.
         var a = TwoDofQuadGrid(nx, ny, 11);
         var rcm = new EnvelopeCholeskySolver().Factorize(a).FactorNonZeros;
         var amd = ((SupernodalFactor)new SupernodalCholeskySolver().Factorize(a)).ExactNonZeros;

@@ -123,7 +123,7 @@ public class SupernodalSolverTests
     {
         // A 60×60-node, 2-DOF grid numbered node by node, row by row (half-bandwidth ≈ 2·61): the natural order's factor
         // fills its band; minimum degree's is much smaller. The ratio grows with the grid (n^1.5 against n log n).
-        // Measured: natural 874,560, AMD 499,964 (ratio 1.75); the assertion asks for 1.5.
+        // Measured: natural 874,560, AMD 356,804 (ratio 2.45); the assertion asks for 2.0.
         var a = TwoDofQuadGrid(60, 60, -1);
         var b = RandomVector(a.Size, 3);
         var fn = (SupernodalFactor)new SupernodalCholeskySolver(SupernodalOrdering.Natural).Factorize(a);
@@ -134,7 +134,7 @@ public class SupernodalSolverTests
         fa.Solve(b, xa);
         Assert.True(RelativeDifference(xa, xn) < 1e-10, $"{RelativeDifference(xa, xn):E2}");
         double ratio = (double)fn.ExactNonZeros / fa.ExactNonZeros;
-        Assert.True(ratio > 1.5, $"natural {fn.ExactNonZeros}, AMD {fa.ExactNonZeros}, ratio {ratio:F2}");
+        Assert.True(ratio > 2.0, $"natural {fn.ExactNonZeros}, AMD {fa.ExactNonZeros}, ratio {ratio:F2}");
     }
 
     [Theory]
