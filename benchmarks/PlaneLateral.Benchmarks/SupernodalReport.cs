@@ -16,7 +16,7 @@ public static class SupernodalReport
     {
         int nx = int.Parse(args[1], CultureInfo.InvariantCulture);
         int ny = args.Length > 2 ? int.Parse(args[2], CultureInfo.InvariantCulture) : nx;
-        string? dir = args.Length > 3 ? args[3] : null;
+        string? dir = args.Length > 3 && args[3] != "-" ? args[3] : null;
         int threads = args.Length > 4 ? int.Parse(args[4], CultureInfo.InvariantCulture) : Environment.ProcessorCount;
         var sw = Stopwatch.StartNew();
         var a = PlaneStressGrid.Build(nx, ny);

@@ -151,99 +151,227 @@ public sealed class SupernodalFactor : ISparseSpdFactor
     /// <inheritdoc />
     public IReadOnlyList<PivotFailure> PivotFailures => _failures;
 
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    /// <summary>Per-worker scratch of the numeric factorisation: front, packing buffer, update-matrix stack, failures.</summary>
+    private sealed class Workspace
+    {
+        public double[] Front = Array.Empty<double>();
+        public double[] Pack = Array.Empty<double>();
+        public int[] Map = null!;
+        public int[] Rel = Array.Empty<int>();
+        public double[] Stack = new double[16];
+        public long Top;
+        public readonly List<int> StackSuper = new();
+        public readonly List<long> StackOffset = new();
+        public readonly List<(int Position, PivotFailure Failure)> Failures = new();
+
+        public void Reserve(int maxFront, int n)
+        {
+            Map ??= new int[n];
+            long need = (long)maxFront * maxFront;
+            if (Front.LongLength < need) Front = new double[need];
+            int packLen = ((maxFront + 7) / 8 + 1) * 8 * FrontKernels.PanelWidth;
+            if (Pack.Length < packLen) Pack = new double[packLen];
+            if (Rel.Length < maxFront) Rel = new int[maxFront];
+        }
+    }
+
+    /// <summary>Shared inputs of the numeric factorisation.</summary>
+    private sealed class NumericJob
+    {
+        public SupernodalSymbolic S = null!;
+        public int[] ColPtr = null!, Rows = null!, Source = null!;
+        public double[] Values = null!, Diag = null!, L = null!;
+        public bool[] Failed = null!;
+        public double Tol;
+        public bool[] SubtreeRoot = null!;
+        public double[]?[] Handover = null!;
+        public int[] ChildHead = null!, ChildNext = null!;
+    }
+
+    /// <summary>
+    /// Numeric factorisation. The supernodal tree is cut into independent subtrees of bounded work (fixed by the tree alone,
+    /// not by the thread count), which are factorised in parallel, each with its own front and update stack; the remaining
+    /// top of the tree is then factorised with the threads splitting the dense updates of its large fronts. The subtree roots
+    /// hand their update matrices to the top part in separate arrays. Every sum is formed in the same order whatever the
+    /// thread count, so the factor is bitwise the same with 1 or more threads.
+    /// </summary>
     internal static SupernodalFactor Create(SymmetricSparseMatrix a, int[] ordering, double tol, int threads)
     {
         var s = SupernodalSymbolic.Analyse(a, ordering);
-        int n = s.N;
+        int n = s.N, ns = s.SupernodeCount;
         if (s.StoredEntries > Array.MaxLength)
             throw new InvalidOperationException($"The factor needs {s.StoredEntries} entries, more than the largest array holds.");
-        var l = new double[s.StoredEntries];
-        var failed = new bool[n];
-        var failures = new List<PivotFailure>();
-        var positions = new List<int>();
-
-        // Matrix entries by column of P·K·Pᵀ (lower), and the original diagonal in the new numbering.
-        SupernodalSymbolic.LowerByColumn(a, s.Inv, out var colPtr, out var rows, out var source);
-        var vals = a.Values;
+        var job = new NumericJob { S = s, L = new double[s.StoredEntries], Failed = new bool[n], Tol = tol, Values = a.Values };
+        SupernodalSymbolic.LowerByColumn(a, s.Inv, out job.ColPtr, out job.Rows, out job.Source);
         var diag = new double[n];
         for (int j = 0; j < n; j++)
-            for (int p = colPtr[j]; p < colPtr[j + 1]; p++)
-                if (rows[p] == j) diag[j] += vals[source[p]];
+            for (int p = job.ColPtr[j]; p < job.ColPtr[j + 1]; p++)
+                if (job.Rows[p] == j) diag[j] += job.Values[job.Source[p]];
+        job.Diag = diag;
 
-        int maxFront = Math.Max(1, s.MaxFront);
-        var front = new double[(long)maxFront * maxFront];
-        var pack = new double[((maxFront + 7) / 8 + 1) * 8 * FrontKernels.PanelWidth];
-        var map = new int[n];
-        var rel = new int[maxFront];
-        // Update-matrix stack: values and, per entry, (supernode, offset).
-        double[] stack = new double[Math.Max(16, (long)maxFront * maxFront / 2)];
-        long top = 0;
-        var stackSuper = new int[s.SupernodeCount];
-        var stackOffset = new long[s.SupernodeCount];
-        int depth = 0;
+        // Work of each front (≈ k·m²) and of each subtree; the first supernode of each subtree (postorder: contiguous).
+        var work = new double[ns];
+        var firstDesc = new int[ns];
+        job.ChildHead = new int[ns];
+        job.ChildNext = new int[ns];
+        Array.Fill(job.ChildHead, -1);
+        for (int t = 0; t < ns; t++) firstDesc[t] = t;
+        for (int t = ns - 1; t >= 0; t--)
         {
-            for (int t = 0; t < s.SupernodeCount; t++)
+            int par = s.Parent[t];
+            if (par < 0) continue;
+            job.ChildNext[t] = job.ChildHead[par];
+            job.ChildHead[par] = t; // children in increasing order
+        }
+        double total = 0;
+        for (int t = 0; t < ns; t++)
+        {
+            int k = s.First[t + 1] - s.First[t];
+            int m = k + s.PatternStart[t + 1] - s.PatternStart[t];
+            work[t] += (double)k * m * m + m;
+            total += (double)k * m * m + m;
+            int par = s.Parent[t];
+            if (par >= 0)
             {
-                int f0 = s.First[t], k = s.First[t + 1] - f0;
-                int ps = s.PatternStart[t], nb = s.PatternStart[t + 1] - ps;
-                int m = k + nb;
-                for (int c = 0; c < k; c++) map[f0 + c] = c;
-                for (int q = 0; q < nb; q++) map[s.PatternRows[ps + q]] = k + q;
-                Array.Clear(front, 0, m * m);
-
-                // Assemble the matrix columns of the supernode.
-                for (int c = 0; c < k; c++)
-                {
-                    int j = f0 + c;
-                    int colBase = c * m;
-                    for (int p = colPtr[j]; p < colPtr[j + 1]; p++) front[colBase + map[rows[p]]] += vals[source[p]];
-                }
-                // Extend-add the children's update matrices (they are on top of the stack).
-                while (depth > 0 && s.Parent[stackSuper[depth - 1]] == t)
-                {
-                    int c = stackSuper[--depth];
-                    long off = stackOffset[depth];
-                    int cps = s.PatternStart[c], cn = s.PatternStart[c + 1] - cps;
-                    for (int q = 0; q < cn; q++) rel[q] = map[s.PatternRows[cps + q]];
-                    for (int ca = 0; ca < cn; ca++)
-                    {
-                        int dstCol = rel[ca] * m;
-                        long srcCol = off + (long)ca * cn;
-                        for (int rb = ca; rb < cn; rb++) front[dstCol + rel[rb]] += stack[srcCol + rb];
-                    }
-                    top = off;
-                }
-
-                FrontKernels.PartialCholesky(front, m, k, diag.AsSpan(f0, k), tol, pack, threads, (c, piv) =>
-                {
-                    int j = f0 + c;
-                    failures.Add(new PivotFailure(s.Perm[j], piv, diag[j]));
-                    positions.Add(j);
-                    failed[j] = true;
-                });
-
-                Array.Copy(front, 0, l, s.FactorOffset[t], (long)m * k);
-
-                if (nb > 0 && s.Parent[t] >= 0)
-                {
-                    long need = top + (long)nb * nb;
-                    if (need > stack.LongLength)
-                    {
-                        long size = Math.Max(need, stack.LongLength * 3 / 2);
-                        if (size > Array.MaxLength) size = Array.MaxLength;
-                        Array.Resize(ref stack, (int)size);
-                    }
-                    for (int c = 0; c < nb; c++)
-                        Array.Copy(front, (long)(k + c) * m + k, stack, top + (long)c * nb, nb);
-                    stackSuper[depth] = t;
-                    stackOffset[depth] = top;
-                    depth++;
-                    top = need;
-                }
+                work[par] += work[t];
+                firstDesc[par] = Math.Min(firstDesc[par], firstDesc[t]);
             }
         }
-        return new SupernodalFactor(s, l, failed, failures.ToArray(), positions.ToArray());
+        // Cut: split the heaviest subtree into its children while it holds more than 1/16 of the work.
+        var isTop = new bool[ns];
+        var roots = new SortedSet<(double Work, int Node)>(Comparer<(double, int)>.Create((x, y) =>
+            x.Item1 != y.Item1 ? y.Item1.CompareTo(x.Item1) : x.Item2.CompareTo(y.Item2)));
+        for (int t = 0; t < ns; t++) if (s.Parent[t] < 0) roots.Add((work[t], t));
+        while (roots.Count > 0)
+        {
+            var heaviest = roots.Min;
+            if (heaviest.Work <= total / 16 || job.ChildHead[heaviest.Node] < 0) break;
+            roots.Remove(heaviest);
+            isTop[heaviest.Node] = true;
+            for (int c = job.ChildHead[heaviest.Node]; c >= 0; c = job.ChildNext[c]) roots.Add((work[c], c));
+        }
+        job.SubtreeRoot = new bool[ns];
+        foreach (var (_, node) in roots) job.SubtreeRoot[node] = true;
+        job.Handover = new double[ns][];
+        var tasks = roots.Select(r => r.Node).ToArray(); // heaviest first
+
+        var workspaces = new System.Collections.Concurrent.ConcurrentBag<Workspace>();
+        var pool = new System.Collections.Concurrent.ConcurrentBag<Workspace>();
+        void RunSubtree(int root)
+        {
+            if (!pool.TryTake(out var ws)) ws = new Workspace();
+            int maxFront = 1;
+            for (int t = firstDesc[root]; t <= root; t++)
+                maxFront = Math.Max(maxFront, s.First[t + 1] - s.First[t] + s.PatternStart[t + 1] - s.PatternStart[t]);
+            ws.Reserve(maxFront, n);
+            for (int t = firstDesc[root]; t <= root; t++) FactorSupernode(job, ws, t, 1);
+            pool.Add(ws);
+            workspaces.Add(ws);
+        }
+        if (threads > 1 && tasks.Length > 1)
+            Parallel.ForEach(tasks, new ParallelOptions { MaxDegreeOfParallelism = threads }, RunSubtree);
+        else
+            foreach (int r in tasks) RunSubtree(r);
+
+        var top = new Workspace();
+        int topFront = 1;
+        for (int t = 0; t < ns; t++)
+            if (isTop[t]) topFront = Math.Max(topFront, s.First[t + 1] - s.First[t] + s.PatternStart[t + 1] - s.PatternStart[t]);
+        top.Reserve(topFront, n);
+        for (int t = 0; t < ns; t++)
+            if (isTop[t]) FactorSupernode(job, top, t, threads);
+
+        var all = workspaces.Distinct().SelectMany(w => w.Failures).Concat(top.Failures).OrderBy(f => f.Position).ToArray();
+        return new SupernodalFactor(s, job.L, job.Failed, all.Select(f => f.Failure).ToArray(), all.Select(f => f.Position).ToArray());
+    }
+
+    /// <summary>Assembles, factorises and passes on the front of supernode t.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static void FactorSupernode(NumericJob job, Workspace ws, int t, int threads)
+    {
+        var s = job.S;
+        var front = ws.Front;
+        var map = ws.Map;
+        var rel = ws.Rel;
+        var colPtr = job.ColPtr;
+        var rows = job.Rows;
+        var source = job.Source;
+        var vals = job.Values;
+        int f0 = s.First[t], k = s.First[t + 1] - f0;
+        int ps = s.PatternStart[t], nb = s.PatternStart[t + 1] - ps;
+        int m = k + nb;
+        for (int c = 0; c < k; c++) map[f0 + c] = c;
+        for (int q = 0; q < nb; q++) map[s.PatternRows[ps + q]] = k + q;
+        Array.Clear(front, 0, m * m);
+
+        // The matrix columns of the supernode.
+        for (int c = 0; c < k; c++)
+        {
+            int j = f0 + c;
+            int colBase = c * m;
+            for (int p = colPtr[j]; p < colPtr[j + 1]; p++) front[colBase + map[rows[p]]] += vals[source[p]];
+        }
+        // Extend-add: children on this workspace's stack (on top, popped last-first), then children handed over by other
+        // workspaces (increasing order).
+        int depth = ws.StackSuper.Count;
+        while (depth > 0 && s.Parent[ws.StackSuper[depth - 1]] == t)
+        {
+            int c = ws.StackSuper[--depth];
+            long off = ws.StackOffset[depth];
+            ws.StackSuper.RemoveAt(depth);
+            ws.StackOffset.RemoveAt(depth);
+            ExtendAdd(s, c, ws.Stack, off, front, m, map, rel);
+            ws.Top = off;
+        }
+        for (int c = job.ChildHead[t]; c >= 0; c = job.ChildNext[c])
+        {
+            var h = job.Handover[c];
+            if (h is null) continue;
+            ExtendAdd(s, c, h, 0, front, m, map, rel);
+            job.Handover[c] = null;
+        }
+
+        FrontKernels.PartialCholesky(front, m, k, job.Diag.AsSpan(f0, k), job.Tol, ws.Pack, threads, (c, piv) =>
+        {
+            int j = f0 + c;
+            ws.Failures.Add((j, new PivotFailure(s.Perm[j], piv, job.Diag[j])));
+            job.Failed[j] = true;
+        });
+
+        Array.Copy(front, 0, job.L, s.FactorOffset[t], (long)m * k);
+
+        if (nb == 0 || s.Parent[t] < 0) return;
+        if (job.SubtreeRoot[t])
+        {
+            var h = new double[(long)nb * nb];
+            for (int c = 0; c < nb; c++) Array.Copy(front, (long)(k + c) * m + k, h, (long)c * nb, nb);
+            job.Handover[t] = h;
+            return;
+        }
+        long need = ws.Top + (long)nb * nb;
+        if (need > ws.Stack.LongLength)
+        {
+            long size = Math.Max(need, ws.Stack.LongLength * 3 / 2);
+            if (size > Array.MaxLength) size = Array.MaxLength;
+            Array.Resize(ref ws.Stack, (int)size);
+        }
+        for (int c = 0; c < nb; c++) Array.Copy(front, (long)(k + c) * m + k, ws.Stack, ws.Top + (long)c * nb, nb);
+        ws.StackSuper.Add(t);
+        ws.StackOffset.Add(ws.Top);
+        ws.Top = need;
+    }
+
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static void ExtendAdd(SupernodalSymbolic s, int c, double[] src, long off, double[] front, int m, int[] map, int[] rel)
+    {
+        int cps = s.PatternStart[c], cn = s.PatternStart[c + 1] - cps;
+        for (int q = 0; q < cn; q++) rel[q] = map[s.PatternRows[cps + q]];
+        for (int ca = 0; ca < cn; ca++)
+        {
+            int dstCol = rel[ca] * m;
+            long srcCol = off + (long)ca * cn;
+            for (int rb = ca; rb < cn; rb++) front[dstCol + rel[rb]] += src[srcCol + rb];
+        }
     }
 
     /// <inheritdoc />
