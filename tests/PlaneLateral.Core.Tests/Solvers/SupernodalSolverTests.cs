@@ -173,3 +173,24 @@ public class SupernodalSolverTests
         for (int i = 0; i < 16; i++) Assert.Equal(serial[i], parallel[i]);
     }
 }
+
+/// <summary>The default solver's size rule.</summary>
+public class DefaultSolverRuleTests
+{
+    [Fact]
+    public void SmallSystems_Envelope_LargeSystems_Supernodal()
+    {
+        var rule = Assert.IsType<SizeRuleSolver>(DefaultSolver.Create());
+        Assert.IsType<EnvelopeCholeskySolver>(rule.For(DefaultSolver.SupernodalThreshold - 1));
+        Assert.IsType<SupernodalCholeskySolver>(rule.For(DefaultSolver.SupernodalThreshold));
+        Assert.IsType<EnvelopeFactor>(rule.Factorize(TestMatrices.GridStencil(10, 10, 1, scrambleSeed: 1)));
+        var big = MoreTestMatrices.TwoDofQuadGrid(51, 50, 2); // 5,100 unknowns
+        var f = Assert.IsType<SupernodalFactor>(rule.Factorize(big));
+        var b = TestMatrices.RandomVector(big.Size, 3);
+        var x = new double[big.Size];
+        f.Solve(b, x);
+        Assert.True(TestMatrices.ResidualNorm(big, x, b) < 1e-10 * TestMatrices.Norm(b));
+        Assert.Contains("supernodal", rule.Description);
+        Assert.Contains("envelope", rule.Description);
+    }
+}
