@@ -153,6 +153,25 @@ public class SupernodalSolverTests
     }
 
     [Fact]
+    public void SeveralRightHandSides_WithFailedPivots_BitwiseTheSingleSolves()
+    {
+        // 11 right-hand sides (a block of 8, then 3) on a singular matrix (ungrounded Laplacian: failures held at zero).
+        var a = RandomLaplacianPlusDiagonal(300, 81, edgesPerNode: 0.9, shift: false);
+        var f = (SupernodalFactor)new SupernodalCholeskySolver().Factorize(a);
+        Assert.NotEmpty(f.PivotFailures);
+        var bs = Enumerable.Range(0, 11).Select(i => RandomVector(a.Size, 200 + i)).ToArray();
+        var xs = bs.Select(_ => new double[a.Size]).ToArray();
+        f.Solve(bs, xs);
+        for (int i = 0; i < bs.Length; i++)
+        {
+            var x = new double[a.Size];
+            f.Solve(bs[i], x);
+            Assert.Equal(x, xs[i]);
+            foreach (var p in f.PivotFailures) Assert.Equal(0.0, xs[i][p.Dof]);
+        }
+    }
+
+    [Fact]
     public void EmptyMatrix_Works()
     {
         var f = new SupernodalCholeskySolver().Factorize(new SymmetricMatrixBuilder(0).Build());
