@@ -151,6 +151,9 @@ public sealed class SupernodalFactor : ISparseSpdFactor
     /// <inheritdoc />
     public IReadOnlyList<PivotFailure> PivotFailures => _failures;
 
+    /// <summary>Total front work (Σ k·m²) from which subtrees are factorised in parallel.</summary>
+    internal const double ParallelWorkThreshold = 5e8;
+
     /// <summary>Per-worker scratch of the numeric factorisation: front, packing buffer, update-matrix stack, failures.</summary>
     private sealed class Workspace
     {
@@ -268,7 +271,9 @@ public sealed class SupernodalFactor : ISparseSpdFactor
             pool.Add(ws);
             workspaces.Add(ws);
         }
-        if (threads > 1 && tasks.Length > 1)
+        // Threads only pay off on large trees: on the 10k-unknown wall (work ≈ 10⁸) two threads were slower than one in
+        // most paired runs on the (loaded) test machine. The cut above does not depend on this, so neither do the results.
+        if (threads > 1 && tasks.Length > 1 && total >= ParallelWorkThreshold)
             Parallel.ForEach(tasks, new ParallelOptions { MaxDegreeOfParallelism = threads }, RunSubtree);
         else
             foreach (int r in tasks) RunSubtree(r);
