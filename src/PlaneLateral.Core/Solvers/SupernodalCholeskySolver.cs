@@ -151,6 +151,9 @@ public sealed class SupernodalFactor : ISparseSpdFactor
     /// <inheritdoc />
     public IReadOnlyList<PivotFailure> PivotFailures => _failures;
 
+    /// <summary>Whether independent subtrees were factorised on several threads (for tests).</summary>
+    internal bool SubtreesInParallel { get; private init; }
+
     /// <summary>Total front work (Σ k·m²) from which subtrees are factorised in parallel.</summary>
     internal const double ParallelWorkThreshold = 5e8;
 
@@ -273,7 +276,8 @@ public sealed class SupernodalFactor : ISparseSpdFactor
         }
         // Threads only pay off on large trees: on the 10k-unknown wall (work ≈ 10⁸) two threads were slower than one in
         // most paired runs on the (loaded) test machine. The cut above does not depend on this, so neither do the results.
-        if (threads > 1 && tasks.Length > 1 && total >= ParallelWorkThreshold)
+        bool parallel = threads > 1 && tasks.Length > 1 && total >= ParallelWorkThreshold;
+        if (parallel)
             Parallel.ForEach(tasks, new ParallelOptions { MaxDegreeOfParallelism = threads }, RunSubtree);
         else
             foreach (int r in tasks) RunSubtree(r);
@@ -287,7 +291,10 @@ public sealed class SupernodalFactor : ISparseSpdFactor
             if (isTop[t]) FactorSupernode(job, top, t, threads);
 
         var all = workspaces.Distinct().SelectMany(w => w.Failures).Concat(top.Failures).OrderBy(f => f.Position).ToArray();
-        return new SupernodalFactor(s, job.L, job.Failed, all.Select(f => f.Failure).ToArray(), all.Select(f => f.Position).ToArray());
+        return new SupernodalFactor(s, job.L, job.Failed, all.Select(f => f.Failure).ToArray(), all.Select(f => f.Position).ToArray())
+        {
+            SubtreesInParallel = parallel,
+        };
     }
 
     /// <summary>Assembles, factorises and passes on the front of supernode t.</summary>

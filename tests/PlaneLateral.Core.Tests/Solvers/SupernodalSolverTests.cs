@@ -92,15 +92,21 @@ public class SupernodalSolverTests
         AssertMatchesDenseCholesky(a, new SupernodalCholeskySolver(SupernodalOrdering.Natural, maxThreads: 1), 5);
     }
 
-    [Fact]
-    public void OneAndTwoThreads_GiveBitwiseEqualSolutions()
+    [Theory]
+    [InlineData("dense")]
+    [InlineData("grid")]
+    public void OneAndTwoThreads_GiveBitwiseEqualSolutions(string kind)
     {
-        var a = DenseSpd(520, 8);
+        // "dense": one front, threaded rank updates; "grid": a 51,200-unknown 2-DOF grid, whose tree is large enough
+        // (work above the parallel threshold) for the subtrees to be factorised in parallel as well.
+        var a = kind == "dense" ? DenseSpd(520, 8) : TwoDofQuadGrid(160, 160, -1);
         var b = RandomVector(a.Size, 9);
         var x1 = new double[a.Size];
         var x2 = new double[a.Size];
         new SupernodalCholeskySolver(SupernodalOrdering.ApproximateMinimumDegree, 1).Factorize(a).Solve(b, x1);
-        new SupernodalCholeskySolver(SupernodalOrdering.ApproximateMinimumDegree, 2).Factorize(a).Solve(b, x2);
+        var f2 = (SupernodalFactor)new SupernodalCholeskySolver(SupernodalOrdering.ApproximateMinimumDegree, 2).Factorize(a);
+        Assert.Equal(kind == "grid", f2.SubtreesInParallel);
+        f2.Solve(b, x2);
         Assert.Equal(x1, x2);
     }
 
