@@ -62,8 +62,4 @@ public class SupernodalSolverBenchmarks
     {
         for (int c = 0; c < 8; c++) _factor.Solve(_b8[c], _x8[c]);
     }
-
-    /// <summary>The same eight load cases as one block (one pass over L).</summary>
-    [Benchmark]
-    public void SolveEightBlocked() => ((SupernodalFactor)_factor).Solve(_b8, _x8);
 }

@@ -161,7 +161,7 @@ public class SupernodalSolverTests
     [Fact]
     public void SeveralRightHandSides_WithFailedPivots_BitwiseTheSingleSolves()
     {
-        // 11 right-hand sides (a block of 8, then 3) on a singular matrix (ungrounded Laplacian: failures held at zero).
+        // 11 right-hand sides on a singular matrix (ungrounded Laplacian: failures held at zero).
         var a = RandomLaplacianPlusDiagonal(300, 81, edgesPerNode: 0.9, shift: false);
         var f = (SupernodalFactor)new SupernodalCholeskySolver().Factorize(a);
         Assert.NotEmpty(f.PivotFailures);
