@@ -194,7 +194,6 @@ internal static class MoreTestMatrices
         for (int i = 0; i < n; i++)
             for (int j = 0; j < n; j++) g[i, j] = 2 * rng.NextDouble() - 1;
         var b = new SymmetricMatrixBuilder(n);
-        var row = new double[1, 1];
         for (int i = 0; i < n; i++)
             for (int j = 0; j <= i; j++)
             {
@@ -202,7 +201,6 @@ internal static class MoreTestMatrices
                 for (int k = 0; k < n; k++) s += g[i, k] * g[j, k];
                 s /= n;
                 if (i == j) s += 1.0;
-                row[0, 0] = s;
                 if (i == j) b.AddDiagonal(i, s);
                 else b.AddElement(new[] { i, j }, new[,] { { 0.0, s }, { s, 0.0 } });
             }
