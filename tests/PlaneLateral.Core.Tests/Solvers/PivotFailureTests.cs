@@ -13,7 +13,25 @@ namespace PlaneLateral.Tests.Solvers;
 /// </summary>
 public class PivotFailureTests
 {
-    public static TheoryData<EnvelopeOrdering> BothOrderings() => new() { EnvelopeOrdering.ReverseCuthillMcKee, EnvelopeOrdering.Natural };
+    /// <summary>Every sparse solver and ordering goes through the same contract.</summary>
+    public static TheoryData<string> BothOrderings() => new() { "envelope-rcm", "envelope-natural", "supernodal-amd", "supernodal-natural", "supernodal-rcm" };
+
+    private static ISparseSpdSolver Solver(string name) => name switch
+    {
+        "envelope-rcm" => new EnvelopeCholeskySolver(EnvelopeOrdering.ReverseCuthillMcKee),
+        "envelope-natural" => new EnvelopeCholeskySolver(EnvelopeOrdering.Natural),
+        "supernodal-amd" => new SupernodalCholeskySolver(SupernodalOrdering.ApproximateMinimumDegree),
+        "supernodal-natural" => new SupernodalCholeskySolver(SupernodalOrdering.Natural),
+        "supernodal-rcm" => new SupernodalCholeskySolver(SupernodalOrdering.ReverseCuthillMcKee),
+        _ => throw new ArgumentException(name),
+    };
+
+    private static int[] PermutationOf(ISparseSpdFactor f) => f switch
+    {
+        EnvelopeFactor e => e.Permutation,
+        SupernodalFactor s => s.Permutation,
+        _ => throw new ArgumentException("unknown factor"),
+    };
 
     private static double KzRelative(SymmetricSparseMatrix a, double[] z)
     {
@@ -24,7 +42,7 @@ public class PivotFailureTests
 
     [Theory]
     [MemberData(nameof(BothOrderings))]
-    public void FreeFloatingSpringChain_OneFailure_RigidTranslationMechanism(EnvelopeOrdering ordering)
+    public void FreeFloatingSpringChain_OneFailure_RigidTranslationMechanism(string ordering)
     {
         int n = 12;
         var label = RandomPermutation(n, 3);
@@ -32,7 +50,7 @@ public class PivotFailureTests
         for (int k = 1; k < n; k++) AddSpring(b, label[k - 1], label[k], 1.0 + k);
         var a = b.Build();
 
-        var f = new EnvelopeCholeskySolver(ordering).Factorize(a);
+        var f = Solver(ordering).Factorize(a);
         var failure = Assert.Single(f.PivotFailures);
         Assert.True(Math.Abs(failure.Pivot) < 1e-10 * failure.Diagonal);
         Assert.Equal(a.Diagonal(failure.Dof), failure.Diagonal);
@@ -55,7 +73,7 @@ public class PivotFailureTests
 
     [Theory]
     [MemberData(nameof(BothOrderings))]
-    public void LaplacianWithThreeFloatingComponentsAndOneGroundedOne_ThreeFailures(EnvelopeOrdering ordering)
+    public void LaplacianWithThreeFloatingComponentsAndOneGroundedOne_ThreeFailures(string ordering)
     {
         // Four random connected graphs (a spanning path plus random chords) on disjoint DOF sets, numbers interleaved.
         // Only the fourth is grounded (a spring to ground at one node). Expect exactly three failures, one per floating
@@ -83,7 +101,7 @@ public class PivotFailureTests
         }
         var a = b.Build();
 
-        var f = new EnvelopeCholeskySolver(ordering).Factorize(a);
+        var f = Solver(ordering).Factorize(a);
         Assert.Equal(3, f.PivotFailures.Count);
         var failedComponents = f.PivotFailures.Select(p => comp[p.Dof]).OrderBy(c => c).ToArray();
         Assert.Equal(new[] { 0, 1, 2 }, failedComponents);
@@ -111,7 +129,7 @@ public class PivotFailureTests
 
     [Theory]
     [MemberData(nameof(BothOrderings))]
-    public void RandomUngroundedLaplacian_FailuresEqualComponentCount(EnvelopeOrdering ordering)
+    public void RandomUngroundedLaplacian_FailuresEqualComponentCount(string ordering)
     {
         for (int seed = 0; seed < 8; seed++)
         {
@@ -119,7 +137,7 @@ public class PivotFailureTests
             // Sparse enough (≈0.7 edges per node) to leave several components and isolated nodes.
             var a = RandomLaplacianPlusDiagonal(n, 1000 + seed, edgesPerNode: 0.7, shift: false);
             int components = CountComponents(a);
-            var f = new EnvelopeCholeskySolver(ordering).Factorize(a);
+            var f = Solver(ordering).Factorize(a);
             Assert.Equal(components, f.PivotFailures.Count);
             for (int q = 0; q < f.PivotFailures.Count; q++)
             {
@@ -143,7 +161,7 @@ public class PivotFailureTests
 
     [Theory]
     [MemberData(nameof(BothOrderings))]
-    public void DofWithNoStiffness_FailsAtThatDof(EnvelopeOrdering ordering)
+    public void DofWithNoStiffness_FailsAtThatDof(string ordering)
     {
         // DOF 3 of 8 gets no entry at all (e.g. a node no element reaches); the rest is SPD.
         int n = 8, dead = 3;
@@ -154,7 +172,7 @@ public class PivotFailureTests
         var a = b.Build();
         Assert.Equal(0.0, a.Diagonal(dead));
 
-        var f = new EnvelopeCholeskySolver(ordering).Factorize(a);
+        var f = Solver(ordering).Factorize(a);
         var failure = Assert.Single(f.PivotFailures);
         Assert.Equal(dead, failure.Dof);
         Assert.Equal(0.0, failure.Pivot);
@@ -174,12 +192,12 @@ public class PivotFailureTests
 
     [Theory]
     [MemberData(nameof(BothOrderings))]
-    public void Indefinite2x2_RecordsAFailure_NoNaN(EnvelopeOrdering ordering)
+    public void Indefinite2x2_RecordsAFailure_NoNaN(string ordering)
     {
         // [1 2; 2 1] has eigenvalues 3 and −1: the second pivot is 1 − 4 = −3 in either order.
         var b = new SymmetricMatrixBuilder(2);
         b.AddElement(new[] { 0, 1 }, new[,] { { 1.0, 2.0 }, { 2.0, 1.0 } });
-        var f = new EnvelopeCholeskySolver(ordering).Factorize(b.Build());
+        var f = Solver(ordering).Factorize(b.Build());
         var failure = Assert.Single(f.PivotFailures);
         Assert.Equal(-3.0, failure.Pivot, 12);
         Assert.Equal(1.0, failure.Diagonal);
@@ -196,12 +214,12 @@ public class PivotFailureTests
 
     [Theory]
     [MemberData(nameof(BothOrderings))]
-    public void IndefiniteLargerMatrix_FailuresRecorded_FiniteEverywhere_AndMechanismMeetsItsDefinition(EnvelopeOrdering ordering)
+    public void IndefiniteLargerMatrix_FailuresRecorded_FiniteEverywhere_AndMechanismMeetsItsDefinition(string ordering)
     {
         // A scrambled grid Laplacian with a negative shift: eigenvalues of the 2D 5-point Laplacian lie in (0, 8),
         // so a shift of −1.5 leaves several negative ones (from memory of the stencil's spectrum).
         var a = GridStencil(12, 10, 1, scrambleSeed: 8, shift: -1.5);
-        var f = (EnvelopeFactor)new EnvelopeCholeskySolver(ordering).Factorize(a);
+        var f = Solver(ordering).Factorize(a);
         Assert.NotEmpty(f.PivotFailures);
         // The diagonal (degree − 1.5 ≥ 0.5) is positive everywhere, so each failure is a small or negative pivot.
         Assert.All(f.PivotFailures, p => Assert.True(p.Diagonal > 0 && p.Pivot <= 1e-10 * p.Diagonal));
@@ -210,7 +228,7 @@ public class PivotFailureTests
         f.Solve(RandomVector(a.Size, 1), x);
         Assert.All(x, v => Assert.True(double.IsFinite(v)));
 
-        var inv = Orderings.Inverse(f.Permutation);
+        var inv = Orderings.Inverse(PermutationOf(f));
         var failedDofs = f.PivotFailures.Select(p => p.Dof).ToHashSet();
         for (int q = 0; q < f.PivotFailures.Count; q++)
         {
@@ -232,8 +250,9 @@ public class PivotFailureTests
         }
     }
 
-    [Fact]
-    public void NegativeDiagonal_FailsAtThatDof()
+    [Theory]
+    [MemberData(nameof(BothOrderings))]
+    public void NegativeDiagonal_FailsAtThatDof(string ordering)
     {
         var b = new SymmetricMatrixBuilder(4);
         b.AddDiagonal(0, 4.0);
@@ -241,45 +260,49 @@ public class PivotFailureTests
         b.AddDiagonal(2, 4.0);
         b.AddDiagonal(3, 4.0);
         AddSpring(b, 0, 2, 1.0);
-        var f = new EnvelopeCholeskySolver().Factorize(b.Build());
+        var f = Solver(ordering).Factorize(b.Build());
         var failure = Assert.Single(f.PivotFailures);
         Assert.Equal(1, failure.Dof);
         Assert.Equal(-2.0, failure.Diagonal);
         Assert.Equal(-2.0, failure.Pivot);
     }
 
-    [Fact]
-    public void NaNEntry_IsAFailureNotAnException()
+    [Theory]
+    [MemberData(nameof(BothOrderings))]
+    public void NaNEntry_IsAFailureNotAnException(string ordering)
     {
         var b = new SymmetricMatrixBuilder(3);
         b.AddDiagonal(0, 1.0);
         b.AddDiagonal(1, double.NaN);
         b.AddDiagonal(2, 1.0);
-        var f = new EnvelopeCholeskySolver().Factorize(b.Build());
+        var f = Solver(ordering).Factorize(b.Build());
         Assert.Equal(1, Assert.Single(f.PivotFailures).Dof);
         var x = new double[3];
         f.Solve(new[] { 1.0, 1.0, 1.0 }, x);
         Assert.Equal(new[] { 1.0, 0.0, 1.0 }, x);
     }
 
-    [Fact]
-    public void RelativeTolerance_IsHonoured()
+    [Theory]
+    [InlineData("envelope-natural")]
+    [InlineData("supernodal-natural")]
+    public void RelativeTolerance_IsHonoured(string ordering)
     {
         // [1 1; 1 1+δ]: second pivot δ, diagonal 1+δ. With δ = 1e-6 it passes at tol 1e-10 and fails at tol 1e-4.
         var b = new SymmetricMatrixBuilder(2);
         b.AddElement(new[] { 0, 1 }, new[,] { { 1.0, 1.0 }, { 1.0, 1.0 + 1e-6 } });
         var a = b.Build();
-        var solver = new EnvelopeCholeskySolver(EnvelopeOrdering.Natural);
+        var solver = Solver(ordering);
         Assert.Empty(solver.Factorize(a, 1e-10).PivotFailures);
         var failure = Assert.Single(solver.Factorize(a, 1e-4).PivotFailures);
         Assert.Equal(1, failure.Dof);
         Assert.Equal(1e-6, failure.Pivot, 1e-15);
     }
 
-    [Fact]
-    public void MechanismShape_RejectsABadIndex()
+    [Theory]
+    [MemberData(nameof(BothOrderings))]
+    public void MechanismShape_RejectsABadIndex(string ordering)
     {
-        var f = new EnvelopeCholeskySolver().Factorize(RandomLaplacianPlusDiagonal(5, 1));
+        var f = Solver(ordering).Factorize(RandomLaplacianPlusDiagonal(5, 1));
         Assert.Throws<ArgumentOutOfRangeException>(() => f.MechanismShape(0));
     }
 }

@@ -145,3 +145,93 @@ internal static class TestMatrices
         return den == 0 ? Math.Sqrt(num) : Math.Sqrt(num / den);
     }
 }
+
+/// <summary>More generators: 2-DOF-per-node grids (the sparsity of plane-stress meshes) and dense SPD matrices.</summary>
+internal static class MoreTestMatrices
+{
+    /// <summary>
+    /// nx×ny nodes, 2 DOFs each, 4-node cells coupling all corners (8 neighbours per node) with the SPD 2×2 block
+    /// [[2, 1], [1, 2]] ⊗ (cell Laplacian), plus a diagonal shift; DOF numbering scrambled by a seeded permutation
+    /// (seed &lt; 0: node by node, row by row).
+    /// </summary>
+    public static SymmetricSparseMatrix TwoDofQuadGrid(int nx, int ny, int scrambleSeed, double shift = 0.05)
+    {
+        int n = 2 * nx * ny;
+        var label = scrambleSeed >= 0 ? TestMatrices.RandomPermutation(n, scrambleSeed) : Orderings.Natural(n);
+        var b = new SymmetricMatrixBuilder(n);
+        var ke = new double[4, 4];
+        for (int y = 0; y + 1 < ny; y++)
+            for (int x = 0; x + 1 < nx; x++)
+            {
+                int n0 = x + nx * y;
+                int[] c = { n0, n0 + 1, n0 + nx, n0 + nx + 1 };
+                for (int i = 0; i < 4; i++)
+                    for (int j = 0; j < i; j++)
+                    {
+                        // 2×2 block coupling of nodes c[i], c[j]: [B −B; −B B] with B = [[2,1],[1,2]].
+                        int[] d = { label[2 * c[i]], label[2 * c[i] + 1], label[2 * c[j]], label[2 * c[j] + 1] };
+                        double[,] blk = { { 2, 1 }, { 1, 2 } };
+                        for (int p = 0; p < 2; p++)
+                            for (int q = 0; q < 2; q++)
+                            {
+                                ke[p, q] = blk[p, q];
+                                ke[p + 2, q + 2] = blk[p, q];
+                                ke[p, q + 2] = -blk[p, q];
+                                ke[p + 2, q] = -blk[p, q];
+                            }
+                        b.AddElement(d, ke);
+                    }
+            }
+        for (int i = 0; i < n; i++) b.AddDiagonal(i, shift);
+        return b.Build();
+    }
+
+    /// <summary>A dense SPD matrix G·Gᵀ/n + I (seeded), stored as a sparse matrix.</summary>
+    public static SymmetricSparseMatrix DenseSpd(int n, int seed)
+    {
+        var rng = new Random(seed);
+        var g = new double[n, n];
+        for (int i = 0; i < n; i++)
+            for (int j = 0; j < n; j++) g[i, j] = 2 * rng.NextDouble() - 1;
+        var b = new SymmetricMatrixBuilder(n);
+        for (int i = 0; i < n; i++)
+            for (int j = 0; j <= i; j++)
+            {
+                double s = 0;
+                for (int k = 0; k < n; k++) s += g[i, k] * g[j, k];
+                s /= n;
+                if (i == j) s += 1.0;
+                if (i == j) b.AddDiagonal(i, s);
+                else b.AddElement(new[] { i, j }, new[,] { { 0.0, s }, { s, 0.0 } });
+            }
+        return b.Build();
+    }
+
+    /// <summary>
+    /// nnz(L) (diagonal included) of the Cholesky factor of P·K·Pᵀ by simulating the elimination on a dense boolean
+    /// matrix (George and Liu 1981, §2.2: eliminating node k connects all its later neighbours). O(n³): small n only.
+    /// </summary>
+    public static long SymbolicFillByElimination(SymmetricSparseMatrix a, int[] perm)
+    {
+        int n = a.Size;
+        var inv = Orderings.Inverse(perm);
+        var s = new bool[n, n];
+        for (int j = 0; j < n; j++)
+            for (int p = a.ColumnPointers[j]; p < a.ColumnPointers[j + 1]; p++)
+            {
+                int r = inv[a.RowIndices[p]], c = inv[j];
+                s[r, c] = s[c, r] = true;
+            }
+        long count = 0;
+        for (int k = 0; k < n; k++)
+        {
+            count++;
+            var below = new List<int>();
+            for (int i = k + 1; i < n; i++) if (s[i, k]) below.Add(i);
+            count += below.Count;
+            foreach (int i in below)
+                foreach (int j in below) s[i, j] = true;
+        }
+        return count;
+    }
+}

@@ -1,0 +1,325 @@
+namespace PlaneLateral.Solvers;
+
+/// <summary>
+/// Symbolic analysis for the supernodal Cholesky factor of P·K·Pᵀ: elimination tree, postorder, column counts,
+/// fundamental supernodes with relaxed amalgamation, and the row pattern of every supernode.
+/// </summary>
+/// <remarks>
+/// <list type="bullet">
+/// <item>Elimination tree: Liu's algorithm with path compression (J. W. H. Liu, "The role of elimination trees in sparse
+/// factorization", SIAM J. Matrix Anal. Appl. 11(1), 1990, §3; Davis 2006, §4.1).</item>
+/// <item>Postorder: depth-first, children visited in increasing order (Liu 1990, §2); the ordering is composed with it, so the
+/// factor's columns are postordered and every supernode is a contiguous range.</item>
+/// <item>Column counts: by row subtrees — the pattern of row k of L is the subtree of the elimination tree spanned by the
+/// entries of row k of the matrix (Liu 1990, §3.2; Davis 2006, §4.2), so walking each of them up to the first node already
+/// marked for row k counts every entry of L once: O(nnz(L)) time, O(n) extra space.</item>
+/// <item>Fundamental supernodes: column j joins j−1 when j is j−1's parent, its only child, and count(j−1) = count(j)+1
+/// (Liu, Ng and Peyton, "On finding supernodes for sparse matrix computations", SIAM J. Matrix Anal. Appl. 14(1), 1993).</item>
+/// <item>Relaxed amalgamation: a supernode is merged with its parent when they are contiguous and the explicit zeros this adds
+/// stay under a size-dependent share (Ashcraft and Grimes, "The influence of relaxed supernode partitions on the multifrontal
+/// method", ACM TOMS 15(4), 1989); the thresholds are this project's own, chosen by measurement on plane-stress grids.</item>
+/// <item>Row pattern of a supernode: the rows below it in its columns of the matrix, united with its children's patterns
+/// (Liu 1990, Theorem 3.3 applied to column blocks).</item>
+/// </list>
+/// </remarks>
+internal sealed class SupernodalSymbolic
+{
+    public int N;
+    public int[] Perm = null!;          // perm[new] = old (postordered)
+    public int[] Inv = null!;
+    public int SupernodeCount;
+    public int[] First = null!;         // supernode s covers columns First[s] .. First[s+1]-1
+    public int[] PatternStart = null!;  // rows below the supernode: PatternRows[PatternStart[s] .. PatternStart[s+1])
+    public int[] PatternRows = null!;   // ascending, in the new numbering
+    public int[] Parent = null!;        // parent supernode (−1: root)
+    public long[] FactorOffset = null!; // start of supernode s's dense block (column-major, m rows × k columns)
+    public long StoredEntries;          // Σ m·k (the rectangles held, upper part of the diagonal blocks included)
+    public long FactorNonZeros;         // lower-trapezoid entries of the supernodes (amalgamation zeros included)
+    public long ExactNonZeros;          // nnz(L) of the exact (unamalgamated) pattern, diagonal included
+    public double Flops;                // floating-point operations of the numeric factorisation (exact pattern)
+    public int MaxFront;                // largest m
+
+    /// <summary>Entries of P·K·Pᵀ grouped by column (lower triangle: row ≥ column), with the source index of each.</summary>
+    internal static void LowerByColumn(SymmetricSparseMatrix a, int[] inv, out int[] colPtr, out int[] rows, out int[] source)
+    {
+        int n = a.Size;
+        var cp = a.ColumnPointers;
+        var ri = a.RowIndices;
+        colPtr = new int[n + 1];
+        for (int j = 0; j < n; j++)
+            for (int p = cp[j]; p < cp[j + 1]; p++) colPtr[Math.Min(inv[ri[p]], inv[j]) + 1]++;
+        for (int j = 0; j < n; j++) colPtr[j + 1] += colPtr[j];
+        var next = (int[])colPtr.Clone();
+        int nz = colPtr[n];
+        rows = new int[nz];
+        source = new int[nz];
+        for (int j = 0; j < n; j++)
+            for (int p = cp[j]; p < cp[j + 1]; p++)
+            {
+                int r = inv[ri[p]], c = inv[j];
+                if (r < c) (r, c) = (c, r);
+                int q = next[c]++;
+                rows[q] = r;
+                source[q] = p;
+            }
+    }
+
+    /// <summary>Strictly lower entries of P·K·Pᵀ grouped by row: row r lists the columns c &lt; r.</summary>
+    private static void LowerByRow(SymmetricSparseMatrix a, int[] inv, out int[] rowPtr, out int[] cols)
+    {
+        int n = a.Size;
+        var cp = a.ColumnPointers;
+        var ri = a.RowIndices;
+        rowPtr = new int[n + 1];
+        for (int j = 0; j < n; j++)
+            for (int p = cp[j]; p < cp[j + 1]; p++)
+            {
+                int r = inv[ri[p]], c = inv[j];
+                if (r != c) rowPtr[Math.Max(r, c) + 1]++;
+            }
+        for (int j = 0; j < n; j++) rowPtr[j + 1] += rowPtr[j];
+        var next = (int[])rowPtr.Clone();
+        cols = new int[rowPtr[n]];
+        for (int j = 0; j < n; j++)
+            for (int p = cp[j]; p < cp[j + 1]; p++)
+            {
+                int r = inv[ri[p]], c = inv[j];
+                if (r == c) continue;
+                if (r < c) (r, c) = (c, r);
+                cols[next[r]++] = c;
+            }
+    }
+
+    private static int[] EliminationTree(int n, int[] rowPtr, int[] cols)
+    {
+        var parent = new int[n];
+        var ancestor = new int[n];
+        for (int k = 0; k < n; k++)
+        {
+            parent[k] = -1;
+            ancestor[k] = -1;
+            for (int p = rowPtr[k]; p < rowPtr[k + 1]; p++)
+            {
+                int r = cols[p];
+                while (r != -1 && r != k)
+                {
+                    int t = ancestor[r];
+                    ancestor[r] = k;
+                    if (t == -1) { parent[r] = k; break; }
+                    r = t;
+                }
+            }
+        }
+        return parent;
+    }
+
+    private static int[] Postorder(int n, int[] parent)
+    {
+        var head = new int[n];
+        var next = new int[n];
+        Array.Fill(head, -1);
+        for (int j = n - 1; j >= 0; j--)
+        {
+            int p = parent[j];
+            if (p < 0) continue;
+            next[j] = head[p];
+            head[p] = j;
+        }
+        var post = new int[n];
+        var stack = new int[n];
+        int k = 0;
+        for (int root = 0; root < n; root++)
+        {
+            if (parent[root] != -1) continue;
+            int top = 0;
+            stack[0] = root;
+            while (top >= 0)
+            {
+                int v = stack[top];
+                int c = head[v];
+                if (c == -1) { top--; post[k++] = v; }
+                else { head[v] = next[c]; stack[++top] = c; }
+            }
+        }
+        return post;
+    }
+
+    public static SupernodalSymbolic Analyse(SymmetricSparseMatrix a, int[] ordering)
+    {
+        int n = a.Size;
+        var inv0 = Orderings.Inverse(ordering);
+        LowerByRow(a, inv0, out var rowPtr, out var cols);
+        var parent0 = EliminationTree(n, rowPtr, cols);
+        var post = Postorder(n, parent0);
+        var perm = new int[n];
+        for (int k = 0; k < n; k++) perm[k] = ordering[post[k]];
+        var inv = Orderings.Inverse(perm);
+        LowerByRow(a, inv, out rowPtr, out cols);
+        var parent = EliminationTree(n, rowPtr, cols);
+
+        // Column counts by row subtrees.
+        var count = new int[n];
+        var mark = new int[n];
+        Array.Fill(mark, -1);
+        for (int k = 0; k < n; k++)
+        {
+            mark[k] = k;
+            count[k]++;
+            for (int p = rowPtr[k]; p < rowPtr[k + 1]; p++)
+                for (int j = cols[p]; j != -1 && mark[j] != k; j = parent[j])
+                {
+                    mark[j] = k;
+                    count[j]++;
+                }
+        }
+        var childCount = new int[n];
+        for (int j = 0; j < n; j++) if (parent[j] >= 0) childCount[parent[j]]++;
+        long exact = 0;
+        double flops = 0;
+        for (int j = 0; j < n; j++)
+        {
+            exact += count[j];
+            double c = count[j] - 1;
+            flops += 1 + c + c * (c + 1); // sqrt, scaling, and the symmetric update of the column
+        }
+
+        // Fundamental supernodes.
+        var firsts = new List<int>();
+        for (int j = 0; j < n; j++)
+        {
+            bool joins = j > 0 && parent[j - 1] == j && childCount[j] == 1 && count[j - 1] == count[j] + 1;
+            if (!joins) firsts.Add(j);
+        }
+        int ns0 = firsts.Count;
+        // Supernode data for amalgamation: columns, rows below (of the last column), true non-zeros, parent.
+        var sFirst = firsts.ToArray();
+        var sCols = new int[ns0];
+        var sBelow = new int[ns0];
+        var sTrue = new long[ns0];
+        var colToSuper = new int[n];
+        for (int s = 0; s < ns0; s++)
+        {
+            int f = sFirst[s], l = s + 1 < ns0 ? sFirst[s + 1] : n;
+            sCols[s] = l - f;
+            sBelow[s] = count[l - 1] - 1;
+            for (int j = f; j < l; j++) { colToSuper[j] = s; sTrue[s] += count[j]; }
+        }
+        var sParent = new int[ns0];
+        for (int s = 0; s < ns0; s++)
+        {
+            int l = (s + 1 < ns0 ? sFirst[s + 1] : n) - 1;
+            sParent[s] = parent[l] < 0 ? -1 : colToSuper[parent[l]];
+        }
+
+        // Relaxed amalgamation, left to right: merge s into its parent when the parent starts right after s.
+        var alive = new bool[ns0];
+        Array.Fill(alive, true);
+        for (int s = 0; s < ns0; s++)
+        {
+            int p = sParent[s];
+            if (p != s + 1) continue; // in the postorder the parent is contiguous only when it is the next supernode
+            int nc = sCols[s] + sCols[p];
+            int below = sBelow[p];
+            long stored = (long)nc * (nc + 1) / 2 + (long)nc * below;
+            long zeros = stored - sTrue[s] - sTrue[p];
+            double share = (double)zeros / stored;
+            bool merge = nc <= 4 || (nc <= 16 && share <= 0.5) || (nc <= 48 && share <= 0.1) || share <= 0.03;
+            if (!merge) continue;
+            alive[s] = false;
+            sFirst[p] = sFirst[s];
+            sCols[p] = nc;
+            sTrue[p] += sTrue[s]; // true non-zeros of the union; zeros are recomputed from it at the next merge
+        }
+        var keep = new List<int>();
+        for (int s = 0; s < ns0; s++) if (alive[s]) keep.Add(s);
+        int ns = keep.Count;
+        var first = new int[ns + 1];
+        for (int t = 0; t < ns; t++) first[t] = sFirst[keep[t]];
+        first[ns] = n;
+        var superOf = new int[n];
+        for (int t = 0; t < ns; t++)
+            for (int j = first[t]; j < first[t + 1]; j++) superOf[j] = t;
+
+        // Row patterns: A's rows below the supernode in its columns, united with the children's patterns.
+        LowerByColumn(a, inv, out var colPtr, out var rowsByCol, out _);
+        var childHead = new int[ns];
+        var childNext = new int[ns];
+        Array.Fill(childHead, -1);
+        var sp = new int[ns];
+        var patStart = new int[ns + 1];
+        var patList = new List<int[]>(ns);
+        var marker = new int[n];
+        Array.Fill(marker, -1);
+        var buf = new List<int>();
+        long patTotal = 0;
+        for (int t = 0; t < ns; t++)
+        {
+            int f = first[t], l = first[t + 1] - 1;
+            buf.Clear();
+            for (int j = f; j <= l; j++)
+                for (int p = colPtr[j]; p < colPtr[j + 1]; p++)
+                {
+                    int r = rowsByCol[p];
+                    if (r > l && marker[r] != t) { marker[r] = t; buf.Add(r); }
+                }
+            for (int c = childHead[t]; c != -1; c = childNext[c])
+                foreach (int r in patList[c])
+                    if (r > l && marker[r] != t) { marker[r] = t; buf.Add(r); }
+            buf.Sort();
+            var pat = buf.ToArray();
+            patList.Add(pat);
+            patTotal += pat.Length;
+            int par = pat.Length > 0 ? superOf[pat[0]] : -1;
+            sp[t] = par;
+            if (par >= 0)
+            {
+                // children kept in increasing order: prepend, then the list is descending; order does not matter for the union
+                childNext[t] = childHead[par];
+                childHead[par] = t;
+            }
+        }
+        // Drop children's pattern arrays only after all are built (they are small relative to L).
+        var patRows = new int[patTotal];
+        long q = 0;
+        for (int t = 0; t < ns; t++)
+        {
+            patStart[t] = (int)q;
+            patList[t].CopyTo(patRows, q);
+            q += patList[t].Length;
+        }
+        if (patTotal > int.MaxValue) throw new InvalidOperationException("Supernode patterns exceed 2³¹ entries.");
+        patStart[ns] = (int)q;
+
+        var offset = new long[ns + 1];
+        long stored2 = 0, lnz = 0;
+        int maxFront = 0;
+        for (int t = 0; t < ns; t++)
+        {
+            int k = first[t + 1] - first[t];
+            int m = k + (patStart[t + 1] - patStart[t]);
+            offset[t] = stored2;
+            stored2 += (long)m * k;
+            lnz += (long)k * (k + 1) / 2 + (long)k * (m - k);
+            maxFront = Math.Max(maxFront, m);
+        }
+        offset[ns] = stored2;
+
+        return new SupernodalSymbolic
+        {
+            N = n,
+            Perm = perm,
+            Inv = inv,
+            SupernodeCount = ns,
+            First = first,
+            PatternStart = patStart,
+            PatternRows = patRows,
+            Parent = sp,
+            FactorOffset = offset,
+            StoredEntries = stored2,
+            FactorNonZeros = lnz,
+            ExactNonZeros = exact,
+            Flops = flops,
+            MaxFront = maxFront,
+        };
+    }
+}
