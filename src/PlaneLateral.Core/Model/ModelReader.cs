@@ -21,6 +21,7 @@ public static partial class ModelReader
         string text;
         try
         {
+            if (ModelLimits.CheckFileSize(path, new FileInfo(path).Length) is { } tooLarge) throw new ModelInputException([tooLarge]);
             text = File.ReadAllText(path);
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException or NotSupportedException or ArgumentException)
@@ -33,6 +34,7 @@ public static partial class ModelReader
     /// <summary>Reads and validates a model from JSON text; <paramref name="fileName"/> is used in messages.</summary>
     public static StructureModel Parse(string json, string fileName = "<model>")
     {
+        if (ModelLimits.CheckFileSize(fileName, json.Length) is { } tooLarge) throw new ModelInputException([tooLarge]);
         JToken root;
         try
         {
@@ -60,6 +62,7 @@ public static partial class ModelReader
             throw new ModelInputException(sink.Items);
         }
 
+        if (ModelLimits.CheckCounts(obj, sink)) throw new ModelInputException(sink.Items);
         var model = new Builder(sink, fileName).Build(obj);
         if (sink.Any) throw new ModelInputException(sink.Items);
         return model!;
