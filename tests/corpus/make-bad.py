@@ -155,6 +155,9 @@ add("compare-split-unknown-check", "comparisons", "unknown check \"frame\" in a 
     m(lambda d: d.update({"comparisons": [{"id": "s", "kind": "shear-split", "loadCase": "wind", "lines": [{"check": "s"}, {"check": "frame"}]}]})))
 add("compare-tolerance-out-of-range", "comparisons", "'tolerance' is 1.5, outside (0, 1)", "$.comparisons[0].tolerance",
     m(lambda d: d.update({"comparisons": [dict(WALL, tolerance=1.5)]})))
+# --- regression cases found by the fuzzer (tools/fuzz.sh) ---
+add("fuzz-duplicate-check-id", "fuzz finding", "duplicate comparison check id \"facade\"", "$.comparisons[1].id",
+    m(lambda d: d.update({"comparisons": [WALL, copy.deepcopy(WALL)]})))
 # --- size limits (ModelLimits) ---
 add("limit-too-many-nodes", "size limit", "the model has 10001 nodes, more than the 10000", "$.nodes",
     text=good.replace('"nodes": [', '"nodes": [' + "{}," * 9997, 1))

@@ -744,7 +744,8 @@ public static partial class ModelReader
                 if (id is not null && check is not null) list.Add(check);
             }
             // Lines of a split name other checks: resolve once all are read.
-            var byId = list.ToDictionary(c => c.Id, StringComparer.Ordinal);
+            var byId = new Dictionary<string, ComparisonCheck>(StringComparer.Ordinal);
+            foreach (var c in list) byId.TryAdd(c.Id, c);   // a duplicate id is already reported (ReadId); keep the first
             foreach (var (split, tokens) in splits)
                 for (int i = 0; i < split.Lines.Count; i++)
                 {
