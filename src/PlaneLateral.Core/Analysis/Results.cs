@@ -18,6 +18,9 @@ public sealed class AnalysisResult
     /// <summary>Plain-sentence notes about the model (e.g. rotations held because nothing stiffens them).</summary>
     public required IReadOnlyList<string> Notes { get; init; }
 
+    /// <summary>Condition estimates of the factorised stiffness (see <see cref="Analysis.Conditioning"/>); null when not estimated.</summary>
+    public ConditionEstimate? Conditioning { get; init; }
+
     public CaseResult Case(string id) => Cases.First(c => c.Id == id);
 }
 
