@@ -158,6 +158,20 @@ add("compare-tolerance-out-of-range", "comparisons", "'tolerance' is 1.5, outsid
 # --- regression cases found by the fuzzer (tools/fuzz.sh) ---
 add("fuzz-duplicate-check-id", "fuzz finding", "duplicate comparison check id \"facade\"", "$.comparisons[1].id",
     m(lambda d: d.update({"comparisons": [WALL, copy.deepcopy(WALL)]})))
+# --- slow inputs found while hardening (the "did you mean" search; SuggestBudget) ---
+def long_ids(d):
+    a, b = "N" + "a" * 30000, "N" + "b" * 30000
+    d["nodes"][3]["id"] = a
+    d["supports"][1]["node"] = a
+    d["members"][2].update({"start": a, "end": b})
+add("slow-long-id-typo", "slow input", "unknown node \"Nbbbbbbbbbbbbbbbbbbbbbbbbbbbbbbbbbbbb", "$.members[2].end", m(long_ids))
+def many_unknown(d):
+    d["nodes"] = [{"id": "joint-%016d" % i, "x": float(i % 40), "y": float(i // 40)} for i in range(1000)]
+    d["members"] = [{"id": "m%d" % i, "start": "joint-%016d" % (i + 5000), "end": "joint-%016d" % (i + 9000), "section": "col", "material": "steel"} for i in range(3000)]
+    d["supports"] = [{"node": "joint-%016d" % 0, "type": "fixed"}]
+    d["loadCases"][0]["nodalLoads"][0]["node"] = "joint-%016d" % 999
+add("slow-many-unknown-references", "slow input", "unknown node \"joint-0000000000011999\"", "$.members[2999].end",
+    text=json.dumps(m(many_unknown), separators=(",", ":")) + "\n")
 # --- size limits (ModelLimits) ---
 add("limit-too-many-nodes", "size limit", "the model has 10001 nodes, more than the 10000", "$.nodes",
     text=good.replace('"nodes": [', '"nodes": [' + "{}," * 9997, 1))

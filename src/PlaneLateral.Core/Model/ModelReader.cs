@@ -63,6 +63,7 @@ public static partial class ModelReader
         }
 
         if (ModelLimits.CheckCounts(obj, sink)) throw new ModelInputException(sink.Items);
+        SuggestBudget.Reset();
         var model = new Builder(sink, fileName).Build(obj);
         if (sink.Any) throw new ModelInputException(sink.Items);
         return model!;
@@ -345,8 +346,12 @@ public static partial class ModelReader
         {
             // Same id but for case, or a typo or two away (one for short ids); never every short id.
             int allowed = id.Length >= 5 ? 2 : 1;
-            var near = known.Where(k => string.Equals(k, id, StringComparison.OrdinalIgnoreCase)).ToList();
-            if (near.Count == 0) near = known.Where(k => Distance(k, id) <= allowed && Distance(k, id) < Math.Min(k.Length, id.Length)).Take(3).ToList();
+            // Bounded work (SuggestBudget): long ids are not compared; an edit distance is at least the difference in length.
+            var candidates = known as ICollection<string> ?? known.ToList();
+            if (id.Length > SuggestBudget.MaxIdLength || !SuggestBudget.Spend(candidates.Count)) return "";
+            var near = candidates.Where(k => string.Equals(k, id, StringComparison.OrdinalIgnoreCase)).ToList();
+            if (near.Count == 0) near = candidates.Where(k => k.Length <= SuggestBudget.MaxIdLength && Math.Abs(k.Length - id.Length) <= allowed && SuggestBudget.Spend(2L * (k.Length + 1) * (id.Length + 1))
+                && Distance(k, id) <= allowed && Distance(k, id) < Math.Min(k.Length, id.Length)).Take(3).ToList();
             return near.Count == 0 ? "" : $" (did you mean {string.Join(" or ", near.Select(n => $"\"{n}\""))}?)";
         }
 

@@ -50,7 +50,7 @@ public sealed class BadCorpusTests : IDisposable
         Assert.True(cases.Count >= 40, $"{cases.Count} bad models; the issue asks for at least 40");
         var categories = cases.Select(c => (string)c["category"]!).ToHashSet();
         foreach (var need in new[] { "syntax", "wrong type", "missing key", "unknown reference", "duplicate", "non-positive", "non-finite",
-                     "magnitude", "units", "disconnected", "mechanism", "levels", "drift checks", "comparisons", "size limit" })
+                     "magnitude", "units", "disconnected", "mechanism", "levels", "drift checks", "comparisons", "size limit", "fuzz finding" })
             Assert.Contains(need, categories);
         foreach (var f in Directory.GetFiles(CorpusFolder, "*.json").Select(Path.GetFileName).Where(f => f != "manifest.json"))
             Assert.Contains(cases, c => (string)c["file"]! == f);   // no file without its expectation
@@ -87,9 +87,13 @@ public sealed class BadCorpusTests : IDisposable
             var o = new StringWriter();
             var e = new StringWriter();
             string[] args = command == "validate" ? [command, input] : [command, input, "--out", outDir];
+            var clock = System.Diagnostics.Stopwatch.StartNew();
             int code = CliApp.Run(args, o, e);
+            clock.Stop();
             string all = o + "\n" + e;
 
+            // Common practice: a bad file is answered promptly, not after minutes (each is a small file; 20 s is generous).
+            Assert.True(clock.Elapsed < TimeSpan.FromSeconds(20), $"{command} {file}: took {clock.Elapsed.TotalSeconds:0.0} s");
             Assert.True(code == exit, $"{command} {file}: exit {code}, expected {exit}\n{all}");
             Assert.DoesNotMatch(StackTrace, all);
             Assert.False(Directory.Exists(outDir), $"{command} {file}: created the output folder");
