@@ -15,6 +15,6 @@ export DOTNET_CLI_TELEMETRY_OPTOUT=1 DOTNET_NOLOGO=1
 # A hard stop well beyond the budget, in case one input hangs (that would itself be a finding).
 limit=$(( 2 * seconds + 600 ))
 PLANELATERAL_FUZZ_SECONDS="$seconds" timeout "$limit" \
-  dotnet test tests/PlaneLateral.Core.Tests --filter "FullyQualifiedName~ReaderFuzzCampaign" --logger "console;verbosity=normal" 2>&1 \
+  dotnet test tests/PlaneLateral.Core.Tests --filter "FullyQualifiedName~ReaderFuzzCampaign" --logger "console;verbosity=detailed" 2>&1 \
   | grep -Ev '^\s*$' | tail -n 40
 exit "${PIPESTATUS[0]}"
