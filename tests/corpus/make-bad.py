@@ -175,6 +175,9 @@ add("slow-many-unknown-references", "slow input", "unknown node \"joint-00000000
 # --- size limits (ModelLimits) ---
 add("limit-too-many-nodes", "size limit", "the model has 10001 nodes, more than the 10000", "$.nodes",
     text=good.replace('"nodes": [', '"nodes": [' + "{}," * 9997, 1))
+add("limit-too-many-cases", "size limit", "the model has 150 load cases and 51 combinations, more than the 200 together", "$.loadCases",
+    m(lambda d: d.update({"loadCases": [{"id": "w%d" % i, "nodalLoads": [{"node": "B", "fx": float(i)}]} for i in range(150)],
+                          "combinations": [{"id": "c%d" % i, "factors": {"w%d" % i: 1.5}} for i in range(51)]})))
 add("limit-too-many-openings", "size limit", "101 openings in one wall, more than the 100", "$.comparisons[0].openings",
     m(lambda d: d.update({"comparisons": [dict(WALL, openings=[{"x": 0.01 * i, "y": 0, "width": 0.005, "height": 1} for i in range(101)])]})))
 
