@@ -19,7 +19,11 @@ internal static class SolveReport
         sb.Append($"File      {modelPath}\n");
         sb.Append($"Units     force {force}, length {len}\n");
         sb.Append($"Size      {m.Nodes.Count} nodes, {m.Members.Count} members, {m.Supports.Count} supports, {m.LoadCases.Count} load cases, {m.Combinations.Count} combinations\n");
-        if (m.Members.Count > 0) sb.Append($"Solver    {r.Solve.Solver}; {r.Solve.Unknowns} unknowns, {r.Solve.FactorNonZeros} entries in the factor, {r.Solve.RightHandSides} right-hand sides on one factorisation\n");
+        if (m.Members.Count > 0)
+        {
+            sb.Append($"Solver    {r.Solve.Solver}; {r.Solve.Unknowns} unknowns, {r.Solve.FactorNonZeros} entries in the factor, {r.Solve.RightHandSides} right-hand sides on one factorisation\n");
+            if (r.Conditioning is { } cond) sb.Append($"Condition {TextTable.Sci(cond.ScaledKappa1)} (1-norm estimate of the diagonally scaled stiffness; warning above {TextTable.Sci(cond.Threshold)})\n");
+        }
         foreach (var note in r.Notes) sb.Append($"Note      {note}\n");
 
         if (r.Stiffness.Count > 0)

@@ -37,6 +37,7 @@ public static class LinearStaticAnalysis
         var factor = solver.Factorize(k, options.PivotTolerance);
         if (factor.PivotFailures.Count > 0) throw Unstable(model, dofs, factor);
         double kNorm = InfinityNorm(k);
+        var condition = Conditioning.Estimate(model, elements, k, factor);
 
         var memberLoads = model.LoadCases.Select(c => GroupByMember(c, model.Members.Count)).ToArray();
         var loadVectors = model.LoadCases.Select((c, i) => LoadVector(model, elements, dofs, c, memberLoads[i])).ToArray();
@@ -90,7 +91,8 @@ public static class LinearStaticAnalysis
             Solve = new SolveSummary(solver.Description, dofs.FreeCount, k.NonZerosLower, factor.FactorNonZeros, model.LoadCases.Count + model.StiffnessPoints.Count),
             Cases = cases,
             Stiffness = stiffness,
-            Notes = Notes(model, dofs),
+            Notes = Conditioning.WithNote(Notes(model, dofs), condition),
+            Conditioning = condition,
             Panels = model.Panels.Select(p => PanelAnalysis.Run(p, model.LoadCases.Select(c => c.Id).ToArray(), options, model.SourcePath, model.Combinations)).ToArray(),
         };
     }

@@ -20,6 +20,8 @@ public sealed class AnalysisResult
 
     /// <summary>Wall panels solved as plane-stress continua, in model order (none for a frame-only model).</summary>
     public IReadOnlyList<PanelResult> Panels { get; init; } = [];
+    /// <summary>Condition estimates of the factorised stiffness (see <see cref="Analysis.Conditioning"/>); null when not estimated.</summary>
+    public ConditionEstimate? Conditioning { get; init; }
 
     public CaseResult Case(string id) => Cases.First(c => c.Id == id);
 }

@@ -21,6 +21,7 @@ public static partial class ModelReader
         string text;
         try
         {
+            if (ModelLimits.CheckFileSize(path, new FileInfo(path).Length) is { } tooLarge) throw new ModelInputException([tooLarge]);
             text = File.ReadAllText(path);
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException or NotSupportedException or ArgumentException)
@@ -33,6 +34,7 @@ public static partial class ModelReader
     /// <summary>Reads and validates a model from JSON text; <paramref name="fileName"/> is used in messages.</summary>
     public static StructureModel Parse(string json, string fileName = "<model>")
     {
+        if (ModelLimits.CheckFileSize(fileName, json.Length) is { } tooLarge) throw new ModelInputException([tooLarge]);
         JToken root;
         try
         {
@@ -60,6 +62,8 @@ public static partial class ModelReader
             throw new ModelInputException(sink.Items);
         }
 
+        if (ModelLimits.CheckCounts(obj, sink)) throw new ModelInputException(sink.Items);
+        SuggestBudget.Reset();
         var model = new Builder(sink, fileName).Build(obj);
         if (sink.Any) throw new ModelInputException(sink.Items);
         return model!;
@@ -348,8 +352,12 @@ public static partial class ModelReader
         {
             // Same id but for case, or a typo or two away (one for short ids); never every short id.
             int allowed = id.Length >= 5 ? 2 : 1;
-            var near = known.Where(k => string.Equals(k, id, StringComparison.OrdinalIgnoreCase)).ToList();
-            if (near.Count == 0) near = known.Where(k => Distance(k, id) <= allowed && Distance(k, id) < Math.Min(k.Length, id.Length)).Take(3).ToList();
+            // Bounded work (SuggestBudget): long ids are not compared; an edit distance is at least the difference in length.
+            var candidates = known as ICollection<string> ?? known.ToList();
+            if (id.Length > SuggestBudget.MaxIdLength || !SuggestBudget.Spend(candidates.Count)) return "";
+            var near = candidates.Where(k => string.Equals(k, id, StringComparison.OrdinalIgnoreCase)).ToList();
+            if (near.Count == 0) near = candidates.Where(k => k.Length <= SuggestBudget.MaxIdLength && Math.Abs(k.Length - id.Length) <= allowed && SuggestBudget.Spend(2L * (k.Length + 1) * (id.Length + 1))
+                && Distance(k, id) <= allowed && Distance(k, id) < Math.Min(k.Length, id.Length)).Take(3).ToList();
             return near.Count == 0 ? "" : $" (did you mean {string.Join(" or ", near.Select(n => $"\"{n}\""))}?)";
         }
 
@@ -748,7 +756,8 @@ public static partial class ModelReader
                 if (id is not null && check is not null) list.Add(check);
             }
             // Lines of a split name other checks: resolve once all are read.
-            var byId = list.ToDictionary(c => c.Id, StringComparer.Ordinal);
+            var byId = new Dictionary<string, ComparisonCheck>(StringComparer.Ordinal);
+            foreach (var c in list) byId.TryAdd(c.Id, c);   // a duplicate id is already reported (ReadId); keep the first
             foreach (var (split, tokens) in splits)
                 for (int i = 0; i < split.Lines.Count; i++)
                 {

@@ -125,6 +125,19 @@ public static class ResultFiles
             w.WritePropertyName("factorNonZeros"); w.WriteValue(r.Solve.FactorNonZeros);
             w.WritePropertyName("rightHandSides"); w.WriteValue(r.Solve.RightHandSides);
             w.WriteEndObject();
+            if (r.Conditioning is { } cond)
+            {
+                w.WritePropertyName("conditioning");
+                w.WriteStartObject();
+                w.WritePropertyName("method"); w.WriteValue("1-norm condition estimate from solves with the factor (Hager; Higham 2002, Alg. 15.4); a lower bound, usually within a factor 3");
+                w.WritePropertyName("kappa1"); w.WriteValue(cond.Kappa1);
+                w.WritePropertyName("kappa1Scaled"); w.WriteValue(cond.ScaledKappa1);
+                w.WritePropertyName("scaling"); w.WriteValue("kappa1 is of K in SI units (N, m, rad); kappa1Scaled of D^-1/2 K D^-1/2 with D = diag K, free of units");
+                w.WritePropertyName("warningThreshold"); w.WriteValue(cond.Threshold);
+                w.WritePropertyName("illConditioned"); w.WriteValue(cond.IllConditioned);
+                w.WritePropertyName("likelyCause"); w.WriteValue(cond.LikelyCause);
+                w.WriteEndObject();
+            }
             w.WritePropertyName("notes");
             w.WriteStartArray(); foreach (var n in r.Notes) w.WriteValue(n); w.WriteEndArray();
             w.WritePropertyName("signConvention"); w.WriteValue("Global X right, Y up, rotations counter-clockwise. Member end forces act on the member's flexible segment at its end faces, in local axes (x from start to end node, y 90° counter-clockwise): N, V positive along local x, y; M counter-clockwise. Axial force, tension positive, is N2.");

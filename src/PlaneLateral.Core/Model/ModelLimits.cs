@@ -1,0 +1,68 @@
+using Newtonsoft.Json.Linq;
+
+namespace PlaneLateral.Model;
+
+/// <summary>
+/// Size limits checked before any heavy work (before the JSON is parsed for the file size, before any entry is read for
+/// the counts), so a runaway or mistaken file is refused with a clear message instead of exhausting memory or time.
+/// The limits are far above a planar lateral model of a building (hundreds of nodes); see docs/hardening.md.
+/// </summary>
+public static class ModelLimits
+{
+    /// <summary>Largest model file accepted, in bytes (8 MiB).</summary>
+    public const long MaxFileBytes = 8L * 1024 * 1024;
+
+    /// <summary>Most nodes accepted.</summary>
+    public const int MaxNodes = 10_000;
+
+    /// <summary>Most members accepted.</summary>
+    public const int MaxMembers = 20_000;
+
+    /// <summary>Most load cases and combinations together (each keeps a full set of results in memory).</summary>
+    public const int MaxCasesAndCombinations = 200;
+
+    /// <summary>Most stiffness points.</summary>
+    public const int MaxStiffnessPoints = 200;
+
+    /// <summary>Most comparison checks.</summary>
+    public const int MaxComparisons = 200;
+
+    /// <summary>Most openings in one perforated-wall check (their overlap test is quadratic).</summary>
+    public const int MaxOpeningsPerWall = 100;
+
+    /// <summary>The problem when a file of <paramref name="bytes"/> exceeds <see cref="MaxFileBytes"/>, or null.</summary>
+    internal static ModelDiagnostic? CheckFileSize(string file, long bytes) => bytes <= MaxFileBytes ? null :
+        new ModelDiagnostic(file, 0, 0, "", $"the file is {bytes} bytes, more than the {MaxFileBytes} bytes (8 MiB) this version reads",
+            "check that this is the model file; split a very large model, or remove data the model does not need");
+
+    /// <summary>Counts the top-level arrays (and the openings of each comparison) against the limits; reports each excess.</summary>
+    /// <returns>True when a limit is exceeded.</returns>
+    internal static bool CheckCounts(JObject root, DiagnosticSink sink)
+    {
+        bool over = false;
+        void Limit(JToken? t, int max, string what)
+        {
+            if (t is JArray a && a.Count > max)
+            {
+                sink.Add(a, $"the model has {a.Count} {what}, more than the {max} this version accepts",
+                    $"keep to at most {max} {what}; a planar lateral model of a building needs far fewer");
+                over = true;
+            }
+        }
+        Limit(root["nodes"], MaxNodes, "nodes");
+        Limit(root["members"], MaxMembers, "members");
+        Limit(root["stiffnessAt"], MaxStiffnessPoints, "stiffness points");
+        Limit(root["comparisons"], MaxComparisons, "comparison checks");
+        int cases = (root["loadCases"] as JArray)?.Count ?? 0, combos = (root["combinations"] as JArray)?.Count ?? 0;
+        if (cases + combos > MaxCasesAndCombinations)
+        {
+            sink.Add(root["loadCases"] ?? root["combinations"], $"the model has {cases} load cases and {combos} combinations, more than the {MaxCasesAndCombinations} together this version accepts",
+                $"keep to at most {MaxCasesAndCombinations} load cases and combinations together; split the model's cases into several files");
+            over = true;
+        }
+        if (root["comparisons"] is JArray checks)
+            foreach (var c in checks)
+                if (c is JObject co) Limit(co["openings"], MaxOpeningsPerWall, "openings in one wall");
+        return over;
+    }
+}

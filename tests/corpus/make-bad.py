@@ -1,0 +1,201 @@
+#!/usr/bin/env python3
+"""Writes tests/corpus/bad/*.json and tests/corpus/bad/manifest.json.
+
+Every case is an invented small model with one mistake (or a raw text with a syntax error). The manifest gives, per file,
+the category, the expected message fragment (taken from the reader's own wording of that problem: the project's error
+contract, docs/model-format.md), the JSON path of the problem (or a prefix of it, for syntax errors, where the parser says
+where it stopped), and the exit code the CLI must give (2 bad model, 3 mechanism).
+Run from the repository root:  python3 tests/corpus/make-bad.py
+"""
+import copy, json, os
+
+OUT = os.path.join(os.path.dirname(os.path.abspath(__file__)), "bad")
+
+BASE = {
+    "formatVersion": 1,
+    "title": "corpus base: one-bay steel portal (invented)",
+    "units": {"force": "kN", "length": "m"},
+    "materials": [{"id": "steel", "E": 2.0e8, "nu": 0.3}],
+    "sections": [{"id": "col", "shape": "general", "A": 0.01, "I": 1.0e-4, "shearArea": 0.005}],
+    "nodes": [
+        {"id": "A", "x": 0.0, "y": 0.0}, {"id": "B", "x": 0.0, "y": 3.5},
+        {"id": "C", "x": 6.0, "y": 3.5}, {"id": "D", "x": 6.0, "y": 0.0},
+    ],
+    "members": [
+        {"id": "c1", "start": "A", "end": "B", "section": "col", "material": "steel"},
+        {"id": "b1", "start": "B", "end": "C", "section": "col", "material": "steel"},
+        {"id": "c2", "start": "D", "end": "C", "section": "col", "material": "steel"},
+    ],
+    "supports": [{"node": "A", "type": "fixed"}, {"node": "D", "type": "fixed"}],
+    "loadCases": [{"id": "wind", "nodalLoads": [{"node": "B", "fx": 10.0}]}],
+}
+
+cases = []  # (name, category, fragment, path, exit, text)
+
+
+def add(name, category, fragment, path, model=None, text=None, exit=2):
+    if text is None:
+        text = json.dumps(model, indent=2) + "\n"
+    cases.append((name, category, fragment, path, exit, text))
+
+
+def m(change):
+    d = copy.deepcopy(BASE)
+    change(d)
+    return d
+
+
+def setp(d, keys, v):
+    for k in keys[:-1]:
+        d = d[k]
+    d[keys[-1]] = v
+
+
+good = json.dumps(BASE, indent=2)
+
+# --- syntax ---
+add("syntax-missing-comma", "syntax", "not valid JSON", "$.nodes[0]",
+    text=good.replace('"x": 0.0,\n      "y": 0.0\n    },\n    {\n      "id": "B"', '"x": 0.0\n      "y": 0.0\n    },\n    {\n      "id": "B"', 1))
+add("syntax-truncated", "syntax", "not valid JSON", "$.members", text=good[: good.index('"supports"') - 20])
+add("syntax-trailing-text", "syntax", "not valid JSON: Additional text", "$", text=good + "\n}\n")
+add("syntax-duplicate-key", "syntax", "not valid JSON", "$", text=good.replace('"formatVersion": 1,', '"formatVersion": 1,\n  "formatVersion": 1,', 1))
+add("syntax-unterminated-string", "syntax", "not valid JSON", "$", text=good.replace('"title": "corpus base', '"title": "corpus base\n', 1)[:400])
+add("syntax-empty-file", "syntax", "not valid JSON", "$", text="")
+add("syntax-top-level-array", "syntax", "the model must be a JSON object", "$", text="[" + good + "]\n")
+# --- non-finite and absurd numbers ---
+add("number-nan-literal", "non-finite", "not a finite number", "$.materials[0].E", text=good.replace('"E": 200000000.0', '"E": NaN', 1))
+add("number-infinity-literal", "non-finite", "not a finite number", "$.sections[0].A", text=good.replace('"A": 0.01', '"A": Infinity', 1))
+add("number-overflow-literal", "non-finite", "not a finite number", "$.nodes[2].x", text=good.replace('"x": 6.0', '"x": 1e400', 1))
+add("number-absurd-load", "magnitude", "beyond the range accepted", "$.loadCases[0].nodalLoads[0].fx", m(lambda d: setp(d, ["loadCases", 0, "nodalLoads", 0, "fx"], 1e20)))
+add("number-absurd-modulus", "magnitude", "beyond the range accepted", "$.materials[0].E", m(lambda d: setp(d, ["materials", 0, "E"], 2e18)))
+# --- wrong types ---
+add("type-coordinate-string", "wrong type", "'x' must be a number, found the string \"six\"", "$.nodes[2].x", m(lambda d: setp(d, ["nodes", 2, "x"], "six")))
+add("type-nodes-object", "wrong type", "'nodes' must be an array, found an object", "$.nodes", m(lambda d: setp(d, ["nodes"], {"A": [0, 0]})))
+add("type-member-entry-string", "wrong type", "each entry of 'members' must be an object", "$.members[1]", m(lambda d: setp(d, ["members", 1], "B-C")))
+add("type-id-number", "wrong type", "'id' must be a string, found the number 1", "$.nodes[0].id", m(lambda d: setp(d, ["nodes", 0, "id"], 1)))
+add("type-format-version-string", "wrong type", "'formatVersion' is \"1\"", "$.formatVersion", m(lambda d: setp(d, ["formatVersion"], "1")))
+add("type-releases-string", "wrong type", "'momentReleases' must be an array", "$.members[1].momentReleases", m(lambda d: setp(d, ["members", 1, "momentReleases"], "start")))
+add("type-null-material", "wrong type", "'material' is null", "$.members[0].material", m(lambda d: setp(d, ["members", 0, "material"], None)))
+# --- missing keys ---
+add("missing-format-version", "missing key", "missing required key 'formatVersion'", "$", m(lambda d: d.pop("formatVersion")))
+add("missing-members", "missing key", "missing required key 'members'", "$", m(lambda d: d.pop("members")))
+add("missing-modulus", "missing key", "missing required key 'E'", "$.materials[0]", m(lambda d: d["materials"][0].pop("E")))
+add("missing-node-y", "missing key", "missing required key 'y'", "$.nodes[3]", m(lambda d: d["nodes"][3].pop("y")))
+add("missing-member-section", "missing key", "missing required key 'section'", "$.members[2]", m(lambda d: d["members"][2].pop("section")))
+add("unknown-key-typo", "unknown key", "unknown key 'sectoin'", "$.members[0].sectoin", m(lambda d: d["members"][0].update({"sectoin": d["members"][0].pop("section")})))
+# --- unknown references ---
+add("ref-unknown-end-node", "unknown reference", "unknown node \"E\"", "$.members[2].end", m(lambda d: setp(d, ["members", 2, "end"], "E")))
+add("ref-unknown-section", "unknown reference", "unknown section \"beam\"", "$.members[1].section", m(lambda d: setp(d, ["members", 1, "section"], "beam")))
+add("ref-unknown-material", "unknown reference", "unknown material \"concrete\"", "$.members[0].material", m(lambda d: setp(d, ["members", 0, "material"], "concrete")))
+add("ref-load-unknown-node", "unknown reference", "unknown node \"roof\"", "$.loadCases[0].nodalLoads[0].node", m(lambda d: setp(d, ["loadCases", 0, "nodalLoads", 0, "node"], "roof")))
+add("ref-combination-unknown-case", "unknown reference", "unknown load case \"seismic\"", "$.combinations[0].factors.seismic",
+    m(lambda d: d.update({"combinations": [{"id": "1.2W", "factors": {"seismic": 1.2}}]})))
+add("ref-member-load-unknown-member", "unknown reference", "unknown member \"b2\"", "$.loadCases[0].memberLoads[0].member",
+    m(lambda d: setp(d, ["loadCases", 0, "memberLoads"], [{"member": "b2", "direction": "y", "w": -5.0}])))
+# --- duplicates ---
+add("dup-node-id", "duplicate", "duplicate node id \"C\"", "$.nodes[3].id", m(lambda d: setp(d, ["nodes", 3, "id"], "C")))
+add("dup-member-id", "duplicate", "duplicate member id \"c1\"", "$.members[2].id", m(lambda d: setp(d, ["members", 2, "id"], "c1")))
+add("dup-coincident-nodes", "duplicate", "stands at the same point as node \"B\"", "$.nodes[2]", m(lambda d: setp(d, ["nodes", 2, "x"], 0.0)))
+add("dup-two-supports-one-node", "duplicate", "a second support on the same node", "$.supports[1]", m(lambda d: setp(d, ["supports", 1, "node"], "A")))
+add("dup-combination-id", "duplicate", "combination id \"wind\" is already used", "$.combinations[0].id",
+    m(lambda d: d.update({"combinations": [{"id": "wind", "factors": {"wind": 1.6}}]})))
+# --- zero or negative properties ---
+add("prop-zero-modulus", "non-positive", "Young's modulus 'E' must be greater than zero", "$.materials[0].E", m(lambda d: setp(d, ["materials", 0, "E"], 0)))
+add("prop-negative-area", "non-positive", "area 'A' must be greater than zero", "$.sections[0].A", m(lambda d: setp(d, ["sections", 0, "A"], -0.01)))
+add("prop-poisson-half", "non-positive", "Poisson's ratio 0.5 is outside", "$.materials[0].nu", m(lambda d: setp(d, ["materials", 0, "nu"], 0.5)))
+add("prop-zero-modifier", "non-positive", "stiffness modifier 'I' must be greater than zero", "$.members[1].modifiers.I", m(lambda d: setp(d, ["members", 1, "modifiers"], {"I": 0})))
+add("prop-negative-spring", "non-positive", "spring 'x' is negative", "$.supports[1].springs.x",
+    m(lambda d: setp(d, ["supports", 1], {"node": "D", "type": "custom", "restrain": ["y", "rz"], "springs": {"x": -100.0}})))
+add("prop-zero-length-member", "non-positive", "has zero length", "$.members[1]", m(lambda d: setp(d, ["members", 1, "end"], "B")))
+add("prop-rigid-zones-too-long", "non-positive", "leave no flexible length", "$.members[1].rigidZones", m(lambda d: setp(d, ["members", 1, "rigidZones"], {"start": 3.0, "end": 3.0})))
+add("prop-zero-section-depth", "non-positive", "rectangle depth 'd' must be greater than zero", "$.sections[0].d",
+    m(lambda d: setp(d, ["sections", 0], {"id": "col", "shape": "rectangle", "b": 0.3, "d": 0})))
+# --- units ---
+add("units-unknown-force", "units", "unknown force unit \"tonne\"", "$.units.force", m(lambda d: setp(d, ["units", "force"], "tonne")))
+add("units-unknown-length", "units", "unknown length unit \"furlong\"", "$.units.length", m(lambda d: setp(d, ["units", "length"], "furlong")))
+# --- connectivity and mechanisms ---
+add("disconnected-node", "disconnected", "node \"E\" is not connected to any member", "$.nodes[4]", m(lambda d: d["nodes"].append({"id": "E", "x": 12.0, "y": 0.0})))
+add("no-supports", "mechanism", "the model has no supports", "$.supports", m(lambda d: setp(d, ["supports"], [])))
+add("nothing-to-solve", "missing key", "neither load cases nor stiffness points", "$", m(lambda d: d.pop("loadCases")))
+add("mechanism-pinned-sway", "mechanism", "the model is unstable", None, exit=3, model=m(lambda d: (
+    setp(d, ["supports", 0, "type"], "pinned"), setp(d, ["supports", 1, "type"], "pinned"),
+    setp(d, ["members", 1, "momentReleases"], ["start", "end"]))))
+add("mechanism-pinned-cantilever", "mechanism", "free at", None, exit=3, model=m(lambda d: (
+    setp(d, ["nodes"], d["nodes"][:2]), setp(d, ["members"], d["members"][:1]), setp(d, ["supports"], [{"node": "A", "type": "pinned"}]))))
+# --- levels, diaphragms, drift checks ---
+LEVELS = [{"id": "base", "elevation": 0.0, "diaphragm": "none"}, {"id": "roof", "elevation": 3.5}]
+DRIFT = {"id": "wind drift", "cases": ["wind"], "Cd": 1.0, "allowedRatio": 0.0025}
+add("level-no-nodes", "levels", "has no nodes (no node stands at that y)", "$.levels[1].elevation",
+    m(lambda d: d.update({"levels": [LEVELS[0], {"id": "roof", "elevation": 3.6}]})))
+add("level-same-elevation", "levels", "have the same elevation", "$.levels[2]",
+    m(lambda d: d.update({"levels": LEVELS + [{"id": "roof2", "elevation": 3.5, "diaphragm": "none"}]})))
+add("level-diaphragm-ties-support", "levels", "which a support holds in x", "$.levels[0]",
+    m(lambda d: d.update({"levels": [{"id": "base", "elevation": 0.0}, LEVELS[1]]})))
+add("level-unknown-diaphragm", "levels", "unknown diaphragm \"flexible\"", "$.levels[1].diaphragm",
+    m(lambda d: d.update({"levels": [LEVELS[0], {"id": "roof", "elevation": 3.5, "diaphragm": "flexible"}]})))
+add("drift-cd-out-of-range", "drift checks", "C_d = 9 is out of range", "$.driftChecks[0].Cd",
+    m(lambda d: d.update({"levels": LEVELS, "driftChecks": [dict(DRIFT, Cd=9)]})))
+add("drift-without-levels", "drift checks", "fewer than two levels", "$.driftChecks", m(lambda d: d.update({"driftChecks": [DRIFT]})))
+add("drift-unknown-case", "drift checks", "unknown load case or combination \"quake\"", "$.driftChecks[0].cases[0]",
+    m(lambda d: d.update({"levels": LEVELS, "driftChecks": [dict(DRIFT, cases=["quake"])]})))
+add("drift-ratio-out-of-range", "drift checks", "allowable drift ratio 0.5 is out of range", "$.driftChecks[0].allowedRatio",
+    m(lambda d: d.update({"levels": LEVELS, "driftChecks": [dict(DRIFT, allowedRatio=0.5)]})))
+# --- comparisons ---
+WALL = {"id": "facade", "kind": "perforated-wall", "length": 6.0, "height": 3.5, "thickness": 0.2, "material": "steel",
+        "openings": [{"label": "door", "x": 1.0, "y": 0.0, "width": 1.0, "height": 2.2}]}
+add("compare-opening-outside", "comparisons", "lies partly outside the wall", "$.comparisons[0].openings[1]",
+    m(lambda d: d.update({"comparisons": [dict(WALL, openings=WALL["openings"] + [{"label": "window", "x": 4.0, "y": 2.5, "width": 1.2, "height": 1.2}])]})))
+add("compare-openings-overlap", "comparisons", "openings 'door' and 'window' overlap", "$.comparisons[0].openings[1]",
+    m(lambda d: d.update({"comparisons": [dict(WALL, openings=WALL["openings"] + [{"label": "window", "x": 1.5, "y": 1.0, "width": 1.2, "height": 1.2}])]})))
+add("compare-unknown-kind", "comparisons", "unknown check kind \"pier\"", "$.comparisons[0].kind",
+    m(lambda d: d.update({"comparisons": [{"id": "x", "kind": "pier", "members": ["c1"]}]})))
+add("compare-wall-line-unknown-member", "comparisons", "unknown member \"w9\"", "$.comparisons[0].members[0]",
+    m(lambda d: d.update({"comparisons": [{"id": "wl", "kind": "wall-line", "members": ["w9"]}]})))
+add("compare-split-unknown-check", "comparisons", "unknown check \"frame\" in a shear split", "$.comparisons[0].lines[1].check",
+    m(lambda d: d.update({"comparisons": [{"id": "s", "kind": "shear-split", "loadCase": "wind", "lines": [{"check": "s"}, {"check": "frame"}]}]})))
+add("compare-tolerance-out-of-range", "comparisons", "'tolerance' is 1.5, outside (0, 1)", "$.comparisons[0].tolerance",
+    m(lambda d: d.update({"comparisons": [dict(WALL, tolerance=1.5)]})))
+# --- regression cases found by the fuzzer (tools/fuzz.sh) ---
+add("fuzz-duplicate-check-id", "fuzz finding", "duplicate comparison check id \"facade\"", "$.comparisons[1].id",
+    m(lambda d: d.update({"comparisons": [WALL, copy.deepcopy(WALL)]})))
+# --- slow inputs found while hardening (the "did you mean" search; SuggestBudget) ---
+def long_ids(d):
+    a, b = "N" + "a" * 30000, "N" + "b" * 30000
+    d["nodes"][3]["id"] = a
+    d["supports"][1]["node"] = a
+    d["members"][2].update({"start": a, "end": b})
+add("slow-long-id-typo", "slow input", "unknown node \"Nbbbbbbbbbbbbbbbbbbbbbbbbbbbbbbbbbbbb", "$.members[2].end", m(long_ids))
+def many_unknown(d):
+    d["nodes"] = [{"id": "joint-%016d" % i, "x": float(i % 40), "y": float(i // 40)} for i in range(1000)]
+    d["members"] = [{"id": "m%d" % i, "start": "joint-%016d" % (i + 5000), "end": "joint-%016d" % (i + 9000), "section": "col", "material": "steel"} for i in range(3000)]
+    d["supports"] = [{"node": "joint-%016d" % 0, "type": "fixed"}]
+    d["loadCases"][0]["nodalLoads"][0]["node"] = "joint-%016d" % 999
+add("slow-many-unknown-references", "slow input", "unknown node \"joint-0000000000011999\"", "$.members[2999].end",
+    text=json.dumps(m(many_unknown), separators=(",", ":")) + "\n")
+# --- size limits (ModelLimits) ---
+add("limit-too-many-nodes", "size limit", "the model has 10001 nodes, more than the 10000", "$.nodes",
+    text=good.replace('"nodes": [', '"nodes": [' + "{}," * 9997, 1))
+add("limit-too-many-cases", "size limit", "the model has 150 load cases and 51 combinations, more than the 200 together", "$.loadCases",
+    m(lambda d: d.update({"loadCases": [{"id": "w%d" % i, "nodalLoads": [{"node": "B", "fx": float(i)}]} for i in range(150)],
+                          "combinations": [{"id": "c%d" % i, "factors": {"w%d" % i: 1.5}} for i in range(51)]})))
+add("limit-too-many-openings", "size limit", "101 openings in one wall, more than the 100", "$.comparisons[0].openings",
+    m(lambda d: d.update({"comparisons": [dict(WALL, openings=[{"x": 0.01 * i, "y": 0, "width": 0.005, "height": 1} for i in range(101)])]})))
+
+
+def main():
+    os.makedirs(OUT, exist_ok=True)
+    manifest = []
+    for name, category, fragment, path, exit, text in cases:
+        with open(os.path.join(OUT, name + ".json"), "w", encoding="utf-8", newline="\n") as f:
+            f.write(text)
+        manifest.append({"file": name + ".json", "category": category, "expect": fragment, "path": path,
+                         "pathIsPrefix": category == "syntax", "exit": exit})
+    with open(os.path.join(OUT, "manifest.json"), "w", encoding="utf-8", newline="\n") as f:
+        json.dump({"about": "bad models: expected message fragment, JSON path (prefix for syntax errors) and exit code; see docs/hardening.md",
+                   "cases": manifest}, f, indent=1)
+        f.write("\n")
+    print(len(manifest), "cases")
+
+
+if __name__ == "__main__":
+    main()
