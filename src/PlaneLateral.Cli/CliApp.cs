@@ -16,7 +16,18 @@ public static class CliApp
     {
         var root = BuildCommands(stdout, stderr);
         var parse = root.Parse(args);
-        return parse.Invoke(new InvocationConfiguration { Output = stdout, Error = stderr, EnableDefaultExceptionHandler = false });
+        try
+        {
+            return parse.Invoke(new InvocationConfiguration { Output = stdout, Error = stderr, EnableDefaultExceptionHandler = false });
+        }
+        catch (Exception e) when (e is not OutOfMemoryException)
+        {
+            // A last resort: a fault of ours, not of the input. Say so plainly, without a stack trace, and write nothing more.
+            stderr.Write($"PlaneLateral stopped on an internal error ({e.GetType().Name}: {e.Message}).\n" +
+                "This is a fault in the program, not in your model as far as it could tell. Nothing more was written.\n" +
+                "Please report it with the model file that caused it.\n");
+            return ExitCodes.InternalError;
+        }
     }
 
     private static RootCommand BuildCommands(TextWriter stdout, TextWriter stderr)

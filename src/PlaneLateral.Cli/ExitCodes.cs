@@ -12,4 +12,6 @@ public static class ExitCodes
     public const int Unstable = 3;
     /// <summary>The results could not be written.</summary>
     public const int OutputFailed = 4;
+    /// <summary>The program failed on an error of its own (reported without a stack trace).</summary>
+    public const int InternalError = 5;
 }
