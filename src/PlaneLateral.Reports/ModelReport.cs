@@ -82,7 +82,9 @@ public static class ModelReport
         // 2. Assumptions
         blocks.Add(new Heading(2, "2. Assumptions"));
         blocks.Add(new BulletList([
-            "Linear elastic, small displacements, one plane; no second-order (P-delta) effects.",
+            m.Seismic?.SecondOrder is { } so
+                ? $"Linear elastic, small displacements, one plane. The tables here are first-order; a second-order (P-delta) analysis under gravity case \"{so.GravityCase}\" is in second-order.csv and seismic.json of the solve results (planelateral solve)."
+                : "Linear elastic, small displacements, one plane; no second-order (P-delta) effects.",
             "Member stiffness is what the model gives: section properties times the stiffness modifiers listed in member-stiffness.csv (cracked sections, if any, are the modeller's decision).",
             "Walls modelled as line members follow plane-section beam theory with a shear area; for squat walls and walls with openings that is doubtful.",
             "Supports are as modelled: fully fixed, pinned, rollers or springs. Foundation flexibility appears only where the model has springs.",
