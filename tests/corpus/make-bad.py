@@ -158,6 +158,15 @@ add("compare-tolerance-out-of-range", "comparisons", "'tolerance' is 1.5, outsid
 # --- regression cases found by the fuzzer (tools/fuzz.sh) ---
 add("fuzz-duplicate-check-id", "fuzz finding", "duplicate comparison check id \"facade\"", "$.comparisons[1].id",
     m(lambda d: d.update({"comparisons": [WALL, copy.deepcopy(WALL)]})))
+def panel_without_left():
+    here = os.path.dirname(os.path.abspath(__file__))
+    with open(os.path.join(here, "..", "..", "models", "panels", "two-story-wall.json"), encoding="utf-8") as f:
+        d = json.load(f)
+    o = d["panels"][0]["openings"][2]
+    o["lef-t"] = o.pop("left")
+    return d
+add("fuzz-panel-opening-without-left", "fuzz finding", "missing required key 'left'", "$.panels[0].openings[2]",
+    panel_without_left())
 # --- slow inputs found while hardening (the "did you mean" search; SuggestBudget) ---
 def long_ids(d):
     a, b = "N" + "a" * 30000, "N" + "b" * 30000

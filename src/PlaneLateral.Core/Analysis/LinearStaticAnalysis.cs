@@ -93,8 +93,26 @@ public static class LinearStaticAnalysis
             Stiffness = stiffness,
             Notes = Conditioning.WithNote(Notes(model, dofs), condition),
             Conditioning = condition,
-            Panels = model.Panels.Select(p => PanelAnalysis.Run(p, model.LoadCases.Select(c => c.Id).ToArray(), options, model.SourcePath, model.Combinations)).ToArray(),
+            Panels = model.Panels.Select(p => RunPanel(model, p, options)).ToArray(),
         };
+    }
+
+    /// <summary>
+    /// Solves one wall panel. A mesh the layout check let through but an element refuses (a distorted element on a
+    /// refined mesh) becomes an input error naming the panel, not a crash (found by the reader fuzzer).
+    /// </summary>
+    private static PanelResult RunPanel(StructureModel model, WallPanel panel, AnalysisOptions options)
+    {
+        try
+        {
+            return PanelAnalysis.Run(panel, model.LoadCases.Select(c => c.Id).ToArray(), options, model.SourcePath, model.Combinations);
+        }
+        catch (ArgumentException e)
+        {
+            throw new ModelInputException([new ModelDiagnostic(model.SourcePath, 0, 0, $"panel \"{panel.Id}\"",
+                $"panel \"{panel.Id}\" cannot be solved: {e.Message}",
+                "check the panel's length, height, openings and floor levels, and its mesh settings (fewer refinements or a coarser element size)")]);
+        }
     }
 
     /// <summary>Assembles the global stiffness of the unknowns (members and support springs).</summary>

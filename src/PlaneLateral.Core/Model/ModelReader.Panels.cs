@@ -98,7 +98,12 @@ public static partial class ModelReader
                     MaterialId = material.Id, E = material.E, Nu = material.Nu,
                     Openings = openings, FloorLevels = levels, FloorTies = ties, Mesh = mesh, Loads = loads,
                 };
-                // Geometry and mesh problems, each at its own key, before any work.
+                // Geometry and mesh problems, each at its own key, before any work — unless a number of the geometry
+                // itself failed to read (it would make the layout meaningless; found by the reader fuzzer).
+                bool geometryRead = double.IsFinite(x0) && double.IsFinite(y0)
+                    && openings.All(q => double.IsFinite(q.Left) && double.IsFinite(q.Bottom) && double.IsFinite(q.Width) && double.IsFinite(q.Height))
+                    && levels.All(double.IsFinite);
+                if (!geometryRead) continue;
                 foreach (var q in PanelLayout.Check(panel))
                     sink.Add(o.SelectToken(q.Key) ?? o, $"panel \"{id}\": {q.Problem}", q.Fix);
                 list.Add(panel);

@@ -58,7 +58,9 @@ public static class PanelResultFiles
         var sw = new StringWriter(CultureInfo.InvariantCulture) { NewLine = "\n" };
         using (var w = new JsonTextWriter(sw) { Formatting = Formatting.Indented, Indentation = 2, FloatFormatHandling = FloatFormatHandling.String })
         {
-            void P(string name, object? v) { w.WritePropertyName(name); w.WriteValue(v); }
+            // A number that could not be determined (e.g. no observed order from a non-monotone mesh sequence) is written
+            // as null, never as "NaN"; the note beside it says why.
+            void P(string name, object? v) { w.WritePropertyName(name); w.WriteValue(v is double d && !double.IsFinite(d) ? null : v); }
             w.WriteStartObject();
             P("producedBy", $"PlaneLateral {ResultFiles.Version}");
             P("caution", ResultFiles.Caution);
