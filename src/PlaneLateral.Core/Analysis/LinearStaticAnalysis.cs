@@ -36,7 +36,7 @@ public static class LinearStaticAnalysis
         var k = Assemble(model, elements, dofs);
         var factor = solver.Factorize(k, options.PivotTolerance);
         if (factor.PivotFailures.Count > 0) throw Unstable(model, dofs, factor);
-        double kNorm = InfinityNorm(k);
+        double kNorm = k.InfinityNorm();
         var condition = Conditioning.Estimate(model, elements, k, factor);
 
         var memberLoads = model.LoadCases.Select(c => GroupByMember(c, model.Members.Count)).ToArray();
@@ -142,21 +142,6 @@ public static class LinearStaticAnalysis
         throw new ModelInputException([new ModelDiagnostic(model.SourcePath, 0, 0, "",
             $"the results of {string.Join(", ", bad.Select(b => $"\"{b}\""))} overflow double precision: loads, stiffnesses or sizes in the model differ by too many orders of magnitude",
             "check the units and exponents of loads, E, A, I and springs")]);
-    }
-
-    /// <summary>‖K‖∞ = max row sum of |K_ij| of the full symmetric matrix.</summary>
-    private static double InfinityNorm(SymmetricSparseMatrix k)
-    {
-        var rowSum = new double[k.Size];
-        for (int j = 0; j < k.Size; j++)
-            for (int p = k.ColumnPointers[j]; p < k.ColumnPointers[j + 1]; p++)
-            {
-                int i = k.RowIndices[p];
-                double a = Math.Abs(k.Values[p]);
-                rowSum[i] += a;
-                if (i != j) rowSum[j] += a;
-            }
-        return rowSum.Length == 0 ? 0 : rowSum.Max();
     }
 
     private static IReadOnlyList<MemberLoad>[] GroupByMember(LoadCase c, int memberCount)

@@ -132,7 +132,7 @@ public static class PlaneStressAnalysis
         var k = builder.Build();
         var factor = solver.Factorize(k, options.PivotTolerance);
         if (factor.PivotFailures.Count > 0) throw Unstable(p, dofs, factor);
-        double kNorm = InfinityNorm(k);
+        double kNorm = k.InfinityNorm();
 
         var results = new List<PlaneCaseResult>();
         var loads = cases.Select(c => Loads(p, dofs, ke, eqs, c)).ToArray();
@@ -294,20 +294,6 @@ public static class PlaneStressAnalysis
             RelativeResidual = ff == 0 ? Math.Sqrt(rr) : Math.Sqrt(rr / ff),
             BackwardError = denominator == 0 ? 0 : rInf / denominator,
         };
-    }
-
-    private static double InfinityNorm(SymmetricSparseMatrix k)
-    {
-        var rowSum = new double[k.Size];
-        for (int j = 0; j < k.Size; j++)
-            for (int q = k.ColumnPointers[j]; q < k.ColumnPointers[j + 1]; q++)
-            {
-                int i = k.RowIndices[q];
-                double a = Math.Abs(k.Values[q]);
-                rowSum[i] += a;
-                if (i != j) rowSum[j] += a;
-            }
-        return rowSum.Length == 0 ? 0 : rowSum.Max();
     }
 
     private static UnstableModelException Unstable(PlaneStressProblem p, DofMap dofs, ISparseSpdFactor factor)

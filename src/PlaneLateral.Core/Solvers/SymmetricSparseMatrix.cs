@@ -39,6 +39,21 @@ public sealed class SymmetricSparseMatrix
         return p < ColumnPointers[i + 1] && RowIndices[p] == i ? Values[p] : 0.0;
     }
 
+    /// <summary>‖K‖∞ = max row sum of |K_ij| over the full symmetric matrix (0 for an empty matrix).</summary>
+    public double InfinityNorm()
+    {
+        var rowSum = new double[Size];
+        for (int j = 0; j < Size; j++)
+            for (int p = ColumnPointers[j]; p < ColumnPointers[j + 1]; p++)
+            {
+                int i = RowIndices[p];
+                double a = Math.Abs(Values[p]);
+                rowSum[i] += a;
+                if (i != j) rowSum[j] += a;
+            }
+        return rowSum.Length == 0 ? 0 : rowSum.Max();
+    }
+
     /// <summary>y = K·x with the full symmetric matrix.</summary>
     public void Multiply(ReadOnlySpan<double> x, Span<double> y)
     {
