@@ -1,5 +1,6 @@
 using PlaneLateral.Analysis;
 using PlaneLateral.Cli;
+using static PlaneLateral.Tests.CliRun;
 using PlaneLateral.Model;
 using PlaneLateral.Units;
 using static PlaneLateral.Tests.TestModels;
@@ -12,14 +13,6 @@ public sealed class BuildingCliTests : IDisposable
     private readonly string _dir = Directory.CreateTempSubdirectory("planelateral-building-").FullName;
 
     public void Dispose() => Directory.Delete(_dir, recursive: true);
-
-    private static (int Code, string Out, string Err) Run(params string[] args)
-    {
-        var o = new StringWriter();
-        var e = new StringWriter();
-        int code = CliApp.Run(args, o, e);
-        return (code, o.ToString(), e.ToString());
-    }
 
     [Fact]
     public void DemoPrintsAndWritesTheBuildingTables()

@@ -1,4 +1,5 @@
 using PlaneLateral.Cli;
+using static PlaneLateral.Tests.CliRun;
 
 namespace PlaneLateral.Tests.Cli;
 
@@ -12,14 +13,6 @@ public sealed class CliTests : IDisposable
     private readonly string _dir = Directory.CreateTempSubdirectory("planelateral-cli-").FullName;
 
     public void Dispose() => Directory.Delete(_dir, recursive: true);
-
-    private static (int Code, string Out, string Err) Run(params string[] args)
-    {
-        var o = new StringWriter();
-        var e = new StringWriter();
-        int code = CliApp.Run(args, o, e);
-        return (code, o.ToString(), e.ToString());
-    }
 
     private string Write(string name, string text)
     {
