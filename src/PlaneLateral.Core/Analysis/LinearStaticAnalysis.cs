@@ -298,17 +298,6 @@ public static class LinearStaticAnalysis
         return [$"Rotation held at {held.Count} node(s) where only braces or released members meet ({string.Join(", ", held.Take(10))}{(held.Count > 10 ? ", ..." : "")}); nothing there resists rotation, so holding it changes no result."];
     }
 
-    private static UnstableModelException Unstable(StructureModel model, DofMap dofs, ISparseSpdFactor factor)
-    {
-        NamedDof Name(int eq) { var (node, dof) = dofs.DofOf(eq); return new NamedDof(model.Nodes[node].Id, dof); }
-        var list = new List<Mechanism>();
-        for (int i = 0; i < factor.PivotFailures.Count; i++)
-        {
-            var z = factor.MechanismShape(i);
-            var moving = Enumerable.Range(0, z.Length).Where(j => Math.Abs(z[j]) > 1e-6)
-                .OrderByDescending(j => Math.Abs(z[j])).ThenBy(j => j).Select(Name).ToList();
-            list.Add(new Mechanism(Name(factor.PivotFailures[i].Dof), moving));
-        }
-        return new UnstableModelException(model.SourcePath, list);
-    }
+    private static UnstableModelException Unstable(StructureModel model, DofMap dofs, ISparseSpdFactor factor) =>
+        UnstableModelException.FromFactor(model.SourcePath, dofs, n => model.Nodes[n].Id, factor);
 }

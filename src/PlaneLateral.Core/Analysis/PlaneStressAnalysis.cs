@@ -296,17 +296,6 @@ public static class PlaneStressAnalysis
         };
     }
 
-    private static UnstableModelException Unstable(PlaneStressProblem p, DofMap dofs, ISparseSpdFactor factor)
-    {
-        NamedDof Name(int eq) { var (node, dof) = dofs.DofOf(eq); return new NamedDof(p.NodeLabel(node), dof); }
-        var list = new List<Mechanism>();
-        for (int i = 0; i < factor.PivotFailures.Count; i++)
-        {
-            var z = factor.MechanismShape(i);
-            var moving = Enumerable.Range(0, z.Length).Where(j => Math.Abs(z[j]) > 1e-6)
-                .OrderByDescending(j => Math.Abs(z[j])).ThenBy(j => j).Select(Name).ToList();
-            list.Add(new Mechanism(Name(factor.PivotFailures[i].Dof), moving));
-        }
-        return new UnstableModelException(p.SourcePath, list);
-    }
+    private static UnstableModelException Unstable(PlaneStressProblem p, DofMap dofs, ISparseSpdFactor factor) =>
+        UnstableModelException.FromFactor(p.SourcePath, dofs, p.NodeLabel, factor);
 }

@@ -1,4 +1,6 @@
+using PlaneLateral.Assembly;
 using PlaneLateral.Model;
+using PlaneLateral.Solvers;
 
 namespace PlaneLateral.Analysis;
 
@@ -18,6 +20,24 @@ public sealed class UnstableModelException(string file, IReadOnlyList<Mechanism>
     : Exception(Describe(file, mechanisms))
 {
     public string File { get; } = file;
+
+    /// <summary>
+    /// The mechanisms a factorisation found: for each failed pivot, the DOF where it was met and every DOF that moves in
+    /// its shape (|z| above 1e-6 of the largest), largest first; <paramref name="nodeName"/> names a node index.
+    /// </summary>
+    public static UnstableModelException FromFactor(string file, DofMap dofs, Func<int, string> nodeName, ISparseSpdFactor factor)
+    {
+        NamedDof Name(int eq) { var (node, dof) = dofs.DofOf(eq); return new NamedDof(nodeName(node), dof); }
+        var list = new List<Mechanism>();
+        for (int i = 0; i < factor.PivotFailures.Count; i++)
+        {
+            var z = factor.MechanismShape(i);
+            var moving = Enumerable.Range(0, z.Length).Where(j => Math.Abs(z[j]) > 1e-6)
+                .OrderByDescending(j => Math.Abs(z[j])).ThenBy(j => j).Select(Name).ToList();
+            list.Add(new Mechanism(Name(factor.PivotFailures[i].Dof), moving));
+        }
+        return new UnstableModelException(file, list);
+    }
     public IReadOnlyList<Mechanism> Mechanisms { get; } = mechanisms;
 
     private static string Describe(string file, IReadOnlyList<Mechanism> ms)
