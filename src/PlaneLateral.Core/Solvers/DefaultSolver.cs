@@ -12,8 +12,10 @@ public static class DefaultSolver
 
     /// <summary>
     /// Envelope L·D·Lᵀ with reverse Cuthill–McKee ordering below <see cref="SupernodalThreshold"/> unknowns, supernodal
-    /// multifrontal Cholesky with approximate minimum degree ordering from it on (managed; see docs/solver.md).
+    /// multifrontal Cholesky with approximate minimum degree ordering from it on (see docs/solver.md). Its dense kernels are
+    /// the managed ones unless the environment variable <see cref="NativeBlas.EnvironmentVariable"/> asks for OpenBLAS and
+    /// the library loads; the solver's description says which ran.
     /// </summary>
     public static ISparseSpdSolver Create() =>
-        new SizeRuleSolver(new EnvelopeCholeskySolver(), new SupernodalCholeskySolver(), SupernodalThreshold);
+        new SizeRuleSolver(new EnvelopeCholeskySolver(), new SupernodalCholeskySolver(kernels: NativeBlas.Requested()), SupernodalThreshold);
 }

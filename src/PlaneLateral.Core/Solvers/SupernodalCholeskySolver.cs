@@ -42,13 +42,25 @@ public enum SupernodalOrdering
 public sealed class SupernodalCholeskySolver : ISparseSpdSolver
 {
     /// <summary>Creates the solver with the given ordering (approximate minimum degree by default).</summary>
-    public SupernodalCholeskySolver(SupernodalOrdering ordering = SupernodalOrdering.ApproximateMinimumDegree, int maxThreads = 0)
+    /// <param name="kernels">Dense kernels asked for: the managed ones (default) or OpenBLAS when it loads (see
+    /// <see cref="NativeBlas"/>); <see cref="Kernels"/> says which are used.</param>
+    public SupernodalCholeskySolver(SupernodalOrdering ordering = SupernodalOrdering.ApproximateMinimumDegree, int maxThreads = 0,
+        DenseKernelBackend kernels = DenseKernelBackend.Managed)
     {
         if (!Enum.IsDefined(ordering)) throw new ArgumentOutOfRangeException(nameof(ordering));
+        if (!Enum.IsDefined(kernels)) throw new ArgumentOutOfRangeException(nameof(kernels));
         ArgumentOutOfRangeException.ThrowIfNegative(maxThreads);
         Ordering = ordering;
         MaxThreads = maxThreads == 0 ? Environment.ProcessorCount : maxThreads;
+        RequestedKernels = kernels;
+        Kernels = kernels == DenseKernelBackend.OpenBlas && NativeBlas.IsAvailable ? DenseKernelBackend.OpenBlas : DenseKernelBackend.Managed;
     }
+
+    /// <summary>The dense kernels asked for.</summary>
+    public DenseKernelBackend RequestedKernels { get; }
+
+    /// <summary>The dense kernels used: OpenBLAS only when asked for and loadable, else the managed ones.</summary>
+    public DenseKernelBackend Kernels { get; }
 
     /// <summary>The ordering applied before factorising.</summary>
     public SupernodalOrdering Ordering { get; }
@@ -62,7 +74,12 @@ public sealed class SupernodalCholeskySolver : ISparseSpdSolver
         SupernodalOrdering.ApproximateMinimumDegree => "approximate minimum degree order",
         SupernodalOrdering.Natural => "natural order",
         _ => "reverse Cuthill–McKee order",
-    } + $" (managed, {(FrontKernelsInfo.Vectorised ? "256-bit vector kernels" : "scalar kernels")}, {MaxThreads} thread{(MaxThreads == 1 ? "" : "s")})";
+    } + KernelDescription;
+
+    private string KernelDescription => Kernels == DenseKernelBackend.OpenBlas
+        ? $" (native dense kernels: {NativeBlas.Status}; fronts below {SupernodalFactor.NativeMinFront} rows managed)"
+        : $" (managed, {(FrontKernelsInfo.Vectorised ? "256-bit vector kernels" : "scalar kernels")}, {MaxThreads} thread{(MaxThreads == 1 ? "" : "s")}"
+          + (RequestedKernels == DenseKernelBackend.OpenBlas ? $"; OpenBLAS asked for but not used: {NativeBlas.Status}" : "") + ")";
 
     /// <summary>The fill-reducing permutation this solver would use for <paramref name="matrix"/> (<c>perm[new] = old</c>).</summary>
     public int[] ComputeOrdering(SymmetricSparseMatrix matrix) => Ordering switch
@@ -76,7 +93,7 @@ public sealed class SupernodalCholeskySolver : ISparseSpdSolver
     public ISparseSpdFactor Factorize(SymmetricSparseMatrix matrix, double relativePivotTolerance = 1e-10)
     {
         ArgumentNullException.ThrowIfNull(matrix);
-        return SupernodalFactor.Create(matrix, ComputeOrdering(matrix), relativePivotTolerance, MaxThreads);
+        return SupernodalFactor.Create(matrix, ComputeOrdering(matrix), relativePivotTolerance, MaxThreads, Kernels == DenseKernelBackend.OpenBlas);
     }
 
     /// <summary>Factorises under a permutation supplied by the caller (<c>perm[new] = old</c>; it is postordered, which
@@ -87,7 +104,7 @@ public sealed class SupernodalCholeskySolver : ISparseSpdSolver
         ArgumentNullException.ThrowIfNull(permutation);
         if (permutation.Length != matrix.Size || !Orderings.IsPermutation(permutation))
             throw new ArgumentException("Not a permutation of the matrix's DOFs.", nameof(permutation));
-        return SupernodalFactor.Create(matrix, (int[])permutation.Clone(), relativePivotTolerance, MaxThreads);
+        return SupernodalFactor.Create(matrix, (int[])permutation.Clone(), relativePivotTolerance, MaxThreads, Kernels == DenseKernelBackend.OpenBlas);
     }
 
     /// <summary>Symbolic analysis only: the factor's size for a matrix under a permutation (for measurements).</summary>
@@ -157,6 +174,12 @@ public sealed class SupernodalFactor : ISparseSpdFactor
     /// <summary>Total front work (Σ k·m²) from which subtrees are factorised in parallel.</summary>
     internal const double ParallelWorkThreshold = 5e8;
 
+    /// <summary>Smallest front (rows) handed to native BLAS; smaller ones stay managed, where a call costs more than it saves.</summary>
+    internal const int NativeMinFront = 96;
+
+    /// <summary>Whether some fronts were factorised by native BLAS (for tests).</summary>
+    internal int NativeFronts { get; private init; }
+
     /// <summary>Per-worker scratch of the numeric factorisation: front, packing buffer, update-matrix stack, failures.</summary>
     private sealed class Workspace
     {
@@ -169,6 +192,8 @@ public sealed class SupernodalFactor : ISparseSpdFactor
         public readonly List<int> StackSuper = new();
         public readonly List<long> StackOffset = new();
         public readonly List<(int Position, PivotFailure Failure)> Failures = new();
+        public double[] Save = Array.Empty<double>();
+        public int NativeFronts;
 
         public void Reserve(int maxFront, int n)
         {
@@ -189,6 +214,7 @@ public sealed class SupernodalFactor : ISparseSpdFactor
         public double[] Values = null!, Diag = null!, L = null!;
         public bool[] Failed = null!;
         public double Tol;
+        public bool Native;
         public bool[] SubtreeRoot = null!;
         public double[]?[] Handover = null!;
         public int[] ChildHead = null!, ChildNext = null!;
@@ -201,13 +227,16 @@ public sealed class SupernodalFactor : ISparseSpdFactor
     /// hand their update matrices to the top part in separate arrays. Every sum is formed in the same order whatever the
     /// thread count, so the factor is bitwise the same with 1 or more threads.
     /// </summary>
-    internal static SupernodalFactor Create(SymmetricSparseMatrix a, int[] ordering, double tol, int threads)
+    /// <remarks>With <paramref name="native"/> the fronts of at least <see cref="NativeMinFront"/> rows go to OpenBLAS, which
+    /// threads each call itself; subtrees are then factorised one after the other, so that two threads of ours never
+    /// call the library at once, and results are no longer bitwise independent of the library's thread count.</remarks>
+    internal static SupernodalFactor Create(SymmetricSparseMatrix a, int[] ordering, double tol, int threads, bool native = false)
     {
         var s = SupernodalSymbolic.Analyse(a, ordering);
         int n = s.N, ns = s.SupernodeCount;
         if (s.StoredEntries > Array.MaxLength)
             throw new InvalidOperationException($"The factor needs {s.StoredEntries} entries, more than the largest array holds.");
-        var job = new NumericJob { S = s, L = new double[s.StoredEntries], Failed = new bool[n], Tol = tol, Values = a.Values };
+        var job = new NumericJob { S = s, L = new double[s.StoredEntries], Failed = new bool[n], Tol = tol, Values = a.Values, Native = native };
         SupernodalSymbolic.LowerByColumn(a, s.Inv, out job.ColPtr, out job.Rows, out job.Source);
         var diag = new double[n];
         for (int j = 0; j < n; j++)
@@ -276,7 +305,7 @@ public sealed class SupernodalFactor : ISparseSpdFactor
         }
         // Threads only pay off on large trees: on the 10k-unknown wall (work ≈ 10⁸) two threads were slower than one in
         // most paired runs on the (loaded) test machine. The cut above does not depend on this, so neither do the results.
-        bool parallel = threads > 1 && tasks.Length > 1 && total >= ParallelWorkThreshold;
+        bool parallel = !native && threads > 1 && tasks.Length > 1 && total >= ParallelWorkThreshold;
         if (parallel)
             Parallel.ForEach(tasks, new ParallelOptions { MaxDegreeOfParallelism = threads }, RunSubtree);
         else
@@ -294,6 +323,7 @@ public sealed class SupernodalFactor : ISparseSpdFactor
         return new SupernodalFactor(s, job.L, job.Failed, all.Select(f => f.Failure).ToArray(), all.Select(f => f.Position).ToArray())
         {
             SubtreesInParallel = parallel,
+            NativeFronts = workspaces.Distinct().Sum(w => w.NativeFronts) + top.NativeFronts,
         };
     }
 
@@ -343,7 +373,14 @@ public sealed class SupernodalFactor : ISparseSpdFactor
             job.Handover[c] = null;
         }
 
-        FrontKernels.PartialCholesky(front, m, k, job.Diag.AsSpan(f0, k), job.Tol, ws.Pack, threads, (c, piv) =>
+        bool done = false;
+        if (job.Native && m >= NativeMinFront)
+        {
+            if (ws.Save.LongLength < (long)k * k) ws.Save = new double[(long)k * k];
+            done = NativeBlas.TryPartialCholesky(front, m, k, job.Diag.AsSpan(f0, k), job.Tol, ws.Save);
+            if (done) ws.NativeFronts++;
+        }
+        if (!done) FrontKernels.PartialCholesky(front, m, k, job.Diag.AsSpan(f0, k), job.Tol, ws.Pack, threads, (c, piv) =>
         {
             int j = f0 + c;
             ws.Failures.Add((j, new PivotFailure(s.Perm[j], piv, job.Diag[j])));
