@@ -66,7 +66,7 @@ public static partial class ModelReport
             Row("largest element side ratio", p => F(p.Mesh.LargestAspect)),
             Row("unknowns", p => $"{p.Analysis.Solve.Unknowns}"),
             Row($"top stiffness k [{stiff}]", p => K(p.TopStiffness)),
-        ], [.. Enumerable.Range(1, ps.Count)]));
+        ], []));
         var openings = ps.SelectMany(p => p.Panel.Openings.Select(o => (IReadOnlyList<string>)[p.Panel.Id, o.Id, L(o.Left), L(o.Bottom), L(o.Width), L(o.Height)])).ToList();
         if (openings.Count > 0)
             blocks.Add(new Table("Panel openings (from the panel's bottom-left corner)", ["panel", "opening", $"left [{len}]", $"bottom [{len}]", $"width [{len}]", $"height [{len}]"], openings, [2, 3, 4, 5]));
@@ -83,8 +83,8 @@ public static partial class ModelReport
                 ["observed order p", double.IsFinite(c.ObservedOrder) ? c.ObservedOrder.ToString("0.00", CultureInfo.InvariantCulture) : double.IsPositiveInfinity(c.ObservedOrder) ? "∞ (no change)" : "n/a"],
                 [$"Richardson value k∞ [{stiff}]", K(c.Extrapolated)],
                 ["estimated error of the finest mesh |k∞ − k|/k∞", Pct(c.EstimatedError, "0.000")],
-                ["note", c.Note],
             ], [1]));
+            blocks.Add(new Paragraph($"Panel {p.Panel.Id}: {c.Note}. An opening's corners are re-entrant, which caps the order near 1 on uniform meshes (docs/panels.md)."));
         }
 
         var levelRows = new List<IReadOnlyList<string>>();

@@ -15,6 +15,9 @@ public static partial class ModelReport
     private static string P3(double v) => double.IsFinite(v) ? v.ToString("0.000", CultureInfo.InvariantCulture) : "n/a";
     private static string P4(double v) => double.IsFinite(v) ? v.ToString("0.0000", CultureInfo.InvariantCulture) : "n/a";
 
+    /// <summary>θ with at least four decimals and three significant figures for small values.</summary>
+    private static string Theta(double v) => double.IsFinite(v) ? v.ToString("0.0000##", CultureInfo.InvariantCulture) : "n/a";
+
     /// <summary>Rows of the methods table for the seismic block (none without one).</summary>
     private static IEnumerable<IReadOnlyList<string>> SeismicMethods(StructureModel m)
     {
@@ -46,7 +49,7 @@ public static partial class ModelReport
         string Fo(double si) => F(u.FromSI(si, Quantity.Force));
 
         blocks.Add(new Heading(2, heading));
-        blocks.Add(new Paragraph($"The seismic block of the model: story weights, {(s.Spectrum is null ? "a given base shear" : "spectral values")}, the equivalent lateral forces written to the generated load case \"{s.CaseId}\"{(s.SecondOrder is { } g ? $", and the stability coefficient and a second-order analysis under the gravity case \"{g.GravityCase}\"" : "")}. Clause numbers and table values are ASCE 7-16, quoted from memory: {SeismicPresets.Status}."));
+        blocks.Add(new Paragraph($"The seismic block of the model: story weights, {(s.Spectrum is null ? "a given base shear" : "spectral values")}, the equivalent lateral forces written to the generated load case \"{s.CaseId}\"{(s.SecondOrder is { } g ? $", and the stability coefficient and a second-order analysis under the gravity case \"{g.GravityCase}\"" : "")}. Clause numbers and table values: {SeismicPresets.Status}."));
 
         // Base shear.
         var bs = new List<IReadOnlyList<string>>();
@@ -112,10 +115,10 @@ public static partial class ModelReport
         {
             var so = s.SecondOrder!;
             double thetaMax = sr.Stability[0].ThetaMax;
-            blocks.Add(new Paragraph($"Stability coefficient θ = P_x·Δ·I_e/(V_x·h_sx·C_d) per story (ASCE 7-16 §12.8.7) with C_d = {F(so.Cd)}, I_e = {F(so.Ie)}, β = {F(so.Beta)}: θ_max = 0.5/(β·C_d) ≤ 0.25 = {P3(thetaMax)}. P_x is the vertical load of \"{so.GravityCase}\" above the story's cut, Δ = C_d·δ_e/I_e. Beside it the second-order analysis (K + K_G)·u = f of case \"{s.CaseId}\": its drift over the first-order drift, next to the estimate 1/(1 − θ). Status: θ ≤ {F(SecondOrderAnalysis.NeglectLimit)} P-delta may be neglected; above it P-delta to be included; above θ_max the limit is exceeded."));
+            blocks.Add(new Paragraph($"Stability coefficient θ = P_x·Δ·I_e/(V_x·h_sx·C_d) per story (ASCE 7-16 §12.8.7) with C_d = {F(so.Cd)}, I_e = {F(so.Ie)}, β = {F(so.Beta)}: θ_max = min(0.5/(β·C_d), 0.25) = {P3(thetaMax)}. P_x is the vertical load of \"{so.GravityCase}\" above the story's cut, Δ = C_d·δ_e/I_e. Beside it the second-order analysis (K + K_G)·u = f of case \"{s.CaseId}\": its drift over the first-order drift, next to the estimate 1/(1 − θ). Status: θ ≤ {F(SecondOrderAnalysis.NeglectLimit)} P-delta may be neglected; above it P-delta to be included; above θ_max the limit is exceeded."));
             blocks.Add(new Table($"First- and second-order drift and θ per story, case {s.CaseId}, gravity {so.GravityCase}",
                 ["story", $"P_x [{force}]", $"V_x [{force}]", $"δe, 1st order [{len}]", $"Δ [{len}]", "θ", $"δ, 2nd order [{len}]", "2nd / 1st", "1/(1−θ)", "status"],
-                sr.Stability.Select(x => (IReadOnlyList<string>)[$"{x.Story.Index}", Fo(x.Px), Fo(x.Vx), L(x.ElasticDrift), L(x.DesignDrift), P4(x.Theta), L(x.SecondOrderDrift), P4(x.Ratio), P4(x.Estimate), x.Status]).ToList(),
+                sr.Stability.Select(x => (IReadOnlyList<string>)[$"{x.Story.Index}", Fo(x.Px), Fo(x.Vx), L(x.ElasticDrift), L(x.DesignDrift), Theta(x.Theta), L(x.SecondOrderDrift), P4(x.Ratio), P4(x.Estimate), x.Status]).ToList(),
                 [0, 1, 2, 3, 4, 5, 6, 7, 8]));
             if (double.IsFinite(sr.CriticalLoadFactor))
                 blocks.Add(new Paragraph(double.IsPositiveInfinity(sr.CriticalLoadFactor)
@@ -149,10 +152,10 @@ public static partial class ModelReport
             double tmax = worst.ThetaMax;
             int over = sr.Stability.Count(x => x.Theta > tmax), pd = sr.Stability.Count(x => x.Theta > SecondOrderAnalysis.NeglectLimit);
             yield return over > 0
-                ? $"Stability coefficient: θ exceeds θ_max = {P3(tmax)} in {over} of {sr.Stability.Count} stories (largest θ = {P4(worst.Theta)}, story {worst.Story.Index}); ASCE 7-16 §12.8.7 does not allow that: the structure is potentially unstable as modelled."
+                ? $"Stability coefficient: θ exceeds θ_max = {P3(tmax)} in {over} of {sr.Stability.Count} stories (largest θ = {Theta(worst.Theta)}, story {worst.Story.Index}); ASCE 7-16 §12.8.7 does not allow that: the structure is potentially unstable as modelled."
                 : pd > 0
-                    ? $"Stability coefficient: θ above 0.10 in {pd} of {sr.Stability.Count} stories (largest θ = {P4(worst.Theta)}, story {worst.Story.Index}; θ_max = {P3(tmax)}): P-delta effects are to be included; the second-order drifts are in the seismic section."
-                    : $"Stability coefficient: θ ≤ 0.10 in every story (largest θ = {P4(worst.Theta)}, story {worst.Story.Index}; θ_max = {P3(tmax)}): by §12.8.7 P-delta effects may be neglected.";
+                    ? $"Stability coefficient: θ above 0.10 in {pd} of {sr.Stability.Count} stories (largest θ = {Theta(worst.Theta)}, story {worst.Story.Index}; θ_max = {P3(tmax)}): P-delta effects are to be included; the second-order drifts are in the seismic section."
+                    : $"Stability coefficient: θ ≤ 0.10 in every story (largest θ = {Theta(worst.Theta)}, story {worst.Story.Index}; θ_max = {P3(tmax)}): by §12.8.7 P-delta effects may be neglected.";
             var gap = sr.Stability.MaxBy(x => Math.Abs(x.Ratio - x.Estimate))!;
             yield return $"Second-order analysis: drift amplification 2nd/1st from {P4(sr.Stability.Min(x => x.Ratio))} to {P4(sr.Stability.Max(x => x.Ratio))}; the largest difference from 1/(1 − θ) is {P4(gap.Ratio - gap.Estimate)} (story {gap.Story.Index}).";
         }

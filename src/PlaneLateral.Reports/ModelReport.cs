@@ -56,7 +56,8 @@ public static partial class ModelReport
 
         string title = $"Lateral analysis report: {m.Title}";
         blocks.Add(new Heading(1, title));
-        blocks.Add(new Paragraph($"Model file {modelFileName}. Produced by {producedBy}: linear static analysis with exact Timoshenko beam-columns, story results{(comparisons is null ? "" : " and hand methods beside the finite-element numbers")}."));
+        string engine = string.Join(" and ", new[] { frame ? "exact Timoshenko beam-columns" : "", r.Panels.Count > 0 ? "plane-stress wall panels" : "" }.Where(x => x != ""));
+        blocks.Add(new Paragraph($"Model file {modelFileName}. Produced by {producedBy}: linear static analysis with {engine}{(b.HasStories ? ", story results" : "")}{(sr is null ? "" : ", seismic story forces and second-order effects")}{(comparisons is null ? "" : " and hand methods beside the finite-element numbers")}."));
         blocks.Add(new CautionBox(Caution));
 
         // 1. Inputs and units
@@ -64,13 +65,15 @@ public static partial class ModelReport
         blocks.Add(new Paragraph($"Units: force {force}, length {len}; stress {u.Label(Quantity.Stress)}, stiffness {stiff}, moment {u.Label(Quantity.Moment)}. Every number in this report is in these units unless it says otherwise; ratios are dimensionless."));
         blocks.Add(new Table("Model size", ["item", "count"],
             [["nodes", $"{m.Nodes.Count}"], ["members", $"{m.Members.Count}"], ["supports", $"{m.Supports.Count}"], ["load cases", $"{m.LoadCases.Count}"],
-             ["combinations", $"{m.Combinations.Count}"], ["levels", $"{m.Building.Levels.Count}"], ["comparison checks", $"{m.Comparisons.Count}"]], [1]));
+             ["combinations", $"{m.Combinations.Count}"], ["levels", $"{m.Building.Levels.Count}"], ["comparison checks", $"{m.Comparisons.Count}"], .. (r.Panels.Count > 0 ? new[] { new[] { "wall panels", $"{r.Panels.Count}" } } : [])], [1]));
         blocks.Add(new Table("Materials", ["material", $"E [{u.Label(Quantity.Stress)}]", $"G [{u.Label(Quantity.Stress)}]", "ν"],
             m.Materials.Select(x => (IReadOnlyList<string>)[x.Id, S(x.E), S(x.G), F(x.Nu)]).ToList(), [1, 2, 3]));
+        if (m.Sections.Count > 0)
         blocks.Add(new Table("Sections (gross values, before stiffness modifiers)", ["section", "shape", $"A [{u.Label(Quantity.Area)}]", $"I [{u.Label(Quantity.SecondMomentOfArea)}]", $"depth [{len}]"],
             m.Sections.Select(x => (IReadOnlyList<string>)[x.Id, x.Shape, F(u.FromSI(x.A, Quantity.Area)), F(u.FromSI(x.I, Quantity.SecondMomentOfArea)), double.IsFinite(x.Depth) && x.Depth > 0 ? L(x.Depth) : "-"]).ToList(), [2, 3, 4]));
         var roles = m.Members.GroupBy(x => x.Role == "" ? "(no role)" : x.Role).OrderBy(g => g.Key, StringComparer.Ordinal)
             .Select(g => (IReadOnlyList<string>)[g.Key, $"{g.Count()}", $"{g.Count(x => x.Kind == MemberKind.Brace)}"]).ToList();
+        if (frame)
         blocks.Add(new Table("Members by role", ["role", "members", "of which axial-only"], roles, [1, 2]));
         blocks.Add(new Table("Load cases and combinations", ["id", "kind", "description or factors"],
             [.. m.LoadCases.Select(c => (IReadOnlyList<string>)[c.Id, "load case", c.Description]),
@@ -97,7 +100,7 @@ public static partial class ModelReport
 
         // 3. Methods and formulas
         blocks.Add(new Heading(2, Section("Methods and formulas")));
-        var methods = new List<IReadOnlyList<string>>
+        var methods = !frame ? new List<IReadOnlyList<string>>() : new List<IReadOnlyList<string>>
         {
             new[] { "Timoshenko beam-column, exact two-node element", "bending block EI/(L³(1+Φ))·[12, 6L, −12, 6L; 6L, (4+Φ)L², −6L, (2−Φ)L²; …], Φ = 12EI/(G·A_s·L²), plus EA/L axially", "Przemieniecki, Theory of Matrix Structural Analysis, 1968, §5.6" },
             new[] { "Shear area of a rectangle", "A_s = A/f, f = 1.2 by default; or Cowper's κ = 10(1+ν)/(12+11ν)", "Gere & Timoshenko, Mechanics of Materials; Cowper, J. Appl. Mech. 33:335–340, 1966" },
