@@ -65,7 +65,7 @@ public static partial class ModelReport
             Row($"narrowest solid strip [{len}]", p => L(p.Mesh.NarrowestStrip)),
             Row("largest element side ratio", p => F(p.Mesh.LargestAspect)),
             Row("unknowns", p => $"{p.Analysis.Solve.Unknowns}"),
-            Row($"top stiffness k [{stiff}]", p => K(p.TopStiffness)),
+            Row($"top stiffness k, this mesh [{stiff}]", p => K(p.TopStiffness)),
         ], []));
         var openings = ps.SelectMany(p => p.Panel.Openings.Select(o => (IReadOnlyList<string>)[p.Panel.Id, o.Id, L(o.Left), L(o.Bottom), L(o.Width), L(o.Height)])).ToList();
         if (openings.Count > 0)
@@ -117,10 +117,10 @@ public static partial class ModelReport
         {
             int bad = p.Analysis.Cases.Count(c => !PanelCaseSolved(c));
             string conv = p.Convergence is { } c && double.IsFinite(c.EstimatedError)
-                ? $"; mesh study: observed order {c.ObservedOrder.ToString("0.00", CultureInfo.InvariantCulture)}, Richardson value {F(u.FromSI(c.Extrapolated, Quantity.TranslationalStiffness))}, estimated error of the finest mesh {Pct(c.EstimatedError, "0.00")}"
+                ? $"; mesh study: finest mesh {F(u.FromSI(c.Stiffness[^1], Quantity.TranslationalStiffness))}, Richardson value {F(u.FromSI(c.Extrapolated, Quantity.TranslationalStiffness))} {u.Label(Quantity.TranslationalStiffness)}, observed order {c.ObservedOrder.ToString("0.00", CultureInfo.InvariantCulture)}, estimated error of the finest mesh {Pct(c.EstimatedError, "0.00")}; the tables and figures of the cases are on the base mesh"
                 : p.Convergence is { } c2 ? $"; mesh study: {c2.Note}" : "; no mesh study asked for";
             yield return bad == 0
-                ? $"Panel {p.Panel.Id}: {p.Analysis.Cases.Count} case(s) solved and in equilibrium; top stiffness {F(u.FromSI(p.TopStiffness, Quantity.TranslationalStiffness))} {u.Label(Quantity.TranslationalStiffness)}{conv}."
+                ? $"Panel {p.Panel.Id}: {p.Analysis.Cases.Count} case(s) solved and in equilibrium; top stiffness on the base mesh {F(u.FromSI(p.TopStiffness, Quantity.TranslationalStiffness))} {u.Label(Quantity.TranslationalStiffness)}{conv}."
                 : $"Panel {p.Panel.Id}: the solution check is not met in {bad} case(s); check the model before using its numbers{conv}.";
         }
     }

@@ -145,7 +145,7 @@ public static partial class ModelReport
         if (sr is null) yield break;
         var u = r.Model.Units;
         var f = sr.Forces;
-        yield return $"Seismic story forces: V = {F(u.FromSI(f.BaseShear, Quantity.Force))} {u.ForceSymbol} ({(double.IsFinite(f.Cs) ? $"C_s = {P4(f.Cs)}, governed by {f.CsNote}" : "given")}), period used {P4(f.PeriodUsed)} s ({f.PeriodNote}), k = {f.Exponent.ToString("0.000", CultureInfo.InvariantCulture)}.";
+        yield return $"Seismic story forces: V = {F(u.FromSI(f.BaseShear, Quantity.Force))} {u.ForceSymbol} ({(double.IsFinite(f.Cs) ? $"C_s = {P4(f.Cs)}, governed by {f.CsNote}" : "given")}), period used {P4(f.PeriodUsed)} s: {f.PeriodNote}; k = {f.Exponent.ToString("0.000", CultureInfo.InvariantCulture)}.";
         if (sr.Stability.Count > 0)
         {
             var worst = sr.Stability.MaxBy(x => x.Theta)!;
@@ -173,8 +173,8 @@ public static partial class ModelReport
     private static IEnumerable<string> SeismicCautions(SeismicResult? sr)
     {
         if (sr is null) yield break;
-        yield return $"Seismic: the equivalent lateral force procedure is applied as described in docs/seismic.md, with clause numbers and table values from memory ({SeismicPresets.Status}). The governing code decides whether the procedure is permitted and which values, exceptions and footnotes apply (none of the §12.8 exceptions is applied; no accidental torsion, no modal response spectrum combination). Nothing here shows compliance.";
+        yield return $"Seismic: the equivalent lateral force procedure is applied as described in docs/seismic.md, with clause numbers and table values as quoted there ({SeismicPresets.Status}). The governing code decides whether the procedure is permitted and which values, exceptions and footnotes apply (none of the §12.8 exceptions is applied; no accidental torsion, no modal response spectrum combination). Nothing here shows compliance.";
         if (sr.Stability.Count > 0)
-            yield return "Second order: the axial forces of the gravity case are those of the linear solve (no iteration); K_G leaves out the shear flexibility; θ uses the story's first-order drift as §12.8.7 prescribes.";
+            yield return "Second order: the axial forces of the gravity case are those of the linear solve (no iteration); K_G leaves out the shear flexibility; θ is worked out from the first-order drift and the gravity load above each story (§12.8.7, from memory); the second-order drift is shown beside it, not substituted for it.";
     }
 }

@@ -126,7 +126,7 @@ public static class SeismicPlots
         for (int i = 0; i < sr.Stability.Count; i++)
         {
             var x = sr.Stability[i];
-            var t = plot.Add.Text($"story {x.Story.Index}: θ = {F(x.Theta, "0.0000")}, 2nd/1st = {F(x.Ratio, "0.000")}", second2[i], 0.5 * (L(x.Story.Bottom.Elevation) + L(x.Story.Top.Elevation)));
+            var t = plot.Add.Text($"story {x.Story.Index}: θ = {F(x.Theta, "0.0000##")}, 2nd/1st = {F(x.Ratio, "0.000")}", second2[i], 0.5 * (L(x.Story.Bottom.Elevation) + L(x.Story.Top.Elevation)));
             t.LabelFontSize = 13;
             t.LabelFontColor = PlotStyle.Brick;
             t.LabelAlignment = Alignment.MiddleLeft;
