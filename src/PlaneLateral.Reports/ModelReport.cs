@@ -87,6 +87,9 @@ public static partial class ModelReport
 
         // 2. Assumptions
         blocks.Add(new Heading(2, Section("Assumptions")));
+        if (!frame)
+            blocks.Add(new BulletList(["Linear elastic, small displacements, one plane; no second-order (P-delta) effects.", "The wall panels are plane-stress continua with the base held and the floors tied (see the panels section).", "Loads are the model's load cases; combinations are formed by superposition."]));
+        else
         blocks.Add(new BulletList([
             m.Seismic?.SecondOrder is { } so
                 ? $"Linear elastic, small displacements, one plane. The tables are first-order except the second-order (P-delta) drifts of the seismic section, under gravity case \"{so.GravityCase}\"."
