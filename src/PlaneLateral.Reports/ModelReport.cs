@@ -88,7 +88,7 @@ public static partial class ModelReport
         // 2. Assumptions
         blocks.Add(new Heading(2, Section("Assumptions")));
         if (!frame)
-            blocks.Add(new BulletList(["Linear elastic, small displacements, one plane; no second-order (P-delta) effects.", "The wall panels are plane-stress continua with the base held and the floors tied (see the panels section).", "Loads are the model's load cases; combinations are formed by superposition."]));
+            blocks.Add(new BulletList(["Linear elastic, small displacements, one plane; no second-order (P-delta) effects.", "The wall panels are plane-stress continua with the base held, floor ties as each panel declares (see the panels section).", "Loads are the model's load cases; combinations are formed by superposition."]));
         else
         blocks.Add(new BulletList([
             m.Seismic?.SecondOrder is { } so
