@@ -12,7 +12,7 @@ namespace PlaneLateral.Reports;
 /// verdicts and cautions, as one self-contained HTML file (figures embedded) and its Markdown twin (figures beside it).
 /// Depends only on the model, so two runs give byte-identical files.
 /// </summary>
-public static class ModelReport
+public static partial class ModelReport
 {
     /// <summary>At most this many load cases get a deflected-shape figure (the first lateral load cases in model order).</summary>
     public const int MaxShapeFigures = 6;
@@ -43,8 +43,11 @@ public static class ModelReport
         var u = m.Units;
         var b = BuildingResult.Of(r);
         var blocks = new List<Block>();
-        int fig = 0;
+        int fig = 0, sec = 0;
         void Figure(Figure f) => blocks.Add(new FigureBlock(f, ++fig));
+        string Section(string name) => $"{++sec}. {name}";
+        var sr = SeismicResult.Of(r);
+        bool frame = m.Members.Count > 0;
         string L(double si) => F(u.FromSI(si, Quantity.Length));
         string Fo(double si) => F(u.FromSI(si, Quantity.Force));
         string K(double si) => F(u.FromSI(si, Quantity.TranslationalStiffness));
@@ -53,21 +56,24 @@ public static class ModelReport
 
         string title = $"Lateral analysis report: {m.Title}";
         blocks.Add(new Heading(1, title));
-        blocks.Add(new Paragraph($"Model file {modelFileName}. Produced by {producedBy}: linear static analysis with exact Timoshenko beam-columns, story results{(comparisons is null ? "" : " and hand methods beside the finite-element numbers")}."));
+        string engine = string.Join(" and ", new[] { frame ? "exact Timoshenko beam-columns" : "", r.Panels.Count > 0 ? "plane-stress wall panels" : "" }.Where(x => x != ""));
+        blocks.Add(new Paragraph($"Model file {modelFileName}. Produced by {producedBy}: linear static analysis with {engine}{(b.HasStories ? ", story results" : "")}{(sr is null ? "" : ", seismic story forces and second-order effects")}{(comparisons is null ? "" : " and hand methods beside the finite-element numbers")}."));
         blocks.Add(new CautionBox(Caution));
 
         // 1. Inputs and units
-        blocks.Add(new Heading(2, "1. Inputs and units"));
+        blocks.Add(new Heading(2, Section("Inputs and units")));
         blocks.Add(new Paragraph($"Units: force {force}, length {len}; stress {u.Label(Quantity.Stress)}, stiffness {stiff}, moment {u.Label(Quantity.Moment)}. Every number in this report is in these units unless it says otherwise; ratios are dimensionless."));
         blocks.Add(new Table("Model size", ["item", "count"],
             [["nodes", $"{m.Nodes.Count}"], ["members", $"{m.Members.Count}"], ["supports", $"{m.Supports.Count}"], ["load cases", $"{m.LoadCases.Count}"],
-             ["combinations", $"{m.Combinations.Count}"], ["levels", $"{m.Building.Levels.Count}"], ["comparison checks", $"{m.Comparisons.Count}"]], [1]));
+             ["combinations", $"{m.Combinations.Count}"], ["levels", $"{m.Building.Levels.Count}"], ["comparison checks", $"{m.Comparisons.Count}"], .. (r.Panels.Count > 0 ? new[] { new[] { "wall panels", $"{r.Panels.Count}" } } : [])], [1]));
         blocks.Add(new Table("Materials", ["material", $"E [{u.Label(Quantity.Stress)}]", $"G [{u.Label(Quantity.Stress)}]", "ν"],
             m.Materials.Select(x => (IReadOnlyList<string>)[x.Id, S(x.E), S(x.G), F(x.Nu)]).ToList(), [1, 2, 3]));
+        if (m.Sections.Count > 0)
         blocks.Add(new Table("Sections (gross values, before stiffness modifiers)", ["section", "shape", $"A [{u.Label(Quantity.Area)}]", $"I [{u.Label(Quantity.SecondMomentOfArea)}]", $"depth [{len}]"],
             m.Sections.Select(x => (IReadOnlyList<string>)[x.Id, x.Shape, F(u.FromSI(x.A, Quantity.Area)), F(u.FromSI(x.I, Quantity.SecondMomentOfArea)), double.IsFinite(x.Depth) && x.Depth > 0 ? L(x.Depth) : "-"]).ToList(), [2, 3, 4]));
         var roles = m.Members.GroupBy(x => x.Role == "" ? "(no role)" : x.Role).OrderBy(g => g.Key, StringComparer.Ordinal)
             .Select(g => (IReadOnlyList<string>)[g.Key, $"{g.Count()}", $"{g.Count(x => x.Kind == MemberKind.Brace)}"]).ToList();
+        if (frame)
         blocks.Add(new Table("Members by role", ["role", "members", "of which axial-only"], roles, [1, 2]));
         blocks.Add(new Table("Load cases and combinations", ["id", "kind", "description or factors"],
             [.. m.LoadCases.Select(c => (IReadOnlyList<string>)[c.Id, "load case", c.Description]),
@@ -80,10 +86,13 @@ public static class ModelReport
                 m.Building.DriftChecks.Select(d => (IReadOnlyList<string>)[d.Id, string.Join(", ", d.Cases), F(d.Cd), F(d.Ie), Pct(d.AllowedRatio, "0.##"), d.LimitSource]).ToList(), [2, 3, 4]));
 
         // 2. Assumptions
-        blocks.Add(new Heading(2, "2. Assumptions"));
+        blocks.Add(new Heading(2, Section("Assumptions")));
+        if (!frame)
+            blocks.Add(new BulletList(["Linear elastic, small displacements, one plane; no second-order (P-delta) effects.", "The wall panels are plane-stress continua with the base held, floor ties as each panel declares (see the panels section).", "Loads are the model's load cases; combinations are formed by superposition."]));
+        else
         blocks.Add(new BulletList([
             m.Seismic?.SecondOrder is { } so
-                ? $"Linear elastic, small displacements, one plane. The tables here are first-order; a second-order (P-delta) analysis under gravity case \"{so.GravityCase}\" is in second-order.csv and seismic.json of the solve results (planelateral solve)."
+                ? $"Linear elastic, small displacements, one plane. The tables are first-order except the second-order (P-delta) drifts of the seismic section, under gravity case \"{so.GravityCase}\"."
                 : "Linear elastic, small displacements, one plane; no second-order (P-delta) effects.",
             "Member stiffness is what the model gives: section properties times the stiffness modifiers listed in member-stiffness.csv (cracked sections, if any, are the modeller's decision).",
             "Walls modelled as line members follow plane-section beam theory with a shear area; for squat walls and walls with openings that is doubtful.",
@@ -93,8 +102,8 @@ public static class ModelReport
         ]));
 
         // 3. Methods and formulas
-        blocks.Add(new Heading(2, "3. Methods and formulas"));
-        var methods = new List<IReadOnlyList<string>>
+        blocks.Add(new Heading(2, Section("Methods and formulas")));
+        var methods = !frame ? new List<IReadOnlyList<string>>() : new List<IReadOnlyList<string>>
         {
             new[] { "Timoshenko beam-column, exact two-node element", "bending block EI/(L³(1+Φ))·[12, 6L, −12, 6L; 6L, (4+Φ)L², −6L, (2−Φ)L²; …], Φ = 12EI/(G·A_s·L²), plus EA/L axially", "Przemieniecki, Theory of Matrix Structural Analysis, 1968, §5.6" },
             new[] { "Shear area of a rectangle", "A_s = A/f, f = 1.2 by default; or Cowper's κ = 10(1+ν)/(12+11ν)", "Gere & Timoshenko, Mechanics of Materials; Cowper, J. Appl. Mech. 33:335–340, 1966" },
@@ -105,24 +114,30 @@ public static class ModelReport
             methods.Add(["Amplified drift", "δ = C_d·δe / I_e, checked as |δ|/h_sx ≤ Δa/h_sx", "ASCE 7-16 eq. 12.8-15; allowable from Table 12.12-1 or the user"]);
         if (m.Building.Levels.Count > 2)
             methods.Add(["Stiffness (soft story) irregularity", "k_i < 70% k_(i+1) or < 80% of the mean of the three above (Type 1a); 60% / 70% (Type 1b)", "ASCE 7-16 Table 12.3-2"]);
+        methods.AddRange(SeismicMethods(m));
+        methods.AddRange(PanelMethods(r));
         if (comparisons is not null)
             foreach (var hm in comparisons.Rows.Select(x => x.Hand.Method).DistinctBy(x => x.Name))
                 methods.Add(["Hand method", hm.Name, hm.Source]);
         blocks.Add(new Table("Methods, formulas and their published sources", ["method", "formula", "source"], methods, []));
 
-        // 4. Solution checks
-        blocks.Add(new Heading(2, "4. Solution checks"));
+        // 4. Solution checks (of the frame; panels have their own in the panels section)
+        if (frame)
+        {
+        blocks.Add(new Heading(2, Section("Solution checks")));
         blocks.Add(new Paragraph($"Solver {r.Solve.Solver}, {r.Solve.Unknowns} unknowns. The backward error measures how well the computed displacements satisfy K·u = f relative to the sizes of K, u and f; equilibrium compares reactions with applied loads."));
         blocks.Add(new Table("Backward error and equilibrium per case", ["case", "kind", "backward error", "force imbalance", "moment imbalance", "verdict"],
             r.Cases.Select(c => (IReadOnlyList<string>)[c.Id, c.IsCombination ? "combination" : "load case", c.BackwardError.ToString("0.0E+0", CultureInfo.InvariantCulture),
                 c.Equilibrium.RelativeForceError.ToString("0.0E+0", CultureInfo.InvariantCulture), c.Equilibrium.RelativeMomentError.ToString("0.0E+0", CultureInfo.InvariantCulture),
                 c.BackwardError < 1e-10 && c.Equilibrium.RelativeForceError < 1e-8 ? "solved" : "check the model"]).ToList(), [2, 3, 4]));
+        }
 
         // 5. Deflected shapes
         var lateralLoadCases = b.Cases.Where(c => c.Lateral && !c.IsCombination).Select(c => c.CaseId).ToList();
         if (lateralLoadCases.Count == 0 && !b.HasStories)
             lateralLoadCases = r.Cases.Where(c => !c.IsCombination).Select(c => c.Id).ToList();
-        blocks.Add(new Heading(2, "5. Deflected shapes"));
+        if (!frame) lateralLoadCases = [];
+        else blocks.Add(new Heading(2, Section("Deflected shapes")));
         foreach (var id in lateralLoadCases.Take(MaxShapeFigures)) Figure(ModelPlots.DeflectedShape(r, id));
         if (lateralLoadCases.Count > MaxShapeFigures)
             blocks.Add(new Paragraph($"Only the first {MaxShapeFigures} of {lateralLoadCases.Count} lateral load cases are drawn."));
@@ -131,7 +146,7 @@ public static class ModelReport
         var lateral = b.Cases.Where(c => c.Lateral && c.Stories.Count > 0).ToList();
         if (lateral.Count > 0)
         {
-            blocks.Add(new Heading(2, "6. Story displacements, drifts and shears"));
+            blocks.Add(new Heading(2, Section("Story displacements, drifts and shears")));
             foreach (var cs in lateral)
                 blocks.Add(new Table($"Stories (story 1 is the lowest), {(cs.IsCombination ? "combination" : "load case")} {cs.CaseId}",
                     ["story", "levels", $"height [{len}]", $"top displacement [{len}]", $"drift [{len}]", "drift ratio", $"shear [{force}]", $"stiffness [{stiff}]"],
@@ -144,7 +159,7 @@ public static class ModelReport
         // 7. Drift checks
         if (b.DriftChecks.Count > 0)
         {
-            blocks.Add(new Heading(2, "7. Drift checks"));
+            blocks.Add(new Heading(2, Section("Drift checks")));
             blocks.Add(new Paragraph("δ = C_d·δe/I_e per story (ASCE 7-16 eq. 12.8-15), ratio |δ|/h against the allowable ratio; margin = 1 − ratio/allowable. The table's footnotes and the rules around it are not applied: check them against the governing code."));
             blocks.Add(new Table("Drift check results", ["check", "case", "story", $"δe [{len}]", $"δ [{len}]", "δ/h", "allowable", "margin", "result"],
                 b.DriftChecks.Select(d => (IReadOnlyList<string>)[d.Check.Id, d.CaseId, $"{d.Story.Index}", L(d.ElasticDrift), L(d.AmplifiedDrift), Pct(d.Ratio, "0.000"), Pct(d.Allowed, "0.##"), Pct(d.Margin, "0"), d.Passes ? "within" : "exceeds"]).ToList(),
@@ -159,10 +174,15 @@ public static class ModelReport
                     x.ExtremelySoft ? "extreme soft story (1b)" : x.Soft ? "soft story (1a)" : "regular"]).ToList(), [1, 2, 3, 4]));
         }
 
+        if (sr is not null) AddSeismic(blocks, Figure, r, b, sr, Section("Seismic story forces, periods and second-order effects"));
+        if (r.Panels.Count > 0) AddPanels(blocks, Figure, r, Section("Wall panels (plane-stress continuum)"));
+
         // 8. Hand methods beside FE
+        int handSection = 0;
         if (comparisons is not null && comparisons.Rows.Count > 0)
         {
-            blocks.Add(new Heading(2, "8. Hand methods beside the finite-element model"));
+            handSection = sec + 1;
+            blocks.Add(new Heading(2, Section("Hand methods beside the finite-element model")));
             blocks.Add(new Paragraph($"ratio = FE/hand for the reference FE model; within tolerance when |ratio − 1| ≤ the row's tolerance (default ±{Pct(comparisons.DefaultTolerance, "0.#")}). The cause column is chosen by the rules in docs/comparisons.md."));
             blocks.Add(new Table("Hand method beside FE", ["check", "subject", "hand method", "unit", "hand", "FE", "FE/hand", "h/l", "verdict", "cause"],
                 comparisons.Rows.Select(x => (IReadOnlyList<string>)[x.CheckId, x.Subject, x.Hand.Method.Name, x.Unit, F(x.Hand.Value), F(x.Reference.Value), x.Ratio.ToString("0.000", CultureInfo.InvariantCulture),
@@ -171,11 +191,11 @@ public static class ModelReport
         }
 
         // 9. Verdicts
-        blocks.Add(new Heading(2, "9. Verdicts"));
+        blocks.Add(new Heading(2, Section("Verdicts")));
         var verdicts = new List<string>();
-        foreach (var c in r.Cases.Where(c => !(c.BackwardError < 1e-10 && c.Equilibrium.RelativeForceError < 1e-8)))
+        foreach (var c in r.Cases.Where(c => frame && !(c.BackwardError < 1e-10 && c.Equilibrium.RelativeForceError < 1e-8)))
             verdicts.Add($"Case {c.Id}: the solution check is not met (backward error {c.BackwardError:E1}); check the model before using its numbers.");
-        if (verdicts.Count == 0) verdicts.Add($"All {r.Cases.Count} cases solved with backward error below 1E-10 and reactions balancing the loads.");
+        if (verdicts.Count == 0 && frame) verdicts.Add($"All {r.Cases.Count} cases solved with backward error below 1E-10 and reactions balancing the loads.");
         foreach (var g in b.DriftChecks.GroupBy(d => d.Check.Id))
         {
             var worst = g.MaxBy(d => d.Ratio)!;
@@ -189,12 +209,14 @@ public static class ModelReport
         if (comparisons is not null && comparisons.Rows.Count > 0)
         {
             int within = comparisons.Rows.Count(x => x.Verdict == Verdict.WithinTolerance);
-            verdicts.Add($"Hand methods: {within} of {comparisons.Rows.Count} rows within tolerance; {comparisons.Rows.Count(x => x.Verdict == Verdict.HandHigher)} with the hand value higher, {comparisons.Rows.Count(x => x.Verdict == Verdict.HandLower)} lower (causes in section 8).");
+            verdicts.Add($"Hand methods: {within} of {comparisons.Rows.Count} rows within tolerance; {comparisons.Rows.Count(x => x.Verdict == Verdict.HandHigher)} with the hand value higher, {comparisons.Rows.Count(x => x.Verdict == Verdict.HandLower)} lower (causes in section {handSection}).");
         }
+        verdicts.AddRange(SeismicVerdicts(r, sr));
+        verdicts.AddRange(PanelVerdicts(r));
         blocks.Add(new BulletList(verdicts));
 
         // 10. Cautions
-        blocks.Add(new Heading(2, "10. Cautions"));
+        blocks.Add(new Heading(2, Section("Cautions")));
         var cautions = new List<string>
         {
             Caution,
@@ -202,6 +224,8 @@ public static class ModelReport
             "Walls modelled as line members follow plane-section (beam) theory; for squat walls (h/l below about 0.5) and walls with openings that assumption is doubtful, and a panel model is the better reference.",
             "Preset drift limits and stiffness modifiers are table values quoted from the sources named beside them; the governing local code decides which values and definitions apply.",
         };
+        cautions.AddRange(SeismicCautions(sr));
+        cautions.AddRange(PanelCautions(r));
         cautions.AddRange(r.Notes.Select(n => $"Model note: {n}"));
         if (comparisons is not null) cautions.Add(ComparisonReport.Caution);
         blocks.Add(new BulletList(cautions));

@@ -39,7 +39,7 @@ public class ReportTests
         var tables = doc.Tables.ToArray();
         // What a reviewer asks for (common practice): inputs, units, assumptions, formulas with sources, results, drift
         // checks, hand beside FE, verdicts, cautions; the demo declares levels, two drift checks and four kinds of check.
-        foreach (var heading in new[] { "Inputs and units", "Assumptions", "Methods and formulas", "Solution checks", "Deflected shapes", "Story displacements", "Drift checks", "Hand methods beside the finite-element model", "Verdicts", "Cautions" })
+        foreach (var heading in new[] { "Inputs and units", "Assumptions", "Methods and formulas", "Solution checks", "Deflected shapes", "Story displacements", "Drift checks", "Seismic story forces", "Hand methods beside the finite-element model", "Verdicts", "Cautions" })
         {
             Assert.Contains(heading, html);
             Assert.Contains(heading, md);
@@ -53,8 +53,9 @@ public class ReportTests
         foreach (var caption in new[] { "Materials", "Drift check results", "Hand method beside FE", "Methods, formulas and their published sources" })
             Assert.Contains(tables, t => t.Caption == caption);
         // Figures: 3 lateral load cases (W, E and the generated equivalent-lateral-force case E-forces), the displacement
-        // profile, one drift figure per drift check (3), one bar chart per check kind (4).
-        Assert.Equal(3 + 1 + 3 + 4, figures.Length);
+        // profile, one drift figure per drift check (3), the seismic story forces and first- vs second-order drift (2),
+        // one bar chart per check kind (4).
+        Assert.Equal(3 + 1 + 3 + 2 + 4, figures.Length);
         var embedded = Regex.Matches(html, "data:image/png;base64,([A-Za-z0-9+/=]+)").Select(m => Convert.FromBase64String(m.Groups[1].Value)).ToArray();
         Assert.Equal(figures.Length, embedded.Length);
         for (int i = 0; i < figures.Length; i++)

@@ -134,22 +134,41 @@ public static class SeismicAnalysis
     /// <summary>C_vx = w_x·h_x^k / Σ w_i·h_i^k (§12.8.3), h above the base.</summary>
     public static double[] VerticalDistribution(IReadOnlyList<double> weights, IReadOnlyList<double> heights, double k)
     {
-        var p = weights.Select((w, i) => w * Math.Pow(heights[i], k)).ToArray();
+        var p = WeightedHeights(weights, heights, k);
         double sum = p.Sum();
         return p.Select(x => x / sum).ToArray();
+    }
+
+    /// <summary>w_x·h_x^k per level (N·m^k), the numerators of C_vx (§12.8.3), h above the base.</summary>
+    public static double[] WeightedHeights(IReadOnlyList<double> weights, IReadOnlyList<double> heights, double k) =>
+        weights.Select((w, i) => w * Math.Pow(heights[i], k)).ToArray();
+
+    /// <summary>The expressions of §12.8.1.1 that bound C_s at a period T, each evaluated (see <see cref="ResponseTerms"/>).</summary>
+    /// <param name="Basic">S_DS/(R/I_e).</param>
+    /// <param name="Upper">S_D1/(T·R/I_e) for T ≤ T_L, S_D1·T_L/(T²·R/I_e) beyond.</param>
+    /// <param name="UpperExpression">Which of the two upper limits applies.</param>
+    /// <param name="Lower">0.044·S_DS·I_e, not below 0.01.</param>
+    /// <param name="LowerNearFault">0.5·S_1/(R/I_e) where S_1 ≥ 0.6 g, else NaN.</param>
+    public sealed record ResponseLimits(double Basic, double Upper, string UpperExpression, double Lower, double LowerNearFault);
+
+    /// <summary>The bounding expressions of C_s (§12.8.1.1) at period <paramref name="t"/> (s).</summary>
+    public static ResponseLimits ResponseTerms(SpectralValues s, double t)
+    {
+        double rie = s.R / s.Ie;
+        double upper = t <= s.TL ? s.Sd1 / (t * rie) : s.Sd1 * s.TL / (t * t * rie);
+        return new ResponseLimits(s.Sds / rie, upper, t <= s.TL ? "S_D1/(T·R/Ie)" : "S_D1·T_L/(T²·R/Ie)",
+            Math.Max(0.044 * s.Sds * s.Ie, 0.01), s.S1 >= 0.6 ? 0.5 * s.S1 / rie : double.NaN);
     }
 
     /// <summary>C_s of §12.8.1.1 for period <paramref name="t"/> (s) and the expression that governs.</summary>
     public static (double Cs, string Governs) ResponseCoefficient(SpectralValues s, double t)
     {
-        double rie = s.R / s.Ie;
-        double cs = s.Sds / rie;
+        var x = ResponseTerms(s, t);
+        double cs = x.Basic;
         string why = "S_DS/(R/Ie)";
-        double upper = t <= s.TL ? s.Sd1 / (t * rie) : s.Sd1 * s.TL / (t * t * rie);
-        if (upper < cs) { cs = upper; why = t <= s.TL ? "S_D1/(T·R/Ie), upper limit" : "S_D1·T_L/(T²·R/Ie), upper limit"; }
-        double lower = Math.Max(0.044 * s.Sds * s.Ie, 0.01);
-        if (cs < lower) { cs = lower; why = "0.044·S_DS·Ie ≥ 0.01, lower limit"; }
-        if (s.S1 >= 0.6 && cs < 0.5 * s.S1 / rie) { cs = 0.5 * s.S1 / rie; why = "0.5·S_1/(R/Ie), lower limit where S_1 ≥ 0.6 g"; }
+        if (x.Upper < cs) { cs = x.Upper; why = x.UpperExpression + ", upper limit"; }
+        if (cs < x.Lower) { cs = x.Lower; why = "0.044·S_DS·Ie ≥ 0.01, lower limit"; }
+        if (cs < x.LowerNearFault) { cs = x.LowerNearFault; why = "0.5·S_1/(R/Ie), lower limit where S_1 ≥ 0.6 g"; }
         return (cs, why);
     }
 
