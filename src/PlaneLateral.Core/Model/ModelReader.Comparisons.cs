@@ -11,7 +11,7 @@ public static partial class ModelReader
     {
         // ---- comparisons (docs/comparisons.md) ----
 
-        private static readonly string[] CheckKinds = ["wall-line", "perforated-wall", "frame-stories", "shear-split", "coupled-wall"];
+        private static readonly string[] CheckKinds = ["wall-line", "perforated-wall", "frame-stories", "shear-split", "coupled-wall", "panel-wall"];
 
         private CheckLocation Where(JToken t)
         {
@@ -77,6 +77,7 @@ public static partial class ModelReader
                     "frame-stories" => ReadFrameStories(f, id, desc, tol, at, members, supports),
                     "shear-split" => ReadShearSplit(f, id, desc, tol, at, splits),
                     "coupled-wall" => ReadCoupledWall(f, id, desc, tol, at),
+                    "panel-wall" => ReadPanelWall(f, id, desc, tol, at),
                     null => SkipRest(f),
                     _ => UnknownKind(f, kind),
                 };
@@ -100,7 +101,7 @@ public static partial class ModelReader
 
         private static string KindOf(ComparisonCheck c) => c switch
         {
-            WallLineCheck => "wall-line", PerforatedWallCheck => "perforated-wall", FrameStoriesCheck => "frame-stories", CoupledWallCheck => "coupled-wall", _ => "shear-split",
+            WallLineCheck => "wall-line", PerforatedWallCheck => "perforated-wall", FrameStoriesCheck => "frame-stories", CoupledWallCheck => "coupled-wall", PanelWallCheck => "panel-wall", _ => "shear-split",
         };
 
         private ComparisonCheck? UnknownKind(JsonFields f, string kind)
