@@ -53,6 +53,7 @@ public static class CliApp
             "beside the hand methods. Run with no command to solve the shipped demo model and print its hand-method comparison.")
         {
             solve, validate, CompareCommand.Build(stdout, stderr), CouplingSweepCommand.Build(stdout, stderr), SweepCommand.Build(stdout, stderr), ReportCommand.Build(stdout, stderr),
+            ExportCommand.Build(stdout, stderr),
         };
         root.SetAction(_ =>
         {

@@ -35,6 +35,7 @@ public static class ComparisonStudy
                     FrameStoriesCheck fr => FrameStoryStudy.Rows(model, fr, tol),
                     ShearSplitCheck s => ShearSplitStudy.Rows(model, s, tol, full ??= LinearStaticAnalysis.Run(model)),
                     CoupledWallCheck cw => CoupledWallStudy.Rows(model, cw, tol),
+                    PanelWallCheck pw => PanelWallStudy.Rows(model, pw, tol),
                     _ => throw new InvalidOperationException($"unknown check type {check.GetType().Name}"),
                 });
             }

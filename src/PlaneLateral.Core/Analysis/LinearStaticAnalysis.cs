@@ -93,6 +93,7 @@ public static class LinearStaticAnalysis
             Stiffness = stiffness,
             Notes = Conditioning.WithNote(Notes(model, dofs), condition),
             Conditioning = condition,
+            System = new LinearSystem { Stiffness = k, CaseIds = model.LoadCases.Select(c => c.Id).ToArray(), LoadVectors = loadVectors },
             Panels = model.Panels.Select(p => RunPanel(model, p, options)).ToArray(),
         };
     }

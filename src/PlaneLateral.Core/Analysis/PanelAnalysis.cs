@@ -90,7 +90,7 @@ public static class PanelAnalysis
         double Level(PlaneCaseResult c, int level) => panel.FloorTies ? c.Ux[pm.LevelNodes[level][0]] : pm.LevelNodes[level].Average(i => c.Ux[i]);
         var levelDisp = kept.Select(c => Enumerable.Range(0, pm.Levels.Length).Select(l => Level(c, l)).ToArray()).ToArray();
         double flex = panel.FloorTies ? r.TieFlexibility[^1] : Level(r.Cases[nc], pm.Levels.Length - 1);
-        var analysis = panel.FloorTies ? r : new PlaneAnalysisResult { Dofs = r.Dofs, Solve = r.Solve, Cases = kept, TieFlexibility = r.TieFlexibility };
+        var analysis = panel.FloorTies ? r : new PlaneAnalysisResult { Dofs = r.Dofs, Solve = r.Solve, Cases = kept, TieFlexibility = r.TieFlexibility, System = r.System };
         return new PanelResult { Panel = panel, Mesh = pm, Analysis = analysis, TopStiffness = 1 / flex, LevelDisplacements = levelDisp };
     }
 

@@ -75,6 +75,9 @@ public sealed class PlaneAnalysisResult
 
     /// <summary>Horizontal displacement (m/N) of each floor tie under a unit horizontal force on that tie alone.</summary>
     public required double[] TieFlexibility { get; init; }
+
+    /// <summary>The assembled system (stiffness and one load vector per case given to the analysis), for export (docs/export.md).</summary>
+    public LinearSystem? System { get; init; }
 }
 
 /// <summary>
@@ -173,6 +176,7 @@ public static class PlaneStressAnalysis
             Solve = new SolveSummary(solver.Description, dofs.FreeCount, k.NonZerosLower, factor.FactorNonZeros, cases.Count + flex.Length),
             Cases = results,
             TieFlexibility = flex,
+            System = new LinearSystem { Stiffness = k, CaseIds = cases.Select(c => c.Id).ToArray(), LoadVectors = loads.Select(l => l.F).ToArray() },
         };
     }
 

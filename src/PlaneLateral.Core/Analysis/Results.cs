@@ -22,6 +22,8 @@ public sealed class AnalysisResult
     public IReadOnlyList<PanelResult> Panels { get; init; } = [];
     /// <summary>Condition estimates of the factorised stiffness (see <see cref="Analysis.Conditioning"/>); null when not estimated.</summary>
     public ConditionEstimate? Conditioning { get; init; }
+    /// <summary>The assembled frame system (stiffness and the load cases' vectors), for export (docs/export.md).</summary>
+    public LinearSystem? System { get; init; }
 
     public CaseResult Case(string id) => Cases.First(c => c.Id == id);
 }

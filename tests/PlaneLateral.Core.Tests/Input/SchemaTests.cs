@@ -151,6 +151,9 @@ public class SchemaTests
         ["nothing to solve"] = m => { m.Remove("loadCases"); m.Remove("stiffnessAt"); },
         ["combination without factors"] = m => m["combinations"] = new JArray(new JObject { ["id"] = "C", ["factors"] = new JObject() }),
         ["combination factor as a string"] = m => m["combinations"] = new JArray(new JObject { ["id"] = "C", ["factors"] = new JObject { ["P"] = "1.2" } }),
+        ["panel-wall check without a panel"] = m => m["comparisons"] = new JArray(new JObject { ["id"] = "K", ["kind"] = "panel-wall" }),
+        ["panel-wall check with a shear factor below 1"] = m => m["comparisons"] = new JArray(new JObject { ["id"] = "K", ["kind"] = "panel-wall", ["panel"] = "P", ["shearFactor"] = 0.8 }),
+        ["panel-wall check with an unknown key"] = m => m["comparisons"] = new JArray(new JObject { ["id"] = "K", ["kind"] = "panel-wall", ["panel"] = "P", ["ends"] = "cantilever" }),
     };
 
     public static TheoryData<string> MistakeNames() => new(Mistakes.Keys);
