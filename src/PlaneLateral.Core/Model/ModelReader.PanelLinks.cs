@@ -96,9 +96,15 @@ public static partial class ModelReader
             }
         }
 
-        /// <summary>The frame nodes tied to a panel count as connected; a restraint at one would fight the link.</summary>
-        private void CheckPanelLinkSupports(IReadOnlyList<Support> supports)
+        /// <summary>
+        /// A restraint at a linked frame node would fight the link; the seismic block's period and second-order checks
+        /// work on the frame's stiffness alone, so they are refused beside links until they include the panels.
+        /// </summary>
+        private void CheckPanelLinkSupports(IReadOnlyList<Support> supports, JToken? seismic)
         {
+            if (seismic is not null && _panelLinks.Count > 0)
+                sink.Add(seismic, "the seismic block cannot yet be used with panels linked to the frame: its period and second-order checks see the frame's stiffness only",
+                    "remove \"seismic\" (give the story forces as a load case), or remove the panels' \"links\"");
             foreach (var (panel, link, at) in _panelLinks)
             {
                 var s = supports.FirstOrDefault(x => x.Node == link.Node);

@@ -118,7 +118,7 @@ public static partial class ModelReader
             var seismic = ReadSeismic(f, building, nodes, supports, cases, combos);
             var comparisons = ReadComparisons(f.Objects("comparisons", false, "give \"comparisons\" as an array of checks, e.g. [{\"id\": \"...\", \"kind\": \"wall-line\", \"members\": [...]}] (docs/comparisons.md)"), members, supports, cases);
             var panels = ReadPanels(f.Objects("panels", false, "give \"panels\" as an array of objects"), materials);
-            CheckPanelLinkSupports(supports);   // ModelReader.PanelLinks.cs
+            CheckPanelLinkSupports(supports, f.Token("seismic"));   // ModelReader.PanelLinks.cs
             f.RejectUnknownKeys();
 
             CheckConnectivity(nodes, members);

@@ -93,6 +93,16 @@ public class PanelLinkInputTests
     }
 
     [Fact]
+    public void ASeismicBlockBesideLinksIsRefused()
+    {
+        // Its period and second-order checks would see the frame's stiffness only (docs/panels.md).
+        var o = ToJObject(PanelLinkTests.SlenderWall(1, 6, 10));
+        o["seismic"] = new Newtonsoft.Json.Linq.JObject();
+        var e = Assert.Throws<ModelInputException>(() => ModelReader.Parse(o.ToString(), "test.json"));
+        Assert.Contains(e.Diagnostics, d => d.JsonPath == "$.seismic" && d.Problem.Contains("cannot yet be used with panels linked"));
+    }
+
+    [Fact]
     public void AFrameNodeLinkedToAPanelAndNothingElseCountsAsConnected()
     {
         // Without the link, node "T" would be refused as unconnected (ModelReader's connectivity check).
