@@ -1,6 +1,7 @@
 using PlaneLateral.Analysis;
 using PlaneLateral.Model;
 using PlaneLateral.Output;
+using PlaneLateral.Tests.Input;
 using static PlaneLateral.Tests.TestModels;
 
 namespace PlaneLateral.Tests.Panels;
@@ -100,6 +101,38 @@ public class PanelLinkInputTests
         o["seismic"] = new Newtonsoft.Json.Linq.JObject();
         var e = Assert.Throws<ModelInputException>(() => ModelReader.Parse(o.ToString(), "test.json"));
         Assert.Contains(e.Diagnostics, d => d.JsonPath == "$.seismic" && d.Problem.Contains("cannot yet be used with panels linked"));
+    }
+
+    [Fact]
+    public void AOneNodeSegmentLeavesTheFrameNodeFreeToTurnAndTheMechanismIsNamed()
+    {
+        // One panel node on the segment restrains the frame node's u and v through the rigid arm but not its rotation
+        // about that point; with no member there the node turns freely (a mechanism, common practice), named by node and DOF.
+        var o = ToJObject(PanelLinkTests.SlenderWall(1, 6, 10));
+        o["panels"]![0]!["links"] = Newtonsoft.Json.Linq.JArray.FromObject(new[] { new { node = "T", edge = "top", from = 0.5, to = 0.5 } });
+        var e = Assert.Throws<UnstableModelException>(() => LinearStaticAnalysis.Run(ModelReader.Parse(o.ToString(), "test.json")));
+        Assert.Contains("T rz", e.Message);
+    }
+
+    [Fact]
+    public void TheShippedDemoSolvesFromTheCommandLineWithALinkTable()
+    {
+        string out1 = Path.Combine(Path.GetTempPath(), "planelateral-links-" + Environment.ProcessId);
+        try
+        {
+            var (code, stdout, stderr) = CliRun.Run("solve", RepositoryFiles.ModelPath("panels/wall-in-frame.json"), "--out", out1);
+            Assert.True(code == 0, stderr);
+            Assert.Contains("Panel links (frame node to panel edge", stdout);
+            Assert.True(File.Exists(Path.Combine(out1, "panel-links.csv")) && File.Exists(Path.Combine(out1, "panel-link-checks.csv")));
+            var r = LinearStaticAnalysis.Run(ModelReader.ReadFile(RepositoryFiles.ModelPath("panels/wall-in-frame.json")));
+            AssertChecks(r);
+            PanelLinkTests.AssertWhole(r);
+            // A stiff wall beside a flexible frame takes most of the storey shear through the drag beams, and the frame
+            // keeps a positive share of the 95 kN applied to it (common practice).
+            double passed = r.PanelLinks!.Cases[0].Forces.Sum(f => f.Fx);
+            Assert.InRange(passed, 0.5 * 95e3, 95e3);
+        }
+        finally { if (Directory.Exists(out1)) Directory.Delete(out1, true); }
     }
 
     [Fact]
