@@ -63,7 +63,8 @@ public class PanelLinkTests
         // above the wall adds its own cantilever deflection P c³/(3 E I_c) + P c/(G A_s) to the wall top's deflection and
         // rotation carried up the column, δ_T + θ_T·c. Checked two ways: exactly (round-off) with the wall top's δ_T and θ_T
         // as the model gives them, and against the beam formulas for the wall under the shear P and the moment P·c
-        // (δ_T = P h³/3EI + P h/κGA + P c h²/2EI, θ_T = P h²/2EI + P c h/EI), within 1 %.
+        // (δ_T = P h³/3EI + P h/κGA + P c h²/2EI, θ_T = P h²/2EI + P c h/EI), within 1 % for the
+        // same reasons as above (measured: 0.09 % stiffer).
         double l = 1, h = 6, c = 3, p = 50e3;
         var model = SlenderWall(l, h, p / 1000, extraNodes: [new { id = "C", x = l / 2, y = h + c }],
             members: [new { id = "COL", start = "T", end = "C", section = "COL", material = "C" }], loaded: "C");
