@@ -55,6 +55,7 @@ internal static class SolveReport
         }
         sb.Append(BuildingReport.Render(r));
         sb.Append(PanelReport.Render(r));
+        sb.Append(PanelLinkReport.Render(r));
         sb.Append(SeismicReport.Render(r));
         sb.Append($"\nCaution: {ResultFiles.Caution}\n");
         return sb.ToString();

@@ -20,7 +20,7 @@ public sealed record AnalysisOptions
 /// every stiffness point on that factor, superpose the combinations, and check each result (residual and global
 /// equilibrium).
 /// </summary>
-public static class LinearStaticAnalysis
+public static partial class LinearStaticAnalysis
 {
     /// <exception cref="UnstableModelException">The model is a mechanism.</exception>
     /// <exception cref="ModelInputException">A load acts on a DOF that nothing can resist (e.g. a moment at a pinned-only joint).</exception>
@@ -31,9 +31,11 @@ public static class LinearStaticAnalysis
         var solver = options.Solver ?? DefaultSolver.Create();
         var elements = model.Members.Select(m => new FrameElement(m, model.Nodes[m.Start], model.Nodes[m.End])).ToArray();
         var dofs = DofMap.Build(model, elements);
+        var links = LinkedPanels.Prepare(model, options);   // wall panels tied to frame nodes (LinearStaticAnalysis.PanelLinks.cs)
+        if (links is not null) dofs = dofs.WithAttachedRotations(links.Masters);
         CheckLoadsOnHeldRotations(model, dofs);
 
-        var k = Assemble(model, elements, dofs);
+        var k = links is null ? Assemble(model, elements, dofs) : links.Assemble(model, elements, dofs);
         var factor = solver.Factorize(k, options.PivotTolerance);
         if (factor.PivotFailures.Count > 0) throw Unstable(model, dofs, factor);
         double kNorm = k.InfinityNorm();
@@ -41,6 +43,7 @@ public static class LinearStaticAnalysis
 
         var memberLoads = model.LoadCases.Select(c => GroupByMember(c, model.Members.Count)).ToArray();
         var loadVectors = model.LoadCases.Select((c, i) => LoadVector(model, elements, dofs, c, memberLoads[i])).ToArray();
+        links?.AddFixedEndForces(loadVectors, dofs);
 
         var cases = new List<CaseResult>();
         var solutions = new List<double[]>();
@@ -84,6 +87,7 @@ public static class LinearStaticAnalysis
         }
 
         CheckFinite(model, cases, stiffness);
+        var linkResults = links?.Finish(model, elements, dofs, cases, options);
         return new AnalysisResult
         {
             Model = model,
@@ -93,8 +97,10 @@ public static class LinearStaticAnalysis
             Stiffness = stiffness,
             Notes = Conditioning.WithNote(Notes(model, dofs), condition),
             Conditioning = condition,
+            // With linked panels, K and the load vectors are the frame's with the panels condensed onto their frame nodes.
             System = new LinearSystem { Stiffness = k, CaseIds = model.LoadCases.Select(c => c.Id).ToArray(), LoadVectors = loadVectors },
-            Panels = model.Panels.Select(p => RunPanel(model, p, options)).ToArray(),
+            Panels = model.Panels.Select(p => links?.Result(p) ?? RunPanel(model, p, options)).ToArray(),
+            PanelLinks = linkResults,
         };
     }
 
@@ -120,6 +126,13 @@ public static class LinearStaticAnalysis
     public static SymmetricSparseMatrix Assemble(StructureModel model, IReadOnlyList<FrameElement> elements, DofMap dofs)
     {
         var builder = new SymmetricMatrixBuilder(dofs.FreeCount, 21 * elements.Count + dofs.FreeCount);
+        AddFrame(builder, model, elements, dofs);
+        return builder.Build();
+    }
+
+    /// <summary>Adds the members and support springs to a builder whose first equations are the frame's.</summary>
+    private static void AddFrame(SymmetricMatrixBuilder builder, StructureModel model, IReadOnlyList<FrameElement> elements, DofMap dofs)
+    {
         foreach (var e in elements) builder.AddElement(dofs.ElementEquations(e.Member), e.GlobalStiffness);
         foreach (var s in model.Supports)
             for (int d = 0; d < 3; d++)
@@ -128,7 +141,6 @@ public static class LinearStaticAnalysis
                 int eq = dofs.Equation(s.Node, (Dof)d);
                 if (ks > 0 && eq >= 0) builder.AddDiagonal(eq, ks);
             }
-        return builder.Build();
     }
 
     /// <summary>

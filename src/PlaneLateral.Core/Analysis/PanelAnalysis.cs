@@ -53,6 +53,33 @@ public static class PanelAnalysis
     /// <summary>Solves the panel on a given mesh (from <see cref="PanelMesher.Mesh"/>).</summary>
     public static PanelResult Run(WallPanel panel, PanelMesh pm, IReadOnlyList<string> caseIds, AnalysisOptions? options = null, string sourcePath = "<panel>", IReadOnlyList<Combination>? combinations = null)
     {
+        var (problem, cases) = Setup(panel, pm, caseIds, sourcePath);
+        if (!panel.FloorTies)
+            cases.Add(new PlaneLoadCase { Id = "unit top force", EdgeLoads = Spread(pm, pm.Levels.Length - 1, 1, 0) });
+
+        var combos = (combinations ?? []).Select(c => (c.Id, (IReadOnlyList<(int, double)>)c.Factors)).ToArray();
+        var r = PlaneStressAnalysis.Run(problem, cases, options, combos);
+        // Results in model order: the cases, then the combinations; without ties the unit-force case (solved after the
+        // model's cases) is taken out.
+        int nc = caseIds.Count;
+        var kept = panel.FloorTies ? r.Cases : [.. r.Cases.Take(nc), .. r.Cases.Skip(nc + 1)];
+        var levelDisp = kept.Select(c => LevelDisplacements(panel, pm, c)).ToArray();
+        double flex = panel.FloorTies ? r.TieFlexibility[^1] : LevelDisplacement(panel, pm, r.Cases[nc], pm.Levels.Length - 1);
+        var analysis = panel.FloorTies ? r : new PlaneAnalysisResult { Dofs = r.Dofs, Solve = r.Solve, Cases = kept, TieFlexibility = r.TieFlexibility, System = r.System };
+        return new PanelResult { Panel = panel, Mesh = pm, Analysis = analysis, TopStiffness = 1 / flex, LevelDisplacements = levelDisp };
+    }
+
+    /// <summary>Horizontal displacement (m) of a level: with a tie every node of it has the same ux (shared equation); without, the level's mean.</summary>
+    internal static double LevelDisplacement(WallPanel panel, PanelMesh pm, PlaneCaseResult c, int level) =>
+        panel.FloorTies ? c.Ux[pm.LevelNodes[level][0]] : pm.LevelNodes[level].Average(i => c.Ux[i]);
+
+    /// <summary>Horizontal displacement (m) of every level, the top last.</summary>
+    internal static double[] LevelDisplacements(WallPanel panel, PanelMesh pm, PlaneCaseResult c) =>
+        Enumerable.Range(0, pm.Levels.Length).Select(l => LevelDisplacement(panel, pm, c, l)).ToArray();
+
+    /// <summary>The panel's plane-stress problem (base held, floors tied) and its story forces per model load case.</summary>
+    internal static (PlaneStressProblem Problem, List<PlaneLoadCase> Cases) Setup(WallPanel panel, PanelMesh pm, IReadOnlyList<string> caseIds, string sourcePath)
+    {
         var mesh = pm.Mesh;
         var problem = new PlaneStressProblem
         {
@@ -77,21 +104,7 @@ public static class PanelAnalysis
             }
             cases.Add(new PlaneLoadCase { Id = caseIds[c], TieForces = ties, EdgeLoads = edges });
         }
-        if (!panel.FloorTies)
-            cases.Add(new PlaneLoadCase { Id = "unit top force", EdgeLoads = Spread(pm, pm.Levels.Length - 1, 1, 0) });
-
-        var combos = (combinations ?? []).Select(c => (c.Id, (IReadOnlyList<(int, double)>)c.Factors)).ToArray();
-        var r = PlaneStressAnalysis.Run(problem, cases, options, combos);
-        // Results in model order: the cases, then the combinations; without ties the unit-force case (solved after the
-        // model's cases) is taken out.
-        int nc = caseIds.Count;
-        var kept = panel.FloorTies ? r.Cases : [.. r.Cases.Take(nc), .. r.Cases.Skip(nc + 1)];
-        // With a tie every node of the level has the same ux (shared equation); without, the level's mean.
-        double Level(PlaneCaseResult c, int level) => panel.FloorTies ? c.Ux[pm.LevelNodes[level][0]] : pm.LevelNodes[level].Average(i => c.Ux[i]);
-        var levelDisp = kept.Select(c => Enumerable.Range(0, pm.Levels.Length).Select(l => Level(c, l)).ToArray()).ToArray();
-        double flex = panel.FloorTies ? r.TieFlexibility[^1] : Level(r.Cases[nc], pm.Levels.Length - 1);
-        var analysis = panel.FloorTies ? r : new PlaneAnalysisResult { Dofs = r.Dofs, Solve = r.Solve, Cases = kept, TieFlexibility = r.TieFlexibility, System = r.System };
-        return new PanelResult { Panel = panel, Mesh = pm, Analysis = analysis, TopStiffness = 1 / flex, LevelDisplacements = levelDisp };
+        return (problem, cases);
     }
 
     private static int LevelIndex(PanelMesh pm, double level)

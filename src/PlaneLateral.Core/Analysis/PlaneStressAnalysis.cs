@@ -180,12 +180,11 @@ public static class PlaneStressAnalysis
         };
     }
 
-    /// <summary>External nodal forces as applied, prescribed values, and the right-hand side over the unknowns.</summary>
-    private static (double[] Fext, double[] Prescribed, double[] F) Loads(PlaneStressProblem p, DofMap dofs, double[][,] ke, int[][] eqs, PlaneLoadCase c)
+    /// <summary>External nodal forces (N) as applied, index 2·node + (0 for x, 1 for y); a tie force at the tie's first node.</summary>
+    internal static double[] ExternalForces(PlaneStressProblem p, PlaneLoadCase c)
     {
         var mesh = p.Mesh;
-        int n = mesh.NodeCount, nn = mesh.Element.NodeCount;
-        var fext = new double[2 * n];            // external nodal forces as applied (tie forces at the tie's first node)
+        var fext = new double[2 * mesh.NodeCount];
         foreach (var (node, fx, fy) in c.NodalForces) { fext[2 * node] += fx; fext[2 * node + 1] += fy; }
         foreach (var el in c.EdgeLoads)
         {
@@ -195,6 +194,15 @@ public static class PlaneStressAnalysis
             for (int a = 0; a < nodes.Length; a++) { fext[2 * nodes[a]] += fe[2 * a]; fext[2 * nodes[a] + 1] += fe[2 * a + 1]; }
         }
         foreach (var (tie, fx) in c.TieForces) fext[2 * p.HorizontalTies[tie][0]] += fx;
+        return fext;
+    }
+
+    /// <summary>External nodal forces as applied, prescribed values, and the right-hand side over the unknowns.</summary>
+    private static (double[] Fext, double[] Prescribed, double[] F) Loads(PlaneStressProblem p, DofMap dofs, double[][,] ke, int[][] eqs, PlaneLoadCase c)
+    {
+        var mesh = p.Mesh;
+        int n = mesh.NodeCount, nn = mesh.Element.NodeCount;
+        var fext = ExternalForces(p, c);
 
         var prescribed = new double[2 * n];
         foreach (var (node, dof, value) in c.Prescribed)

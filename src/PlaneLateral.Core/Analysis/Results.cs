@@ -20,6 +20,8 @@ public sealed class AnalysisResult
 
     /// <summary>Wall panels solved as plane-stress continua, in model order (none for a frame-only model).</summary>
     public IReadOnlyList<PanelResult> Panels { get; init; } = [];
+    /// <summary>Links between frame nodes and panel edges: link forces and the checks of the whole (null when the model has none).</summary>
+    public PanelLinkResults? PanelLinks { get; init; }
     /// <summary>Condition estimates of the factorised stiffness (see <see cref="Analysis.Conditioning"/>); null when not estimated.</summary>
     public ConditionEstimate? Conditioning { get; init; }
     /// <summary>The assembled frame system (stiffness and the load cases' vectors), for export (docs/export.md).</summary>

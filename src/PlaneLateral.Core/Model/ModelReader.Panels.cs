@@ -89,6 +89,7 @@ public static partial class ModelReader
                     lf.RejectUnknownKeys();
                     if (ci >= 0 && how is not null) loads.Add(new PanelLoad(ci, level, fx, fy, how.Value));
                 }
+                var links = ReadPanelLinks(f, id, length, height);   // ModelReader.PanelLinks.cs
                 f.RejectUnknownKeys();
                 if (id is null || material is null || mesh is null || !(length > 0 && height > 0 && thickness > 0)) continue;
 
@@ -96,7 +97,7 @@ public static partial class ModelReader
                 {
                     Id = id, X0 = x0, Y0 = y0, Length = length, Height = height, Thickness = thickness,
                     MaterialId = material.Id, E = material.E, Nu = material.Nu,
-                    Openings = openings, FloorLevels = levels, FloorTies = ties, Mesh = mesh, Loads = loads,
+                    Openings = openings, FloorLevels = levels, FloorTies = ties, Mesh = mesh, Loads = loads, Links = links,
                 };
                 // Geometry and mesh problems, each at its own key, before any work — unless a number of the geometry
                 // itself failed to read (it would make the layout meaningless; found by the reader fuzzer).
@@ -106,6 +107,7 @@ public static partial class ModelReader
                 if (!geometryRead) continue;
                 foreach (var q in PanelLayout.Check(panel))
                     sink.Add(o.SelectToken(q.Key) ?? o, $"panel \"{id}\": {q.Problem}", q.Fix);
+                CheckPanelLinks(panel, o);
                 list.Add(panel);
             }
             return list;

@@ -119,6 +119,7 @@ public static partial class ModelReader
             var comparisons = ReadComparisons(f.Objects("comparisons", false, "give \"comparisons\" as an array of checks, e.g. [{\"id\": \"...\", \"kind\": \"wall-line\", \"members\": [...]}] (docs/comparisons.md)"), members, supports, cases);
             var panels = ReadPanels(f.Objects("panels", false, "give \"panels\" as an array of objects"), materials);
             CheckPanelWalls(root, panels);
+            CheckPanelLinkSupports(supports, f.Token("seismic"));   // ModelReader.PanelLinks.cs
             f.RejectUnknownKeys();
 
             CheckConnectivity(nodes, members);
@@ -687,6 +688,7 @@ public static partial class ModelReader
             if (sink.Any) return; // members that failed to read would make this report false alarms
             var used = new bool[nodes.Count];
             foreach (var m in members) { used[m.Start] = true; used[m.End] = true; }
+            foreach (var n in PanelLinkedNodes()) used[n] = true;   // tied to a wall panel (ModelReader.PanelLinks.cs)
             for (int i = 0; i < nodes.Count; i++)
                 if (!used[i])
                     sink.Add(_nodeObjects[i], $"node \"{nodes[i].Id}\" is not connected to any member", "connect it with a member, or remove it");

@@ -74,6 +74,29 @@ public sealed record WallPanel
 
     public IReadOnlyList<PanelLoad> Loads { get; init; } = [];
 
+    /// <summary>Rigid links from frame nodes to segments of the panel's edges (none: the panel is solved on its own).</summary>
+    public IReadOnlyList<PanelLink> Links { get; init; } = [];
+
     /// <summary>All levels, the top included (m above the base), ascending.</summary>
     public IReadOnlyList<double> Levels => [.. FloorLevels, Height];
 }
+
+/// <summary>An edge of a wall panel that a frame node may be linked to (the base is held, so it takes no link).</summary>
+public enum PanelEdge
+{
+    /// <summary>The left end (x = 0 of the panel); positions are heights above the base.</summary>
+    Left,
+    /// <summary>The right end (x = length); positions are heights above the base.</summary>
+    Right,
+    /// <summary>The top (y = height); positions are distances from the panel's left end.</summary>
+    Top,
+}
+
+/// <summary>
+/// A rigid link from a frame node to a segment of a panel edge: every panel node on the segment follows the node's
+/// rigid-body motion exactly, u_i = u_n − θ·(y_i − y_n), v_i = v_n + θ·(x_i − x_n) (docs/panels.md, "Panels in a frame").
+/// </summary>
+/// <param name="Node">Index of the frame node (the master).</param>
+/// <param name="From">Start of the segment along the edge (m, from the panel's bottom-left corner: a height on an end, a distance on the top).</param>
+/// <param name="To">End of the segment (m), at or after <paramref name="From"/>.</param>
+public sealed record PanelLink(int Node, PanelEdge Edge, double From, double To);

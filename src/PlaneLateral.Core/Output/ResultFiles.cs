@@ -33,6 +33,7 @@ public static class ResultFiles
         ("stiffness.csv", Stiffness(result)),
         .. BuildingFiles.Render(result),
         .. PanelResultFiles.Render(result),
+        .. PanelLinkFiles.Render(result),
         .. SeismicFiles.Render(result),
     ];
 
