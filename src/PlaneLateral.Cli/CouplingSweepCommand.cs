@@ -4,6 +4,7 @@ using PlaneLateral.Analysis;
 using PlaneLateral.Hand;
 using PlaneLateral.Model;
 using PlaneLateral.Output;
+using PlaneLateral.Reports;
 using PlaneLateral.Studies;
 using PlaneLateral.Units;
 
@@ -11,7 +12,8 @@ namespace PlaneLateral.Cli;
 
 /// <summary>
 /// The "coupling-sweep" command: a coupled-wall check worked out over a range of coupling-beam depths, every model
-/// side by side (closed form, both bounds, wide-column frame with and without shear deformation), written as CSV.
+/// side by side (closed form, both bounds, wide-column frame with and without shear deformation, plane-stress panel),
+/// written as CSV with one top-deflection figure per load (PNG).
 /// </summary>
 internal static class CouplingSweepCommand
 {
@@ -25,9 +27,9 @@ internal static class CouplingSweepCommand
         };
         var outOption = new Option<string?>("--out", "-o")
         {
-            Description = "Folder for coupling-sweep.csv (created if missing). Default: planelateral-results/<model name> in the current folder.",
+            Description = "Folder for coupling-sweep.csv and the figures coupling-sweep-uniform.png, coupling-sweep-top.png (created if missing). Default: planelateral-results/<model name> in the current folder.",
         };
-        var cmd = new Command("coupling-sweep", "Work out a coupled-wall check over a range of coupling-beam depths and write how the hand methods and the FE models part (coupling-sweep.csv).")
+        var cmd = new Command("coupling-sweep", "Work out a coupled-wall check over a range of coupling-beam depths and write how the hand methods and the FE models part (coupling-sweep.csv, one PNG per load).")
         {
             modelArg, checkOption, depthsOption, outOption,
         };
@@ -66,13 +68,16 @@ internal static class CouplingSweepCommand
             if (list.Count == 0) { stderr.Write("--depths is empty.\nFix: give depths such as 0.3,0.6,0.9.\nNothing was written.\n"); return ExitCodes.Usage; }
             depths = list;
         }
-        var files = new List<(string Name, string Text)>();
+        var files = new List<(string Name, byte[] Bytes)>();
+        var figures = new List<(string Name, byte[] Bytes)>();
         var text = new System.Text.StringBuilder();
         try
         {
             foreach (var (load, mag) in CoupledWallStudy.Loads(check))
             {
                 var pts = CoupledWallStudy.OverBeamDepth(check, depths, load, mag, model.SourcePath, u);
+                var figure = CouplingSweepFigures.Deflection(check, load, pts, u);
+                figures.Add((figure.FileName, figure.Png));
                 string csv = CoupledWallStudy.SweepCsv(check, load, pts, u);
                 // One file, both loads: the second load's header and caution lines are dropped.
                 if (text.Length == 0) text.Append(csv[..csv.LastIndexOf("\"# ", StringComparison.Ordinal)]);
@@ -81,12 +86,13 @@ internal static class CouplingSweepCommand
         }
         catch (UnstableModelException e) { stderr.Write(e.Message + "\nNothing was written.\n"); return ExitCodes.Unstable; }
         text.Append("\"# ").Append(ComparisonReport.Caution).Append("\"\n");
-        files.Add(("coupling-sweep.csv", text.ToString()));
+        files.Add(OutputSet.Text("coupling-sweep.csv", text.ToString()));
+        files.AddRange(figures);
         string folder = outDir ?? Path.Combine(Directory.GetCurrentDirectory(), "planelateral-results", Path.GetFileNameWithoutExtension(modelPath));
-        try { AtomicFiles.WriteAll(folder, files); }
+        try { OutputSet.WriteAll(folder, files); }
         catch (IOException e) { stderr.Write($"{e.Message}\nFix: choose a writable folder with --out. No file was replaced.\n"); return ExitCodes.OutputFailed; }
         stdout.Write($"PlaneLateral {ResultFiles.Version}: coupled wall \"{check.Id}\" over {depths.Count} beam depths\n");
-        stdout.Write($"Sweep written to {Path.Combine(folder, "coupling-sweep.csv")}\nCaution: {ComparisonReport.Caution}\n");
+        stdout.Write($"Sweep written to {folder}: {string.Join(", ", files.Select(f => f.Name))}\nCaution: {ComparisonReport.Caution}\n");
         return ExitCodes.Success;
     }
 }

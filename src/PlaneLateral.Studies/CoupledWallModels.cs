@@ -40,8 +40,8 @@ public sealed record CoupledWallResponse(string Model, string Description, IRead
 }
 
 /// <summary>
-/// An FE model of a coupled wall built from the check's dimensions. The wide-column frame is one; a plane-stress panel
-/// model of the same wall is meant to be another implementation, reported as one more FE estimate in the same rows.
+/// An FE model of a coupled wall built from the check's dimensions. The wide-column frame is one; the plane-stress panel
+/// of the same wall (<see cref="PanelCoupledWall"/>) is another, reported as one more FE estimate in the same rows.
 /// </summary>
 public interface ICoupledWallModel
 {

@@ -8,13 +8,20 @@ namespace PlaneLateral.Studies;
 
 /// <summary>
 /// A coupled wall: the continuous-connection closed form (two piers) and the two hand bounds (independent cantilevers,
-/// one solid wall) beside the wide-column frame with and without shear deformation (docs/coupled-walls.md). Every FE
-/// model in <see cref="FeModels"/> is one more estimate in each row; a panel model plugs in there.
+/// one solid wall) beside the wide-column frame with and without shear deformation and the plane-stress panel of the
+/// same wall (docs/coupled-walls.md). Every FE model in <see cref="FeModels"/> is one more estimate in each row.
 /// </summary>
 public static class CoupledWallStudy
 {
     /// <summary>The FE models, in order; the first is the reference for the verdicts.</summary>
-    public static IReadOnlyList<ICoupledWallModel> FeModels { get; } = [new WideColumnFrame(true), new WideColumnFrame(false)];
+    public static IReadOnlyList<ICoupledWallModel> FeModels { get; } = [new WideColumnFrame(true), new WideColumnFrame(false), new PanelCoupledWall()];
+
+    /// <summary>The FE models that can represent the check (the panel cannot where <see cref="PanelCoupledWall.Unsupported"/> says why).</summary>
+    public static IEnumerable<ICoupledWallModel> ModelsFor(CoupledWallCheck c) =>
+        FeModels.Where(m => m is not PanelCoupledWall p || p.Unsupported(c) is null);
+
+    private static string? PanelSkipped(CoupledWallCheck c) =>
+        FeModels.OfType<PanelCoupledWall>().Select(p => p.Unsupported(c)).FirstOrDefault(w => w is not null);
 
     /// <summary>The loads the check asks for (SI magnitudes).</summary>
     public static IEnumerable<(CoupledWallLoad Load, double Magnitude)> Loads(CoupledWallCheck c)
@@ -55,13 +62,13 @@ public static class CoupledWallStudy
         {
             string lname = load == CoupledWallLoad.Uniform ? "uniform load" : "top load";
             double resultant = load == CoupledWallLoad.Uniform ? mag * c.Height : mag;
-            var fe = FeModels.Select(m => m.Solve(c, load, mag, model.SourcePath, u)).ToList();
+            var fe = ModelsFor(c).Select(m => m.Solve(c, load, mag, model.SourcePath, u)).ToList();
             var feShear = fe[0];
             var feFlex = fe.First(r => r.Model == new WideColumnFrame(false).Name);
             // Stiffness = total lateral load / top deflection: the same quantity as the other checks' rows.
             List<FeEstimate> Stiff() => fe.Select(r => new FeEstimate(r.Model, ComparisonStudy.Stiffness(u, resultant / r.TopDeflection),
                 r.Description + "; stiffness = total lateral load / top deflection")).ToList();
-            string detail = FeDetail(u, fe);
+            string detail = FeDetail(u, fe) + (PanelSkipped(c) is string why ? $"\n{PanelCoupledWall.ModelName}: not built, {why}" : "");
             double docFe = feShear.DegreeOfCoupling, docFlex = feFlex.DegreeOfCoupling;
             var (cant, solid) = Bounds(c, load, mag);
             var pair = Pair(c);
@@ -194,7 +201,8 @@ public static class CoupledWallStudy
 
     /// <summary>One point of the sweep, SI.</summary>
     public sealed record SweepPoint(double BeamDepth, double SpanToDepth, double KAlphaH, double ClosedForm, double ClosedFormBeamShear,
-        double Cantilevers, double Solid, double FeShear, double FeNoShear, double DocClosedForm, double DocClosedFormBeamShear, double DocFeShear, double DocFeNoShear);
+        double Cantilevers, double Solid, double FeShear, double FeNoShear, double DocClosedForm, double DocClosedFormBeamShear, double DocFeShear, double DocFeNoShear,
+        double FePanel = double.NaN, double DocPanel = double.NaN);
 
     /// <summary>Default depths: 12 from 5% to 90% of the story height.</summary>
     public static IReadOnlyList<double> DefaultDepths(CoupledWallCheck c) =>
@@ -212,7 +220,8 @@ public static class CoupledWallStudy
         {
             if (!(d > 0 && d < c.StoryHeight)) throw new ArgumentException($"A beam depth of {d} m is not between 0 and the story height {c.StoryHeight} m.");
             var w = c with { BeamDepth = d };
-            var fe = FeModels.Select(m => m.Solve(w, load, magnitude, source, units)).ToList();
+            var fe = ModelsFor(w).Select(m => m.Solve(w, load, magnitude, source, units)).ToList();
+            var panel = fe.FirstOrDefault(r => r.Model == PanelCoupledWall.ModelName);
             var (cant, solid) = Bounds(w, load, magnitude);
             var pair = Pair(w);
             double nan = double.NaN;
@@ -220,7 +229,8 @@ public static class CoupledWallStudy
             CoupledWallResult? cms = pair is null ? null : CoupledWalls.ContinuousMedium(Pair(w, true)!, load, magnitude);
             double clear = w.Piers[1].X - w.Piers[0].X - w.Piers[0].Length;
             list.Add(new SweepPoint(d, clear / d, cm?.KAlphaH ?? nan, cm?.TopDeflection ?? nan, cms?.TopDeflection ?? nan, cant.Value, solid.Value,
-                fe[0].TopDeflection, fe[1].TopDeflection, cm?.DegreeOfCoupling ?? nan, cms?.DegreeOfCoupling ?? nan, fe[0].DegreeOfCoupling, fe[1].DegreeOfCoupling));
+                fe[0].TopDeflection, fe[1].TopDeflection, cm?.DegreeOfCoupling ?? nan, cms?.DegreeOfCoupling ?? nan, fe[0].DegreeOfCoupling, fe[1].DegreeOfCoupling,
+                panel?.TopDeflection ?? nan, panel?.DegreeOfCoupling ?? nan));
         }
         return list;
     }
@@ -233,12 +243,12 @@ public static class CoupledWallStudy
         string L(double v) => F(u.FromSI(v, Quantity.Length));
         string lu = u.LengthSymbol;
         var sb = new StringBuilder();
-        sb.Append($"check,load,beam_depth_{lu},clear_span_to_depth,k_alpha_H,top_deflection_{lu}_continuous_medium,top_deflection_{lu}_continuous_medium_beam_shear,top_deflection_{lu}_independent_cantilevers,top_deflection_{lu}_one_solid_wall,top_deflection_{lu}_wide_column,top_deflection_{lu}_wide_column_no_shear,coupling_continuous_medium,coupling_continuous_medium_beam_shear,coupling_wide_column,coupling_wide_column_no_shear\n");
+        sb.Append($"check,load,beam_depth_{lu},clear_span_to_depth,k_alpha_H,top_deflection_{lu}_continuous_medium,top_deflection_{lu}_continuous_medium_beam_shear,top_deflection_{lu}_independent_cantilevers,top_deflection_{lu}_one_solid_wall,top_deflection_{lu}_wide_column,top_deflection_{lu}_wide_column_no_shear,coupling_continuous_medium,coupling_continuous_medium_beam_shear,coupling_wide_column,coupling_wide_column_no_shear,top_deflection_{lu}_plane_stress_panel,coupling_plane_stress_panel\n");
         string ln = load == CoupledWallLoad.Uniform ? "uniform" : "top";
         foreach (var p in points)
             sb.Append(string.Join(",", c.Id.Contains(',') ? $"\"{c.Id.Replace("\"", "\"\"")}\"" : c.Id, ln, L(p.BeamDepth), F(p.SpanToDepth), F(p.KAlphaH),
                 L(p.ClosedForm), L(p.ClosedFormBeamShear), L(p.Cantilevers), L(p.Solid), L(p.FeShear), L(p.FeNoShear),
-                F(p.DocClosedForm), F(p.DocClosedFormBeamShear), F(p.DocFeShear), F(p.DocFeNoShear))).Append('\n');
+                F(p.DocClosedForm), F(p.DocClosedFormBeamShear), F(p.DocFeShear), F(p.DocFeNoShear), L(p.FePanel), F(p.DocPanel))).Append('\n');
         sb.Append('"').Append("# ").Append(ComparisonReport.Caution.Replace("\"", "\"\"")).Append("\"\n");
         return sb.ToString();
     }

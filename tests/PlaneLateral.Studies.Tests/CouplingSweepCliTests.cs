@@ -29,8 +29,14 @@ public class CouplingSweepCliTests
         Assert.Equal(1 + 2 * 3 + 1, lines.Length);   // header, two loads × three depths, caution
         Assert.StartsWith("check,load,beam_depth_m", lines[0]);
         Assert.Contains("licensed engineer", lines[^1]);
+        // The plane-stress panel's two columns come last and are filled for every depth (docs/coupled-walls.md §7).
+        Assert.EndsWith("top_deflection_m_plane_stress_panel,coupling_plane_stress_panel", lines[0]);
+        Assert.All(lines[1..^1], l => Assert.False(l.EndsWith(',') || l.Split(',')[^2].Length == 0, l));
+        var pngs = new[] { "coupling-sweep-uniform.png", "coupling-sweep-top.png" }.Select(n => File.ReadAllBytes(Path.Combine(dir, n))).ToArray();
+        Assert.All(pngs, b => Assert.Equal(new byte[] { 0x89, (byte)'P', (byte)'N', (byte)'G' }, b[..4]));
         Assert.Equal(0, Run("coupling-sweep", DemoPath, "--depths", "0.3,0.75,1.5", "--out", dir).Code);
         Assert.Equal(first, File.ReadAllText(Path.Combine(dir, "coupling-sweep.csv")));
+        Assert.Equal(pngs[0], File.ReadAllBytes(Path.Combine(dir, "coupling-sweep-uniform.png")));
         Directory.Delete(dir, true);
     }
 
@@ -54,6 +60,8 @@ public class CouplingSweepCliTests
         var (code, output, err) = Run("compare", DemoPath, "--out", dir);
         Assert.True(code == 0, err);
         Assert.Contains("stiffness, continuous medium", output);
+        Assert.Contains("plane-stress panel", output);   // the panel's estimate in every row (docs/coupled-walls.md §7)
+        Assert.Contains("\"plane-stress panel\"", File.ReadAllText(Path.Combine(dir, "comparisons.json")));
         Assert.Equal(0, Run("solve", DemoPath, "--out", dir).Code);
         Directory.Delete(dir, true);
     }
