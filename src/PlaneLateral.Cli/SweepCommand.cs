@@ -26,24 +26,31 @@ internal static class SweepCommand
         var thickness = new Option<double?>("--thickness") { Description = "Wall thickness t in LENGTH. Default 8 in in the chosen unit." };
         var shearFactor = new Option<double>("--shear-factor") { Description = "Shear form factor f ≥ 1, shear area A/f.", DefaultValueFactory = _ => ShearForm.RectangleDefault };
         var tol = new Option<string?>("--tolerance") { Description = "Band on FE/hand − 1, as 0.10 or 10%. Default 0.10." };
+        var noPanel = new Option<bool>("--no-panel") { Description = "Leave out the plane-stress panel (faster); the Timoshenko line members become the reference." };
         var outOption = new Option<string?>("--out", "-o") { Description = "Folder for sweep.csv, sweep-ratio.png and sweep-shear-share.png. Default planelateral-results/sweep." };
         var cmd = new Command("sweep",
             "Vary a solid wall's aspect ratio h/l over a range, for cantilever and fixed-fixed ends, and set the hand pier formula (flexural, shear, total) beside the finite-element stiffness at every point; write a CSV and two PNG figures.")
         {
-            from, to, points, spacing, ends, units, material, e, g, nu, length, thickness, shearFactor, tol, outOption,
+            from, to, points, spacing, ends, units, material, e, g, nu, length, thickness, shearFactor, tol, noPanel, outOption,
         };
         cmd.SetAction(p =>
         {
             var o = new SweepArgs(p.GetValue(from), p.GetValue(to), p.GetValue(points), p.GetValue(spacing)!, p.GetValue(ends)!,
                 p.GetValue(units)!, p.GetValue(material)!, p.GetValue(e), p.GetValue(g), p.GetValue(nu), p.GetValue(length),
-                p.GetValue(thickness), p.GetValue(shearFactor), p.GetValue(tol), p.GetValue(outOption));
+                p.GetValue(thickness), p.GetValue(shearFactor), p.GetValue(tol), p.GetValue(outOption)) { NoPanel = p.GetValue(noPanel) };
             return Run(o, stdout, stderr);
         });
         return cmd;
     }
 
     internal sealed record SweepArgs(double From, double To, int Points, string Spacing, string Ends, string Units, string Material,
-        double? E, double? G, double? Nu, double? Length, double? Thickness, double ShearFactor, string? Tolerance, string? Out);
+        double? E, double? G, double? Nu, double? Length, double? Thickness, double ShearFactor, string? Tolerance, string? Out)
+    {
+        /// <summary>True: the line members only (no plane-stress panel).</summary>
+        public bool NoPanel { get; init; }
+
+        public IReadOnlyList<ISweepFeModel> Models() => AspectSweep.DefaultModels(panel: !NoPanel);
+    }
 
     /// <summary>Turns the command line into a spec, listing every problem at once.</summary>
     internal static SweepSpec? ToSpec(SweepArgs a, List<string> problems)
@@ -80,7 +87,7 @@ internal static class SweepCommand
         double len = a.Length ?? u.FromSI(240 * 0.0254, Quantity.Length);
         double t = a.Thickness ?? u.FromSI(8 * 0.0254, Quantity.Length);
         var spec = new SweepSpec(a.From, a.To, a.Points, spacing, u, len, t, eVal, gVal, matName, a.ShearFactor, ends, tol);
-        if (problems.Count == 0) problems.AddRange(AspectSweep.Problems(spec));
+        if (problems.Count == 0) problems.AddRange(AspectSweep.Problems(spec, a.Models()));
         return problems.Count == 0 ? spec : null;
     }
 
@@ -98,7 +105,7 @@ internal static class SweepCommand
         // Progress only for a person watching: stderr is the console and a terminal.
         bool terminal = ReferenceEquals(stderr, Console.Error) && !Console.IsErrorRedirected;
         var progress = terminal ? new TerminalProgress(stderr, total) : null;
-        var result = AspectSweep.Run(spec, progress);
+        var result = AspectSweep.Run(spec, a.Models(), progress);
         progress?.Finish();
 
         string folder = a.Out ?? Path.Combine(Directory.GetCurrentDirectory(), "planelateral-results", "sweep");
@@ -117,13 +124,26 @@ internal static class SweepCommand
         stdout.Write($"Wall      l = {spec.Length.ToString("G6", CultureInfo.InvariantCulture)} {u.LengthSymbol}, t = {spec.Thickness.ToString("G6", CultureInfo.InvariantCulture)} {u.LengthSymbol}, f = {spec.FormFactor.ToString("G4", CultureInfo.InvariantCulture)}\n");
         stdout.Write($"Material  {spec.MaterialName}: E = {spec.E.ToString("G6", CultureInfo.InvariantCulture)}, G = {spec.G.ToString("G6", CultureInfo.InvariantCulture)} {u.Label(Quantity.Stress)}\n");
         stdout.Write($"Range     h/l {spec.From.ToString("G6", CultureInfo.InvariantCulture)} to {spec.To.ToString("G6", CultureInfo.InvariantCulture)}, {spec.Points} points ({a.Spacing}), {string.Join(" and ", spec.Ends.Select(SweepFiles.EndsName))}\n\n");
-        var t = new TextTable("ends", "h/l", "hand k", "FE k", "FE/hand", "shear share (hand)", "verdict").Numeric(1, 2, 3, 4, 5);
+        bool two = result.FeModels.Count > 1;
+        var t = two
+            ? new TextTable("ends", "h/l", "hand k", "FE k", "est. error", "FE/hand", "FE/flexure", "line FE/hand", "shear share (hand)", "verdict").Numeric(1, 2, 3, 4, 5, 6, 7, 8)
+            : new TextTable("ends", "h/l", "hand k", "FE k", "FE/hand", "FE/flexure", "shear share (hand)", "verdict").Numeric(1, 2, 3, 4, 5, 6);
+        string R(double v) => v.ToString("0.0000", CultureInfo.InvariantCulture);
         foreach (var p in result.Points)
-            t.Add(SweepFiles.EndsName(p.Ends), p.AspectRatio.ToString("0.000", CultureInfo.InvariantCulture), TextTable.Num(p.Hand.Stiffness), TextTable.Num(p.Fe[0].Value),
-                p.Ratio.ToString("0.0000", CultureInfo.InvariantCulture), (100 * p.Hand.ShearShare).ToString("0.0", CultureInfo.InvariantCulture) + "%",
-                Studies.ComparisonRow.VerdictWords(p.Verdict, Studies.ComparedQuantity.Stiffness));
-        stdout.Write($"Stiffness in {u.Label(Quantity.TranslationalStiffness)}; FE = {result.FeModels[0]}\n");
+        {
+            var cells = new List<string> { SweepFiles.EndsName(p.Ends), p.AspectRatio.ToString("0.000", CultureInfo.InvariantCulture), TextTable.Num(p.Hand.Stiffness), TextTable.Num(p.Fe[0].Value) };
+            if (two) cells.Add(p.FeErrors.Count > 0 && p.FeErrors[0] is double err ? (100 * err).ToString("0.000", CultureInfo.InvariantCulture) + "%" : "-");
+            cells.Add(R(p.Ratio));
+            cells.Add(R(SweepDepartures.Ratio(p, SweepHandFormula.FlexureOnly)));
+            if (two) cells.Add(R(p.Fe[1].Value / p.Hand.Stiffness));
+            cells.Add((100 * p.Hand.ShearShare).ToString("0.0", CultureInfo.InvariantCulture) + "%");
+            cells.Add(Studies.ComparisonRow.VerdictWords(p.Verdict, Studies.ComparedQuantity.Stiffness));
+            t.Add([.. cells]);
+        }
+        stdout.Write($"Stiffness in {u.Label(Quantity.TranslationalStiffness)}; FE = {result.FeModels[0]} (the reference){(two ? $"; line = {result.FeModels[1]}" : "")}\n");
         stdout.Write(t.Render());
+        stdout.Write("\nWhere each hand formula leaves the tolerance band of the reference:\n");
+        foreach (var d in SweepDepartures.Find(result)) stdout.Write($"  {d.Words(spec.From, spec.To)}\n");
         stdout.Write($"\nCaution: {SweepFiles.Caution}\n");
         stdout.Write($"\nSweep written to {folder}: {string.Join(", ", written.Select(Path.GetFileName))}\n");
         return ExitCodes.Success;

@@ -135,6 +135,15 @@ public sealed record SweepPoint(int Index, EndFixity Ends, double AspectRatio, d
     public double Ratio => Fe[0].Value / Hand.Stiffness;
 
     public Verdict Verdict => ComparisonRow.Judge(Ratio, Tolerance);
+
+    /// <summary>Hand stiffness from the flexural term alone (F/L): 1 / flexural deflection under the unit force.</summary>
+    public double HandFlexuralStiffness => 1 / Hand.FlexuralDeflection;
+
+    /// <summary>
+    /// Estimated relative discretisation error of each FE estimate, in the order of <see cref="Fe"/>: null for a model
+    /// that is exact for its own theory or does not report one (empty when no model reports one).
+    /// </summary>
+    public IReadOnlyList<double?> FeErrors { get; init; } = [];
 }
 
 /// <summary>A finished sweep: the spec, the FE model names in order, and the points (for each end condition in the spec's order, h/l ascending).</summary>
@@ -176,13 +185,29 @@ public static class AspectSweep
     /// <summary>Runs the sweep with the Timoshenko line-member model only.</summary>
     public static SweepResult Run(SweepSpec spec, IProgress<int>? progress = null) => Run(spec, [new LineMemberWallModel()], progress);
 
+    /// <summary>
+    /// The sweep command's models: the converged plane-stress panel (the reference), then the Timoshenko line members;
+    /// without the panel, the line members alone.
+    /// </summary>
+    public static IReadOnlyList<ISweepFeModel> DefaultModels(bool panel = true) =>
+        panel ? [new PanelWallModel(), new LineMemberWallModel()] : [new LineMemberWallModel()];
+
+    /// <summary>The problems with a spec for these models: <see cref="Problems(SweepSpec)"/> and each converged model's own.</summary>
+    public static IReadOnlyList<string> Problems(SweepSpec s, IReadOnlyList<ISweepFeModel> models)
+    {
+        var p = Problems(s).ToList();
+        if (p.Count == 0)
+            foreach (var m in models.OfType<IConvergedSweepFeModel>()) p.AddRange(m.Problems(s));
+        return p;
+    }
+
     /// <summary>Runs the sweep on every core.</summary>
     /// <param name="models">FE models in order (the first is the reference); at least one.</param>
     /// <param name="progress">Told the number of finished points (of Points × Ends) as they finish; may be called from any thread.</param>
     /// <exception cref="ArgumentException">The spec has problems (<see cref="Problems"/>), all listed.</exception>
     public static SweepResult Run(SweepSpec spec, IReadOnlyList<ISweepFeModel> models, IProgress<int>? progress = null)
     {
-        var problems = Problems(spec);
+        var problems = Problems(spec, models);
         if (problems.Count > 0) throw new ArgumentException(string.Join("\n", problems));
         if (models.Count == 0) throw new ArgumentException("the sweep needs at least one FE model.");
         var u = spec.Units;
@@ -201,13 +226,21 @@ public static class AspectSweep
             var hand = Piers.Rectangular(ends, 1.0, hUser, spec.Length, spec.Thickness, spec.E, spec.G, spec.FormFactor);
             var wall = new SweepWall(aspect, aspect * l, l, t, e, g, spec.FormFactor, ends);
             var fe = new FeEstimate[models.Count];
+            var errors = new double?[models.Count];
             for (int m = 0; m < models.Count; m++)
             {
-                var (k1, share) = models[m].Solve(wall);
+                double k1;
+                double? share;
+                if (models[m] is IConvergedSweepFeModel converged)
+                {
+                    var sol = converged.SolveConverged(wall);
+                    (k1, share, errors[m]) = (sol.Stiffness, sol.ShearShare, sol.EstimatedError);
+                }
+                else (k1, share) = models[m].Solve(wall);
                 fe[m] = new FeEstimate(models[m].Name, u.FromSI(k1, Quantity.TranslationalStiffness), models[m].Description,
                     share is double s ? 1 - s : null, share);
             }
-            points[k] = new SweepPoint(k, ends, aspect, hUser, hand, fe, spec.Tolerance);
+            points[k] = new SweepPoint(k, ends, aspect, hUser, hand, fe, spec.Tolerance) { FeErrors = errors };
             progress?.Report(Interlocked.Increment(ref done));
         });
         return new SweepResult(spec, models.Select(m => m.Name).ToArray(), models.Select(m => m.Description).ToArray(), points);

@@ -38,14 +38,18 @@ public static class SweepFiles
         var sb = new StringBuilder();
         sb.Append($"point,ends,h/l,height [{len}],hand flexural deflection [{flex}],hand shear deflection [{flex}],hand total deflection [{flex}],hand stiffness [{k}],hand flexural share,hand shear share");
         for (int m = 0; m < r.FeModels.Count; m++)
-            sb.Append($",fe{m + 1} stiffness [{k}],fe{m + 1} FE/hand,fe{m + 1} shear share");
+            sb.Append($",fe{m + 1} stiffness [{k}],fe{m + 1} FE/hand,fe{m + 1} shear share,fe{m + 1} FE/hand flexure only,fe{m + 1} estimated error");
         sb.Append(",verdict\n");
         foreach (var p in r.Points)
         {
             var h = p.Hand;
             sb.Append($"{p.Index + 1},{EndsName(p.Ends)},{F(p.AspectRatio)},{F(p.Height)},{F(h.FlexuralDeflection)},{F(h.ShearDeflection)},{F(h.TotalDeflection)},{F(h.Stiffness)},{F(h.FlexuralShare)},{F(h.ShearShare)}");
-            foreach (var fe in p.Fe)
-                sb.Append($",{F(fe.Value)},{F(fe.Value / h.Stiffness)},{(fe.ShearShare is double sh ? F(sh) : "")}");
+            for (int m = 0; m < p.Fe.Count; m++)
+            {
+                var fe = p.Fe[m];
+                double? err = m < p.FeErrors.Count ? p.FeErrors[m] : null;
+                sb.Append($",{F(fe.Value)},{F(fe.Value / h.Stiffness)},{(fe.ShearShare is double sh ? F(sh) : "")},{F(fe.Value * h.FlexuralDeflection)},{(err is double er ? F(er) : "")}");
+            }
             sb.Append(',').Append(ComparisonRow.VerdictWords(p.Verdict, ComparedQuantity.Stiffness)).Append('\n');
         }
         for (int m = 0; m < r.FeModels.Count; m++)
@@ -53,6 +57,8 @@ public static class SweepFiles
         sb.Append($"# wall: length {F(s.Length)} {len}, thickness {F(s.Thickness)} {len}; material {s.MaterialName}: E = {F(s.E)} {u.Label(Quantity.Stress)}, G = {F(s.G)} {u.Label(Quantity.Stress)}; shear form factor f = {F(s.FormFactor)}\n");
         sb.Append($"# hand: Piers.Rectangular, cantilever P h^3/(3EI) or fixed-fixed P h^3/(12EI) plus f P h/(AG), I = t l^3/12, A = t l (elementary beam theory with Timoshenko's shear term; Gere & Timoshenko, Mechanics of Materials)\n");
         sb.Append($"# tolerance: |FE/hand - 1| <= {F(s.Tolerance)}; {CsvField(producedBy)}\n");
+        foreach (var d in SweepDepartures.Find(r))
+            sb.Append($"# departure: {d.Words(s.From, s.To)}\n");
         sb.Append($"# caution: {Caution}\n");
         return sb.ToString();
     }
@@ -69,6 +75,7 @@ public static class SweepFiles
         band.LegendText = $"tolerance band ±{Pct(s.Tolerance)}";
         double lo = 1 - 2 * s.Tolerance, hi = 1 + 2 * s.Tolerance;
         int c = 0;
+        var referenceColor = new Dictionary<EndFixity, ScottPlot.Color>();
         foreach (var ends in s.Ends)
         {
             var pts = r.Points.Where(p => p.Ends == ends).ToArray();
@@ -84,16 +91,43 @@ public static class SweepFiles
                 sc.MarkerSize = 6;
                 sc.MarkerShape = ends == EndFixity.Cantilever ? ScottPlot.MarkerShape.FilledCircle : ScottPlot.MarkerShape.OpenSquare;
                 sc.LegendText = $"{EndsName(ends)}, {r.FeModels[m]}";
+                if (m == 0) referenceColor[ends] = sc.Color;
                 c++;
             }
+        }
+        // The reference against the flexure-only formula, and where each hand formula leaves the band.
+        var departures = SweepDepartures.Find(r);
+        foreach (var ends in s.Ends)
+        {
+            var pts = r.Points.Where(p => p.Ends == ends).ToArray();
+            double[] x = pts.Select(p => X(p.AspectRatio, log)).ToArray();
+            double[] y = pts.Select(p => SweepDepartures.Ratio(p, SweepHandFormula.FlexureOnly)).ToArray();
+            lo = Math.Min(lo, y.Min()); hi = Math.Max(hi, y.Max());
+            var sc = plot.Add.Scatter(x, y);
+            sc.Color = PlotStyle.Series[c % PlotStyle.Series.Length];
+            sc.LineWidth = 2;
+            sc.LinePattern = ends == EndFixity.Cantilever ? ScottPlot.LinePattern.Solid : ScottPlot.LinePattern.Dashed;
+            sc.MarkerSize = 6;
+            sc.MarkerShape = ScottPlot.MarkerShape.FilledTriangleDown;
+            sc.LegendText = $"{EndsName(ends)}, {r.FeModels[0]} / flexure-only formula";
+            foreach (var d in departures.Where(d => d.Ends == ends && d.Below is not null))
+            {
+                var v = plot.Add.VerticalLine(X(d.Below!.Value, log));
+                v.Color = d.Formula == SweepHandFormula.FlexureOnly ? sc.Color : referenceColor[ends];
+                v.LineWidth = 2;
+                v.LinePattern = ScottPlot.LinePattern.DenselyDashed;
+                v.LegendText = $"{EndsName(ends)}, {(d.Formula == SweepHandFormula.FlexureOnly ? "flexure only" : "flexure + shear")} departs below h/l = {d.Below.Value.ToString("0.00", CultureInfo.InvariantCulture)}";
+            }
+            c++;
         }
         SquatLine(plot, log);
         LogTicks(plot, s, log);
         plot.Axes.SetLimitsY(lo - 0.02, hi + 0.02);
-        plot.ShowLegend(ScottPlot.Alignment.UpperRight);
+        plot.ShowLegend(ScottPlot.Edge.Bottom);   // below the axes: the curves fill the whole plot area
         var png = PlotStyle.Png(plot);
+        string departureWords = string.Join("; ", departures.Select(d => d.Words(s.From, s.To)));
         return new Figure("sweep-ratio.png", "FE/hand stiffness against h/l",
-            $"Ratio of each FE model's lateral stiffness to the hand pier formula, {Describe(s)}. Shaded: the tolerance band 1 ± {Pct(s.Tolerance)}. Dotted line: h/l = {SquatAspectRatio}, below which plane sections are doubtful (common practice). Timoshenko line members follow the same beam theory as the hand formula, so their ratio is 1 to rounding: that checks the arithmetic, not the theory; a plane-stress panel model is the estimate expected to depart for squat walls.",
+            $"Ratio of each FE model's lateral stiffness to the hand pier formula (flexure + shear), and of the reference ({r.FeModels[0]}) to the flexure-only formula (triangles), {Describe(s)}. Shaded: the tolerance band 1 ± {Pct(s.Tolerance)}. Dotted line: h/l = {SquatAspectRatio}, below which plane sections are doubtful (common practice). Densely dashed lines: where a hand formula leaves the band. {departureWords}. Timoshenko line members follow the same beam theory as the hand formula, so their ratio is 1 to rounding: that checks the arithmetic, not the theory; the plane-stress panel shares none of its assumptions.",
             png, PlotStyle.Width, PlotStyle.Height);
     }
 

@@ -1,13 +1,15 @@
 using PlaneLateral.Analysis;
+using PlaneLateral.Hand;
 using PlaneLateral.Model;
 using PlaneLateral.Units;
 
 namespace PlaneLateral.Studies;
 
 /// <summary>
-/// The plane-stress continuum estimate of a wall's cantilever stiffness, for the comparison rows: the wall meshed with
+/// The plane-stress continuum estimate of a wall's cantilever or fixed-fixed stiffness, for the comparison rows: the wall meshed with
 /// 9-node quadrilaterals on three meshes (h, h/2, h/4; one 9-node element across the narrowest strip on the first), base held, top edge tied (a rigid floor: every top node shares
-/// one horizontal displacement), unit force through the tie; the stiffness is Richardson-extrapolated from the mesh
+/// one horizontal displacement; for fixed-fixed also one vertical displacement, so the top translates without rotating),
+/// unit force through the tie; the stiffness is Richardson-extrapolated from the mesh
 /// sequence with its estimated discretisation error (docs/panels.md). It shares no assumption with the hand methods
 /// or the line models: no plane sections, no rigid spandrels, no independent piers.
 /// </summary>
@@ -16,10 +18,23 @@ internal static class PanelEstimate
     public const string ModelName = "plane-stress panel";
 
     /// <summary>
-    /// The panel estimate, or null with the reason when it does not apply: only cantilever walls are modelled so far, and
-    /// stiffness modifiers on the wall's members (cracked-section I) have no continuum counterpart.
+    /// The cantilever panel estimate (top free but for its floor tie), or null with the reason when it does not apply.
+    /// Stiffness modifiers on the wall's members (cracked-section I) have no continuum counterpart: callers skip those.
     /// </summary>
     public static (FeEstimate? Estimate, string? Skipped) Cantilever(UnitSystem u, string id, double length, double height, double thickness,
+        double e, double nu, IReadOnlyList<OpeningSpec> openings) =>
+        ForEnds(EndFixity.Cantilever, u, id, length, height, thickness, e, nu, openings);
+
+    /// <summary>
+    /// The fixed-fixed (fixed-guided) panel estimate: the top edge guided, translating without rotating
+    /// (<see cref="PanelTop.Guided"/>), the continuum counterpart of the hand method's fixed-fixed pier.
+    /// </summary>
+    public static (FeEstimate? Estimate, string? Skipped) FixedFixed(UnitSystem u, string id, double length, double height, double thickness,
+        double e, double nu, IReadOnlyList<OpeningSpec> openings) =>
+        ForEnds(EndFixity.FixedFixed, u, id, length, height, thickness, e, nu, openings);
+
+    /// <summary>The panel estimate for either end condition (SI inputs: m, N/m²); the value is in <paramref name="u"/>.</summary>
+    public static (FeEstimate? Estimate, string? Skipped) ForEnds(EndFixity ends, UnitSystem u, string id, double length, double height, double thickness,
         double e, double nu, IReadOnlyList<OpeningSpec> openings)
     {
         PanelResult? r = null;
@@ -33,6 +48,7 @@ internal static class PanelEstimate
                 E = e, Nu = nu,
                 Openings = openings.Select(o => new PanelOpening(o.Label, o.X, o.Y, o.Width, o.Height)).ToArray(),
                 FloorTies = true,
+                Top = ends == EndFixity.FixedFixed ? PanelTop.Guided : PanelTop.Free,
                 Mesh = new PanelMeshSettings(PanelElementKind.Quad9, 0, 1, MaxAspect: 4, MaxNodes: 40000, Refinements: meshes),
             };
             try
@@ -48,9 +64,10 @@ internal static class PanelEstimate
         var c = r.Convergence;
         bool extrapolated = c is not null && double.IsFinite(c.Extrapolated) && c.Extrapolated > 0;
         double k = extrapolated ? c!.Extrapolated : c?.Stiffness[^1] ?? r.TopStiffness;
+        string top = ends == EndFixity.FixedFixed ? "top edge tied and guided (translates without rotating)" : "top edge tied";
         string how = extrapolated
-            ? $"9-node plane-stress quadrilaterals on {c!.Stiffness.Length} meshes (finest {c.Unknowns[^1]} unknowns), base held, top edge tied, unit force through the tie; Richardson-extrapolated (observed order {c.ObservedOrder:0.00}), estimated discretisation error {100 * c.EstimatedError:0.00}%"
-            : $"9-node plane-stress quadrilaterals, finest mesh ({r.Analysis.Dofs.FreeCount} unknowns on the first mesh), base held, top edge tied, unit force through the tie; no extrapolation ({c?.Note ?? "single mesh"})";
+            ? $"9-node plane-stress quadrilaterals on {c!.Stiffness.Length} meshes (finest {c.Unknowns[^1]} unknowns), base held, {top}, unit force through the tie; Richardson-extrapolated (observed order {c.ObservedOrder:0.00}), estimated discretisation error {100 * c.EstimatedError:0.00}%"
+            : $"9-node plane-stress quadrilaterals, finest mesh ({r.Analysis.Dofs.FreeCount} unknowns on the first mesh), base held, {top}, unit force through the tie; no extrapolation ({c?.Note ?? "single mesh"})";
         return (new FeEstimate(ModelName, ComparisonStudy.Stiffness(u, k), how), null);
     }
 

@@ -33,13 +33,9 @@ internal static class PerforatedWallStudy
         if (asBuilt.SpandrelCount > 0)
             estimates.Add(new FeEstimate("equivalent frame, spandrels made rigid", ComparisonStudy.Stiffness(u, feRigid),
                 $"the same frame with every spandrel's I and shear area multiplied by {EquivalentFrame.RigidFactor:G3}: the gap left is the frame's own idealisation (pier heights, joints), not spandrel bending"));
-        string panelNote = "";
-        if (c.Ends == CheckEnds.Cantilever)
-        {
-            var (panel, skipped) = PanelEstimate.Cantilever(u, c.Id, c.Length, c.Height, c.Thickness, c.Material.E, c.Material.Nu, c.Openings);
-            if (panel is not null) estimates.Add(panel);
-            panelNote = PanelEstimate.Verdict(panel is null ? double.NaN : panel.Value / hand.Stiffness, tol, skipped);
-        }
+        var (panel, skipped) = PanelEstimate.ForEnds(fixity, u, c.Id, c.Length, c.Height, c.Thickness, c.Material.E, c.Material.Nu, c.Openings);
+        if (panel is not null) estimates.Add(panel);
+        string panelNote = PanelEstimate.Verdict(panel is null ? double.NaN : panel.Value / hand.Stiffness, tol, skipped);
         double aspect = c.Height / c.Length;
         // The same wall without openings bounds any wall with openings from above (removing material cannot stiffen an elastic body).
         double solid = Piers.Rectangular(fixity, 1.0, c.Height, c.Length, c.Thickness, c.Material.E, c.Material.G, c.FormFactor).Stiffness;

@@ -36,13 +36,13 @@ internal static class WallLineStudy
             var estimates = new List<FeEstimate> { feEstimate };
             double thickness = double.IsFinite(depth) && depth > 0 ? m0.A / m0.Modifiers.A / depth : double.NaN;
             string panelNote = "";
-            if (ends == CheckEnds.Cantilever && double.IsFinite(thickness))
+            if (double.IsFinite(thickness))
             {
                 if (m0.Modifiers != StiffnessModifiers.None)
                     panelNote = PanelEstimate.Verdict(double.NaN, tol, "not modelled, because the wall's members carry stiffness modifiers (cracked-section I) that a continuum of the gross section cannot represent");
                 else
                 {
-                    var (panel, skipped) = PanelEstimate.Cantilever(u, c.Id, depth, h, thickness, m0.E, m0.E / (2 * m0.G) - 1, []);
+                    var (panel, skipped) = PanelEstimate.ForEnds(fixity, u, c.Id, depth, h, thickness, m0.E, m0.E / (2 * m0.G) - 1, []);
                     if (panel is not null) estimates.Add(panel);
                     panelNote = PanelEstimate.Verdict(panel is null ? double.NaN : u.ToSI(panel.Value, Quantity.TranslationalStiffness) / hand.Stiffness, tol, skipped);
                 }

@@ -20,6 +20,42 @@ public class PanelColumnTests
     }
 
     [Fact]
+    public void SlenderFixedFixedPierPanelApproachesTheFixedGuidedTimoshenkoPier()
+    {
+        // h/l = 5, fixed-fixed (the panel's top guided: it translates without rotating). The hand row is the
+        // fixed-guided pier P h³/(12EI) + f·P h/(GA) (Gere & Timoshenko, Mechanics of Materials), here with the
+        // rectangle's f = 1.2, E = 4031 ksi, ν = 0.2: a 120 in deep, 12 in thick, 600 in tall wall. The continuum differs
+        // from that beam only in end zones about one depth long at each held end (Timoshenko & Goodier, Theory of
+        // Elasticity, 1970, §21; Saint-Venant), where it is a little stiffer; the shear part is 11.5% of the total
+        // (1.2·(E/G)·(l/h)² = 1.2·2.4/25 of the bending part, derived), so 3% covers it with the mesh error.
+        var row = Models.Compare(Models.WallLine(600, 120, 12, 5, ends: ["fixed-fixed"])).Rows.Single();
+        Assert.Equal("fixed-fixed", row.Subject);
+        double i = 12.0 * 120 * 120 * 120 / 12, a = 12.0 * 120, e = 4031, g = e / 2.4;
+        double closed = 1 / (600.0 * 600 * 600 / (12 * e * i) + 1.2 * 600 / (g * a));   // kip/in
+        double ratio = Panel(row).Value / closed;
+        Assert.InRange(ratio, 0.99, 1.03);
+        Assert.Contains("guided", Panel(row).Description);
+        Assert.Contains("plane-stress panel:", row.Cause);
+    }
+
+    [Fact]
+    public void CantileverAndFixedFixedRowsBothCarryAPanelColumnAndTheGuideStiffensIt()
+    {
+        // Both end conditions of one wall line: the cantilever row is as before (top tied only) and the fixed-fixed row
+        // gains a panel column. At h/l = 2 (E/G = 2.4) the pier formulas give, in units of P/(E t), cantilever
+        // 4·8 + 2.88·2 = 37.76 and fixed-fixed 8 + 5.76 = 13.76, a ratio of 2.744 (derived, Gere & Timoshenko). The
+        // continuum's held ends stiffen the squatter fixed-fixed case more (shear is 42% of it), so the panel's
+        // ratio is held to within 6% of the formulas' ratio, and must be above it (common practice: each held end adds
+        // restraint).
+        var rows = Models.Compare(Models.WallLine(240, 120, 12, 4)).Rows;
+        var cantilever = Panel(rows.Single(r => r.Subject == "cantilever"));
+        var fixedFixed = Panel(rows.Single(r => r.Subject == "fixed-fixed"));
+        Assert.DoesNotContain("guided", cantilever.Description);
+        double ratio = fixedFixed.Value / cantilever.Value;
+        Assert.InRange(ratio, 37.76 / 13.76, 1.06 * 37.76 / 13.76);
+    }
+
+    [Fact]
     public void ShallowSpandrelsAreSoftInThePanelToo()
     {
         // The perforated-wall method takes the piers fixed-fixed under rigid spandrels (Taly, Design of Reinforced

@@ -145,6 +145,19 @@ public class PanelWallTests
     }
 
     [Fact]
+    public void Guided_panel_is_refused_because_the_check_is_a_cantilever()
+    {
+        var d = Assert.Single(Problems(WithPanel(new
+        {
+            id = "P", length = 4.0, height = 2.0, thickness = 0.2, material = "C", top = "guided",
+            mesh = new { element = "quad9", elementsAcrossNarrowest = 2, maxNodes = 40000, refinements = 3 },
+        })));
+        Assert.Equal("$.comparisons[0].panel", d.JsonPath);
+        Assert.Contains("\"top\": \"guided\"", d.Problem);
+        Assert.Contains("fixed-fixed", d.Fix);
+    }
+
+    [Fact]
     public void Panel_with_fewer_than_three_meshes_is_refused()
     {
         var d = Assert.Single(Problems(WithPanel(Solid(4, 2, refinements: 2))));

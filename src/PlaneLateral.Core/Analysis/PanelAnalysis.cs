@@ -13,7 +13,7 @@ public sealed class PanelResult
 
     /// <summary>
     /// Lateral stiffness at the top (N/m): 1/Δ, Δ the top displacement under a unit horizontal force through the top
-    /// floor tie (or, without ties, under a unit force spread uniformly along the top edge, Δ the mean top displacement).
+    /// floor tie (with a guided top: the top held against rotation, the fixed-guided stiffness) (or, without ties, under a unit force spread uniformly along the top edge, Δ the mean top displacement).
     /// </summary>
     public required double TopStiffness { get; init; }
 
@@ -29,7 +29,8 @@ public sealed class PanelResult
 
 /// <summary>
 /// Analysis of a wall panel as a plane-stress continuum: mesh it (<see cref="PanelMesher"/>), hold the base, tie each
-/// floor level (exact equation sharing of the horizontal displacements), apply the story forces of every load case,
+/// floor level (exact equation sharing of the horizontal displacements), guide the top when asked (its vertical
+/// displacements shared too: the top edge translates without rotating), apply the story forces of every load case,
 /// and solve on one factorisation (<see cref="PlaneStressAnalysis"/>).
 /// </summary>
 public static class PanelAnalysis
@@ -87,6 +88,8 @@ public static class PanelAnalysis
             Material = new PlaneStressMaterial(panel.E, panel.Nu, panel.Thickness),
             Restraints = pm.BaseNodes.SelectMany(i => new[] { (i, Dof.X), (i, Dof.Y) }).ToList(),
             HorizontalTies = panel.FloorTies ? pm.LevelNodes : [],
+            // A guided top: its nodes share one vertical displacement too, so the top edge translates without rotating.
+            VerticalTies = panel.Top == PanelTop.Guided && panel.FloorTies ? [pm.LevelNodes[^1]] : [],
             NodeLabel = i => $"{panel.Id}:{i}",
             SourcePath = sourcePath,
         };

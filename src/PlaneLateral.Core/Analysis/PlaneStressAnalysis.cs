@@ -19,6 +19,13 @@ public sealed class PlaneStressProblem
     /// <summary>Floor ties: each is a set of nodes whose horizontal displacements are one unknown (exact constraint).</summary>
     public IReadOnlyList<int[]> HorizontalTies { get; init; } = [];
 
+    /// <summary>
+    /// Vertical ties: each is a set of nodes whose vertical displacements are one unknown (exact constraint). With a
+    /// horizontal tie over the same nodes it makes a straight edge that translates without rotating (a guided top). The
+    /// tie forces sum to zero but form a couple: the moment the guide applies (<see cref="PlaneCaseResult.GuideMoments"/>).
+    /// </summary>
+    public IReadOnlyList<int[]> VerticalTies { get; init; } = [];
+
     /// <summary>Label of node i in messages (default "n{i}").</summary>
     public Func<int, string> NodeLabel { get; init; } = i => $"n{i}";
 
@@ -58,6 +65,13 @@ public sealed class PlaneCaseResult
 
     /// <summary>Reactions (N) at the restrained DOFs, in restraint order.</summary>
     public required IReadOnlyList<(int Node, Dof Dof, double Value)> Reactions { get; init; }
+
+    /// <summary>
+    /// Moment (N·m, counter-clockwise positive) that each vertical tie applies to the mesh: Σ xᵢ·rᵢ over its nodes, rᵢ
+    /// the vertical force the tie supplies at node i (the forces sum to zero, so the couple does not depend on the
+    /// origin). It is counted with the reactions in <see cref="Equilibrium"/>. Empty without vertical ties.
+    /// </summary>
+    public IReadOnlyList<double> GuideMoments { get; init; } = [];
 
     public required EquilibriumCheck Equilibrium { get; init; }
     public required double RelativeResidual { get; init; }
@@ -113,7 +127,11 @@ public static class PlaneStressAnalysis
             Nodes = Enumerable.Range(0, n).Select(i => new Node(i, p.NodeLabel(i), mesh.X[i], mesh.Y[i])).ToArray(),
             Supports = restrained.OrderBy(kv => kv.Key).Select(kv => new Support(kv.Key, "panel", kv.Value.X, kv.Value.Y, false, 0, 0, 0)).ToArray(),
         };
-        var dofs = DofMap.Build(carrier, []).WithPanelTies(p.HorizontalTies.Select(t => (IReadOnlyList<(int, Dof)>)t.Select(i => (i, Dof.X)).ToArray()).ToArray());
+        var dofs = DofMap.Build(carrier, []).WithPanelTies(
+        [
+            .. p.HorizontalTies.Select(t => (IReadOnlyList<(int, Dof)>)t.Select(i => (i, Dof.X)).ToArray()),
+            .. p.VerticalTies.Select(t => (IReadOnlyList<(int, Dof)>)t.Select(i => (i, Dof.Y)).ToArray()),
+        ]);
 
         // Element matrices, kept for recovery.
         int ne = mesh.Elements.Length, nn = mesh.Element.NodeCount;
@@ -290,6 +308,14 @@ public static class PlaneStressAnalysis
             reactions.Add((node, dof, r));
             if (dof == Dof.X) { rx += r; rm -= mesh.Y[node] * r; } else { ry += r; rm += mesh.X[node] * r; }
         }
+        // A vertical tie's forces (what the elements take less the load, as for a reaction) sum to zero: their couple
+        // is the guide's moment, a reaction of the panel as a whole.
+        var guide = new double[p.VerticalTies.Count];
+        for (int t = 0; t < guide.Length; t++)
+        {
+            foreach (int node in p.VerticalTies[t]) guide[t] += mesh.X[node] * (fint[2 * node + 1] - fext[2 * node + 1]);
+            rm += guide[t];
+        }
         double ax = 0, ay = 0, am = 0;
         for (int i = 0; i < n; i++) { ax += fext[2 * i]; ay += fext[2 * i + 1]; am += mesh.X[i] * fext[2 * i + 1] - mesh.Y[i] * fext[2 * i]; }
 
@@ -302,6 +328,7 @@ public static class PlaneStressAnalysis
             NodalStress = stress,
             GaussStress = gauss,
             Reactions = reactions,
+            GuideMoments = guide,
             Equilibrium = new EquilibriumCheck(ax, ay, am, rx, ry, rm),
             RelativeResidual = ff == 0 ? Math.Sqrt(rr) : Math.Sqrt(rr / ff),
             BackwardError = denominator == 0 ? 0 : rInf / denominator,

@@ -55,6 +55,12 @@ public static partial class ModelReader
                 if (!p.FloorTies)
                     sink.Add(tok, $"panel \"{p.Id}\" has \"floorTies\": false; the panel-wall check loads the wall through a tied top (a rigid floor), as the hand method and the line model assume",
                         "remove \"floorTies\": false from the panel, or check another panel");
+                if (p.Top == PanelTop.Guided)
+                    sink.Add(tok, $"panel \"{p.Id}\" has \"top\": \"guided\"; the panel-wall check compares a cantilever wall (top free to rotate), as its hand method and line model are set up",
+                        "remove \"top\": \"guided\" from the panel, or check the wall fixed-fixed with a perforated-wall check (\"ends\": \"fixed-fixed\")");
+                if (p.Links.Count > 0)
+                    sink.Add(tok, $"panel \"{p.Id}\" is linked to frame nodes; the panel-wall check needs the wall standing alone, base held and top tied",
+                        "check an unlinked copy of the wall as a panel of its own");
                 if (p.Mesh.Refinements < 3)
                     sink.Add(tok, $"panel \"{p.Id}\" is solved on {p.Mesh.Refinements} mesh(es); the panel-wall check needs three or more nested meshes for an observed order, an extrapolated stiffness and its error estimate",
                         $"give the panel \"mesh\": {{..., \"refinements\": 3}} (or more)");

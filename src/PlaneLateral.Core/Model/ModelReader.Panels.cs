@@ -56,6 +56,9 @@ public static partial class ModelReader
                     else sink.Add(lt, $"'floorLevels' must be an array of heights, found {JsonFields.Describe(lt)}", $"write \"floorLevels\": [<height>, ...] in {lu}, above the base");
                 }
                 bool ties = f.OptionalBool("floorTies", true, "give true (each level moves as one in x) or false");
+                var topWord = f.OptionalString("top", "give \"free\" (cantilever) or \"guided\" (top translates without rotating)") ?? "free";
+                var top = topWord switch { "free" => PanelTop.Free, "guided" => PanelTop.Guided, _ => (PanelTop?)null };
+                if (top is null) sink.Add(f.Token("top"), $"unknown top \"{topWord}\"", "use \"free\" (cantilever: the top only tied) or \"guided\" (fixed-guided: the top edge translates without rotating)");
                 var mesh = ReadPanelMesh(f.OptionalObject("mesh", "write \"mesh\": {\"element\": \"quad9\", \"elementsAcrossNarrowest\": 2}"));
 
                 var loads = new List<PanelLoad>();
@@ -91,13 +94,13 @@ public static partial class ModelReader
                 }
                 var links = ReadPanelLinks(f, id, length, height);   // ModelReader.PanelLinks.cs
                 f.RejectUnknownKeys();
-                if (id is null || material is null || mesh is null || !(length > 0 && height > 0 && thickness > 0)) continue;
+                if (id is null || material is null || mesh is null || top is null || !(length > 0 && height > 0 && thickness > 0)) continue;
 
                 var panel = new WallPanel
                 {
                     Id = id, X0 = x0, Y0 = y0, Length = length, Height = height, Thickness = thickness,
                     MaterialId = material.Id, E = material.E, Nu = material.Nu,
-                    Openings = openings, FloorLevels = levels, FloorTies = ties, Mesh = mesh, Loads = loads, Links = links,
+                    Openings = openings, FloorLevels = levels, FloorTies = ties, Top = top.Value, Mesh = mesh, Loads = loads, Links = links,
                 };
                 // Geometry and mesh problems, each at its own key, before any work — unless a number of the geometry
                 // itself failed to read (it would make the layout meaningless; found by the reader fuzzer).

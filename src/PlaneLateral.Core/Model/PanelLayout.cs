@@ -58,6 +58,9 @@ public static class PanelLayout
                 if (!apart)
                     bad.Add(new($"openings[{b}]", $"openings \"{A.Id}\" and \"{B.Id}\" overlap or touch", "move them apart so solid wall remains between them, or give them as one opening"));
             }
+        if (p.Top == PanelTop.Guided && !p.FloorTies)
+            bad.Add(new("top", "a guided top is a rigid floor that translates without rotating, but the panel has \"floorTies\": false",
+                "remove \"floorTies\": false, or write \"top\": \"free\""));
         var levels = p.FloorLevels;
         for (int k = 0; k < levels.Count; k++)
         {

@@ -28,6 +28,20 @@ public sealed record PanelMeshSettings(PanelElementKind Element, double ElementS
 /// <param name="Bottom">Height of the opening's bottom edge (sill) above the panel base (m); 0 for a door.</param>
 public sealed record PanelOpening(string Id, double Left, double Bottom, double Width, double Height);
 
+/// <summary>How the top edge of a wall panel is held.</summary>
+public enum PanelTop
+{
+    /// <summary>Free (the cantilever): only the top floor tie, every top node sharing one horizontal displacement.</summary>
+    Free,
+    /// <summary>
+    /// Guided (the continuum counterpart of the fixed-guided, "fixed-fixed" pier): the top edge moves as a rigid body
+    /// that translates but does not rotate. Every top node shares one horizontal displacement (the floor tie) and one
+    /// vertical displacement (equation sharing, exact), so the top edge stays straight and level while the wall may still
+    /// shorten or lengthen as a whole.
+    /// </summary>
+    Guided,
+}
+
 /// <summary>How a story force reaches the panel.</summary>
 public enum PanelLoadPath
 {
@@ -71,6 +85,9 @@ public sealed record WallPanel
     public bool FloorTies { get; init; } = true;
 
     public PanelMeshSettings Mesh { get; init; } = PanelMeshSettings.Default;
+
+    /// <summary>How the top edge is held: free (cantilever, the default) or guided (translates without rotating; needs the floor ties).</summary>
+    public PanelTop Top { get; init; } = PanelTop.Free;
 
     public IReadOnlyList<PanelLoad> Loads { get; init; } = [];
 

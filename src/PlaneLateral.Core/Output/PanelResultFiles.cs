@@ -83,6 +83,7 @@ public static class PanelResultFiles
                 P("solver", p.Analysis.Solve.Solver);
                 w.WriteEndObject();
                 P("floorTies", p.Panel.FloorTies);
+                if (p.Panel.Top == Model.PanelTop.Guided) P("top", "guided: the top edge translates without rotating (fixed-guided stiffness)");
                 P("topStiffness", Stiff(p.TopStiffness));
                 if (p.Convergence is { } cv)
                 {
