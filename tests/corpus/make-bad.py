@@ -167,6 +167,20 @@ def panel_without_left():
     return d
 add("fuzz-panel-opening-without-left", "fuzz finding", "missing required key 'left'", "$.panels[0].openings[2]",
     panel_without_left())
+def wall_panel(change):
+    here = os.path.dirname(os.path.abspath(__file__))
+    with open(os.path.join(here, "..", "..", "models", "panels", "two-story-wall.json"), encoding="utf-8") as f:
+        d = json.load(f)
+    change(d["panels"][0])
+    return d
+# "x": 1e15 placed the nodes where doubles are 0.125 m apart: the finest study mesh's elements collapsed (a
+# non-positive Jacobian, refused by the element on the refined mesh); now the layout check refuses it before any work.
+add("fuzz-panel-far-from-origin", "fuzz finding", "so far from the origin that the sides of its finest elements", "$.panels[0].x",
+    wall_panel(lambda p: p.update({"x": 1e15})))
+add("panel-level-a-hair-above-door", "levels", "floor level 1 (y = 2.2000001 m) and the top of opening \"door\" (y = 2.2 m) are only",
+    "$.panels[0].floorLevels[0]", wall_panel(lambda p: p.update({"floorLevels": [2.2000001], "storyForces": [{"case": "wind", "level": "top", "fx": 60}]})))
+add("panel-max-aspect-too-large", "magnitude", "the largest aspect ratio 1000000 is above 100", "$.panels[0].mesh.maxAspect",
+    wall_panel(lambda p: p["mesh"].update({"maxAspect": 1e6})))
 # --- slow inputs found while hardening (the "did you mean" search; SuggestBudget) ---
 def long_ids(d):
     a, b = "N" + "a" * 30000, "N" + "b" * 30000

@@ -75,6 +75,9 @@ public static class PanelLayout
         if (!((m.ElementSize > 0) ^ (m.ElementsAcrossNarrowest > 0)))
             bad.Add(new("mesh", "give either an element size or a number of elements across the narrowest strip", "write \"elementSize\": <length> or \"elementsAcrossNarrowest\": <count>, not both"));
         if (!(m.MaxAspect >= 1)) bad.Add(new("mesh", $"the largest aspect ratio {m.MaxAspect} is below 1", "give \"maxAspect\" ≥ 1 (4 is usual)"));
+        else if (m.MaxAspect > MaxAspectLimit)
+            bad.Add(new("mesh.maxAspect", $"the largest aspect ratio {m.MaxAspect} is above {MaxAspectLimit}: elements that long and thin lose their stiffness to round-off (a false mechanism)",
+                $"give \"maxAspect\" from 1 to {MaxAspectLimit} (4 is usual)"));
         if (bad.Count > 0) return plan;
 
         var xs = Distinct([0, L, .. p.Openings.SelectMany(o => new[] { o.Left, o.Left + o.Width })], tol);
@@ -116,18 +119,32 @@ public static class PanelLayout
         }
         // Grid intervals shorter than the element size (e.g. two opening edges close together) would make slivers:
         // reduce the size so that no element side ratio exceeds maxAspect.
-        double shortest = Math.Min(Gaps(xs).Min(), Gaps(ys).Min());
+        double shortest = Math.Min(Gaps(xs).Min(), Gaps(ys).Min()), sizeAsked = size;
         size = Math.Min(size, m.MaxAspect * shortest);
-        var xl = Subdivide(xs, size);
-        var yl = Subdivide(ys, size);
         if (m.Refinements is < 1 or > 6)
         {
             bad.Add(new("mesh", $"{m.Refinements} meshes asked for the convergence study", "give \"refinements\" from 1 (no study) to 6; 3 or more give an observed order"));
             return plan;
         }
-        // The finest mesh of a convergence study decides the size limit, checked before any work.
+        // The finest mesh of a convergence study decides the size limit, checked before any work — counted from the
+        // intervals, before the lines are laid out (a hair-thin interval once asked for millions of them).
         int r = (m.Element == PanelElementKind.Quad9 ? 2 : 1) << (m.Refinements - 1);
-        long nodes = (long)(r * (xl.Length - 1) + 1) * (r * (yl.Length - 1) + 1);
+        long Nodes(double h)
+        {
+            double about = (r * Parts(xs, h) + 1) * (r * Parts(ys, h) + 1);
+            return about < long.MaxValue / 2 ? (long)about : long.MaxValue / 2;
+        }
+        long nodes = Nodes(size);
+        if (nodes > m.MaxNodes && Nodes(sizeAsked) <= m.MaxNodes)
+        {
+            // Only the cut in size for two grid lines close together (e.g. a floor level a hair above a door head) makes
+            // the mesh too large: name them.
+            var (gap, axis, first, second) = ClosestLines(p, tol);
+            bad.Add(new(second.Key != "" ? second.Key : first.Key,
+                $"{second.What} ({axis} = {G(second.V)} m) and {first.What} ({axis} = {G(first.V)} m) are only {G(gap)} m apart, so elements no longer than {G(size)} m (maxAspect × {G(gap)} m) are needed and the {(m.Refinements > 1 ? "finest mesh" : "mesh")} would have about {nodes} nodes, more than the limit of {m.MaxNodes}",
+                $"give them the same value if they are meant to line up (values within {G(tol)} m are one line), or move them further apart"));
+            return plan;
+        }
         if (nodes > m.MaxNodes)
         {
             string finest = m.Refinements > 1 ? $"the finest of the {m.Refinements} meshes" : "the mesh";
@@ -136,8 +153,66 @@ public static class PanelLayout
                     : $"give a larger element size (at least {F(size * Math.Sqrt((double)nodes / m.MaxNodes))}), fewer elements across the narrowest strip, or a higher \"maxNodes\""));
             return plan;
         }
+        var xl = Subdivide(xs, size);
+        var yl = Subdivide(ys, size);
+        // Nodes are placed at (x + local x, y + local y). Far from the origin the spacing of doubles (about 2.2e-16 of the
+        // coordinate) eats into the finest element's sides, down to zero (a non-positive Jacobian): found by the fuzzer
+        // with "x": 1e15. Keep every side at least 1/PlacementDigits of the farthest coordinate, so that each side keeps
+        // its length to about 2e-9 relative after placing.
+        double finestSide = Math.Min(Gaps(xl).Min(), Gaps(yl).Min()) / r;
+        double reach = Math.Max(Math.Max(Math.Abs(p.X0), Math.Abs(p.X0 + L)), Math.Max(Math.Abs(p.Y0), Math.Abs(p.Y0 + H)));
+        if (!(finestSide * PlacementDigits >= reach))
+        {
+            string key = Math.Abs(p.X0) >= Math.Abs(p.Y0) ? "x" : "y";
+            double at = key == "x" ? p.X0 : p.Y0;
+            bad.Add(new(key, $"the panel is placed at {key} = {G(at)} m, so far from the origin that the sides of its finest elements ({G(finestSide)} m) are lost to round-off in the node coordinates",
+                $"place the panel nearer the origin (its position only places its nodes), within {G(finestSide * PlacementDigits)} m of it, or use a coarser mesh"));
+            return plan;
+        }
         plan.XLines = xl; plan.YLines = yl; plan.Size = size; plan.Narrowest = narrowest; plan.Nodes = (int)nodes;
         return plan;
+    }
+
+    /// <summary>Largest "maxAspect" accepted. Common practice: beyond about 10 accuracy suffers; 100 still keeps the
+    /// element stiffness well clear of round-off.</summary>
+    public const double MaxAspectLimit = 100;
+
+    /// <summary>The farthest node coordinate accepted, in finest element sides (1e7; see the check in <see cref="Plan"/>).</summary>
+    public const double PlacementDigits = 1e7;
+
+    private static string G(double v) => v.ToString("G9", CultureInfo.InvariantCulture);
+
+    /// <summary>
+    /// The two neighbouring grid lines closest together, on either axis, each with what puts it there and its panel key:
+    /// the pair behind the shortest gap of the lines <see cref="Distinct"/> keeps (same clustering within tol).
+    /// </summary>
+    private static (double Gap, string Axis, (double V, string What, string Key) First, (double V, string What, string Key) Second) ClosestLines(WallPanel p, double tol)
+    {
+        var xSources = new List<(double V, string What, string Key)> { (0, "the left end", ""), (p.Length, "the right end", "length") };
+        var ySources = new List<(double V, string What, string Key)> { (0, "the base", ""), (p.Height, "the top", "height") };
+        for (int k = 0; k < p.FloorLevels.Count; k++) ySources.Add((p.FloorLevels[k], $"floor level {k + 1}", $"floorLevels[{k}]"));
+        for (int k = 0; k < p.Openings.Count; k++)
+        {
+            var o = p.Openings[k];
+            xSources.Add((o.Left, $"the left edge of opening \"{o.Id}\"", $"openings[{k}]"));
+            xSources.Add((o.Left + o.Width, $"the right edge of opening \"{o.Id}\"", $"openings[{k}]"));
+            ySources.Add((o.Bottom, $"the bottom of opening \"{o.Id}\"", $"openings[{k}]"));
+            ySources.Add((o.Bottom + o.Height, $"the top of opening \"{o.Id}\"", $"openings[{k}]"));
+        }
+        var best = (Gap: double.PositiveInfinity, Axis: "x", First: xSources[0], Second: xSources[1]);
+        foreach (var (axis, sources) in new[] { ("x", xSources), ("y", ySources) })
+        {
+            var sorted = sources.OrderBy(q => q.V).ToList();
+            var line = sorted[0];
+            foreach (var q in sorted.Skip(1))
+            {
+                double gap = q.V - line.V;
+                if (gap <= tol) continue;   // the same line
+                if (gap < best.Gap) best = (gap, axis, line, q);
+                line = q;
+            }
+        }
+        return best;
     }
 
     private static double[] Distinct(IEnumerable<double> values, double tol)
@@ -149,6 +224,14 @@ public static class PanelLayout
     }
 
     private static IEnumerable<double> Gaps(double[] lines) => lines.Zip(lines.Skip(1), (a, b) => b - a);
+
+    /// <summary>Intervals <see cref="Subdivide"/> would make (as a double: it may be astronomically many).</summary>
+    private static double Parts(double[] lines, double size)
+    {
+        double n = 0;
+        for (int i = 0; i + 1 < lines.Length; i++) n += Math.Max(1, Math.Ceiling((lines[i + 1] - lines[i]) / size - 1e-9));
+        return n;
+    }
 
     private static double[] Subdivide(double[] lines, double size)
     {

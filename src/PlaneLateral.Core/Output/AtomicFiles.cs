@@ -30,6 +30,8 @@ public static class AtomicFiles
             foreach (var (name, text) in files)
             {
                 string final = Path.Combine(directory, name);
+                // A folder standing where a file must go would stop the renames half-way: refuse before any target changes.
+                if (Directory.Exists(final)) throw new IOException($"'{final}' is a folder, so the file {name} cannot be written there");
                 string temp = Path.Combine(directory, $".{name}.{Guid.NewGuid():N}.partial");
                 temps.Add((temp, final));
                 using (var fs = new FileStream(temp, FileMode.CreateNew, FileAccess.Write, FileShare.None))
@@ -46,7 +48,16 @@ public static class AtomicFiles
             throw new IOException($"cannot write into the output folder '{directory}': {e.Message}", e);
         }
 
-        foreach (var (temp, final) in temps) File.Move(temp, final, overwrite: true);
+        int moved = 0;
+        try
+        {
+            foreach (var (temp, final) in temps) { File.Move(temp, final, overwrite: true); moved++; }
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            foreach (var (temp, _) in temps.Skip(moved)) TryDelete(temp);
+            throw new IOException($"cannot put the files in place in '{directory}' ({moved} of {temps.Count} replaced): {e.Message}", e);
+        }
         return temps.Select(t => t.Final).ToArray();
     }
 
