@@ -105,7 +105,7 @@ public sealed class MatrixExportTests : IDisposable
         for (int p = 0; p < result.Panels.Count; p++)
         {
             var pr = result.Panels[p];
-            string b = Path.Combine(outDir, Output.MatrixExportFiles.PanelBase(p, pr.Panel.Id));
+            string b = Path.Combine(outDir, PlaneLateral.Output.MatrixExportFiles.PanelBase(p, pr.Panel.Id));
             var k = ReadK(b + "-K.mtx");
             var f = ReadF(b + "-f.mtx");
             var dofs = pr.Analysis.Dofs;
