@@ -92,8 +92,10 @@ public sealed class BadCorpusTests : IDisposable
             clock.Stop();
             string all = o + "\n" + e;
 
-            // Common practice: a bad file is answered promptly, not after minutes (each is a small file; 20 s is generous).
-            Assert.True(clock.Elapsed < TimeSpan.FromSeconds(20), $"{command} {file}: took {clock.Elapsed.TotalSeconds:0.0} s");
+            // A hang guard, not a speed measurement (speed is measured under benchmarks/): a bad file must be refused
+            // before any heavy work, so even on a loaded CI machine it never takes minutes. Each takes well under a second
+            // alone; 120 s leaves room for the other test assemblies running beside this one.
+            Assert.True(clock.Elapsed < TimeSpan.FromSeconds(120), $"{command} {file}: took {clock.Elapsed.TotalSeconds:0.0} s");
             Assert.True(code == exit, $"{command} {file}: exit {code}, expected {exit}\n{all}");
             Assert.DoesNotMatch(StackTrace, all);
             Assert.False(Directory.Exists(outDir), $"{command} {file}: created the output folder");
