@@ -210,6 +210,11 @@ public static class AspectSweep
                 p.Add($"the opening width fraction {G(o.WidthFraction)} is outside (0, 1): the window would leave no pier beside it. Fix: give --opening-width as a fraction of the wall length, e.g. 0.3.");
             if (!(o.HeightFraction > 0 && o.HeightFraction < 1))
                 p.Add($"the opening height fraction {G(o.HeightFraction)} is outside (0, 1): the window would leave no wall above or below it. Fix: give --opening-height as a fraction of the wall height, e.g. 0.4.");
+            // Within a millionth of 1 the pieces left are below what the perforated-wall method and the frame can tell from zero.
+            if (o.WidthFraction >= 1 - 1e-6 && o.WidthFraction < 1)
+                p.Add($"the opening width fraction {G(o.WidthFraction)} leaves piers thinner than a millionth of the wall length. Fix: give --opening-width below 0.999999.");
+            if (o.HeightFraction >= 1 - 1e-6 && o.HeightFraction < 1)
+                p.Add($"the opening height fraction {G(o.HeightFraction)} leaves wall above and below thinner than a millionth of the wall height. Fix: give --opening-height below 0.999999.");
         }
         return p;
     }

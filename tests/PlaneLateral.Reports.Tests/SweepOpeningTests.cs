@@ -112,6 +112,7 @@ public class SweepOpeningTests
     [InlineData("0.3", "1.2", "opening height fraction 1.2 is outside (0, 1)")]
     [InlineData("0.3", "-0.1", "opening height fraction -0.1 is outside (0, 1)")]
     [InlineData("0.999", "0.4", "cannot be meshed")]
+    [InlineData("0.9999999", "0.4", "thinner than a millionth")]
     public void Bad_opening_fractions_are_refused_with_nothing_written(string width, string height, string message)
     {
         string dir = TempDir("sweep-open-bad");
