@@ -26,18 +26,20 @@ internal static class SweepCommand
         var thickness = new Option<double?>("--thickness") { Description = "Wall thickness t in LENGTH. Default 8 in in the chosen unit." };
         var shearFactor = new Option<double>("--shear-factor") { Description = "Shear form factor f ≥ 1, shear area A/f.", DefaultValueFactory = _ => ShearForm.RectangleDefault };
         var tol = new Option<string?>("--tolerance") { Description = "Band on FE/hand − 1, as 0.10 or 10%. Default 0.10." };
+        var openingWidth = new Option<double?>("--opening-width") { Description = "Width of one centred window as a fraction of the wall length l, in (0, 1); give with --opening-height. Hand value: the perforated-wall method; FE: the panel with the window and the equivalent frame." };
+        var openingHeight = new Option<double?>("--opening-height") { Description = "Height of the centred window as a fraction of the wall height h, in (0, 1); give with --opening-width." };
         var noPanel = new Option<bool>("--no-panel") { Description = "Leave out the plane-stress panel (faster); the Timoshenko line members become the reference." };
         var outOption = new Option<string?>("--out", "-o") { Description = "Folder for sweep.csv, sweep-ratio.png and sweep-shear-share.png. Default planelateral-results/sweep." };
         var cmd = new Command("sweep",
             "Vary a solid wall's aspect ratio h/l over a range, for cantilever and fixed-fixed ends, and set the hand pier formula (flexural, shear, total) beside the finite-element stiffness at every point; write a CSV and two PNG figures.")
         {
-            from, to, points, spacing, ends, units, material, e, g, nu, length, thickness, shearFactor, tol, noPanel, outOption,
+            from, to, points, spacing, ends, units, material, e, g, nu, length, thickness, shearFactor, tol, openingWidth, openingHeight, noPanel, outOption,
         };
         cmd.SetAction(p =>
         {
             var o = new SweepArgs(p.GetValue(from), p.GetValue(to), p.GetValue(points), p.GetValue(spacing)!, p.GetValue(ends)!,
                 p.GetValue(units)!, p.GetValue(material)!, p.GetValue(e), p.GetValue(g), p.GetValue(nu), p.GetValue(length),
-                p.GetValue(thickness), p.GetValue(shearFactor), p.GetValue(tol), p.GetValue(outOption)) { NoPanel = p.GetValue(noPanel) };
+                p.GetValue(thickness), p.GetValue(shearFactor), p.GetValue(tol), p.GetValue(outOption)) { NoPanel = p.GetValue(noPanel), OpeningWidth = p.GetValue(openingWidth), OpeningHeight = p.GetValue(openingHeight) };
             return Run(o, stdout, stderr);
         });
         return cmd;
@@ -49,7 +51,15 @@ internal static class SweepCommand
         /// <summary>True: the line members only (no plane-stress panel).</summary>
         public bool NoPanel { get; init; }
 
-        public IReadOnlyList<ISweepFeModel> Models() => AspectSweep.DefaultModels(panel: !NoPanel);
+        /// <summary>The centred window's width over the wall length, or null (solid wall).</summary>
+        public double? OpeningWidth { get; init; }
+
+        /// <summary>The centred window's height over the wall height, or null (solid wall).</summary>
+        public double? OpeningHeight { get; init; }
+
+        public SweepOpening? Opening => OpeningWidth is double w && OpeningHeight is double h ? new SweepOpening(w, h) : null;
+
+        public IReadOnlyList<ISweepFeModel> Models() => AspectSweep.DefaultModels(Opening, panel: !NoPanel);
     }
 
     /// <summary>Turns the command line into a spec, listing every problem at once.</summary>
@@ -86,7 +96,9 @@ internal static class SweepCommand
         if (!CompareCommand.TryTolerance(a.Tolerance, out double tol, out string tolError)) problems.Add(tolError);
         double len = a.Length ?? u.FromSI(240 * 0.0254, Quantity.Length);
         double t = a.Thickness ?? u.FromSI(8 * 0.0254, Quantity.Length);
-        var spec = new SweepSpec(a.From, a.To, a.Points, spacing, u, len, t, eVal, gVal, matName, a.ShearFactor, ends, tol);
+        if ((a.OpeningWidth is null) != (a.OpeningHeight is null))
+            problems.Add($"{(a.OpeningWidth is null ? "--opening-height" : "--opening-width")} is given without {(a.OpeningWidth is null ? "--opening-width" : "--opening-height")}. Fix: give both, e.g. --opening-width 0.3 --opening-height 0.4, or neither for the solid wall.");
+        var spec = new SweepSpec(a.From, a.To, a.Points, spacing, u, len, t, eVal, gVal, matName, a.ShearFactor, ends, tol) { Opening = a.Opening };
         if (problems.Count == 0) problems.AddRange(AspectSweep.Problems(spec, a.Models()));
         return problems.Count == 0 ? spec : null;
     }
@@ -120,7 +132,8 @@ internal static class SweepCommand
             return ExitCodes.OutputFailed;
         }
         var u = spec.Units;
-        stdout.Write($"PlaneLateral {ResultFiles.Version}: aspect-ratio sweep of a solid wall\n\n");
+        stdout.Write(spec.Opening is null ? $"PlaneLateral {ResultFiles.Version}: aspect-ratio sweep of a solid wall\n\n"
+            : $"PlaneLateral {ResultFiles.Version}: aspect-ratio sweep of a wall with {spec.Opening.Words}\n\n");
         stdout.Write($"Wall      l = {spec.Length.ToString("G6", CultureInfo.InvariantCulture)} {u.LengthSymbol}, t = {spec.Thickness.ToString("G6", CultureInfo.InvariantCulture)} {u.LengthSymbol}, f = {spec.FormFactor.ToString("G4", CultureInfo.InvariantCulture)}\n");
         stdout.Write($"Material  {spec.MaterialName}: E = {spec.E.ToString("G6", CultureInfo.InvariantCulture)}, G = {spec.G.ToString("G6", CultureInfo.InvariantCulture)} {u.Label(Quantity.Stress)}\n");
         stdout.Write($"Range     h/l {spec.From.ToString("G6", CultureInfo.InvariantCulture)} to {spec.To.ToString("G6", CultureInfo.InvariantCulture)}, {spec.Points} points ({a.Spacing}), {string.Join(" and ", spec.Ends.Select(SweepFiles.EndsName))}\n\n");
@@ -140,7 +153,7 @@ internal static class SweepCommand
             cells.Add(Studies.ComparisonRow.VerdictWords(p.Verdict, Studies.ComparedQuantity.Stiffness));
             t.Add([.. cells]);
         }
-        stdout.Write($"Stiffness in {u.Label(Quantity.TranslationalStiffness)}; FE = {result.FeModels[0]} (the reference){(two ? $"; line = {result.FeModels[1]}" : "")}\n");
+        stdout.Write($"Stiffness in {u.Label(Quantity.TranslationalStiffness)}; FE = {result.FeModels[0]} (the reference){(two ? $"; line = {result.FeModels[1]}" : "")}{(spec.Opening is null ? "" : "; hand = the perforated-wall method, FE/flexure = FE over the method without shear deformation")}\n");
         stdout.Write(t.Render());
         stdout.Write("\nWhere each hand formula leaves the tolerance band of the reference:\n");
         foreach (var d in SweepDepartures.Find(result)) stdout.Write($"  {d.Words(spec.From, spec.To)}\n");

@@ -36,6 +36,9 @@ public sealed record SweepSpec(
     double Length, double Thickness, double E, double G, string MaterialName, double FormFactor,
     IReadOnlyList<EndFixity> Ends, double Tolerance)
 {
+    /// <summary>One centred window at every point (its size as fractions of the wall's length and height), or null for the solid wall.</summary>
+    public SweepOpening? Opening { get; init; }
+
     /// <summary>The h/l values, smallest first.</summary>
     public double[] AspectRatios()
     {
@@ -51,6 +54,21 @@ public sealed record SweepSpec(
     }
 }
 
+/// <summary>
+/// One window centred in the wall's elevation, sized as fractions of the wall: width = <paramref name="WidthFraction"/>·l,
+/// height = <paramref name="HeightFraction"/>·h, so the two piers beside it are each (1 − wf)·l/2 wide and the solid
+/// wall above and below it each (1 − hf)·h/2 deep. Fractions in (0, 1).
+/// </summary>
+public sealed record SweepOpening(double WidthFraction, double HeightFraction)
+{
+    /// <summary>The window of a wall of length <paramref name="length"/> and height <paramref name="height"/> (any one length unit).</summary>
+    public OpeningSpec For(double length, double height) =>
+        new("window", (1 - WidthFraction) / 2 * length, (1 - HeightFraction) / 2 * height, WidthFraction * length, HeightFraction * height);
+
+    /// <summary>"a centred window 0.3 l wide and 0.4 h high".</summary>
+    public string Words => $"a centred window {WidthFraction.ToString("G4", CultureInfo.InvariantCulture)} l wide and {HeightFraction.ToString("G4", CultureInfo.InvariantCulture)} h high";
+}
+
 /// <summary>One wall of the sweep, in SI (m, N/m²), handed to each FE model.</summary>
 /// <param name="AspectRatio">h/l.</param>
 /// <param name="Height">h (m).</param>
@@ -59,7 +77,14 @@ public sealed record SweepSpec(
 /// <param name="E">Young's modulus (N/m²).</param>
 /// <param name="G">Shear modulus (N/m²).</param>
 /// <param name="FormFactor">f, shear area A/f.</param>
-public sealed record SweepWall(double AspectRatio, double Height, double Length, double Thickness, double E, double G, double FormFactor, EndFixity Ends);
+public sealed record SweepWall(double AspectRatio, double Height, double Length, double Thickness, double E, double G, double FormFactor, EndFixity Ends)
+{
+    /// <summary>The spec's centred window, or null for the solid wall.</summary>
+    public SweepOpening? Opening { get; init; }
+
+    /// <summary>The window in SI (m), or none.</summary>
+    public IReadOnlyList<OpeningSpec> Openings => Opening is null ? [] : [Opening.For(Length, Height)];
+}
 
 /// <summary>
 /// A finite-element model of a sweep wall. The sweep holds an ordered list of these; the first is the reference for the
@@ -179,6 +204,18 @@ public static class AspectSweep
         if (!(double.IsFinite(s.FormFactor) && s.FormFactor >= 1)) p.Add($"the shear form factor {G(s.FormFactor)} is below 1. Fix: give --shear-factor 1 or more (1.2 for a rectangle).");
         if (s.Ends.Count == 0) p.Add("no end condition. Fix: give --ends cantilever, fixed-fixed or both.");
         if (!(s.Tolerance > 0 && s.Tolerance < 1)) p.Add($"the tolerance {G(s.Tolerance)} is outside (0, 1). Fix: give a fraction such as 0.10.");
+        if (s.Opening is { } o)
+        {
+            if (!(o.WidthFraction > 0 && o.WidthFraction < 1))
+                p.Add($"the opening width fraction {G(o.WidthFraction)} is outside (0, 1): the window would leave no pier beside it. Fix: give --opening-width as a fraction of the wall length, e.g. 0.3.");
+            if (!(o.HeightFraction > 0 && o.HeightFraction < 1))
+                p.Add($"the opening height fraction {G(o.HeightFraction)} is outside (0, 1): the window would leave no wall above or below it. Fix: give --opening-height as a fraction of the wall height, e.g. 0.4.");
+            // Within a millionth of 1 the pieces left are below what the perforated-wall method and the frame can tell from zero.
+            if (o.WidthFraction >= 1 - 1e-6 && o.WidthFraction < 1)
+                p.Add($"the opening width fraction {G(o.WidthFraction)} leaves piers thinner than a millionth of the wall length. Fix: give --opening-width below 0.999999.");
+            if (o.HeightFraction >= 1 - 1e-6 && o.HeightFraction < 1)
+                p.Add($"the opening height fraction {G(o.HeightFraction)} leaves wall above and below thinner than a millionth of the wall height. Fix: give --opening-height below 0.999999.");
+        }
         return p;
     }
 
@@ -191,6 +228,17 @@ public static class AspectSweep
     /// </summary>
     public static IReadOnlyList<ISweepFeModel> DefaultModels(bool panel = true) =>
         panel ? [new PanelWallModel(), new LineMemberWallModel()] : [new LineMemberWallModel()];
+
+    /// <summary>
+    /// The models for a spec: <see cref="DefaultModels(bool)"/> for the solid wall; with an opening, the converged
+    /// plane-stress panel with the window (the reference), then the equivalent frame of Timoshenko line members.
+    /// </summary>
+    public static IReadOnlyList<ISweepFeModel> DefaultModels(SweepSpec spec, bool panel = true) => DefaultModels(spec.Opening, panel);
+
+    /// <summary>As <see cref="DefaultModels(SweepSpec, bool)"/>, for a spec with this opening (null: the solid wall).</summary>
+    public static IReadOnlyList<ISweepFeModel> DefaultModels(SweepOpening? opening, bool panel = true) =>
+        opening is null ? DefaultModels(panel)
+        : panel ? [new PanelWallModel(), new EquivalentFrameWallModel()] : [new EquivalentFrameWallModel()];
 
     /// <summary>The problems with a spec for these models: <see cref="Problems(SweepSpec)"/> and each converged model's own.</summary>
     public static IReadOnlyList<string> Problems(SweepSpec s, IReadOnlyList<ISweepFeModel> models)
@@ -223,8 +271,10 @@ public static class AspectSweep
             double aspect = ratios[k % ratios.Length];
             double hUser = aspect * spec.Length;
             // Hand side in the user's units (the library takes any consistent set): a unit force at the top.
-            var hand = Piers.Rectangular(ends, 1.0, hUser, spec.Length, spec.Thickness, spec.E, spec.G, spec.FormFactor);
-            var wall = new SweepWall(aspect, aspect * l, l, t, e, g, spec.FormFactor, ends);
+            var hand = spec.Opening is null
+                ? Piers.Rectangular(ends, 1.0, hUser, spec.Length, spec.Thickness, spec.E, spec.G, spec.FormFactor)
+                : PerforatedHand(spec, ends, hUser);
+            var wall = new SweepWall(aspect, aspect * l, l, t, e, g, spec.FormFactor, ends) { Opening = spec.Opening };
             var fe = new FeEstimate[models.Count];
             var errors = new double?[models.Count];
             for (int m = 0; m < models.Count; m++)
@@ -244,6 +294,28 @@ public static class AspectSweep
             progress?.Report(Interlocked.Increment(ref done));
         });
         return new SweepResult(spec, models.Select(m => m.Name).ToArray(), models.Select(m => m.Description).ToArray(), points);
+    }
+
+    /// <summary>
+    /// Shear modulus over E standing for "no shear deformation" in the perforated-wall method's flexure-only value: the
+    /// shear terms f·P·h/(A·G) then fall to 1e-12 of their size, below round-off.
+    /// </summary>
+    public const double FlexureOnlyShearModulusRatio = 1e12;
+
+    /// <summary>
+    /// The perforated-wall method (<see cref="PerforatedWall"/>) for the point's wall with its window, unit force, in the
+    /// spec's units, as a <see cref="MemberDeflection"/>: the total is the method's deflection; the "flexural" part is the
+    /// same method with shear deformation left out (G = 1e12·E), the "shear" part the rest. In a wall with openings the
+    /// two do not separate exactly (pieces in parallel combine rigidities, not deflections), so the shear part is the
+    /// increase the shear terms cause.
+    /// </summary>
+    public static MemberDeflection PerforatedHand(SweepSpec spec, EndFixity ends, double height)
+    {
+        var o = spec.Opening!.For(spec.Length, height);
+        WallOpening[] ops = [new WallOpening(o.X, o.Y, o.Width, o.Height, o.Label)];
+        var full = PerforatedWall.Analyze(spec.Length, height, spec.Thickness, spec.E, spec.G, ends, ops, 1.0, spec.FormFactor);
+        var flex = PerforatedWall.Analyze(spec.Length, height, spec.Thickness, spec.E, FlexureOnlyShearModulusRatio * spec.E, ends, ops, 1.0, spec.FormFactor);
+        return new MemberDeflection(1.0, height, ends, flex.Deflection, full.Deflection - flex.Deflection, true, full.Method);
     }
 
     private static string G(double v) => v.ToString("G6", CultureInfo.InvariantCulture);

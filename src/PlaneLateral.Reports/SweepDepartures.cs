@@ -21,7 +21,12 @@ public enum SweepHandFormula
 /// False with <see cref="Below"/> null: within the tolerance over the whole range.</param>
 public sealed record SweepDeparture(EndFixity Ends, SweepHandFormula Formula, double? Below, bool WholeRange, string ReferenceModel, double Tolerance)
 {
-    public string FormulaName => Formula == SweepHandFormula.FlexureOnly
+    /// <summary>True: the hand values are the perforated-wall method's (a wall with a window), not the pier formula's.</summary>
+    public bool Perforated { get; init; }
+
+    public string FormulaName => Perforated
+        ? (Formula == SweepHandFormula.FlexureOnly ? "perforated-wall method without shear deformation" : "perforated-wall method, flexure + shear")
+        : Formula == SweepHandFormula.FlexureOnly
         ? (Ends == EndFixity.Cantilever ? "flexure only, P h^3/(3EI)" : "flexure only, P h^3/(12EI)")
         : (Ends == EndFixity.Cantilever ? "flexure + shear, P h^3/(3EI) + f P h/(AG)" : "flexure + shear, P h^3/(12EI) + f P h/(AG)");
 
@@ -69,7 +74,7 @@ public static class SweepDepartures
                         below = log ? Math.Pow(10, x) : x;
                         break;
                     }
-                list.Add(new SweepDeparture(ends, formula, below, whole, r.FeModels[0], s.Tolerance));
+                list.Add(new SweepDeparture(ends, formula, below, whole, r.FeModels[0], s.Tolerance) { Perforated = s.Opening is not null });
             }
         }
         return list;

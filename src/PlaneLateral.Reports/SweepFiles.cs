@@ -55,7 +55,13 @@ public static class SweepFiles
         for (int m = 0; m < r.FeModels.Count; m++)
             sb.Append($"# fe{m + 1}: {r.FeModels[m]}: {r.FeDescriptions[m]}\n");
         sb.Append($"# wall: length {F(s.Length)} {len}, thickness {F(s.Thickness)} {len}; material {s.MaterialName}: E = {F(s.E)} {u.Label(Quantity.Stress)}, G = {F(s.G)} {u.Label(Quantity.Stress)}; shear form factor f = {F(s.FormFactor)}\n");
-        sb.Append($"# hand: Piers.Rectangular, cantilever P h^3/(3EI) or fixed-fixed P h^3/(12EI) plus f P h/(AG), I = t l^3/12, A = t l (elementary beam theory with Timoshenko's shear term; Gere & Timoshenko, Mechanics of Materials)\n");
+        if (s.Opening is { } o)
+        {
+            sb.Append($"# opening: {o.Words} at every point (width {F(o.WidthFraction)} l, height {F(o.HeightFraction)} h, sill at {F((1 - o.HeightFraction) / 2)} h, left edge at {F((1 - o.WidthFraction) / 2)} l)\n");
+            sb.Append($"# hand: PerforatedWall, solid wall minus the strip holding the window plus its two piers in parallel, each piece P h^3/(3EI) or P h^3/(12EI) plus f P h/(AG) (Taly, Design of Reinforced Masonry Structures, ch. 7); hand flexural deflection = the same method without shear deformation (G = 1e12 E), hand shear deflection = total minus that\n");
+        }
+        else
+            sb.Append($"# hand: Piers.Rectangular, cantilever P h^3/(3EI) or fixed-fixed P h^3/(12EI) plus f P h/(AG), I = t l^3/12, A = t l (elementary beam theory with Timoshenko's shear term; Gere & Timoshenko, Mechanics of Materials)\n");
         sb.Append($"# tolerance: |FE/hand - 1| <= {F(s.Tolerance)}; {CsvField(producedBy)}\n");
         foreach (var d in SweepDepartures.Find(r))
             sb.Append($"# departure: {d.Words(s.From, s.To)}\n");
@@ -68,7 +74,7 @@ public static class SweepFiles
     {
         var s = r.Spec;
         bool log = s.Spacing == SweepSpacing.Geometric;
-        var plot = PlotStyle.New("Wall stiffness: FE / hand against aspect ratio", XLabel(log), "FE stiffness / hand stiffness [-]");
+        var plot = PlotStyle.New(s.Opening is null ? "Wall stiffness: FE / hand against aspect ratio" : "Wall with a window: FE / perforated-wall method against aspect ratio", XLabel(s, log), "FE stiffness / hand stiffness [-]");
         var band = plot.Add.VerticalSpan(1 - s.Tolerance, 1 + s.Tolerance);
         band.FillStyle.Color = PlotStyle.Band.WithAlpha(0.8);
         band.LineStyle.Width = 0;
@@ -109,7 +115,7 @@ public static class SweepFiles
             sc.LinePattern = ends == EndFixity.Cantilever ? ScottPlot.LinePattern.Solid : ScottPlot.LinePattern.Dashed;
             sc.MarkerSize = 6;
             sc.MarkerShape = ScottPlot.MarkerShape.FilledTriangleDown;
-            sc.LegendText = $"{EndsName(ends)}, {r.FeModels[0]} / flexure-only formula";
+            sc.LegendText = $"{EndsName(ends)}, {r.FeModels[0]} / {(s.Opening is null ? "flexure-only formula" : "hand method without shear")}";
             foreach (var d in departures.Where(d => d.Ends == ends && d.Below is not null))
             {
                 var v = plot.Add.VerticalLine(X(d.Below!.Value, log));
@@ -127,7 +133,9 @@ public static class SweepFiles
         var png = PlotStyle.Png(plot);
         string departureWords = string.Join("; ", departures.Select(d => d.Words(s.From, s.To)));
         return new Figure("sweep-ratio.png", "FE/hand stiffness against h/l",
-            $"Ratio of each FE model's lateral stiffness to the hand pier formula (flexure + shear), and of the reference ({r.FeModels[0]}) to the flexure-only formula (triangles), {Describe(s)}. Shaded: the tolerance band 1 ± {Pct(s.Tolerance)}. Dotted line: h/l = {SquatAspectRatio}, below which plane sections are doubtful (common practice). Densely dashed lines: where a hand formula leaves the band. {departureWords}. Timoshenko line members follow the same beam theory as the hand formula, so their ratio is 1 to rounding: that checks the arithmetic, not the theory; the plane-stress panel shares none of its assumptions.",
+            s.Opening is null
+            ? $"Ratio of each FE model's lateral stiffness to the hand pier formula (flexure + shear), and of the reference ({r.FeModels[0]}) to the flexure-only formula (triangles), {Describe(s)}. Shaded: the tolerance band 1 ± {Pct(s.Tolerance)}. Dotted line: h/l = {SquatAspectRatio}, below which plane sections are doubtful (common practice). Densely dashed lines: where a hand formula leaves the band. {departureWords}. Timoshenko line members follow the same beam theory as the hand formula, so their ratio is 1 to rounding: that checks the arithmetic, not the theory; the plane-stress panel shares none of its assumptions."
+            : $"Ratio of each FE model's lateral stiffness to the perforated-wall method (flexure + shear), and of the reference ({r.FeModels[0]}) to the same method without shear deformation (triangles), {Describe(s)}. Shaded: the tolerance band 1 ± {Pct(s.Tolerance)}. Dotted line: h/l = {SquatAspectRatio} of the whole wall (common practice). Densely dashed lines: where a hand value leaves the band. {departureWords}. The equivalent frame lets the spandrels bend, where the hand method holds them rigid; the plane-stress panel shares neither model's assumptions.",
             png, PlotStyle.Width, PlotStyle.Height);
     }
 
@@ -136,7 +144,7 @@ public static class SweepFiles
     {
         var s = r.Spec;
         bool log = s.Spacing == SweepSpacing.Geometric;
-        var plot = PlotStyle.New("Shear share of the top deflection against aspect ratio", XLabel(log), "shear deflection / total deflection [%]");
+        var plot = PlotStyle.New("Shear share of the top deflection against aspect ratio", XLabel(s, log), "shear deflection / total deflection [%]");
         int c = 0;
         foreach (var ends in s.Ends)
         {
@@ -170,7 +178,13 @@ public static class SweepFiles
             png, PlotStyle.Width, PlotStyle.Height);
     }
 
-    private static string XLabel(bool log) => log ? "aspect ratio h/l [-], logarithmic scale" : "aspect ratio h/l [-]";
+    private static string XLabel(SweepSpec s, bool log)
+    {
+        string label = log ? "aspect ratio h/l [-], logarithmic scale" : "aspect ratio h/l [-]";
+        return s.Opening is { } o
+            ? $"{label}; centred window {o.WidthFraction.ToString("G4", CultureInfo.InvariantCulture)} l wide, {o.HeightFraction.ToString("G4", CultureInfo.InvariantCulture)} h high"
+            : label;
+    }
 
     private static double X(double aspect, bool log) => log ? Math.Log10(aspect) : aspect;
 
@@ -209,7 +223,7 @@ public static class SweepFiles
     private static string Describe(SweepSpec s)
     {
         var u = s.Units;
-        return $"solid wall l = {F(s.Length)} {u.LengthSymbol}, t = {F(s.Thickness)} {u.LengthSymbol}, {s.MaterialName} (E = {F(s.E)}, G = {F(s.G)} {u.Label(Quantity.Stress)}), f = {F(s.FormFactor)}";
+        return $"{(s.Opening is { } o ? $"wall with {o.Words}," : "solid wall")} l = {F(s.Length)} {u.LengthSymbol}, t = {F(s.Thickness)} {u.LengthSymbol}, {s.MaterialName} (E = {F(s.E)}, G = {F(s.G)} {u.Label(Quantity.Stress)}), f = {F(s.FormFactor)}";
     }
 
     private static string Pct(double f) => (100 * f).ToString("0.#", CultureInfo.InvariantCulture) + "%";

@@ -1,6 +1,9 @@
 using System.Globalization;
 using PlaneLateral.Analysis;
 using PlaneLateral.Hand;
+using PlaneLateral.Meshing;
+using PlaneLateral.Studies;
+using PlaneLateral.Units;
 using PlaneLateral.Model;
 
 namespace PlaneLateral.Reports;
@@ -62,8 +65,12 @@ public sealed class PanelWallModel : IConvergedSweepFeModel
         E = w.E, Nu = w.E / (2 * w.G) - 1,
         FloorTies = true,
         Top = w.Ends == EndFixity.FixedFixed ? PanelTop.Guided : PanelTop.Free,
-        Mesh = new PanelMeshSettings(PanelElementKind.Quad9, 0, ElementsAcross, MaxAspect: 4, MaxNodes: 40000, Refinements: Meshes),
+        Openings = w.Openings.Select(o => new PanelOpening(o.Label, o.X, o.Y, o.Width, o.Height)).ToArray(),
+        Mesh = new PanelMeshSettings(PanelElementKind.Quad9, 0, ElementsAcross, MaxAspect: 4, MaxNodes: MaxNodes, Refinements: Meshes),
     };
+
+    /// <summary>Largest finest mesh a sweep point may have (nodes); a wall needing more is refused before any work.</summary>
+    public const int MaxNodes = 40000;
 
     public (double Stiffness, double? ShearShare) Solve(SweepWall wall)
     {
@@ -85,6 +92,42 @@ public sealed class PanelWallModel : IConvergedSweepFeModel
         double nu = spec.E / (2 * spec.G) - 1;
         if (double.IsFinite(nu) && !(nu > -1 && nu < 0.5))
             return [$"the plane-stress panel needs an isotropic material, but E and G give Poisson's ratio E/(2G) - 1 = {nu.ToString("G4", CultureInfo.InvariantCulture)}, not below 0.5 (G is not above E/3). Fix: give --nu (G = E/(2(1+nu))), or a --G above E/3, or --no-panel to leave the panel out."];
+        if (spec.Opening is null) return [];
+        // A window leaves piers (1 - wf)·l/2 wide and wall (1 - hf)·h/2 deep above and below it; the mesh puts
+        // ElementsAcross elements across the narrowest of them. Every point's panel is planned (cheap) before any solve.
+        var u = spec.Units;
+        double l = u.ToSI(spec.Length, Quantity.Length), t = u.ToSI(spec.Thickness, Quantity.Length);
+        double e = u.ToSI(spec.E, Quantity.Stress), g = u.ToSI(spec.G, Quantity.Stress);
+        foreach (var ends in spec.Ends)
+            foreach (double a in spec.AspectRatios())
+            {
+                var w = new SweepWall(a, a * l, l, t, e, g, spec.FormFactor, ends) { Opening = spec.Opening };
+                var bad = PanelMesher.Check(Panel(w));
+                if (bad.Count > 0)
+                    return [$"at h/l = {a.ToString("G4", CultureInfo.InvariantCulture)} the plane-stress panel with {spec.Opening.Words} cannot be meshed: {string.Join("; ", bad.Select(q => q.Problem))}. Fix: give a smaller --opening-width or --opening-height (thicker piers and spandrels), a narrower h/l range, or --no-panel to leave the panel out."];
+            }
         return [];
+    }
+}
+
+/// <summary>
+/// A wall with a window as the equivalent frame of Timoshenko line members (docs/comparisons.md §3), built exactly as
+/// the perforated-wall comparison builds it (<see cref="EquivalentFrameWall"/>): piers beside the window, spandrels of
+/// their real depth above it, solid wall below (and above, fixed-fixed) as full-length wall members, rigid zones and
+/// links where pieces overlap; unit force shared by the top joints. It reports no shear share.
+/// </summary>
+public sealed class EquivalentFrameWallModel : ISweepFeModel
+{
+    public string Name => "equivalent frame";
+
+    public string Description =>
+        "the wall as the equivalent frame of exact Timoshenko line members the perforated-wall comparison generates (docs/comparisons.md section 3): piers beside the window, spandrels of their real depth, solid wall below (and above, fixed-fixed) as full-length wall members, rigid zones and links where pieces overlap; base fixed, top free or held against rotation; unit force shared by the top joints, stiffness 1/(mean top deflection)";
+
+    public (double Stiffness, double? ShearShare) Solve(SweepWall w)
+    {
+        var mat = new Material("sweep", w.E, w.G, w.E / (2 * w.G) - 1);
+        var (k, _, _) = EquivalentFrameWall.Stiffness($"sweep wall h/l = {w.AspectRatio.ToString("G6", CultureInfo.InvariantCulture)}",
+            w.Length, w.Height, w.Thickness, mat, w.FormFactor, w.Ends == EndFixity.FixedFixed, w.Openings);
+        return (k, null);
     }
 }
