@@ -32,11 +32,8 @@ public static class CliApp
 
     private static RootCommand BuildCommands(TextWriter stdout, TextWriter stderr)
     {
-        var modelArg = new Argument<string>("model") { Description = "Model file (JSON, format described in docs/model-format.md)." };
-        var outOption = new Option<string?>("--out", "-o")
-        {
-            Description = "Folder for the results files (created if missing). Default: planelateral-results/<model name> in the current folder.",
-        };
+        var modelArg = CommandSupport.ModelArgument();
+        var outOption = CommandSupport.OutOption("the results files");
 
         var solve = new Command("solve", "Solve every load case and combination of a model; print a summary and write results (JSON and CSV).")
         {
@@ -63,44 +60,26 @@ public static class CliApp
         return root;
     }
 
-    private static string DefaultOutputFolder(string modelPath) =>
-        Path.Combine(Directory.GetCurrentDirectory(), "planelateral-results", Path.GetFileNameWithoutExtension(modelPath));
-
     private static int Solve(string modelPath, string? outDir, TextWriter stdout, TextWriter stderr, bool withComparisons = false)
     {
-        StructureModel model;
-        AnalysisResult result;
-        ComparisonReport? comparisons = null;
-        try
+        bool solved = CommandSupport.TrySolve(() =>
         {
-            model = ModelReader.ReadFile(modelPath);
-            result = LinearStaticAnalysis.Run(model);
-            if (withComparisons && model.Comparisons.Count > 0) comparisons = ComparisonStudy.Run(model, ComparisonStudy.DefaultTolerance, result);
-        }
-        catch (ModelInputException e)
-        {
-            stderr.Write(e.Message + "\nNothing was written.\n");
-            return ExitCodes.BadModel;
-        }
-        catch (UnstableModelException e)
-        {
-            stderr.Write(e.Message + "\nNothing was written.\n");
-            return ExitCodes.Unstable;
-        }
+            var model = ModelReader.ReadFile(modelPath);
+            var result = LinearStaticAnalysis.Run(model);
+            var comparisons = withComparisons && model.Comparisons.Count > 0 ? ComparisonStudy.Run(model, ComparisonStudy.DefaultTolerance, result) : null;
+            return (result, comparisons);
+        }, stderr, out var solution, out int exit);
+        if (!solved) return exit;
+        var (result, comparisons) = solution;
 
-        string folder = outDir ?? DefaultOutputFolder(modelPath);
-        IReadOnlyList<string> written;
-        try
+        string folder = outDir ?? CommandSupport.DefaultFolder(modelPath);
+        bool wrote = CommandSupport.TryWrite(() =>
         {
             var files = ResultFiles.Render(result).ToList();
             if (comparisons is not null) files.AddRange(ComparisonFiles.Render(comparisons, $"PlaneLateral {ResultFiles.Version}"));
-            written = AtomicFiles.WriteAll(folder, files);
-        }
-        catch (IOException e)
-        {
-            stderr.Write($"{e.Message}\nFix: choose a writable folder with --out. No results file was replaced.\n");
-            return ExitCodes.OutputFailed;
-        }
+            return AtomicFiles.WriteAll(folder, files);
+        }, "results", stderr, out var written, out exit);
+        if (!wrote) return exit;
 
         stdout.Write($"PlaneLateral {ResultFiles.Version}: linear static analysis\n\n");
         stdout.Write(SolveReport.Render(result, modelPath));

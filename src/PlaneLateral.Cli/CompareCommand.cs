@@ -14,10 +14,7 @@ internal static class CompareCommand
     public static Command Build(TextWriter stdout, TextWriter stderr)
     {
         var modelArg = new Argument<string>("model") { Description = "Model file (JSON) with a \"comparisons\" list (docs/comparisons.md)." };
-        var outOption = new Option<string?>("--out", "-o")
-        {
-            Description = "Folder for comparisons.json and comparisons.csv (created if missing). Default: planelateral-results/<model name> in the current folder.",
-        };
+        var outOption = CommandSupport.OutOption("comparisons.json and comparisons.csv");
         var tolOption = new Option<string?>("--tolerance")
         {
             Description = "Band on FE/hand − 1 for checks that set none of their own, as a fraction (0.10) or a percentage (10%). Default 0.10.",
@@ -60,38 +57,16 @@ internal static class CompareCommand
             stderr.Write(error + "\nNothing was written.\n");
             return ExitCodes.Usage;
         }
-        ComparisonReport report;
-        try
+        if (!CommandSupport.TrySolve(() => ModelReader.ReadFile(modelPath), stderr, out var model, out int exit)) return exit;
+        if (model.Comparisons.Count == 0)
         {
-            var model = ModelReader.ReadFile(modelPath);
-            if (model.Comparisons.Count == 0)
-            {
-                stderr.Write($"{modelPath}: the model declares no comparison checks.\nFix: add \"comparisons\": [...] (see docs/comparisons.md), or run 'planelateral solve {modelPath}'.\nNothing was written.\n");
-                return ExitCodes.BadModel;
-            }
-            report = ComparisonStudy.Run(model, tol);
-        }
-        catch (ModelInputException e)
-        {
-            stderr.Write(e.Message + "\nNothing was written.\n");
+            stderr.Write($"{modelPath}: the model declares no comparison checks.\nFix: add \"comparisons\": [...] (see docs/comparisons.md), or run 'planelateral solve {modelPath}'.\nNothing was written.\n");
             return ExitCodes.BadModel;
         }
-        catch (UnstableModelException e)
-        {
-            stderr.Write(e.Message + "\nNothing was written.\n");
-            return ExitCodes.Unstable;
-        }
-        string folder = outDir ?? Path.Combine(Directory.GetCurrentDirectory(), "planelateral-results", Path.GetFileNameWithoutExtension(modelPath));
-        IReadOnlyList<string> written;
-        try
-        {
-            written = AtomicFiles.WriteAll(folder, ComparisonFiles.Render(report, $"PlaneLateral {ResultFiles.Version}"));
-        }
-        catch (IOException e)
-        {
-            stderr.Write($"{e.Message}\nFix: choose a writable folder with --out. No comparison file was replaced.\n");
-            return ExitCodes.OutputFailed;
-        }
+        if (!CommandSupport.TrySolve(() => ComparisonStudy.Run(model, tol), stderr, out var report, out exit)) return exit;
+        string folder = outDir ?? CommandSupport.DefaultFolder(modelPath);
+        if (!CommandSupport.TryWrite(() => AtomicFiles.WriteAll(folder, ComparisonFiles.Render(report, $"PlaneLateral {ResultFiles.Version}")), "comparison", stderr, out var written, out exit))
+            return exit;
         stdout.Write($"PlaneLateral {ResultFiles.Version}: hand methods beside the finite-element model\n\n");
         stdout.Write($"Model     {report.ModelTitle}\nFile      {modelPath}\n\n");
         stdout.Write(CompareReport.Render(report));

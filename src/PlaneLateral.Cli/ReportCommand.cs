@@ -12,11 +12,8 @@ internal static class ReportCommand
 {
     public static Command Build(TextWriter stdout, TextWriter stderr)
     {
-        var modelArg = new Argument<string>("model") { Description = "Model file (JSON, format described in docs/model-format.md)." };
-        var outOption = new Option<string?>("--out", "-o")
-        {
-            Description = "Folder for report.html, report.md and the PNG figures (created if missing). Default: planelateral-results/<model name>/report in the current folder.",
-        };
+        var modelArg = CommandSupport.ModelArgument();
+        var outOption = CommandSupport.OutOption("report.html, report.md and the PNG figures", "report");
         var tolOption = new Option<string?>("--tolerance")
         {
             Description = "Band on FE/hand − 1 for comparison checks that set none of their own, as 0.10 or 10%. Default 0.10.",
@@ -37,35 +34,17 @@ internal static class ReportCommand
             stderr.Write(error + "\nNothing was written.\n");
             return ExitCodes.Usage;
         }
-        ReportDocument doc;
-        try
+        bool solved = CommandSupport.TrySolve(() =>
         {
             var model = ModelReader.ReadFile(modelPath);
             var result = LinearStaticAnalysis.Run(model);
             var comparisons = model.Comparisons.Count > 0 ? ComparisonStudy.Run(model, tol, result) : null;
-            doc = ModelReport.Build(result, comparisons, Path.GetFileName(modelPath), $"PlaneLateral {ResultFiles.Version}");
-        }
-        catch (ModelInputException e)
-        {
-            stderr.Write(e.Message + "\nNothing was written.\n");
-            return ExitCodes.BadModel;
-        }
-        catch (UnstableModelException e)
-        {
-            stderr.Write(e.Message + "\nNothing was written.\n");
-            return ExitCodes.Unstable;
-        }
-        string folder = outDir ?? Path.Combine(Directory.GetCurrentDirectory(), "planelateral-results", Path.GetFileNameWithoutExtension(modelPath), "report");
-        IReadOnlyList<string> written;
-        try
-        {
-            written = OutputSet.WriteAll(folder, ModelReport.Render(doc));
-        }
-        catch (IOException e)
-        {
-            stderr.Write($"{e.Message}\nFix: choose a writable folder with --out. No report file was replaced.\n");
-            return ExitCodes.OutputFailed;
-        }
+            return ModelReport.Build(result, comparisons, Path.GetFileName(modelPath), $"PlaneLateral {ResultFiles.Version}");
+        }, stderr, out var doc, out int exit);
+        if (!solved) return exit;
+        string folder = outDir ?? CommandSupport.DefaultFolder(modelPath, "report");
+        if (!CommandSupport.TryWrite(() => OutputSet.WriteAll(folder, ModelReport.Render(doc)), "report", stderr, out var written, out exit))
+            return exit;
         stdout.Write($"PlaneLateral {ResultFiles.Version}: report\n\n{doc.Title}\n");
         stdout.Write($"{doc.Tables.Count()} tables, {doc.Figures.Count()} figures.\n");
         stdout.Write($"\nCaution: {ModelReport.Caution}\n");

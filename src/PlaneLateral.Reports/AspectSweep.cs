@@ -252,7 +252,7 @@ public static class AspectSweep
     /// <summary>Runs the sweep on every core.</summary>
     /// <param name="models">FE models in order (the first is the reference); at least one.</param>
     /// <param name="progress">Told the number of finished points (of Points × Ends) as they finish; may be called from any thread.</param>
-    /// <exception cref="ArgumentException">The spec has problems (<see cref="Problems"/>), all listed.</exception>
+    /// <exception cref="ArgumentException">The spec has problems (<see cref="Problems(SweepSpec, IReadOnlyList{ISweepFeModel})"/>), all listed.</exception>
     public static SweepResult Run(SweepSpec spec, IReadOnlyList<ISweepFeModel> models, IProgress<int>? progress = null)
     {
         var problems = Problems(spec, models);

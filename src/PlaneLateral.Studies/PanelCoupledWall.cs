@@ -62,7 +62,7 @@ public sealed class PanelCoupledWall(int Refinement = PanelCoupledWall.DefaultRe
 
     /// <summary>
     /// Why the panel cannot represent the check, or null when it can: the continuum has one thickness and no counterpart
-    /// of a stiffness multiplier on the beams' I, and the mesh must stay within <paramref name="MaxNodes"/>.
+    /// of a stiffness multiplier on the beams' I, and the mesh must stay within the record's MaxNodes.
     /// </summary>
     public string? Unsupported(CoupledWallCheck c)
     {
@@ -135,7 +135,7 @@ public sealed class PanelCoupledWall(int Refinement = PanelCoupledWall.DefaultRe
     }
 
     /// <summary>The panel (with the load as story forces on the ties, case 0) and its mesh.</summary>
-    /// <exception cref="ArgumentException">The mesh would exceed <see cref="MaxNodes"/>.</exception>
+    /// <exception cref="ArgumentException">The mesh would exceed the record's MaxNodes.</exception>
     public (WallPanel Panel, PanelMesh Mesh) Build(CoupledWallCheck c, CoupledWallLoad load, double magnitude, Fill fill = Fill.Openings)
     {
         long planned = PlannedNodes(c);

@@ -1,0 +1,78 @@
+using System.CommandLine;
+using PlaneLateral.Analysis;
+using PlaneLateral.Model;
+using PlaneLateral.Output;
+
+namespace PlaneLateral.Cli;
+
+/// <summary>
+/// What the model-reading commands share: the model argument, the --out option, the folder the results go to by
+/// default, and the two ways reading and solving can end without output (a bad model, a mechanism), each reported the
+/// same way with its exit code.
+/// </summary>
+internal static class CommandSupport
+{
+    public static Argument<string> ModelArgument() =>
+        new("model") { Description = "Model file (JSON, format described in docs/model-format.md)." };
+
+    /// <param name="contents">What the folder receives, e.g. "report.html, report.md and the PNG figures".</param>
+    /// <param name="subfolder">Folder below planelateral-results/&lt;model name&gt;/ by default, or null for that folder itself.</param>
+    public static Option<string?> OutOption(string contents, string? subfolder = null) => new("--out", "-o")
+    {
+        Description = $"Folder for {contents} (created if missing). Default: planelateral-results/<model name>{(subfolder is null ? "" : "/" + subfolder)} in the current folder.",
+    };
+
+    /// <summary>planelateral-results/&lt;model name&gt;[/subfolder] below the current folder.</summary>
+    public static string DefaultFolder(string modelPath, string? subfolder = null)
+    {
+        string f = Path.Combine(Directory.GetCurrentDirectory(), "planelateral-results", Path.GetFileNameWithoutExtension(modelPath));
+        return subfolder is null ? f : Path.Combine(f, subfolder);
+    }
+
+    /// <summary>
+    /// Runs a command's reading and solving step. A bad model (exit 2) or a mechanism (exit 3) is written to
+    /// <paramref name="stderr"/> with "Nothing was written." and false is returned with the exit code.
+    /// </summary>
+    public static bool TrySolve<T>(Func<T> work, TextWriter stderr, out T value, out int exitCode)
+    {
+        try
+        {
+            value = work();
+            exitCode = ExitCodes.Success;
+            return true;
+        }
+        catch (ModelInputException e)
+        {
+            stderr.Write(e.Message + "\nNothing was written.\n");
+            exitCode = ExitCodes.BadModel;
+        }
+        catch (UnstableModelException e)
+        {
+            stderr.Write(e.Message + "\nNothing was written.\n");
+            exitCode = ExitCodes.Unstable;
+        }
+        value = default!;
+        return false;
+    }
+
+    /// <summary>
+    /// Writes the files atomically (<see cref="AtomicFiles"/>); an unwritable folder is reported (exit 4) saying that no
+    /// <paramref name="kind"/> file was replaced.
+    /// </summary>
+    public static bool TryWrite(Func<IReadOnlyList<string>> write, string kind, TextWriter stderr, out IReadOnlyList<string> written, out int exitCode)
+    {
+        try
+        {
+            written = write();
+            exitCode = ExitCodes.Success;
+            return true;
+        }
+        catch (IOException e)
+        {
+            stderr.Write($"{e.Message}\nFix: choose a writable folder with --out. No {kind} file was written or replaced.\n");
+            written = [];
+            exitCode = ExitCodes.OutputFailed;
+            return false;
+        }
+    }
+}
