@@ -10,10 +10,16 @@ public static class AtomicFiles
 {
     private static readonly UTF8Encoding Utf8NoBom = new(false);
 
-    /// <summary>Writes <paramref name="files"/> (file name → text) into <paramref name="directory"/>, creating it if needed.</summary>
+    /// <summary>Writes <paramref name="files"/> (file name → text, as UTF-8 without a byte-order mark) into <paramref name="directory"/>, creating it if needed.</summary>
     /// <returns>Full paths written, in the order given.</returns>
     /// <exception cref="IOException">The folder cannot be created or written; nothing was replaced.</exception>
-    public static IReadOnlyList<string> WriteAll(string directory, IReadOnlyList<(string Name, string Text)> files)
+    public static IReadOnlyList<string> WriteAll(string directory, IReadOnlyList<(string Name, string Text)> files) =>
+        WriteAll(directory, files.Select(f => (f.Name, Utf8NoBom.GetBytes(f.Text))).ToArray());
+
+    /// <summary>Writes <paramref name="files"/> (file name → bytes: text, PNG, ...) into <paramref name="directory"/>, creating it if needed.</summary>
+    /// <returns>Full paths written, in the order given.</returns>
+    /// <exception cref="IOException">The folder cannot be created or written; nothing was replaced.</exception>
+    public static IReadOnlyList<string> WriteAll(string directory, IReadOnlyList<(string Name, byte[] Bytes)> files)
     {
         try
         {
@@ -27,7 +33,7 @@ public static class AtomicFiles
         var temps = new List<(string Temp, string Final)>();
         try
         {
-            foreach (var (name, text) in files)
+            foreach (var (name, bytes) in files)
             {
                 string final = Path.Combine(directory, name);
                 // A folder standing where a file must go would stop the renames half-way: refuse before any target changes.
@@ -36,7 +42,6 @@ public static class AtomicFiles
                 temps.Add((temp, final));
                 using (var fs = new FileStream(temp, FileMode.CreateNew, FileAccess.Write, FileShare.None))
                 {
-                    var bytes = Utf8NoBom.GetBytes(text);
                     fs.Write(bytes);
                     fs.Flush(flushToDisk: true);
                 }

@@ -64,20 +64,8 @@ public static class MatrixMarket
     /// <summary>Reads a Matrix Market "array real general" n×1 matrix.</summary>
     public static double[] ReadArray(TextReader reader)
     {
-        ArgumentNullException.ThrowIfNull(reader);
-        string? header = reader.ReadLine();
-        if (header is null || !header.StartsWith("%%MatrixMarket", StringComparison.OrdinalIgnoreCase) || !header.Contains("array", StringComparison.OrdinalIgnoreCase))
-            throw new FormatException("Not a Matrix Market array file.");
-        string? line;
-        do line = reader.ReadLine(); while (line is not null && (line.StartsWith('%') || line.Trim().Length == 0));
-        if (line is null) throw new FormatException("Size line missing.");
-        var size = line.Split((char[]?)null, StringSplitOptions.RemoveEmptyEntries);
-        int n = int.Parse(size[0], CultureInfo.InvariantCulture);
-        if (int.Parse(size[1], CultureInfo.InvariantCulture) != 1) throw new FormatException("Only one column is read.");
-        var v = new double[n];
-        for (int i = 0; i < n; i++)
-            v[i] = double.Parse((reader.ReadLine() ?? throw new FormatException("Value missing.")).Trim(), CultureInfo.InvariantCulture);
-        return v;
+        var columns = ReadColumns(reader);
+        return columns.Length == 1 ? columns[0] : throw new FormatException("Only one column is read.");
     }
 
     /// <summary>

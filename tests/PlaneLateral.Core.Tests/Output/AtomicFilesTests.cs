@@ -3,7 +3,7 @@ using PlaneLateral.Output;
 namespace PlaneLateral.Tests.Output;
 
 /// <summary>
-/// All files or none (DEVELOPERS.md, Outputs; common practice for a results set): <see cref="AtomicFiles.WriteAll"/>
+/// All files or none (DEVELOPERS.md, Outputs; common practice for a results set): <see cref="AtomicFiles"/>.WriteAll
 /// replaces every target or, when one cannot be written, none, and leaves no temporary file behind.
 /// </summary>
 public sealed class AtomicFilesTests : IDisposable
