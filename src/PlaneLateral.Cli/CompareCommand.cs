@@ -89,7 +89,7 @@ internal static class CompareReport
         {
             n++;
             string shares = row.Hand.FlexuralShare is double fl && row.Hand.ShearShare is double sh ? $"{Pct(fl)} / {Pct(sh)}" : "-";
-            var panel = row.Fe.FirstOrDefault(f => f.Model == "plane-stress panel");
+            var panel = row.Panel;
             t.Add(row.CheckId, row.Subject, Short(row.Hand.Method.Name), row.Unit, TextTable.Num(row.Hand.Value), TextTable.Num(row.Reference.Value),
                 row.Ratio.ToString("0.000", CultureInfo.InvariantCulture),
                 panel is null ? "-" : TextTable.Num(panel.Value), panel is null ? "-" : (panel.Value / row.Hand.Value).ToString("0.000", CultureInfo.InvariantCulture), shares,

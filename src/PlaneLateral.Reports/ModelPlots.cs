@@ -185,8 +185,12 @@ public static class ModelPlots
         {
             var row = rows[i];
             double pos = 3.0 * (n - 1 - i);   // first row on top
-            bars.Add(new Bar { Position = pos + 0.5, Value = row.Hand.Value, FillColor = PlotStyle.Ochre, LineWidth = 0, Orientation = Orientation.Horizontal });
-            bars.Add(new Bar { Position = pos - 0.5, Value = row.Reference.Value, FillColor = PlotStyle.Ink, LineWidth = 0, Orientation = Orientation.Horizontal });
+            var panel = row.Panel == row.Reference ? null : row.Panel;
+            double step = panel is null ? 1.0 : 0.8, size = panel is null ? 0.8 : 0.7;
+            bars.Add(new Bar { Position = pos + step / 2 * (panel is null ? 1 : 2), Value = row.Hand.Value, FillColor = PlotStyle.Ochre, LineWidth = 0, Orientation = Orientation.Horizontal, Size = size });
+            bars.Add(new Bar { Position = panel is null ? pos - step / 2 : pos, Value = row.Reference.Value, FillColor = PlotStyle.Ink, LineWidth = 0, Orientation = Orientation.Horizontal, Size = size });
+            if (panel is not null)
+                bars.Add(new Bar { Position = pos - step, Value = panel.Value, FillColor = PlotStyle.Plum, LineWidth = 0, Orientation = Orientation.Horizontal, Size = size });
             ticks.Add(new Tick(pos, $"{row.CheckId} {Shorten(row.Subject)}\n{MethodShort(row.Hand.Method.Name)}", true));
             var label = plot.Add.Text($"FE/hand {F(row.Ratio, "0.00")}", Math.Max(row.Hand.Value, row.Reference.Value), pos);
             label.LabelFontSize = 12;
@@ -199,17 +203,22 @@ public static class ModelPlots
         plot.Axes.Left.TickGenerator = new ScottPlot.TickGenerators.NumericManual(ticks.ToArray());
         plot.Axes.Left.MajorTickStyle.Length = 0;
         plot.Axes.Left.TickLabelStyle.FontSize = 12;
-        double max = rows.Max(x => Math.Max(x.Hand.Value, x.Reference.Value));
+        double max = rows.Max(x => Math.Max(Math.Max(x.Hand.Value, x.Reference.Value), x.Panel?.Value ?? 0));
         plot.Axes.SetLimits(0, max * 1.3, -1.6, 3.0 * (n - 1) + 1.6);
         plot.Grid.YAxisStyle.IsVisible = false;
         var hand = plot.Add.ScatterPoints(new double[] { double.NaN }, new double[] { double.NaN });
         hand.Color = PlotStyle.Ochre; hand.MarkerShape = MarkerShape.FilledSquare; hand.MarkerSize = 12; hand.LegendText = "hand method";
         var fe = plot.Add.ScatterPoints(new double[] { double.NaN }, new double[] { double.NaN });
         fe.Color = PlotStyle.Ink; fe.MarkerShape = MarkerShape.FilledSquare; fe.MarkerSize = 12; fe.LegendText = "FE (reference model)";
+        if (rows.Any(x => x.Panel is not null && x.Panel != x.Reference))
+        {
+            var pn = plot.Add.ScatterPoints(new double[] { double.NaN }, new double[] { double.NaN });
+            pn.Color = PlotStyle.Plum; pn.MarkerShape = MarkerShape.FilledSquare; pn.MarkerSize = 12; pn.LegendText = "plane-stress panel";
+        }
         plot.ShowLegend(Edge.Bottom);   // below the axes, so it never covers a bar
         int height = Math.Max(PlotStyle.Height, 120 + 70 * n);
         return new Figure($"hand-vs-fe-{Slug(kind)}.png", $"Hand method beside FE: {kind}",
-            $"For each {kind} row, the hand-method value (ochre) and the reference FE value (blue) in {unit}, with FE/hand beside them (green within tolerance, red outside).",
+            $"For each {kind} row, the hand-method value (ochre), the reference FE value (blue) and, where the row has one, the converged plane-stress panel (plum) in {unit}, with the reference FE/hand beside them (green within tolerance, red outside).",
             PlotStyle.Png(plot, PlotStyle.Width, height), PlotStyle.Width, height);
     }
 

@@ -56,6 +56,12 @@ public sealed record ComparisonRow(
     /// <summary>The FE estimate the verdict is based on (the first).</summary>
     public FeEstimate Reference => Fe[0];
 
+    /// <summary>Name of the plane-stress panel estimate among <see cref="Fe"/>.</summary>
+    public const string PanelModelName = PanelEstimate.ModelName;
+
+    /// <summary>The plane-stress panel estimate, when the row has one (it is then never the verdict's reference alone).</summary>
+    public FeEstimate? Panel => Fe.FirstOrDefault(f => f.Model == PanelModelName);
+
     /// <summary>FE/hand for the reference estimate.</summary>
     public double Ratio => Reference.Value / Hand.Value;
 
