@@ -209,12 +209,7 @@ public static partial class LinearStaticAnalysis
                     var q = PanelSuperelement.LinkForces(mesh, p.Segments, pc);
                     for (int s = 0; s < p.Segments.Length; s++) forces.Add(new PanelLinkForce(p.Panel.Id, p.Masters[s], q[3 * s], q[3 * s + 1], q[3 * s + 2]));
                 }
-                var ku = new double[kw.Size];
-                kw.Multiply(uw, ku);
-                double rInf = 0, uInf = 0, fInf = 0;
-                for (int i = 0; i < ku.Length; i++) { rInf = Math.Max(rInf, Math.Abs(ku[i] - fw[i])); uInf = Math.Max(uInf, Math.Abs(uw[i])); fInf = Math.Max(fInf, Math.Abs(fw[i])); }
-                double den = kwNorm * uInf + fInf;
-                double eta = den == 0 ? 0 : rInf / den;
+                double eta = SolveError.Of(kw, kwNorm, uw, fw).BackwardError;
                 var whole = new EquilibriumCheck(ax, ay, am, rx, ry, rm);
                 linkCases.Add(new PanelLinkCase { Id = c.Id, Forces = forces, Whole = whole, WholeBackwardError = eta, CondensedBackwardError = c.BackwardError });
                 cases[ci] = new CaseResult

@@ -228,19 +228,7 @@ public static partial class LinearStaticAnalysis
             if (eq >= 0) full[j] = u[eq];
         }
 
-        // Residual of the solve.
-        var ku = new double[u.Length];
-        k.Multiply(u, ku);
-        double rr = 0, ff = 0, rInf = 0, uInf = 0, fInf = 0;
-        for (int i = 0; i < u.Length; i++)
-        {
-            double ri = ku[i] - f[i];
-            rr += ri * ri; ff += f[i] * f[i];
-            rInf = Math.Max(rInf, Math.Abs(ri)); uInf = Math.Max(uInf, Math.Abs(u[i])); fInf = Math.Max(fInf, Math.Abs(f[i]));
-        }
-        double residual = ff == 0 ? Math.Sqrt(rr) : Math.Sqrt(rr / ff);
-        double denominator = kNormInf * uInf + fInf;
-        double backward = denominator == 0 ? 0 : rInf / denominator;
+        var error = SolveError.Of(k, kNormInf, u, f);   // residual and backward error of the solve
 
         // Member end forces and the forces members take from each node.
         var nodeForce = new double[3 * n];
@@ -282,8 +270,8 @@ public static partial class LinearStaticAnalysis
             Reactions = reactions,
             MemberForces = memberForces,
             Equilibrium = new EquilibriumCheck(applied[0], applied[1], applied[2], rxSum, rySum, rmSum),
-            RelativeResidual = residual,
-            BackwardError = backward,
+            RelativeResidual = error.RelativeResidual,
+            BackwardError = error.BackwardError,
         };
     }
 

@@ -253,15 +253,7 @@ public static class PlaneStressAnalysis
     {
         var mesh = p.Mesh;
         int n = mesh.NodeCount, nn = mesh.Element.NodeCount;
-        var ku = new double[u.Length];
-        k.Multiply(u, ku);
-        double rr = 0, ff = 0, rInf = 0, uInf = 0, fInf = 0;
-        for (int i = 0; i < u.Length; i++)
-        {
-            double ri = ku[i] - f[i];
-            rr += ri * ri; ff += f[i] * f[i];
-            rInf = Math.Max(rInf, Math.Abs(ri)); uInf = Math.Max(uInf, Math.Abs(u[i])); fInf = Math.Max(fInf, Math.Abs(f[i]));
-        }
+        var error = SolveError.Of(k, kNorm, u, f);
 
         var ux = new double[n];
         var uy = new double[n];
@@ -319,7 +311,6 @@ public static class PlaneStressAnalysis
         double ax = 0, ay = 0, am = 0;
         for (int i = 0; i < n; i++) { ax += fext[2 * i]; ay += fext[2 * i + 1]; am += mesh.X[i] * fext[2 * i + 1] - mesh.Y[i] * fext[2 * i]; }
 
-        double denominator = kNorm * uInf + fInf;
         return new PlaneCaseResult
         {
             Id = id,
@@ -330,8 +321,8 @@ public static class PlaneStressAnalysis
             Reactions = reactions,
             GuideMoments = guide,
             Equilibrium = new EquilibriumCheck(ax, ay, am, rx, ry, rm),
-            RelativeResidual = ff == 0 ? Math.Sqrt(rr) : Math.Sqrt(rr / ff),
-            BackwardError = denominator == 0 ? 0 : rInf / denominator,
+            RelativeResidual = error.RelativeResidual,
+            BackwardError = error.BackwardError,
         };
     }
 
