@@ -203,13 +203,8 @@ public static partial class ModelReader
             double length = Positive(f, "length", Quantity.Length, "wall length", $"give the wall's length (parallel to the force) > 0 in {len}");
             double height = Positive(f, "height", Quantity.Length, "wall height", $"give the wall's height > 0 in {len}");
             double thick = Positive(f, "thickness", Quantity.Length, "wall thickness", $"give the wall's thickness > 0 in {len}");
-            var matId = f.RequiredString("material", "give the id of a material listed under \"materials\"");
-            Material? mat = null;
-            if (matId is not null && !_materials.TryGetValue(matId, out mat))
-                sink.Add(f.Token("material"), $"unknown material \"{matId}\"", $"use the id of a material listed under \"materials\"{Suggest(matId, _materials.Keys)}");
-            const string ffix = "give \"shearFactor\" as a number ≥ 1 (1.2, the default, for a rectangle)";
-            double factor = f.OptionalNumber("shearFactor", 1.2, ffix);
-            if (double.IsFinite(factor) && factor < 1) sink.Add(f.Token("shearFactor"), $"'shearFactor' is {factor}, below 1", ffix);
+            var mat = ReadMaterialRef(f);
+            double factor = ReadShearFactor(f);
             const string efix = "give \"ends\": \"cantilever\" (the default) or \"fixed-fixed\"";
             var endsText = f.OptionalString("ends", efix) ?? "cantilever";
             var ends = endsText switch { "cantilever" => CheckEnds.Cantilever, "fixed-fixed" => CheckEnds.FixedFixed, _ => (CheckEnds)(-1) };

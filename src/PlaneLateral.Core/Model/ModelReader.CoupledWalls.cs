@@ -85,16 +85,11 @@ public static partial class ModelReader
             double tb = f.Has("beamThickness")
                 ? Positive(f, "beamThickness", Quantity.Length, "coupling-beam thickness", $"give the beams' thickness > 0 in {len}, or leave it out to take the wall's")
                 : t;
-            var matId = f.RequiredString("material", "give the id of a material listed under \"materials\"");
-            Material? mat = null;
-            if (matId is not null && !_materials.TryGetValue(matId, out mat))
-                sink.Add(f.Token("material"), $"unknown material \"{matId}\"", $"use the id of a material listed under \"materials\"{Suggest(matId, _materials.Keys)}");
+            var mat = ReadMaterialRef(f);
             const string ifix = "give \"beamInertiaFactor\" as a number in (0, 1], e.g. 0.35 for cracked beams; leave it out for the gross section (1)";
             double iFactor = f.OptionalNumber("beamInertiaFactor", 1.0, ifix);
             if (double.IsFinite(iFactor) && !(iFactor > 0 && iFactor <= 1)) { sink.Add(f.Token("beamInertiaFactor"), $"'beamInertiaFactor' is {iFactor}, outside (0, 1]", ifix); iFactor = double.NaN; }
-            const string ffix = "give \"shearFactor\" as a number ≥ 1 (1.2, the default, for a rectangle)";
-            double factor = f.OptionalNumber("shearFactor", 1.2, ffix);
-            if (double.IsFinite(factor) && factor < 1) { sink.Add(f.Token("shearFactor"), $"'shearFactor' is {factor}, below 1", ffix); factor = double.NaN; }
+            double factor = ReadShearFactor(f);
             const string bfix = "give \"beamSpan\": \"clear\" (the clear opening, the default) or \"clear-plus-half-depth\"";
             var spanText = f.OptionalString("beamSpan", bfix) ?? "clear";
             var span = spanText switch { "clear" => BeamSpanRule.ClearOpening, "clear-plus-half-depth" => BeamSpanRule.ClearPlusHalfDepth, _ => (BeamSpanRule)(-1) };

@@ -15,9 +15,7 @@ public static partial class ModelReader
         private PanelWallCheck? ReadPanelWall(JsonFields f, string? id, string desc, double? tol, CheckLocation at)
         {
             var panelId = f.RequiredString("panel", "give the id of a wall panel listed under \"panels\", e.g. \"panel\": \"north wall\"");
-            const string ffix = "give \"shearFactor\" as a number ≥ 1 (1.2, the default, for a rectangle)";
-            double factor = f.OptionalNumber("shearFactor", 1.2, ffix);
-            if (double.IsFinite(factor) && factor < 1) sink.Add(f.Token("shearFactor"), $"'shearFactor' is {factor}, below 1", ffix);
+            double factor = ReadShearFactor(f);
             if (id is null || panelId is null || !(factor >= 1)) return null;
             var check = new PanelWallCheck(id, desc, tol, at, panelId, factor);
             _panelWalls.Add((check, f.Token("panel")!));

@@ -350,6 +350,25 @@ public static partial class ModelReader
             return -1;
         }
 
+        /// <summary>The material named at "material" (required), or null with the problem reported (unknown id, with a suggestion).</summary>
+        private Material? ReadMaterialRef(JsonFields f)
+        {
+            var id = f.RequiredString("material", "give the id of a material listed under \"materials\"");
+            if (id is null) return null;
+            if (_materials.TryGetValue(id, out var mat)) return mat;
+            sink.Add(f.Token("material"), $"unknown material \"{id}\"", $"use the id of a material listed under \"materials\"{Suggest(id, _materials.Keys)}");
+            return null;
+        }
+
+        /// <summary>The optional "shearFactor" of a check (default 1.2, a rectangle); a value below 1 is reported and read as NaN.</summary>
+        private double ReadShearFactor(JsonFields f)
+        {
+            const string fix = "give \"shearFactor\" as a number ≥ 1 (1.2, the default, for a rectangle)";
+            double factor = f.OptionalNumber("shearFactor", 1.2, fix);
+            if (double.IsFinite(factor) && factor < 1) { sink.Add(f.Token("shearFactor"), $"'shearFactor' is {factor}, below 1", fix); return double.NaN; }
+            return factor;
+        }
+
         private static string Suggest(string id, IEnumerable<string> known)
         {
             // Same id but for case, or a typo or two away (one for short ids); never every short id.
@@ -394,10 +413,7 @@ public static partial class ModelReader
                 (Section Section, JObject At) sec = default;
                 if (secId is not null && !_sections.TryGetValue(secId, out sec) && !_unusable.Contains("section:" + secId))
                     sink.Add(f.Token("section"), $"unknown section \"{secId}\"", $"use the id of a section listed under \"sections\"{Suggest(secId, _sections.Keys)}");
-                var matId = f.RequiredString("material", "give the id of a material listed under \"materials\"");
-                Material? mat = null;
-                if (matId is not null && !_materials.TryGetValue(matId, out mat))
-                    sink.Add(f.Token("material"), $"unknown material \"{matId}\"", $"use the id of a material listed under \"materials\"{Suggest(matId, _materials.Keys)}");
+                var mat = ReadMaterialRef(f);
 
                 bool relStart = false, relEnd = false;
                 if (f.Token("momentReleases") is { } rel)
