@@ -31,7 +31,7 @@ internal static class SweepCommand
         var noPanel = new Option<bool>("--no-panel") { Description = "Leave out the plane-stress panel (faster); the Timoshenko line members become the reference." };
         var outOption = new Option<string?>("--out", "-o") { Description = "Folder for sweep.csv, sweep-ratio.png and sweep-shear-share.png. Default planelateral-results/sweep." };
         var cmd = new Command("sweep",
-            "Vary a solid wall's aspect ratio h/l over a range, for cantilever and fixed-fixed ends, and set the hand pier formula (flexural, shear, total) beside the finite-element stiffness at every point; write a CSV and two PNG figures.")
+            "Vary a wall's aspect ratio h/l over a range, for cantilever and fixed-fixed ends, and set the hand formula (the pier formula, flexural, shear and total; with --opening-width and --opening-height, the perforated-wall method) beside the converged plane-stress panel and the Timoshenko line model at every point; write a CSV and two PNG figures.")
         {
             from, to, points, spacing, ends, units, material, e, g, nu, length, thickness, shearFactor, tol, openingWidth, openingHeight, noPanel, outOption,
         };
