@@ -131,10 +131,50 @@ internal sealed class JsonFields
         return double.NaN;
     }
 
+    /// <summary>
+    /// A whole-number key (a count, a version) read safely from any JSON number: an integer wider than 64 bits, a
+    /// fraction or a value outside [<paramref name="min"/>, <paramref name="max"/>] is reported with the key's own
+    /// message and null is returned, so the rest of the file is still checked. Null too when the key is absent.
+    /// </summary>
+    public long? WholeNumber(string key, long min, long max, string fix)
+    {
+        var t = Token(key);
+        if (t is null) return null;
+        string range = $"a whole number from {min.ToString(CultureInfo.InvariantCulture)} to {max.ToString(CultureInfo.InvariantCulture)}";
+        if (t.Type is not (JTokenType.Integer or JTokenType.Float))
+        {
+            _sink.Add(t, $"'{key}' must be {range}, found {Describe(t)}", fix);
+            return null;
+        }
+        if (t is JValue { Value: long v })
+        {
+            if (v >= min && v <= max) return v;
+            _sink.Add(t, $"'{key}' is {v.ToString(CultureInfo.InvariantCulture)}; it must be {range}", fix);
+            return null;
+        }
+        if (t.Type == JTokenType.Integer)   // wider than 64 bits (held as a BigInteger)
+        {
+            _sink.Add(t, $"'{key}' is {NumberText(t)}, far outside the range: it must be {range}", fix);
+            return null;
+        }
+        double d = t.Value<double>();
+        if (double.IsFinite(d) && d == Math.Floor(d) && d >= min && d <= max && Math.Abs(d) < 9e15) return (long)d;
+        string why = !double.IsFinite(d) ? "not a finite number" : d != Math.Floor(d) ? "not a whole number" : "out of range";
+        _sink.Add(t, $"'{key}' is {NumberText(t)}, {why}; it must be {range}", fix);
+        return null;
+    }
+
+    /// <summary>The number as written, shortened when it is very long (a 10 000-digit integer is not echoed whole).</summary>
+    public static string NumberText(JToken t)
+    {
+        string s = t.ToString(Formatting.None);
+        return s.Length <= 40 ? s : $"{s[..20]}... (a number of {s.Length} characters)";
+    }
+
     public static string Describe(JToken t) => t.Type switch
     {
         JTokenType.String => $"the string \"{Truncate((string)t!)}\"",
-        JTokenType.Integer or JTokenType.Float => $"the number {t.ToString(Formatting.None)}",
+        JTokenType.Integer or JTokenType.Float => $"the number {NumberText(t)}",
         JTokenType.Boolean => $"{t.ToString(Formatting.None)}",
         JTokenType.Array => "an array",
         JTokenType.Object => "an object",

@@ -136,10 +136,8 @@ public static partial class ModelReader
 
         private int WholeNumber(JsonFields f, string key, string fix)
         {
-            var t = f.Token(key);
-            if (t is { Type: JTokenType.Integer } && (long)t >= 1 && (long)t <= int.MaxValue) return (int)(long)t;
-            sink.Add(t ?? f.Object, $"'{key}' must be a whole number of 1 or more", fix);
-            return 1;
+            // Any JSON number is read safely (wider than 64 bits, fractional, negative: the key's own message; JsonFields).
+            return (int)(f.WholeNumber(key, 1, int.MaxValue, fix) ?? 1);
         }
     }
 }

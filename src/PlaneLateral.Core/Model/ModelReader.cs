@@ -18,23 +18,17 @@ public static partial class ModelReader
     /// <exception cref="ModelInputException">The file is missing, is not valid JSON, or describes an unusable model.</exception>
     public static StructureModel ReadFile(string path)
     {
-        string text;
-        try
-        {
-            if (ModelLimits.CheckFileSize(path, new FileInfo(path).Length) is { } tooLarge) throw new ModelInputException([tooLarge]);
-            text = File.ReadAllText(path);
-        }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException or NotSupportedException or ArgumentException)
-        {
-            throw new ModelInputException([new ModelDiagnostic(path, 0, 0, "", $"cannot read the file: {e.Message}", "check the path and that the file is readable")]);
-        }
-        return Parse(text, path);
+        // Only a regular file, at most ModelLimits.MaxFileBytes counted while reading (ModelFile.cs).
+        return Parse(ModelFile.ReadText(path), path);
     }
 
     /// <summary>Reads and validates a model from JSON text; <paramref name="fileName"/> is used in messages.</summary>
     public static StructureModel Parse(string json, string fileName = "<model>")
     {
         if (ModelLimits.CheckFileSize(fileName, json.Length) is { } tooLarge) throw new ModelInputException([tooLarge]);
+        // RFC 8259 only (plus comments): the forms the tree builder would accept leniently are refused first (StrictJson.cs).
+        var strict = StrictJson.Check(json);
+        if (strict is { Lenient: true }) throw NotJson(fileName, strict);
         JToken root;
         try
         {
@@ -55,6 +49,7 @@ public static partial class ModelReader
                 "the file is not valid JSON: " + StripLocation(e.Message), "correct the JSON syntax at that place (a missing comma, quote or bracket is the usual cause)")]);
         }
 
+        if (strict is not null) throw NotJson(fileName, strict);
         var sink = new DiagnosticSink(fileName);
         if (root is not JObject obj)
         {
@@ -68,6 +63,9 @@ public static partial class ModelReader
         if (sink.Any) throw new ModelInputException(sink.Items);
         return model!;
     }
+
+    private static ModelInputException NotJson(string fileName, StrictJson.Problem p) =>
+        new([new ModelDiagnostic(fileName, p.Line, p.Column, p.Path, "the file is not valid JSON: " + p.Message, p.Fix)]);
 
     private static string StripLocation(string message)
     {
@@ -153,8 +151,9 @@ public static partial class ModelReader
             var t = f.Token("formatVersion");
             const string fix = "add \"formatVersion\": 1 at the top of the model";
             if (t is null) { sink.Add(f.Object, "missing required key 'formatVersion'", fix); return; }
-            if (t.Type != JTokenType.Integer || (long)t != FormatVersion)
-                sink.Add(t, $"'formatVersion' is {t.ToString(Formatting.None)}; this version of PlaneLateral reads format version {FormatVersion}", fix);
+            // Compared as a JSON value: an integer wider than 64 bits is a BigInteger and must not be cast to long.
+            if (t is not JValue { Value: long v } || v != FormatVersion)
+                sink.Add(t, $"'formatVersion' is {(t.Type is JTokenType.Integer or JTokenType.Float ? JsonFields.NumberText(t) : t.ToString(Formatting.None))}; this version of PlaneLateral reads format version {FormatVersion}", fix);
         }
 
         private void ReadUnits(JsonFields f)
