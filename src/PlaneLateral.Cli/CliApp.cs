@@ -81,6 +81,7 @@ public static class CliApp
         }, "results", stderr, out var written, out exit);
         if (!wrote) return exit;
 
+        stderr.Write(ModelWarning.Lines(result.Model.Warnings));   // plausibility warnings (Model/Plausibility.cs)
         stdout.Write($"PlaneLateral {ResultFiles.Version}: linear static analysis\n\n");
         stdout.Write(SolveReport.Render(result, modelPath));
         if (comparisons is not null) stdout.Write("\n" + CompareReport.Render(comparisons));
@@ -94,6 +95,7 @@ public static class CliApp
         {
             var m = ModelReader.ReadFile(modelPath);
             stdout.Write($"{modelPath}: valid. {m.Nodes.Count} nodes, {m.Members.Count} members, {m.Supports.Count} supports, {m.LoadCases.Count} load cases, {m.Combinations.Count} combinations, {m.Comparisons.Count} comparison checks, units {m.Units}.\n");
+            stderr.Write(ModelWarning.Lines(m.Warnings));
             return ExitCodes.Success;
         }
         catch (ModelInputException e)

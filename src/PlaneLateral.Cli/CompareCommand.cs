@@ -58,6 +58,7 @@ internal static class CompareCommand
             return ExitCodes.Usage;
         }
         if (!CommandSupport.TrySolve(() => ModelReader.ReadFile(modelPath), stderr, out var model, out int exit)) return exit;
+        stderr.Write(ModelWarning.Lines(model.Warnings));
         if (model.Comparisons.Count == 0)
         {
             stderr.Write($"{modelPath}: the model declares no comparison checks.\nFix: add \"comparisons\": [...] (see docs/comparisons.md), or run 'planelateral solve {modelPath}'.\nNothing was written.\n");

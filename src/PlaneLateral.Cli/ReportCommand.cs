@@ -34,14 +34,17 @@ internal static class ReportCommand
             stderr.Write(error + "\nNothing was written.\n");
             return ExitCodes.Usage;
         }
+        IReadOnlyList<ModelWarning> warnings = [];
         bool solved = CommandSupport.TrySolve(() =>
         {
             var model = ModelReader.ReadFile(modelPath);
+            warnings = model.Warnings;
             var result = LinearStaticAnalysis.Run(model);
             var comparisons = model.Comparisons.Count > 0 ? ComparisonStudy.Run(model, tol, result) : null;
             return ModelReport.Build(result, comparisons, Path.GetFileName(modelPath), $"PlaneLateral {ResultFiles.Version}");
         }, stderr, out var doc, out int exit);
         if (!solved) return exit;
+        stderr.Write(ModelWarning.Lines(warnings));
         string folder = outDir ?? CommandSupport.DefaultFolder(modelPath, "report");
         if (!CommandSupport.TryWrite(() => OutputSet.WriteAll(folder, ModelReport.Render(doc)), "report", stderr, out var written, out exit))
             return exit;

@@ -63,6 +63,8 @@ public static partial class ModelReport
         // 1. Inputs and units
         blocks.Add(new Heading(2, Section("Inputs and units")));
         blocks.Add(new Paragraph($"Units: force {force}, length {len}; stress {u.Label(Quantity.Stress)}, stiffness {stiff}, moment {u.Label(Quantity.Moment)}. Every number in this report is in these units unless it says otherwise; ratios are dimensionless."));
+        if (m.Warnings.Count > 0)   // plausibility of the input (Model/Plausibility.cs)
+        { blocks.Add(new Paragraph($"Input warnings ({m.Warnings.Count}): the numbers in this report are as the file gives them; check each.")); blocks.Add(new BulletList(m.Warnings.Select(x => x.Text).ToList())); }
         blocks.Add(new Table("Model size", ["item", "count"],
             [["nodes", $"{m.Nodes.Count}"], ["members", $"{m.Members.Count}"], ["supports", $"{m.Supports.Count}"], ["load cases", $"{m.LoadCases.Count}"],
              ["combinations", $"{m.Combinations.Count}"], ["levels", $"{m.Building.Levels.Count}"], ["comparison checks", $"{m.Comparisons.Count}"], .. (r.Panels.Count > 0 ? new[] { new[] { "wall panels", $"{r.Panels.Count}" } } : [])], [1]));

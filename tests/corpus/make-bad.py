@@ -181,6 +181,24 @@ add("panel-level-a-hair-above-door", "levels", "floor level 1 (y = 2.2000001 m) 
     "$.panels[0].floorLevels[0]", wall_panel(lambda p: p.update({"floorLevels": [2.2000001], "storyForces": [{"case": "wind", "level": "top", "fx": 60}]})))
 add("panel-max-aspect-too-large", "magnitude", "the largest aspect ratio 1000000 is above 100", "$.panels[0].mesh.maxAspect",
     wall_panel(lambda p: p["mesh"].update({"maxAspect": 1e6})))
+# --- lenient JSON, refused since the reader is strict (RFC 8259 plus comments; Model/StrictJson.cs) ---
+# "0144" was read as octal 100: a silently wrong 100 m tall portal. Each form below was accepted before.
+add("syntax-leading-zero", "syntax", "a number with a leading zero (0144)", "$.nodes[1].y", text=good.replace('"y": 3.5', '"y": 0144', 1))
+add("syntax-single-quotes", "syntax", "a string in single quotes", "$.title", text=good.replace('"corpus base: one-bay steel portal (invented)"', "'corpus base: one-bay steel portal (invented)'", 1))
+add("syntax-unquoted-key", "syntax", "a key without quotes (title)", "$", text=good.replace('"title":', 'title:', 1))
+add("syntax-hex-number", "syntax", "a hexadecimal number (0x6)", "$.nodes[2].x", text=good.replace('"x": 6.0', '"x": 0x6', 1))
+add("syntax-trailing-comma", "syntax", "a comma before ']' (a trailing comma)", "$.supports",
+    text=good.replace('"type": "fixed"\n    }\n  ],\n  "loadCases"', '"type": "fixed"\n    },\n  ],\n  "loadCases"', 1))
+add("syntax-nul-byte", "syntax", "a NUL byte", "$", text=good.replace('"title":', '\u0000"title":', 1))
+# --- integer keys given numbers they cannot hold (a 100-bit integer crashed every command with exit 5) ---
+add("integer-format-version-huge", "magnitude", "'formatVersion' is 1267650600228229401496703205376", "$.formatVersion",
+    m(lambda d: setp(d, ["formatVersion"], 2 ** 100)))
+add("integer-mesh-max-nodes-huge", "magnitude", "'maxNodes' is 100000000000000000000000000, far outside the range", "$.panels[0].mesh.maxNodes",
+    wall_panel(lambda p: p["mesh"].update({"maxNodes": 10 ** 26})))
+add("integer-mesh-refinements-fraction", "wrong type", "'refinements' is 2.5, not a whole number", "$.panels[0].mesh.refinements",
+    wall_panel(lambda p: p["mesh"].update({"refinements": 2.5})))
+add("integer-mesh-max-nodes-negative", "non-positive", "'maxNodes' is -3000; it must be a whole number from 1", "$.panels[0].mesh.maxNodes",
+    wall_panel(lambda p: p["mesh"].update({"maxNodes": -3000})))
 # --- slow inputs found while hardening (the "did you mean" search; SuggestBudget) ---
 def long_ids(d):
     a, b = "N" + "a" * 30000, "N" + "b" * 30000

@@ -61,7 +61,7 @@ public static partial class ModelReader
         SuggestBudget.Reset();
         var model = new Builder(sink, fileName).Build(obj);
         if (sink.Any) throw new ModelInputException(sink.Items);
-        return model!;
+        return model! with { Warnings = Plausibility.Check(model, obj, fileName) };
     }
 
     private static ModelInputException NotJson(string fileName, StrictJson.Problem p) =>

@@ -29,6 +29,8 @@ public sealed record StructureModel
     public IReadOnlyList<WallPanel> Panels { get; init; } = [];
     /// <summary>Story weights, base shear, periods and second-order settings under "seismic" (docs/seismic.md); null when absent.</summary>
     public SeismicData? Seismic { get; init; }
+    /// <summary>Plausibility warnings about the input (Model/Plausibility.cs); they never change the answer. Empty when none.</summary>
+    public IReadOnlyList<ModelWarning> Warnings { get; init; } = [];
 
     /// <summary>Index of the node with the given id, or −1.</summary>
     public int NodeIndex(string id)

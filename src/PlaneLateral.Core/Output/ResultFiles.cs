@@ -141,6 +141,16 @@ public static class ResultFiles
             }
             w.WritePropertyName("notes");
             w.WriteStartArray(); foreach (var n in r.Notes) w.WriteValue(n); w.WriteEndArray();
+            w.WritePropertyName("warnings");   // plausibility of the input (Model/Plausibility.cs); they do not change any number
+            w.WriteStartArray();
+            foreach (var x in r.Model.Warnings)
+            {
+                w.WriteStartObject();
+                w.WritePropertyName("line"); w.WriteValue(x.Line); w.WritePropertyName("column"); w.WriteValue(x.Column);
+                w.WritePropertyName("path"); w.WriteValue(x.JsonPath); w.WritePropertyName("problem"); w.WriteValue(x.Problem); w.WritePropertyName("fix"); w.WriteValue(x.Fix);
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
             w.WritePropertyName("signConvention"); w.WriteValue("Global X right, Y up, rotations counter-clockwise. Member end forces act on the member's flexible segment at its end faces, in local axes (x from start to end node, y 90° counter-clockwise): N, V positive along local x, y; M counter-clockwise. Axial force, tension positive, is N2.");
 
             w.WritePropertyName("stiffness");
