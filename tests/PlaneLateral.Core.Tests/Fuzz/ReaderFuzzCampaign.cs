@@ -1,3 +1,4 @@
+using System.Numerics;
 using CsCheck;
 using Newtonsoft.Json.Linq;
 using PlaneLateral.Analysis;
@@ -79,6 +80,17 @@ public class ReaderFuzzCampaign(ITestOutputHelper output)
         new JValue("fixed"), new JValue("pinned"), new JValue("custom"), new JValue("brace"), new JValue("rigid"), new JValue("none"),
         new JValue("cantilever"), new JValue("fixed-fixed"), new JValue(true), new JValue(false), new JArray(), new JObject(),
         new JArray(new JValue("start"), new JValue("end")),
+        // Numbers an integer key cannot hold: wider than 64 bits, fractional, negative, beyond any count.
+        new JValue(BigInteger.Pow(10, 30)), new JValue(-BigInteger.Pow(2, 80)), new JValue(2.5), new JValue(-3000), new JValue(1e300),
+    ];
+
+    /// <summary>Whole-number keys of the format (counts, versions), which the integer mutation aims at first.</summary>
+    private static readonly HashSet<string> IntegerKeys = ["formatVersion", "maxNodes", "refinements", "elementsAcrossNarrowest", "modes", "stories"];
+
+    private static readonly JToken[] HugeIntegers =
+    [
+        new JValue(BigInteger.Pow(2, 64)), new JValue(BigInteger.Pow(10, 40)), new JValue(-BigInteger.Pow(2, 100)), new JValue(long.MaxValue),
+        new JValue(long.MinValue), new JValue(2.5), new JValue(-1), new JValue(0), new JValue(1e300), new JValue(int.MaxValue + 1L),
     ];
 
     private static readonly Gen<string> Structural =
@@ -97,8 +109,14 @@ public class ReaderFuzzCampaign(ITestOutputHelper output)
             var all = root.DescendantsAndSelf().Where(t => t is not JProperty).ToArray();
             var target = all[Next(all.Length)];
             if (target == root) continue;
-            switch (Next(7))
+            switch (Next(8))
             {
+                case 7: // an integer key (or any integer) given a huge, negative or fractional number
+                    {
+                        var ints = root.Descendants().OfType<JProperty>().Where(q => IntegerKeys.Contains(q.Name) || q.Value.Type == JTokenType.Integer).ToArray();
+                        if (ints.Length > 0) ints[Next(ints.Length)].Value = HugeIntegers[Next(HugeIntegers.Length)].DeepClone();
+                    }
+                    break;
                 case 0: Replace(target, Edge[Next(Edge.Length)].DeepClone()); break;
                 case 1: if (ids.Length > 0) Replace(target, new JValue(ids[Next(ids.Length)])); break;
                 case 2: // drop the key or the array entry
@@ -145,6 +163,75 @@ public class ReaderFuzzCampaign(ITestOutputHelper output)
                     _ => s[..pos],   // truncated file
                 };
             });
+
+    /// <summary>
+    /// One lenient-JSON form (leading zero, hexadecimal, single quotes, an unquoted or single-quoted key, a trailing comma,
+    /// a NUL byte, NaN/Infinity, a plus sign) written at a random place of a seed, built on the tree so that it stands
+    /// where a value or key stands, never inside a string. Index of the form, text.
+    /// </summary>
+    private static readonly Gen<(int Form, string Text)> LenientText =
+        Gen.Select(Gen.Int[0, Seeds.Length - 1], Gen.Int[0, 9], Gen.Int[0, int.MaxValue])
+            .Select(t => (t.Item2, WriteLenient(Seeds[t.Item1], t.Item2, t.Item3)));
+
+    internal const string Mark = "@@lenient@@";
+
+    internal static string WriteLenient(string seed, int form, int pick)
+    {
+        JContainer root;
+        try { if (JToken.Parse(seed) is JObject o) root = o; else return ""; } catch (Newtonsoft.Json.JsonException) { return ""; }
+        var values = root.Descendants().OfType<JValue>().Where(v => v.Parent is JProperty or JArray).ToArray();
+        var props = root.Descendants().OfType<JProperty>().ToArray();
+        var containers = root.DescendantsAndSelf().OfType<JContainer>().Where(c => c is JObject { Count: > 0 } or JArray { Count: > 0 }).ToArray();
+        if (values.Length == 0 || props.Length == 0) return "";
+        var v = values[pick % values.Length];
+        string Swap(string lenient)
+        {
+            if (v.Parent is JProperty p) p.Value = new JValue(Mark); else v.Replace(new JValue(Mark));
+            return root.ToString().Replace("\"" + Mark + "\"", lenient, StringComparison.Ordinal);
+        }
+        switch (form)
+        {
+            case 0: return Swap("0" + (pick % 900 + 100));                  // leading zero: 0144
+            case 1: return Swap("0x" + (pick % 4096).ToString("X"));          // hexadecimal
+            case 2: return Swap("'text'");                                    // single-quoted string
+            case 3:
+            case 4:
+                {
+                    var p = props[pick % props.Length];
+                    string name = p.Name.All(char.IsAsciiLetterOrDigit) && p.Name.Length > 0 && char.IsAsciiLetter(p.Name[0]) ? p.Name : "key";
+                    var owner = (JObject)p.Parent!;
+                    if (owner.Property(name) is not null && owner.Property(name) != p) return "";
+                    var value = p.Value;
+                    p.Replace(new JProperty(Mark, value));
+                    return root.ToString().Replace("\"" + Mark + "\"", form == 3 ? name : "'" + name + "'", StringComparison.Ordinal);
+                }
+            case 5: // trailing comma after the last entry of an array or object
+                {
+                    var c = containers[pick % containers.Length];
+                    if (c is JArray a) a.Add(new JValue(Mark)); else ((JObject)c).Add(Mark, 0);
+                    return System.Text.RegularExpressions.Regex.Replace(root.ToString(), "\\s*\"" + Mark + "\"(: 0)?", "");
+                }
+            case 6: return Swap("\0" + v.ToString(Newtonsoft.Json.Formatting.None)); // a NUL byte before a value
+            case 7: return Swap(new[] { "NaN", "Infinity", "-Infinity" }[pick % 3]);
+            case 8: return Swap("+" + (pick % 1000));                         // a plus sign
+            default: return Swap("." + (pick % 1000));                        // a number without its leading digit
+        }
+    }
+
+    [Fact]
+    public void LenientJsonFormsOfEveryShippedAndCorpusModelAreRefusedWithTheirPlace()
+    {
+        // RFC 8259 (Bray 2017) has none of these forms: each text must be refused as "not valid JSON", with line and column.
+        var (iter, time) = Budget();
+        LenientText.Sample(t =>
+        {
+            if (t.Text.Length == 0) return;
+            var e = Assert.Throws<ModelInputException>(() => ModelReader.Parse(t.Text, "lenient.json"));
+            var d = Assert.Single(e.Diagnostics);
+            Assert.True(d.Problem.Contains("not valid JSON", StringComparison.Ordinal), $"form {t.Form}: {d}");
+            Assert.True(d.Line > 0 && d.Column > 0, $"form {t.Form}: no place in {d}");
+        }, writeLine: output.WriteLine, iter: iter, time: time);
+    }
 
     [Fact]
     public void StructuralMutationsOfEveryShippedAndCorpusModel()
