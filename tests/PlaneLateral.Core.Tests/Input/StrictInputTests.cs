@@ -216,7 +216,7 @@ public sealed class StrictInputTests : IDisposable
     }
 
     [Fact]
-    public void ANamedPipeIsRefusedWithoutBlocking()
+    public async Task ANamedPipeIsRefusedWithoutBlocking()
     {
         if (OperatingSystem.IsWindows()) return;
         string path = Path.Combine(_dir, "model.fifo");
@@ -228,10 +228,10 @@ public sealed class StrictInputTests : IDisposable
         }
         catch (System.ComponentModel.Win32Exception) { return; }   // no mkfifo on this machine
         // Opened for reading, a named pipe waits for a writer for ever: the type must be judged before opening.
-        var run = Task.Run(() => Validate(path));
-        Assert.True(run.Wait(TimeSpan.FromSeconds(60)), "validate blocked on a named pipe");   // a hang guard, not a timing
-        Assert.Equal(ExitCodes.BadModel, run.Result.Code);
-        Assert.Contains("this is a named pipe (FIFO), not a regular file", run.Result.Err);
+        // A hang guard, not a timing: WaitAsync throws TimeoutException if validate blocks on the pipe.
+        var (code, err) = await Task.Run(() => Validate(path)).WaitAsync(TimeSpan.FromSeconds(60));
+        Assert.Equal(ExitCodes.BadModel, code);
+        Assert.Contains("this is a named pipe (FIFO), not a regular file", err);
     }
 
     /// <summary>A stream that never ends, as a device or a growing file may be.</summary>
