@@ -57,6 +57,19 @@ public static partial class ModelReader
         }
 
         /// <summary>
+        /// Reads a panel's optional "line": the line of resistance it belongs to in the story results (default: its own
+        /// line, named by the panel's id). Text, as on members; blank is refused.
+        /// </summary>
+        private string? ReadPanelLine(JsonFields panel)
+        {
+            if (!panel.Has("line")) return null;
+            var line = panel.OptionalString("line", "give the name of the panel's line of resistance, e.g. \"line\": \"grid 1\"")?.Trim();
+            if (line is { Length: 0 })
+            { sink.Add(panel.Token("line"), "the panel's \"line\" is blank", "name the line of resistance, or leave \"line\" out (the panel is then its own line, named by its id)"); return null; }
+            return line;
+        }
+
+        /// <summary>
         /// The checks that need the panel's grid (run only when its layout is sound): a segment must hold a mesh node,
         /// may not share a node with a floor tie, another link of the panel or its held base, and a frame node is
         /// linked to a panel once.
