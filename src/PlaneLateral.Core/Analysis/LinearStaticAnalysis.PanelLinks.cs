@@ -48,6 +48,21 @@ public sealed class PanelLinkResults
 // frame's stiffness and load vectors, and recovered from the frame's displacements; the whole is checked as one.
 public static partial class LinearStaticAnalysis
 {
+    /// <summary>
+    /// The DOF map and stiffness of the frame with every linked wall panel condensed exactly onto its frame nodes (the
+    /// frame's alone when no panel has links): the stiffness the static analysis factorises, for the period and
+    /// story-force analyses (SeismicAnalysis), so that they see the walls too.
+    /// </summary>
+    /// <exception cref="ModelInputException">A panel cannot be tied to the frame.</exception>
+    public static (DofMap Dofs, SymmetricSparseMatrix K) StiffnessWithLinkedPanels(StructureModel model, IReadOnlyList<FrameElement> elements, AnalysisOptions? options = null)
+    {
+        var dofs = DofMap.Build(model, elements);
+        var links = LinkedPanels.Prepare(model, options ?? new AnalysisOptions());
+        if (links is null) return (dofs, Assemble(model, elements, dofs));
+        dofs = dofs.WithAttachedRotations(links.Masters);
+        return (dofs, links.Assemble(model, elements, dofs));
+    }
+
     private sealed class LinkedPanel
     {
         public required WallPanel Panel { get; init; }
