@@ -47,6 +47,28 @@ public class LinkedWallStoryTests
     }
 
     [Fact]
+    public void APanelDeclaredOnTheFramesLineSharesIt()
+    {
+        // The panel's "line" puts it on the frame's line: one line carries the whole story shear (derived: Σ shares = 1).
+        var r = LinearStaticAnalysis.Run(ModelReader.Parse(StoryInvariantTests.LinkedWallWithOwnLoads().ToString(), "test.json"));
+        var s1 = StoryAnalysis.ForCase(r, r.Case("E")).Stories[0];
+        var line = Assert.Single(s1.Lines);
+        Assert.Equal("frame", line.Line);
+        // Derived (statics): 8 + 12 kip on the frame and 3 + 4.5 kip spread on the wall's floor and top, all above story 1's cut.
+        Near(27.5, Kip(r, s1.Shear), 1e-9, "story 1 shear, kip");
+        Near(1.0, line.Share, 1e-12, "share of the one line");
+    }
+
+    [Fact]
+    public void ABlankPanelLineIsRefusedAtItsKey()
+    {
+        var m = StoryInvariantTests.LinkedWallWithOwnLoads();
+        m["panels"]![0]!["line"] = "  ";
+        var e = Assert.Throws<ModelInputException>(() => ModelReader.Parse(m.ToString(), "test.json"));
+        Assert.Contains(e.Diagnostics, d => d.JsonPath == "$.panels[0].line" && d.Line > 0 && d.Fix.Length > 0);
+    }
+
+    [Fact]
     public void TheWallsBaseShearEqualsItsLinkForces()
     {
         var r = Solved.Value;
