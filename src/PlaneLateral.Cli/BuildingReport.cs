@@ -43,9 +43,9 @@ internal static class BuildingReport
                         TextTable.Num(L(s.Drift)), TextTable.Num(s.DriftRatio), TextTable.Num(u.FromSI(s.Shear, Quantity.Force)), TextTable.Num(u.FromSI(s.Stiffness, Quantity.TranslationalStiffness)));
             sb.Append(t.Render());
 
-            if (b.Lines.Count > 0)
+            if (StoryPanels.Lines(r.Model).Count > 0)
             {
-                sb.Append("\nStory shear by line of resistance (from member end forces; stiffness = line shear / line drift, within the whole structure)\n");
+                sb.Append("\nStory shear by line of resistance (from member end forces and, for linked wall panels, base reactions and link forces by statics; stiffness = line shear / line drift, within the whole structure)\n");
                 var lt = new TextTable("case", "story", "line", $"shear [{force}]", "share", $"stiffness [{ku}]").Numeric(1, 3, 4, 5);
                 foreach (var c in lateral)
                     foreach (var s in c.Stories)

@@ -26,6 +26,26 @@ public static class ModelPlots
         return nice * p;
     }
 
+    /// <summary>
+    /// The element edges on a panel's outline and around its openings (edges that only one element has), each as its
+    /// mesh nodes in order along it (corner, mid-side for the 9-node element, corner).
+    /// </summary>
+    private static IEnumerable<int[]> PanelOutline(PanelResult p)
+    {
+        var mesh = p.Mesh.Mesh;
+        var count = new Dictionary<(int, int), int[]>();
+        var seen = new Dictionary<(int, int), int>();
+        for (int e = 0; e < mesh.Elements.Length; e++)
+            for (int k = 0; k < 4; k++)
+            {
+                var nodes = mesh.Element.EdgeNodes(k).Select(a => mesh.Elements[e][a]).ToArray();
+                var key = (Math.Min(nodes[0], nodes[^1]), Math.Max(nodes[0], nodes[^1]));
+                seen[key] = seen.GetValueOrDefault(key) + 1;
+                count[key] = nodes;
+            }
+        return seen.Where(x => x.Value == 1).OrderBy(x => x.Key).Select(x => count[x.Key]);
+    }
+
     /// <summary>Undeformed and deflected shape of one case, the scale factor printed on the plot.</summary>
     public static Figure DeflectedShape(AnalysisResult r, string caseId)
     {
@@ -34,6 +54,12 @@ public static class ModelPlots
         var c = r.Case(caseId);
         double L(double si) => u.FromSI(si, Quantity.Length);
         double xmin = model.Nodes.Min(n => n.X), xmax = model.Nodes.Max(n => n.X), ymin = model.Nodes.Min(n => n.Y), ymax = model.Nodes.Max(n => n.Y);
+        var linked = r.Panels.Where(p => p.Panel.Links.Count > 0).ToList();   // wall panels that are part of the frame
+        foreach (var p in linked)
+        {
+            xmin = Math.Min(xmin, p.Panel.X0); xmax = Math.Max(xmax, p.Panel.X0 + p.Panel.Length);
+            ymin = Math.Min(ymin, p.Panel.Y0); ymax = Math.Max(ymax, p.Panel.Y0 + p.Panel.Height);
+        }
         double size = Math.Max(xmax - xmin, ymax - ymin);
         int worst = 0;
         double largest = 0;
@@ -70,6 +96,31 @@ public static class ModelPlots
             if (first) line.LegendText = $"deflected, displacements × {F(scale, "G6")}";
             first = false;
         }
+        int ci = r.Cases.ToList().FindIndex(x => ReferenceEquals(x, c));
+        bool firstPanel = true;
+        foreach (var p in linked)
+        {
+            if (ci < 0 || ci >= p.Analysis.Cases.Count) continue;
+            var pc = p.Analysis.Cases[ci];
+            foreach (var edge in PanelOutline(p))
+            {
+                var xs0 = edge.Select(i => L(p.Mesh.Mesh.X[i])).ToArray();
+                var ys0 = edge.Select(i => L(p.Mesh.Mesh.Y[i])).ToArray();
+                var before = plot.Add.ScatterLine(xs0, ys0);
+                before.Color = PlotStyle.Slate.WithAlpha(0.5);
+                before.LineWidth = 1f;
+                before.LinePattern = LinePattern.Dashed;
+                before.MarkerSize = 0;
+                var xs = edge.Select(i => L(p.Mesh.Mesh.X[i] + scale * pc.Ux[i])).ToArray();
+                var ys = edge.Select(i => L(p.Mesh.Mesh.Y[i] + scale * pc.Uy[i])).ToArray();
+                var after = plot.Add.ScatterLine(xs, ys);
+                after.Color = PlotStyle.Brick;
+                after.LineWidth = 2f;
+                after.MarkerSize = 0;
+                if (firstPanel) after.LegendText = "linked wall panel: edges and openings, deflected";
+                firstPanel = false;
+            }
+        }
         var sx = model.Supports.Select(s => L(model.Nodes[s.Node].X)).ToArray();
         var sy = model.Supports.Select(s => L(model.Nodes[s.Node].Y)).ToArray();
         if (sx.Length > 0)
@@ -90,7 +141,7 @@ public static class ModelPlots
         plot.Axes.SquareUnits();
         plot.ShowLegend(Alignment.UpperRight);
         return new Figure($"shape-{Slug(caseId)}.png", $"Deflected shape, case {caseId}",
-            $"Undeformed (dashed) and deflected (solid) shape under case {caseId}, displacements drawn {F(scale, "G6")} times their size; {worstText}. Members are drawn straight between their displaced end nodes; axial-only members (braces, links) in green; supports as red triangles.",
+            $"Undeformed (dashed) and deflected (solid) shape under case {caseId}, displacements drawn {F(scale, "G6")} times their size; {worstText}. Members are drawn straight between their displaced end nodes; axial-only members (braces, links) in green; supports as red triangles.{(linked.Count > 0 ? " Wall panels linked to the frame are drawn by their edges and opening edges through the mesh nodes on them, displaced with the same scale (their bases are held)." : "")}",
             PlotStyle.Png(plot), PlotStyle.Width, PlotStyle.Height);
     }
 

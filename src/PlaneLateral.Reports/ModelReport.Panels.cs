@@ -28,9 +28,16 @@ public static partial class ModelReport
             yield return ["Mesh convergence", "p = log₂((k₁−k₂)/(k₂−k₃)); k∞ = k₃ + (k₃−k₂)/(2ᵖ−1); estimated error |k∞−k₃|/k∞ on nested meshes h, h/2, h/4", "Richardson, Phil. Trans. R. Soc. A 210, 1911; Roache, Verification and Validation in Computational Science and Engineering, 1998, ch. 5"];
     }
 
-    /// <summary>The first load case (model order) in which the panel carries a horizontal story force, or −1.</summary>
-    private static int FirstLateralCase(WallPanel p)
+    /// <summary>The first load case (model order) in which the panel carries a horizontal story force (its own, or through its links), or −1.</summary>
+    private static int FirstLateralCase(AnalysisResult r, PanelResult pr)
     {
+        var p = pr.Panel;
+        if (p.Links.Count > 0)   // a linked panel: the first load case with a horizontal load on the structure
+            for (int c = 0; c < r.Model.LoadCases.Count && c < r.Cases.Count; c++)
+            {
+                var e = r.Cases[c].Equilibrium;
+                if (Math.Abs(e.AppliedFx) > 1e-9 * Math.Abs(e.AppliedFy)) return c;
+            }
         var cases = p.Loads.Where(l => l.Fx != 0).Select(l => l.Case).ToList();
         return cases.Count == 0 ? -1 : cases.Min();
     }
@@ -47,7 +54,11 @@ public static partial class ModelReport
         var caseIds = m.LoadCases.Select(c => c.Id).Concat(m.Combinations.Select(c => c.Id)).ToList();
 
         blocks.Add(new Heading(2, heading));
-        blocks.Add(new Paragraph("Each wall panel is meshed as a plane-stress continuum of its thickness (docs/panels.md): linear elastic, small displacements, base held in x and y at every node, the nodes of each floor level sharing one horizontal displacement when the panel has floor ties. The mesh conforms to every opening edge and floor level; cells inside openings are left out. In a model with frame members too, each panel is solved on its own (not yet connected to the members)."));
+        blocks.Add(new Paragraph("Each wall panel is meshed as a plane-stress continuum of its thickness (docs/panels.md): linear elastic, small displacements, base held in x and y at every node, the nodes of each floor level sharing one horizontal displacement when the panel has floor ties. The mesh conforms to every opening edge and floor level; cells inside openings are left out. "
+            + (r.Panels.Any(p => p.Panel.Links.Count > 0)
+                ? " A panel with links is part of the frame: every mesh node on a link's edge segment follows its frame node rigidly (exact constraint), the panel is condensed exactly onto those frame nodes (a superelement), solved with the frame as one structure and recovered from the frame's motion; it carries story shear with the members, and its base reactions are among the structure's reactions. The link forces are listed below."
+                : "")
+            + (r.Panels.Any(p => p.Panel.Links.Count == 0) && m.Members.Count > 0 ? " A panel without links is not connected to the members: it is solved on its own, under its own story forces." : "")));
 
         var ps = r.Panels;
         IReadOnlyList<string> Row(string what, Func<PanelResult, string> value) => [what, .. ps.Select(value)];
@@ -98,9 +109,30 @@ public static partial class ModelReport
                 c.Equilibrium.RelativeForceError.ToString("0.0E+0", CultureInfo.InvariantCulture), c.Equilibrium.RelativeMomentError.ToString("0.0E+0", CultureInfo.InvariantCulture),
                 PanelCaseSolved(c) ? "solved" : "check the model"])).ToList(), [2, 3, 4]));
 
+        if (r.PanelLinks is { } links)
+        {
+            string fu = u.ForceSymbol, mu = u.Label(Quantity.Moment);
+            string Fo(double si) => F(u.FromSI(si, Quantity.Force));
+            var rows = new List<IReadOnlyList<string>>();
+            foreach (var lc in links.Cases)
+                foreach (var f in lc.Forces)
+                    rows.Add([lc.Id, f.Panel, m.Nodes[f.Node].Id, Fo(f.Fx), Fo(f.Fy), F(u.FromSI(f.Mz, Quantity.Moment))]);
+            blocks.Add(new Table("Link forces: what each link passes from its frame node to the panel (moment about the frame node)", ["case", "panel", "frame node", $"Fx [{fu}]", $"Fy [{fu}]", $"Mz [{mu}]"], rows, [3, 4, 5]));
+            var bases = new List<IReadOnlyList<string>>();
+            for (int ci = 0; ci < links.Cases.Count && ci < r.Cases.Count; ci++)
+                for (int pi = 0; pi < m.Panels.Count; pi++)
+                {
+                    if (m.Panels[pi].Links.Count == 0) continue;
+                    var (bx, by, bm) = StoryPanels.BaseReaction(r, pi, ci);
+                    var mine = links.Cases[ci].Forces.Where(f => f.Panel == m.Panels[pi].Id).ToList();
+                    bases.Add([links.Cases[ci].Id, m.Panels[pi].Id, Fo(bx), Fo(by), F(u.FromSI(bm, Quantity.Moment)), Fo(mine.Sum(f => f.Fx)), Fo(mine.Sum(f => f.Fy))]);
+                }
+            blocks.Add(new Table("Linked panels' base reactions (moment about the middle of the base) beside the sum of their link forces", ["case", "panel", $"base Fx [{fu}]", $"base Fy [{fu}]", $"base Mz [{mu}]", $"Σ link Fx [{fu}]", $"Σ link Fy [{fu}]"], bases, [2, 3, 4, 5, 6]));
+        }
+
         foreach (var p in ps)
         {
-            int c = FirstLateralCase(p.Panel);
+            int c = FirstLateralCase(r, p);
             if (c < 0) continue;
             figure(PanelPlots.Mesh(p, c, caseIds[c], PanelField.DisplacementMagnitude, u).Figure);
             figure(PanelPlots.Mesh(p, c, caseIds[c], PanelField.ShearStress, u).Figure);

@@ -9,8 +9,8 @@ namespace PlaneLateral.Analysis;
 public sealed record LineSplitRow(int Story, string Line, double AloneStiffness, double AloneShare, double InStructureShare);
 
 /// <summary>
-/// Each line of resistance analysed by itself: its members, the nodes they use, the supports at those nodes and the
-/// levels restricted to those nodes, loaded with the case's level forces (the sum of the nodal fx applied at each
+/// Each line of resistance analysed by itself: its members and linked wall panels (with their links), the nodes they
+/// use, the supports at those nodes and the levels restricted to those nodes, loaded with the case's level forces (the sum of the nodal fx applied at each
 /// level's nodes, all lines together) at the line's first node on each level. Member loads and vertical loads are left
 /// out: this is the lateral stiffness of the line under the story-force pattern, the quantity a relative-rigidity
 /// distribution divides by. Set beside <see cref="LineStoryResult.Share"/> it shows how far interaction (a wall
@@ -26,12 +26,14 @@ public static class LineAlone
     {
         var model = r.Model;
         var b = model.Building;
-        if (!b.Lines.Contains(line)) throw new ArgumentException($"the model has no line \"{line}\"", nameof(line));
+        if (!StoryPanels.Lines(model).Contains(line)) throw new ArgumentException($"the model has no line \"{line}\"", nameof(line));
         if (b.Levels.Count < 2) throw new ArgumentException("the model has fewer than two levels, so no stories", nameof(r));
         var source = r.Case(caseId);
 
         var memberIdx = Enumerable.Range(0, model.Members.Count).Where(i => b.MemberLines[i] == line).ToList();
-        var usedNodes = memberIdx.SelectMany(i => new[] { model.Members[i].Start, model.Members[i].End }).Distinct().Order().ToList();
+        var panelIdx = Enumerable.Range(0, model.Panels.Count).Where(i => model.Panels[i].Links.Count > 0 && StoryPanels.LineOf(model.Panels[i]) == line).ToList();
+        var usedNodes = memberIdx.SelectMany(i => new[] { model.Members[i].Start, model.Members[i].End })
+            .Concat(panelIdx.SelectMany(i => model.Panels[i].Links.Select(l => l.Node))).Distinct().Order().ToList();
         var newIndex = usedNodes.Select((n, k) => (n, k)).ToDictionary(p => p.n, p => p.k);
         var nodes = usedNodes.Select((n, k) => model.Nodes[n] with { Index = k }).ToList();
         var members = memberIdx.Select((i, k) => model.Members[i] with { Index = k, Start = newIndex[model.Members[i].Start], End = newIndex[model.Members[i].End] }).ToList();
@@ -40,12 +42,14 @@ public static class LineAlone
         var levels = new List<Level>();
         var loads = new List<NodalLoad>();
         var applied = AppliedFx(model, source);
-        foreach (var l in b.Levels)
+        var panelFx = LinkedPanelLevelFx(model, source);
+        for (int li = 0; li < b.Levels.Count; li++)
         {
+            var l = b.Levels[li];
             var at = l.Nodes.Where(newIndex.ContainsKey).Select(n => newIndex[n]).ToList();
             var tied = l.Rigid ? at : [];
             levels.Add(l with { Nodes = at, TiedNodes = tied });
-            double fx = l.Nodes.Sum(n => applied[n]);
+            double fx = l.Nodes.Sum(n => applied[n]) + panelFx[li];
             if (fx != 0 && at.Count > 0) loads.Add(new NodalLoad(at[0], fx, 0, 0));
         }
         var sub = new StructureModel
@@ -61,6 +65,8 @@ public static class LineAlone
             LoadCases = [new LoadCase(caseId, $"level forces of {caseId}", loads, [])],
             Combinations = [],
             StiffnessPoints = [],
+            // The line's linked wall panels with their links, without their own loads (the level forces carry them).
+            Panels = panelIdx.Select(i => model.Panels[i] with { Loads = [], Links = model.Panels[i].Links.Select(k => k with { Node = newIndex[k.Node] }).ToList() }).ToList(),
             Building = new BuildingData
             {
                 Levels = levels,
@@ -80,13 +86,14 @@ public static class LineAlone
     public static IReadOnlyList<LineSplitRow> Split(AnalysisResult r, string caseId)
     {
         var whole = StoryAnalysis.ForCase(r, r.Case(caseId));
-        var alone = r.Model.Building.Lines.ToDictionary(l => l, l => Stories(r, caseId, l));
+        var lines = StoryPanels.Lines(r.Model);
+        var alone = lines.ToDictionary(l => l, l => Stories(r, caseId, l));
         var rows = new List<LineSplitRow>();
         foreach (var s in whole.Stories)
         {
             var k = alone.ToDictionary(p => p.Key, p => p.Value.Stories[s.Index - 1].Stiffness);
             double sum = k.Values.Where(double.IsFinite).Sum();
-            foreach (var line in r.Model.Building.Lines)
+            foreach (var line in lines)
             {
                 double share = s.Lines.FirstOrDefault(x => x.Line == line)?.Share ?? 0;
                 rows.Add(new LineSplitRow(s.Index, line, k[line], double.IsFinite(k[line]) && sum != 0 ? k[line] / sum : double.NaN, share));
@@ -103,7 +110,7 @@ public static class LineAlone
     {
         var list = new List<(string, IReadOnlyList<LineSplitRow>)>();
         var skip = new List<string>();
-        if (r.Model.Building.Lines.Count >= 2 && r.Model.Building.Levels.Count >= 2)
+        if (StoryPanels.Lines(r.Model).Count >= 2 && r.Model.Building.Levels.Count >= 2)
             foreach (var c in stories.Where(c => c.Lateral))
             {
                 try { list.Add((c.CaseId, Split(r, c.CaseId))); }
@@ -111,6 +118,26 @@ public static class LineAlone
             }
         skipped = skip;
         return list;
+    }
+
+    /// <summary>
+    /// The horizontal story forces on linked wall panels, summed per level (N): a force at a panel level goes to the
+    /// model level at that elevation, or the nearest one (a panel level between floors is a modelling choice the line
+    /// alone cannot reproduce; its force still counts).
+    /// </summary>
+    private static double[] LinkedPanelLevelFx(StructureModel model, CaseResult c)
+    {
+        var levels = model.Building.Levels;
+        var fx = new double[levels.Count];
+        foreach (var p in model.Panels.Where(p => p.Links.Count > 0))
+            foreach (var (load, factor) in StoryPanels.OwnLoads(model, p, c))
+            {
+                if (load.Fx == 0) continue;
+                double y = p.Y0 + load.Level;
+                int at = Enumerable.Range(0, levels.Count).MinBy(i => Math.Abs(levels[i].Elevation - y));
+                fx[at] += factor * load.Fx;
+            }
+        return fx;
     }
 
     /// <summary>Nodal fx applied at each node in a case or combination (N).</summary>

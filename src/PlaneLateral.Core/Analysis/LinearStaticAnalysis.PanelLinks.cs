@@ -48,6 +48,21 @@ public sealed class PanelLinkResults
 // frame's stiffness and load vectors, and recovered from the frame's displacements; the whole is checked as one.
 public static partial class LinearStaticAnalysis
 {
+    /// <summary>
+    /// The DOF map and stiffness of the frame with every linked wall panel condensed exactly onto its frame nodes (the
+    /// frame's alone when no panel has links): the stiffness the static analysis factorises, for the period and
+    /// story-force analyses (SeismicAnalysis), so that they see the walls too.
+    /// </summary>
+    /// <exception cref="ModelInputException">A panel cannot be tied to the frame.</exception>
+    public static (DofMap Dofs, SymmetricSparseMatrix K) StiffnessWithLinkedPanels(StructureModel model, IReadOnlyList<FrameElement> elements, AnalysisOptions? options = null)
+    {
+        var dofs = DofMap.Build(model, elements);
+        var links = LinkedPanels.Prepare(model, options ?? new AnalysisOptions());
+        if (links is null) return (dofs, Assemble(model, elements, dofs));
+        dofs = dofs.WithAttachedRotations(links.Masters);
+        return (dofs, links.Assemble(model, elements, dofs));
+    }
+
     private sealed class LinkedPanel
     {
         public required WallPanel Panel { get; init; }
@@ -168,6 +183,7 @@ public static partial class LinearStaticAnalysis
             double kwNorm = kw.InfinityNorm();
             var panelLoads = _panels.Select(p => p.Cases.Select(c => PlaneStressAnalysis.ExternalForces(p.Problem, c)).ToArray()).ToArray();
             var linkCases = new List<PanelLinkCase>();
+            var panelChecks = _panels.Select(_ => new List<PlaneCaseResult>()).ToArray();   // each panel's own check, links as loads
             for (int ci = 0; ci < cases.Count; ci++)
             {
                 var c = cases[ci];
@@ -208,6 +224,7 @@ public static partial class LinearStaticAnalysis
                     }
                     var q = PanelSuperelement.LinkForces(mesh, p.Segments, pc);
                     for (int s = 0; s < p.Segments.Length; s++) forces.Add(new PanelLinkForce(p.Panel.Id, p.Masters[s], q[3 * s], q[3 * s + 1], q[3 * s + 2]));
+                    panelChecks[pi].Add(WithLinksAsLoads(model, p, pc, q, fext));
                 }
                 double eta = SolveError.Of(kw, kwNorm, uw, fw).BackwardError;
                 var whole = new EquilibriumCheck(ax, ay, am, rx, ry, rm);
@@ -219,11 +236,62 @@ public static partial class LinearStaticAnalysis
                     BackwardError = Math.Max(eta, c.BackwardError),
                 };
             }
+            for (int pi = 0; pi < _panels.Count; pi++)
+            {
+                var p = _panels[pi];
+                var a = p.Result!.Analysis;
+                p.Result = new PanelResult
+                {
+                    Panel = p.Result.Panel, Mesh = p.Result.Mesh, TopStiffness = p.Result.TopStiffness, Convergence = p.Result.Convergence,
+                    LevelDisplacements = p.Result.LevelDisplacements,
+                    Analysis = new PlaneAnalysisResult { Dofs = a.Dofs, Solve = a.Solve, Cases = panelChecks[pi], TieFlexibility = a.TieFlexibility, System = a.System },
+                };
+            }
             return new PanelLinkResults
             {
                 Panels = _panels.Select((p, i) => new PanelCondensation(p.Panel.Id, p.Segments.Length, recovered[i].Dofs.FreeCount, p.Condensed.SymmetryError,
                     Math.Max(p.Condensed.WorstBackwardError, recovered[i].Cases.Count == 0 ? 0 : recovered[i].Cases.Max(c => c.BackwardError)))).ToArray(),
                 Cases = linkCases,
+            };
+        }
+
+        /// <summary>
+        /// The panel's own equilibrium check with its links as what they are for the panel, loads from the frame: applied
+        /// = its own loads + the link forces (each acting at its frame node: Fx, Fy and the moment Mz about the node, so
+        /// about the origin Mz + x_n·Fy − y_n·Fx), reactions = its base alone. The segment nodes' reactions of the held
+        /// solve sum to exactly those link forces (<see cref="PanelSuperelement.LinkForces"/>), so this moves them from one
+        /// side to the other; the imbalance is relative to Σ|F| of every force on the panel (links, own loads, base
+        /// reactions), never to a sum that cancels.
+        /// </summary>
+        private static PlaneCaseResult WithLinksAsLoads(StructureModel model, LinkedPanel p, PlaneCaseResult pc, double[] q, double[] fext)
+        {
+            var e = pc.Equilibrium;
+            var mesh = p.Mesh.Mesh;
+            double lx = 0, ly = 0, lm = 0, sx = 0, sy = 0, sm = 0;
+            for (int s = 0; s < p.Segments.Length; s++)
+            {
+                var n = model.Nodes[p.Masters[s]];
+                double fx = q[3 * s], fy = q[3 * s + 1], m = q[3 * s + 2] + n.X * fy - n.Y * fx;
+                lx += fx; ly += fy; lm += m;
+                sx += Math.Abs(fx); sy += Math.Abs(fy); sm += Math.Abs(m);
+            }
+            var owner = SegmentOwners(p);
+            foreach (var (node, dof, r) in pc.Reactions)
+            {
+                if (owner.ContainsKey(node)) continue;
+                if (dof == Dof.X) { sx += Math.Abs(r); sm += Math.Abs(mesh.Y[node] * r); } else { sy += Math.Abs(r); sm += Math.Abs(mesh.X[node] * r); }
+            }
+            for (int i = 0; i < mesh.NodeCount; i++)
+            {
+                sx += Math.Abs(fext[2 * i]); sy += Math.Abs(fext[2 * i + 1]);
+                sm += Math.Abs(mesh.X[i] * fext[2 * i + 1] - mesh.Y[i] * fext[2 * i]);
+            }
+            return new PlaneCaseResult
+            {
+                Id = pc.Id, Ux = pc.Ux, Uy = pc.Uy, NodalStress = pc.NodalStress, GaussStress = pc.GaussStress, Reactions = pc.Reactions,
+                GuideMoments = pc.GuideMoments, RelativeResidual = pc.RelativeResidual, BackwardError = pc.BackwardError,
+                Equilibrium = new EquilibriumCheck(e.AppliedFx + lx, e.AppliedFy + ly, e.AppliedMz + lm, e.ReactionFx - lx, e.ReactionFy - ly, e.ReactionMz - lm)
+                { ForceScale = Math.Max(sx, sy), MomentScale = sm },
             };
         }
 

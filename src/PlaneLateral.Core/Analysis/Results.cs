@@ -82,12 +82,22 @@ public sealed record EquilibriumCheck(
     double AppliedFx, double AppliedFy, double AppliedMz,
     double ReactionFx, double ReactionFy, double ReactionMz)
 {
-    /// <summary>Largest out-of-balance force, relative to the largest applied or reacting force (0 when both vanish).</summary>
+    /// <summary>
+    /// What the body carries (N): Σ|F| over the individual forces acting on it (loads, link forces, reactions), the larger
+    /// of the x and y sums. When given (&gt; 0) the force imbalance is relative to at least this, so a body whose forces
+    /// cancel in sum (a panel carried only by its links) is not judged by a round-off ratio of nothing to nothing.
+    /// </summary>
+    public double ForceScale { get; init; }
+
+    /// <summary>Σ|M| (N·m) of the individual forces about the origin, as <see cref="ForceScale"/> for the moment imbalance.</summary>
+    public double MomentScale { get; init; }
+
+    /// <summary>Largest out-of-balance force, relative to the largest applied or reacting force or <see cref="ForceScale"/> (0 when all vanish).</summary>
     public double RelativeForceError
     {
         get
         {
-            double scale = new[] { AppliedFx, AppliedFy, ReactionFx, ReactionFy }.Max(Math.Abs);
+            double scale = Math.Max(ForceScale, new[] { AppliedFx, AppliedFy, ReactionFx, ReactionFy }.Max(Math.Abs));
             double err = Math.Max(Math.Abs(AppliedFx + ReactionFx), Math.Abs(AppliedFy + ReactionFy));
             return scale == 0 ? err : err / scale;
         }
@@ -98,7 +108,7 @@ public sealed record EquilibriumCheck(
     {
         get
         {
-            double scale = Math.Max(Math.Abs(AppliedMz), Math.Abs(ReactionMz));
+            double scale = Math.Max(MomentScale, Math.Max(Math.Abs(AppliedMz), Math.Abs(ReactionMz)));
             double err = Math.Abs(AppliedMz + ReactionMz);
             return scale == 0 ? err : err / scale;
         }

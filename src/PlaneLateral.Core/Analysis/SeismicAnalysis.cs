@@ -177,8 +177,7 @@ public static class SeismicAnalysis
     {
         var s = model.Seismic ?? throw new InvalidOperationException("the model has no seismic block");
         var elements = model.Members.Select(m => new FrameElement(m, model.Nodes[m.Start], model.Nodes[m.End])).ToArray();
-        var dofs = DofMap.Build(model, elements);
-        var k = LinearStaticAnalysis.Assemble(model, elements, dofs);
+        var (dofs, k) = LinearStaticAnalysis.StiffnessWithLinkedPanels(model, elements);   // linked wall panels condensed in
         var factor = (solver ?? DefaultSolver.Create()).Factorize(k);
         if (factor.PivotFailures.Count > 0) return null;
         return Modal(model, s, dofs, factor);
@@ -281,8 +280,7 @@ public static class SeismicAnalysis
     {
         if (model.Seismic is not { } s) return model;
         var elements = model.Members.Select(m => new FrameElement(m, model.Nodes[m.Start], model.Nodes[m.End])).ToArray();
-        var dofs = DofMap.Build(model, elements);
-        var k = LinearStaticAnalysis.Assemble(model, elements, dofs);
+        var (dofs, k) = LinearStaticAnalysis.StiffnessWithLinkedPanels(model, elements);   // linked wall panels condensed in
         var factor = DefaultSolver.Create().Factorize(k);
         if (factor.PivotFailures.Count > 0) return model;
         var forces = Forces(model, Modal(model, s, dofs, factor));

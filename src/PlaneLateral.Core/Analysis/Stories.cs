@@ -49,6 +49,11 @@ public sealed record CaseStories(string CaseId, bool IsCombination, bool Lateral
 /// rigid zone). Their sum is the horizontal force the member carries across the cut; over all members crossing it, the
 /// sum equals the horizontal load above the cut (equilibrium of the part above).
 /// </para>
+/// <para>
+/// Wall panels linked to the frame are part of the structure: each adds the horizontal force it carries across the
+/// cut, from its base reactions, link forces and own loads below the cut (<see cref="StoryPanels"/>), to the story shear
+/// and to its line's shear; their loads count in the round-off scale.
+/// </para>
 /// </summary>
 public static class StoryAnalysis
 {
@@ -71,7 +76,12 @@ public static class StoryAnalysis
         var loads = MemberLoadsOf(model, c);
         double scale = LoadMagnitude(model, elements, c, loads);
         var lineNames = b.MemberLines.Count == model.Members.Count ? b.MemberLines : model.Members.Select(_ => "").ToList();
-        var order = b.Lines.Concat([""]).ToList();
+        var order = StoryPanels.Lines(model).Concat([""]).ToList();
+        // Wall panels linked to the frame are part of the structure (StoryPanels): their horizontal actions, per panel.
+        int ci = StoryPanels.IndexOf(r, c);
+        var panels = Enumerable.Range(0, model.Panels.Count).Where(p => model.Panels[p].Links.Count > 0 && p < r.Panels.Count)
+            .Select(p => (Panel: model.Panels[p], Line: StoryPanels.LineOf(model.Panels[p]), Actions: StoryPanels.HorizontalActions(r, p, ci))).ToList();
+        scale += panels.Sum(p => StoryPanels.OwnLoads(model, p.Panel, c).Sum(l => Math.Abs(l.Factor) * (Math.Abs(l.Load.Fx) + Math.Abs(l.Load.Fy))));
 
         for (int i = 0; i + 1 < b.Levels.Count; i++)
         {
@@ -90,6 +100,15 @@ public static class StoryAnalysis
                 byLine[line] = byLine.GetValueOrDefault(line) + f;
                 if (!crossing.TryGetValue(line, out var set)) crossing[line] = set = [];
                 set.Add(model.Members[m].Start); set.Add(model.Members[m].End);
+            }
+            foreach (var (panel, line, actions) in panels)
+            {
+                if (!(panel.Y0 < yc && yc < panel.Y0 + panel.Height)) continue;   // the cut does not pass through the panel
+                double f = StoryPanels.ShearAcrossCut(actions, yc);
+                v += f;
+                byLine[line] = byLine.GetValueOrDefault(line) + f;
+                if (!crossing.TryGetValue(line, out var set)) crossing[line] = set = [];
+                foreach (var link in panel.Links) set.Add(link.Node);   // the line's drift: from the frame nodes the panel is tied to
             }
             double drift = levels[i + 1].Ux - levels[i].Ux;
             bool carries = Math.Abs(v) > RoundOff * scale;

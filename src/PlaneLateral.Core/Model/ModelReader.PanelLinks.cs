@@ -57,6 +57,19 @@ public static partial class ModelReader
         }
 
         /// <summary>
+        /// Reads a panel's optional "line": the line of resistance it belongs to in the story results (default: its own
+        /// line, named by the panel's id). Text, as on members; blank is refused.
+        /// </summary>
+        private string? ReadPanelLine(JsonFields panel)
+        {
+            if (!panel.Has("line")) return null;
+            var line = panel.OptionalString("line", "give the name of the panel's line of resistance, e.g. \"line\": \"grid 1\"")?.Trim();
+            if (line is { Length: 0 })
+            { sink.Add(panel.Token("line"), "the panel's \"line\" is blank", "name the line of resistance, or leave \"line\" out (the panel is then its own line, named by its id)"); return null; }
+            return line;
+        }
+
+        /// <summary>
         /// The checks that need the panel's grid (run only when its layout is sound): a segment must hold a mesh node,
         /// may not share a node with a floor tie, another link of the panel or its held base, and a frame node is
         /// linked to a panel once.
@@ -97,14 +110,15 @@ public static partial class ModelReader
         }
 
         /// <summary>
-        /// A restraint at a linked frame node would fight the link; the seismic block's period and second-order checks
-        /// work on the frame's stiffness alone, so they are refused beside links until they include the panels.
+        /// A restraint at a linked frame node would fight the link. The seismic block's periods and story forces include
+        /// the linked panels (condensed onto their frame nodes); its second-order check takes the geometric stiffness and
+        /// the story's vertical load from the members only, so "secondOrder" is refused beside links until it includes them.
         /// </summary>
         private void CheckPanelLinkSupports(IReadOnlyList<Support> supports, JToken? seismic)
         {
-            if (seismic is not null && _panelLinks.Count > 0)
-                sink.Add(seismic, "the seismic block cannot yet be used with panels linked to the frame: its period and second-order checks see the frame's stiffness only",
-                    "remove \"seismic\" (give the story forces as a load case), or remove the panels' \"links\"");
+            if (seismic?["secondOrder"] is { } secondOrder && _panelLinks.Count > 0)
+                sink.Add(secondOrder, "the seismic block's second-order (P-delta) check cannot yet be used with panels linked to the frame: its geometric stiffness and the story's vertical load see the members only",
+                    "remove \"secondOrder\" (the periods and story forces include the panels), or remove the panels' \"links\"");
             foreach (var (panel, link, at) in _panelLinks)
             {
                 var s = supports.FirstOrDefault(x => x.Node == link.Node);

@@ -93,6 +93,7 @@ public static partial class ModelReader
                     if (ci >= 0 && how is not null) loads.Add(new PanelLoad(ci, level, fx, fy, how.Value));
                 }
                 var links = ReadPanelLinks(f, id, length, height);   // ModelReader.PanelLinks.cs
+                var line = ReadPanelLine(f);                          // ModelReader.PanelLinks.cs
                 f.RejectUnknownKeys();
                 if (id is null || material is null || mesh is null || top is null || !(length > 0 && height > 0 && thickness > 0)) continue;
 
@@ -100,7 +101,7 @@ public static partial class ModelReader
                 {
                     Id = id, X0 = x0, Y0 = y0, Length = length, Height = height, Thickness = thickness,
                     MaterialId = material.Id, E = material.E, Nu = material.Nu,
-                    Openings = openings, FloorLevels = levels, FloorTies = ties, Top = top.Value, Mesh = mesh, Loads = loads, Links = links,
+                    Openings = openings, FloorLevels = levels, FloorTies = ties, Top = top.Value, Mesh = mesh, Loads = loads, Links = links, Line = line,
                 };
                 // Geometry and mesh problems, each at its own key, before any work — unless a number of the geometry
                 // itself failed to read (it would make the layout meaningless; found by the reader fuzzer).

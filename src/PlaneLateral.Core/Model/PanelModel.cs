@@ -94,6 +94,9 @@ public sealed record WallPanel
     /// <summary>Rigid links from frame nodes to segments of the panel's edges (none: the panel is solved on its own).</summary>
     public IReadOnlyList<PanelLink> Links { get; init; } = [];
 
+    /// <summary>The line of resistance a linked panel belongs to in the story results (docs/building.md); null: its own line, named by its id.</summary>
+    public string? Line { get; init; }
+
     /// <summary>All levels, the top included (m above the base), ascending.</summary>
     public IReadOnlyList<double> Levels => [.. FloorLevels, Height];
 }

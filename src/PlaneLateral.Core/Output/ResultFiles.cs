@@ -55,11 +55,31 @@ public static class ResultFiles
     {
         var u = r.Model.Units;
         var sb = new StringBuilder($"case,node,Fx [{u.ForceSymbol}],Fy [{u.ForceSymbol}],Mz [{u.Label(Quantity.Moment)}]\n");
-        foreach (var c in r.Cases)
+        for (int ci = 0; ci < r.Cases.Count; ci++)
+        {
+            var c = r.Cases[ci];
             foreach (var re in c.Reactions)
                 sb.Append($"{Csv(c.Id)},{Csv(r.Model.Nodes[re.Node].Id)},{F(u.FromSI(re.Fx, Quantity.Force))},{F(u.FromSI(re.Fy, Quantity.Force))},{F(u.FromSI(re.Mz, Quantity.Moment))}\n");
+            // Each wall panel's held base: the resultant of its base reactions, Mz about the middle of its base (docs/panels.md).
+            foreach (var (_, name, fx, fy, mz) in PanelBases(r, ci))
+                sb.Append($"{Csv(c.Id)},{Csv(name)},{F(u.FromSI(fx, Quantity.Force))},{F(u.FromSI(fy, Quantity.Force))},{F(u.FromSI(mz, Quantity.Moment))}\n");
+        }
         return sb.ToString();
     }
+
+    /// <summary>The label and base-reaction resultant (N, N, N·m about the middle of the base) of every wall panel in a case.</summary>
+    private static IEnumerable<(WallPanel Panel, string Name, double Fx, double Fy, double Mz)> PanelBases(AnalysisResult r, int caseIndex)
+    {
+        for (int p = 0; p < r.Panels.Count && p < r.Model.Panels.Count; p++)
+        {
+            if (caseIndex >= r.Panels[p].Analysis.Cases.Count) continue;
+            var (fx, fy, mz) = StoryPanels.BaseReaction(r, p, caseIndex);
+            yield return (r.Model.Panels[p], PanelBaseLabel(r.Model.Panels[p]), fx, fy, mz);
+        }
+    }
+
+    /// <summary>The name a panel's base goes by in reactions.csv: "&lt;panel id&gt; (panel base)".</summary>
+    public static string PanelBaseLabel(WallPanel p) => $"{p.Id} (panel base)";
 
     private static string MemberForces(AnalysisResult r)
     {
@@ -210,6 +230,24 @@ public static class ResultFiles
                     w.WriteEndObject();
                 }
                 w.WriteEndArray();
+                if (r.Panels.Count > 0)
+                {
+                    // Each wall panel's held base: the resultant of its base reactions, Mz about the middle of its base.
+                    w.WritePropertyName("panelBaseReactions");
+                    w.WriteStartArray();
+                    foreach (var (p, _, fx, fy, mz) in PanelBases(r, r.Cases.ToList().IndexOf(c)))
+                    {
+                        w.WriteStartObject();
+                        w.WritePropertyName("panel"); w.WriteValue(p.Id);
+                        w.WritePropertyName("Fx"); w.WriteValue(u.FromSI(fx, Quantity.Force));
+                        w.WritePropertyName("Fy"); w.WriteValue(u.FromSI(fy, Quantity.Force));
+                        w.WritePropertyName("Mz"); w.WriteValue(u.FromSI(mz, Quantity.Moment));
+                        w.WritePropertyName("momentAboutX"); w.WriteValue(u.FromSI(p.X0 + 0.5 * p.Length, Quantity.Length));
+                        w.WritePropertyName("momentAboutY"); w.WriteValue(u.FromSI(p.Y0, Quantity.Length));
+                        w.WriteEndObject();
+                    }
+                    w.WriteEndArray();
+                }
                 w.WritePropertyName("memberForces");
                 w.WriteStartArray();
                 foreach (var m in c.MemberForces)

@@ -18,7 +18,7 @@ public class DiaphragmTests
     /// have their rotation held (fixed-guided: a frame with a beam rigid in bending). No member joins the lines: only the
     /// level's diaphragm does. Load P at the wall's top.
     /// </summary>
-    private static object WallBesideFrame(bool withWall = true, bool diaphragm = true, string? wallSection = null)
+    internal static object WallBesideFrame(bool withWall = true, bool diaphragm = true, string? wallSection = null)
     {
         var nodes = new List<object>
         {

@@ -13,7 +13,7 @@ public class LineAloneTests
 {
     private const double H = 3.5, F1 = 40e3, F2 = 70e3, Iw = 0.05, Ic = 2.5e-4;
 
-    private static object Model() => new
+    internal static object Model() => new
     {
         formatVersion = 1,
         units = new { force = "N", length = "m" },

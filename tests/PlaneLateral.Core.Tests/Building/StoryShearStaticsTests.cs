@@ -14,7 +14,7 @@ public class StoryShearStaticsTests
 {
     private const double H = 3.0;   // m; forces in N
 
-    private static object Model() => new
+    internal static object Model() => new
     {
         formatVersion = 1,
         units = new { force = "N", length = "m" },

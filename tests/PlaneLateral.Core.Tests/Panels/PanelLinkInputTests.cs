@@ -94,13 +94,14 @@ public class PanelLinkInputTests
     }
 
     [Fact]
-    public void ASeismicBlockBesideLinksIsRefused()
+    public void ASecondOrderCheckBesideLinksIsRefused()
     {
-        // Its period and second-order checks would see the frame's stiffness only (docs/panels.md).
+        // Its geometric stiffness and story vertical load would see the members only (docs/panels.md); the periods
+        // and story forces include the panels, so the seismic block itself is accepted.
         var o = ToJObject(PanelLinkTests.SlenderWall(1, 6, 10));
-        o["seismic"] = new Newtonsoft.Json.Linq.JObject();
+        o["seismic"] = new Newtonsoft.Json.Linq.JObject { ["secondOrder"] = new Newtonsoft.Json.Linq.JObject() };
         var e = Assert.Throws<ModelInputException>(() => ModelReader.Parse(o.ToString(), "test.json"));
-        Assert.Contains(e.Diagnostics, d => d.JsonPath == "$.seismic" && d.Problem.Contains("cannot yet be used with panels linked"));
+        Assert.Contains(e.Diagnostics, d => d.JsonPath == "$.seismic.secondOrder" && d.Problem.Contains("cannot yet be used with panels linked"));
     }
 
     [Fact]
