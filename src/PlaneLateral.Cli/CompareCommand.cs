@@ -82,23 +82,25 @@ internal static class CompareReport
     public static string Render(ComparisonReport r)
     {
         var sb = new StringBuilder();
-        sb.Append($"Hand methods beside the FE model (default tolerance ±{Pct(r.DefaultTolerance)}; ratio = FE/hand)\n");
-        var t = new TextTable("check", "subject", "hand method", "unit", "hand", "FE", "FE/hand", "panel FE", "panel/hand", "flex/shear (hand)", "h/l", "verdict", "cause").Numeric(4, 5, 6, 7, 8, 10);
+        sb.Append($"Hand methods beside the FE model (default tolerance ±{Pct(r.DefaultTolerance)}; ratio = FE/hand for each row's reference FE model, the verdict's basis)\n");
+        var t = new TextTable("check", "subject", "hand method", "unit", "hand", "reference FE model", "FE", "FE/hand", "beside it", "FE", "FE/hand", "flex/shear (hand)", "h/l", "verdict", "cause").Numeric(4, 6, 7, 9, 10, 12);
         int n = 0;
         var notes = new List<string>();
         foreach (var row in r.Rows)
         {
             n++;
             string shares = row.Hand.FlexuralShare is double fl && row.Hand.ShearShare is double sh ? $"{Pct(fl)} / {Pct(sh)}" : "-";
-            var panel = row.Panel;
-            t.Add(row.CheckId, row.Subject, Short(row.Hand.Method.Name), row.Unit, TextTable.Num(row.Hand.Value), TextTable.Num(row.Reference.Value),
+            var beside = row.Beside;
+            t.Add(row.CheckId, row.Subject, Short(row.Hand.Method.Name), row.Unit, TextTable.Num(row.Hand.Value), ShortModel(row.Reference.Model), TextTable.Num(row.Reference.Value),
                 row.Ratio.ToString("0.000", CultureInfo.InvariantCulture),
-                panel is null ? "-" : TextTable.Num(panel.Value), panel is null ? "-" : (panel.Value / row.Hand.Value).ToString("0.000", CultureInfo.InvariantCulture), shares,
+                beside is null ? "-" : ShortModel(beside.Model), beside is null ? "-" : TextTable.Num(beside.Value),
+                beside is null ? "-" : (beside.Value / row.Hand.Value).ToString("0.000", CultureInfo.InvariantCulture), shares,
                 row.AspectRatio is double a ? a.ToString("0.00", CultureInfo.InvariantCulture) : "-",
                 row.Tolerance == r.DefaultTolerance ? row.VerdictText : $"{row.VerdictText} (±{Pct(row.Tolerance)})", $"[{n}]");
             notes.Add($"  [{n}] {row.Cause}");
+            if (row.ReferenceBasis.Length > 0) notes.Add($"      reference: {row.ReferenceBasis}");
             foreach (var other in row.Fe.Skip(1))
-                notes.Add($"      also: {other.Model}: {TextTable.Num(other.Value)} {row.Unit}, FE/hand {(other.Value / row.Hand.Value).ToString("0.000", CultureInfo.InvariantCulture)}");
+                notes.Add($"      also: {other.Model}: {TextTable.Num(other.Value)} {row.Unit}, FE/hand {(other.Value / row.Hand.Value).ToString("0.000", CultureInfo.InvariantCulture)}{(other.EstimatedError is double e ? $" (estimated discretisation error {(100 * e).ToString("0.000", CultureInfo.InvariantCulture)}%)" : "")}");
         }
         sb.Append(t.Render());
         sb.Append("\nCauses\n");
@@ -109,6 +111,9 @@ internal static class CompareReport
     }
 
     private static string Pct(double f) => (100 * f).ToString("0.#", CultureInfo.InvariantCulture) + "%";
+
+    /// <summary>An FE model's name for the table, at most 30 characters (the full name is in the notes and the JSON).</summary>
+    private static string ShortModel(string name) => name.Length <= 30 ? name : name[..27] + "...";
 
     /// <summary>The method's name up to its first comma, for the table (the full name is in the JSON).</summary>
     private static string Short(string name)

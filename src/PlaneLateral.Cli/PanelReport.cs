@@ -38,7 +38,7 @@ internal static class PanelReport
                     d.Add(p.Panel.Id, caseIds[i], TextTable.Num(u.FromSI(p.TopDisplacement(i), Quantity.Length)));
             sb.Append(d.Render());
         }
-        sb.Append("  top stiffness: 1 / top displacement under a unit force through the top tie; displacements are on the first mesh; the extrapolation and its error come from the mesh sequence (panels.json).\n");
+        sb.Append("  top stiffness: 1 / top displacement under a unit force through the top tie; with a mesh study the case displacements are extrapolated over the meshes like the stiffness, each with its estimated error in panels.json (nodal stresses stay on the first mesh).\n");
         return sb.ToString();
     }
 }

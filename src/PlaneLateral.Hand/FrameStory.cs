@@ -5,7 +5,9 @@ namespace PlaneLateral.Hand;
 /// <param name="I">Second moment of area about the bending axis (L⁴), positive.</param>
 /// <param name="G">Shear modulus (F/L²); give it together with <paramref name="ShearArea"/> to include shear deformation.</param>
 /// <param name="ShearArea">Shear area A_s = A/f (L²); give it together with <paramref name="G"/>.</param>
-public sealed record FrameColumn(double E, double I, double? G = null, double? ShearArea = null);
+/// <param name="PinnedBase">True: the column's lower end is free to rotate (a pinned base or a moment release there);
+/// false: it is held against rotation (a fixed base, or a rigid beam below).</param>
+public sealed record FrameColumn(double E, double I, double? G = null, double? ShearArea = null, bool PinnedBase = false);
 
 /// <summary>Lateral stiffness of one moment-frame story.</summary>
 /// <param name="Stiffness">Story stiffness: story shear per unit drift (F/L).</param>
@@ -43,13 +45,17 @@ public enum StoryPosition
 public static class FrameStory
 {
     /// <summary>
-    /// Rigid beams, fixed-fixed columns: k = Σ 12EI_c/h³, or with shear deformation Σ 12EI_c/(h³(1 + Φ)),
-    /// Φ = 12EI_c/(G·A_s·h²) for each column that gives G and A_s.
-    /// Source: elementary beam theory (fixed-guided member); shear term after Timoshenko, as in Przemieniecki,
-    /// Theory of Matrix Structural Analysis, 1968 (from memory for the reference).
+    /// Rigid beams: the column tops translate without rotating. A column held against rotation at its base
+    /// (fixed-guided) gives 12EI_c/(h³(1 + Φ)); a column free to rotate at its base (pinned, or released there) is a
+    /// cantilever from its held top and gives 3EI_c/(h³(1 + Φ/4)); Φ = 12EI_c/(G·A_s·h²) for each column that gives G
+    /// and A_s, else 0. k = Σ over the columns.
+    /// Source: elementary beam theory (fixed-guided member 12EI/h³, cantilever 3EI/h³; a pinned-base portal with a rigid
+    /// beam is 2 × 3EI/h³ = 6EI/h³, the β → ∞ limit of <see cref="PortalPinnedBase"/>); shear term after Timoshenko, as in
+    /// Przemieniecki, Theory of Matrix Structural Analysis, 1968 (from memory for the reference). Derived: the cantilever
+    /// with shear, Δ = Vh³/(3EI) + Vh/(G·A_s) = (Vh³/(3EI))(1 + 3EI/(G·A_s·h²)) = (Vh³/(3EI))(1 + Φ/4).
     /// </summary>
     /// <param name="height">Story height h (L), positive.</param>
-    /// <param name="columns">The story's columns.</param>
+    /// <param name="columns">The story's columns, each with its base condition.</param>
     public static FrameStoryResult RigidBeams(double height, IReadOnlyList<FrameColumn> columns)
     {
         Guard.Positive(height, "The story height h");
@@ -71,12 +77,20 @@ public static class FrameStory
                 phi = 12 * c.E * c.I / (g * a * height * height);
                 anyShear = true;
             }
-            ks[j] = 12 * c.E * c.I / (height * height * height * (1 + phi));
+            ks[j] = c.PinnedBase
+                ? 3 * c.E * c.I / (height * height * height * (1 + phi / 4))
+                : 12 * c.E * c.I / (height * height * height * (1 + phi));
         }
-        return new FrameStoryResult(ks.Sum(), ks, new HandMethod(
-            "Rigid-beam story, fixed-fixed columns, k = Σ12EI/(h³(1+Φ))",
-            "Elementary beam theory; shear parameter Φ = 12EI/(G·A_s·h²) after Timoshenko",
-            ["beams infinitely stiff in bending, so column ends do not rotate", "column bases fully fixed",
+        int pinned = columns.Count(c => c.PinnedBase);
+        string name = pinned == 0 ? "Rigid-beam story, fixed-base columns, k = Σ12EI/(h³(1+Φ))"
+            : pinned == columns.Count ? "Rigid-beam story, pinned-base columns, k = Σ3EI/(h³(1+Φ/4))"
+            : "Rigid-beam story, fixed-base columns 12EI/(h³(1+Φ)) and pinned-base columns 3EI/(h³(1+Φ/4)), summed";
+        string bases = pinned == 0 ? "column bases held against rotation (fixed, or a rigid beam below)"
+            : pinned == columns.Count ? "column bases free to rotate (pinned or released): each column a cantilever from its held top"
+            : $"{columns.Count - pinned} column base(s) held against rotation, {pinned} free to rotate (pinned or released)";
+        return new FrameStoryResult(ks.Sum(), ks, new HandMethod(name,
+            "Elementary beam theory (fixed-guided 12EI/h³, cantilever 3EI/h³); shear parameter Φ = 12EI/(G·A_s·h²) after Timoshenko",
+            ["beams infinitely stiff in bending, so column tops do not rotate", bases,
              anyShear ? "shear deformation included for columns given G and A_s, neglected for the others"
                       : "shear deformation neglected (flexure only)",
              "axial deformation and P-delta effects neglected", "linear elastic"]));

@@ -236,14 +236,14 @@ public static class ModelPlots
         {
             var row = rows[i];
             double pos = 3.0 * (n - 1 - i);   // first row on top
-            var panel = row.Panel == row.Reference ? null : row.Panel;
-            double step = panel is null ? 1.0 : 0.8, size = panel is null ? 0.8 : 0.7;
-            bars.Add(new Bar { Position = pos + step / 2 * (panel is null ? 1 : 2), Value = row.Hand.Value, FillColor = PlotStyle.Ochre, LineWidth = 0, Orientation = Orientation.Horizontal, Size = size });
-            bars.Add(new Bar { Position = panel is null ? pos - step / 2 : pos, Value = row.Reference.Value, FillColor = PlotStyle.Ink, LineWidth = 0, Orientation = Orientation.Horizontal, Size = size });
-            if (panel is not null)
-                bars.Add(new Bar { Position = pos - step, Value = panel.Value, FillColor = PlotStyle.Plum, LineWidth = 0, Orientation = Orientation.Horizontal, Size = size });
-            ticks.Add(new Tick(pos, $"{row.CheckId} {Shorten(row.Subject)}\n{MethodShort(row.Hand.Method.Name)}", true));
-            var label = plot.Add.Text($"FE/hand {F(row.Ratio, "0.00")}", Math.Max(row.Hand.Value, row.Reference.Value), pos);
+            var beside = row.Beside;   // the next FE model, with its own ratio
+            double step = beside is null ? 1.0 : 0.8, size = beside is null ? 0.8 : 0.7;
+            bars.Add(new Bar { Position = pos + step / 2 * (beside is null ? 1 : 2), Value = row.Hand.Value, FillColor = PlotStyle.Ochre, LineWidth = 0, Orientation = Orientation.Horizontal, Size = size });
+            bars.Add(new Bar { Position = beside is null ? pos - step / 2 : pos, Value = row.Reference.Value, FillColor = PlotStyle.Ink, LineWidth = 0, Orientation = Orientation.Horizontal, Size = size });
+            if (beside is not null)
+                bars.Add(new Bar { Position = pos - step, Value = beside.Value, FillColor = PlotStyle.Plum, LineWidth = 0, Orientation = Orientation.Horizontal, Size = size });
+            ticks.Add(new Tick(pos, $"{row.CheckId} {Shorten(row.Subject)}\n{MethodShort(row.Hand.Method.Name)}\nreference: {MethodShort(row.Reference.Model)}", true));
+            var label = plot.Add.Text($"reference FE/hand {F(row.Ratio, "0.00")}" + (beside is null ? "" : $"\nbeside: {F(beside.Value / row.Hand.Value, "0.00")}"), Math.Max(row.Hand.Value, Math.Max(row.Reference.Value, beside?.Value ?? 0)), pos);
             label.LabelFontSize = 12;
             label.LabelFontColor = row.Verdict == Verdict.WithinTolerance ? PlotStyle.Moss : PlotStyle.Brick;
             label.LabelAlignment = Alignment.MiddleLeft;
@@ -254,22 +254,22 @@ public static class ModelPlots
         plot.Axes.Left.TickGenerator = new ScottPlot.TickGenerators.NumericManual(ticks.ToArray());
         plot.Axes.Left.MajorTickStyle.Length = 0;
         plot.Axes.Left.TickLabelStyle.FontSize = 12;
-        double max = rows.Max(x => Math.Max(Math.Max(x.Hand.Value, x.Reference.Value), x.Panel?.Value ?? 0));
+        double max = rows.Max(x => Math.Max(Math.Max(x.Hand.Value, x.Reference.Value), x.Beside?.Value ?? 0));
         plot.Axes.SetLimits(0, max * 1.3, -1.6, 3.0 * (n - 1) + 1.6);
         plot.Grid.YAxisStyle.IsVisible = false;
         var hand = plot.Add.ScatterPoints(new double[] { double.NaN }, new double[] { double.NaN });
         hand.Color = PlotStyle.Ochre; hand.MarkerShape = MarkerShape.FilledSquare; hand.MarkerSize = 12; hand.LegendText = "hand method";
         var fe = plot.Add.ScatterPoints(new double[] { double.NaN }, new double[] { double.NaN });
-        fe.Color = PlotStyle.Ink; fe.MarkerShape = MarkerShape.FilledSquare; fe.MarkerSize = 12; fe.LegendText = "FE (reference model)";
-        if (rows.Any(x => x.Panel is not null && x.Panel != x.Reference))
+        fe.Color = PlotStyle.Ink; fe.MarkerShape = MarkerShape.FilledSquare; fe.MarkerSize = 12; fe.LegendText = "reference FE model (named under each row)";
+        if (rows.Any(x => x.Beside is not null))
         {
             var pn = plot.Add.ScatterPoints(new double[] { double.NaN }, new double[] { double.NaN });
-            pn.Color = PlotStyle.Plum; pn.MarkerShape = MarkerShape.FilledSquare; pn.MarkerSize = 12; pn.LegendText = "plane-stress panel";
+            pn.Color = PlotStyle.Plum; pn.MarkerShape = MarkerShape.FilledSquare; pn.MarkerSize = 12; pn.LegendText = "next FE model beside it";
         }
         plot.ShowLegend(Edge.Bottom);   // below the axes, so it never covers a bar
-        int height = Math.Max(PlotStyle.Height, 120 + 70 * n);
+        int height = Math.Max(PlotStyle.Height, 120 + 90 * n);
         return new Figure($"hand-vs-fe-{Slug(kind)}.png", $"Hand method beside FE: {kind}",
-            $"For each {kind} row, the hand-method value (ochre), the reference FE value (blue) and, where the row has one, the converged plane-stress panel (plum) in {unit}, with the reference FE/hand beside them (green within tolerance, red outside).",
+            $"For each {kind} row, the hand-method value (ochre), the reference FE value (blue; the model is named under the row: a converged plane-stress panel where the row has one, else the first line model) and, where the row has one, the next FE model beside it (plum) in {unit}, with the reference FE/hand (green within tolerance, red outside) and the other model's own ratio.",
             PlotStyle.Png(plot, PlotStyle.Width, height), PlotStyle.Width, height);
     }
 

@@ -185,10 +185,12 @@ public static partial class ModelReport
         {
             handSection = sec + 1;
             blocks.Add(new Heading(2, Section("Hand methods beside the finite-element model")));
-            blocks.Add(new Paragraph($"ratio = FE/hand for the reference FE model; within tolerance when |ratio − 1| ≤ the row's tolerance (default ±{Pct(comparisons.DefaultTolerance, "0.#")}). The cause column is chosen by the rules in docs/comparisons.md."));
-            blocks.Add(new Table("Hand method beside FE", ["check", "subject", "hand method", "unit", "hand", "FE", "FE/hand", "h/l", "verdict", "cause"],
-                comparisons.Rows.Select(x => (IReadOnlyList<string>)[x.CheckId, x.Subject, x.Hand.Method.Name, x.Unit, F(x.Hand.Value), F(x.Reference.Value), x.Ratio.ToString("0.000", CultureInfo.InvariantCulture),
-                    x.AspectRatio is double a ? a.ToString("0.00", CultureInfo.InvariantCulture) : "-", x.VerdictText, x.Cause]).ToList(), [4, 5, 6, 7]));
+            blocks.Add(new Paragraph($"ratio = FE/hand for the row's reference FE model, named in the table with the reason it is the reference: a converged plane-stress panel where the row has one, else the first line model; the next FE model stands beside it with its own ratio. Within tolerance when |ratio − 1| ≤ the row's tolerance (default ±{Pct(comparisons.DefaultTolerance, "0.#")}). The cause column is chosen by the rules in docs/comparisons.md."));
+            blocks.Add(new Table("Hand method beside FE", ["check", "subject", "hand method", "unit", "hand", "reference FE model", "FE", "FE/hand", "beside it", "FE/hand", "h/l", "verdict", "cause"],
+                comparisons.Rows.Select(x => (IReadOnlyList<string>)[x.CheckId, x.Subject, x.Hand.Method.Name, x.Unit, F(x.Hand.Value),
+                    x.ReferenceBasis.Length > 0 ? $"{x.Reference.Model} ({x.ReferenceBasis})" : x.Reference.Model, F(x.Reference.Value), x.Ratio.ToString("0.000", CultureInfo.InvariantCulture),
+                    x.Beside is { } o ? $"{o.Model}: {F(o.Value)}" : "-", x.Beside is { } o2 ? (o2.Value / x.Hand.Value).ToString("0.000", CultureInfo.InvariantCulture) : "-",
+                    x.AspectRatio is double a ? a.ToString("0.00", CultureInfo.InvariantCulture) : "-", x.VerdictText, x.Cause]).ToList(), [4, 6, 7, 9, 10]));
             foreach (var kind in comparisons.Rows.Select(x => x.Kind).Distinct()) Figure(ModelPlots.HandVsFe(comparisons, kind));
         }
 

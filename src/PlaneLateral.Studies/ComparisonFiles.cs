@@ -24,7 +24,7 @@ public static class ComparisonFiles
     private static string Csv(ComparisonReport r)
     {
         var sb = new StringBuilder();
-        sb.Append("check,kind,subject,quantity,unit,hand_method,hand_value,fe_rank,fe_model,fe_value,ratio_fe_to_hand,hand_flexural_share,hand_shear_share,fe_flexural_share,fe_shear_share,aspect_ratio_h_to_l,tolerance,verdict,cause\n");
+        sb.Append("check,kind,subject,quantity,unit,hand_method,hand_value,fe_rank,fe_model,is_reference,fe_value,fe_estimated_error,ratio_fe_to_hand,hand_flexural_share,hand_shear_share,fe_flexural_share,fe_shear_share,aspect_ratio_h_to_l,tolerance,verdict,cause,reference_basis\n");
         foreach (var row in r.Rows)
             for (int k = 0; k < row.Fe.Count; k++)
             {
@@ -34,9 +34,9 @@ public static class ComparisonFiles
                 sb.Append(string.Join(",", new[]
                 {
                     CsvCell(row.CheckId), row.Kind, CsvCell(row.Subject), Quantity(row.Quantity), CsvCell(row.Unit), CsvCell(row.Hand.Method.Name), F(row.Hand.Value),
-                    (k + 1).ToString(CultureInfo.InvariantCulture), CsvCell(fe.Model), F(fe.Value), F(fe.Value / row.Hand.Value),
+                    (k + 1).ToString(CultureInfo.InvariantCulture), CsvCell(fe.Model), k == 0 ? "yes" : "no", F(fe.Value), Opt(fe.EstimatedError), F(fe.Value / row.Hand.Value),
                     Opt(row.Hand.FlexuralShare), Opt(row.Hand.ShearShare), Opt(fe.FlexuralShare), Opt(fe.ShearShare), Opt(row.AspectRatio),
-                    F(row.Tolerance), verdict, CsvCell(k == 0 ? row.Cause : "(see the reference estimate, rank 1)"),
+                    F(row.Tolerance), verdict, CsvCell(k == 0 ? row.Cause : "(see the reference estimate, rank 1)"), CsvCell(row.ReferenceBasis),
                 })).Append('\n');
             }
         sb.Append(CsvCell("# " + ComparisonReport.Caution)).Append('\n');
@@ -67,7 +67,7 @@ public static class ComparisonFiles
             w.WritePropertyName("length"); w.WriteValue(r.LengthUnit);
             w.WriteEndObject();
             w.WritePropertyName("defaultTolerance"); w.WriteValue(r.DefaultTolerance);
-            w.WritePropertyName("verdicts"); w.WriteValue("ratio = FE/hand for the first FE estimate; within tolerance when |ratio − 1| ≤ tolerance; below: the hand value is higher (hand stiffer), above: lower (hand softer)");
+            w.WritePropertyName("verdicts"); w.WriteValue("ratio = FE/hand for the row's reference FE estimate (named in \"reference\", the first in \"fe\", with the reason in \"referenceBasis\": a converged plane-stress panel where the row has one, else the first line model); within tolerance when |ratio − 1| ≤ tolerance; below: the hand value is higher (hand stiffer), above: lower (hand softer)");
             w.WritePropertyName("rows");
             w.WriteStartArray();
             foreach (var row in r.Rows)
@@ -100,13 +100,17 @@ public static class ComparisonFiles
                     w.WriteStartObject();
                     w.WritePropertyName("model"); w.WriteValue(fe.Model);
                     w.WritePropertyName("value"); w.WriteValue(fe.Value);
+                    w.WritePropertyName("reference"); w.WriteValue(ReferenceEquals(fe, row.Reference));
                     w.WritePropertyName("ratioToHand"); w.WriteValue(fe.Value / row.Hand.Value);
+                    if (fe.EstimatedError is double ee) { w.WritePropertyName("estimatedError"); w.WriteValue(ee); }
                     w.WritePropertyName("description"); w.WriteValue(fe.Description);
                     if (fe.FlexuralShare is double ff) { w.WritePropertyName("flexuralShare"); w.WriteValue(ff); }
                     if (fe.ShearShare is double fs) { w.WritePropertyName("shearShare"); w.WriteValue(fs); }
                     w.WriteEndObject();
                 }
                 w.WriteEndArray();
+                w.WritePropertyName("reference"); w.WriteValue(row.Reference.Model);
+                w.WritePropertyName("referenceBasis"); w.WriteValue(row.ReferenceBasis);
                 w.WritePropertyName("ratio"); w.WriteValue(row.Ratio);
                 if (row.AspectRatio is double ar) { w.WritePropertyName("aspectRatio"); w.WriteValue(ar); }
                 w.WritePropertyName("tolerance"); w.WriteValue(row.Tolerance);

@@ -32,12 +32,15 @@ public sealed record HandEstimate(double Value, HandMethod Method, double? Flexu
 
 /// <summary>
 /// One finite-element estimate of the same quantity, named by the model it came from. A row holds an ordered list of
-/// these, the first being the reference the verdict uses; a later model (e.g. a plane-stress panel) is one more entry.
+/// these, the first being the reference the verdict uses (a converged plane-stress panel where the row has one,
+/// <see cref="ReferenceChoice"/>); the others stand beside it with their own ratios.
 /// </summary>
 /// <param name="Model">Short name of the FE model, e.g. "line members, isolated".</param>
 /// <param name="Value">The number, model units.</param>
 /// <param name="Description">How the model was built and loaded, in plain words.</param>
-public sealed record FeEstimate(string Model, double Value, string Description, double? FlexuralShare = null, double? ShearShare = null);
+/// <param name="EstimatedError">The estimated relative discretisation error of this very number (a panel's Richardson
+/// estimate), or null where none is estimated (line models: exact elements, no discretisation error in the stiffness).</param>
+public sealed record FeEstimate(string Model, double Value, string Description, double? FlexuralShare = null, double? ShearShare = null, double? EstimatedError = null);
 
 /// <summary>
 /// One line of the comparison: a hand number beside the FE numbers, with the gap and the reason for it.
@@ -49,18 +52,26 @@ public sealed record FeEstimate(string Model, double Value, string Description, 
 /// <param name="AspectRatio">h/l where it applies (l = section depth or wall length), else null.</param>
 /// <param name="Tolerance">The band on FE/hand − 1 used for the verdict.</param>
 /// <param name="Cause">The reason for the gap (or for the agreement), in plain words, chosen by the rules in docs/comparisons.md.</param>
+/// <param name="ReferenceBasis">Why <see cref="Reference"/> is the reference, in plain words: the converged panel, or
+/// "line models only" with the reason the row has no converged panel (<see cref="ReferenceChoice"/>).</param>
 public sealed record ComparisonRow(
     string CheckId, string Kind, string Subject, ComparedQuantity Quantity, string Unit,
-    HandEstimate Hand, IReadOnlyList<FeEstimate> Fe, double? AspectRatio, double Tolerance, string Cause)
+    HandEstimate Hand, IReadOnlyList<FeEstimate> Fe, double? AspectRatio, double Tolerance, string Cause, string ReferenceBasis = "")
 {
-    /// <summary>The FE estimate the verdict is based on (the first).</summary>
+    /// <summary>The FE estimate the verdict, the headline ratio, the figures and the tables use (the first).</summary>
     public FeEstimate Reference => Fe[0];
 
     /// <summary>Name of the plane-stress panel estimate among <see cref="Fe"/>.</summary>
     public const string PanelModelName = PanelEstimate.ModelName;
 
-    /// <summary>The plane-stress panel estimate, when the row has one (it is then never the verdict's reference alone).</summary>
+    /// <summary>The plane-stress panel estimate, when the row has one (the reference when it is converged, <see cref="ReferenceChoice"/>).</summary>
     public FeEstimate? Panel => Fe.FirstOrDefault(f => f.Model == PanelModelName);
+
+    /// <summary>The estimate of the named FE model, or null.</summary>
+    public FeEstimate? Estimate(string model) => Fe.FirstOrDefault(f => f.Model == model);
+
+    /// <summary>The first FE estimate other than the reference (shown beside it in tables and figures), or null.</summary>
+    public FeEstimate? Beside => Fe.Count > 1 ? Fe[1] : null;
 
     /// <summary>FE/hand for the reference estimate.</summary>
     public double Ratio => Reference.Value / Hand.Value;

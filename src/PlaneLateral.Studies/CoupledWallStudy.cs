@@ -68,6 +68,10 @@ public static class CoupledWallStudy
             // Stiffness = total lateral load / top deflection: the same quantity as the other checks' rows.
             List<FeEstimate> Stiff() => fe.Select(r => new FeEstimate(r.Model, ComparisonStudy.Stiffness(u, resultant / r.TopDeflection),
                 r.Description + "; stiffness = total lateral load / top deflection")).ToList();
+            // The panel here is one mesh with no error estimate, so the wide-column frame stays the reference (ReferenceChoice).
+            string basis = fe.Any(r => r.Model == PanelCoupledWall.ModelName)
+                ? ReferenceChoice.LineModelsOnly(feShear.Model, "the plane-stress panel beside it is solved on one mesh, with no error estimate")
+                : ReferenceChoice.LineModelsOnly(feShear.Model, PanelSkipped(c) is string w ? $"no plane-stress panel: {w}" : "no plane-stress panel for this check");
             string detail = FeDetail(u, fe) + (PanelSkipped(c) is string why ? $"\n{PanelCoupledWall.ModelName}: not built, {why}" : "");
             double docFe = feShear.DegreeOfCoupling, docFlex = feFlex.DegreeOfCoupling;
             var (cant, solid) = Bounds(c, load, mag);
@@ -86,26 +90,26 @@ public static class CoupledWallStudy
                     $"with the beams' shear deformation (I_c → I_c/(1 + 12EI_c/(G·A_s·b²))): kαH = {cmShear.KAlphaH:G4}, stiffness {G(ComparisonStudy.Stiffness(u, resultant / cmShear.TopDeflection))} {ku}, degree of coupling {ComparisonStudy.Pct(cmShear.DegreeOfCoupling)}");
                 yield return new ComparisonRow(c.Id, "coupled-wall", $"{lname}: stiffness, continuous medium", ComparedQuantity.Stiffness, ku,
                     new HandEstimate(ComparisonStudy.Stiffness(u, kHand), method, Detail: cmDetail + "\n" + detail), Stiff(), null, tol,
-                    CauseClosedForm(r, r0, tol, c, cm.KAlphaH, cmShear.TopDeflection / cm.TopDeflection));
+                    CauseClosedForm(r, r0, tol, c, cm.KAlphaH, cmShear.TopDeflection / cm.TopDeflection), basis);
                 double rd = docFe / cm.DegreeOfCoupling, rd0 = docFlex / cm.DegreeOfCoupling;
                 yield return new ComparisonRow(c.Id, "coupled-wall", $"{lname}: degree of coupling, continuous medium", ComparedQuantity.Fraction, "-",
                     new HandEstimate(cm.DegreeOfCoupling, method, Detail: BeamShearDetail(u, cm, fe)),
                     fe.Select(x => new FeEstimate(x.Model, x.DegreeOfCoupling, x.Description + "; degree of coupling = axial-force couple / (couple + Σ pier base moments), from the base reactions")).ToList(),
-                    null, tol, CauseCoupling(rd, rd0, tol, c, cmShear.DegreeOfCoupling / cm.DegreeOfCoupling));
+                    null, tol, CauseCoupling(rd, rd0, tol, c, cmShear.DegreeOfCoupling / cm.DegreeOfCoupling), basis);
                 double n0 = u.FromSI(cm.BaseAxialForce, Quantity.Force);
                 yield return new ComparisonRow(c.Id, "coupled-wall", $"{lname}: pier axial force at the base, continuous medium", ComparedQuantity.Force, fu,
                     new HandEstimate(n0, method),
                     fe.Select(x => new FeEstimate(x.Model, u.FromSI(x.PierBaseAxialForces[0], Quantity.Force), x.Description + "; tension in pier 1 from its base reaction = the sum of the beam shears")).ToList(),
                     null, tol, CauseCoupling(feShear.PierBaseAxialForces[0] / cm.BaseAxialForce, feFlex.PierBaseAxialForces[0] / cm.BaseAxialForce, tol, c,
-                        cmShear.BaseAxialForce / cm.BaseAxialForce));
+                        cmShear.BaseAxialForce / cm.BaseAxialForce), basis);
             }
             double kc = resultant / cant.Value, ks = resultant / solid.Value;
             yield return new ComparisonRow(c.Id, "coupled-wall", $"{lname}: stiffness, independent cantilevers", ComparedQuantity.Stiffness, ku,
                 new HandEstimate(ComparisonStudy.Stiffness(u, kc), cant.Method, Detail: detail), Stiff(), null, tol,
-                CauseCantilevers(resultant / feShear.TopDeflection / kc, resultant / feFlex.TopDeflection / kc, tol, docFe));
+                CauseCantilevers(resultant / feShear.TopDeflection / kc, resultant / feFlex.TopDeflection / kc, tol, docFe), basis);
             yield return new ComparisonRow(c.Id, "coupled-wall", $"{lname}: stiffness, one solid wall", ComparedQuantity.Stiffness, ku,
                 new HandEstimate(ComparisonStudy.Stiffness(u, ks), solid.Method, Detail: detail), Stiff(), null, tol,
-                CauseSolid(resultant / feShear.TopDeflection / ks, resultant / feFlex.TopDeflection / ks, tol, docFe, pair?.K2));
+                CauseSolid(resultant / feShear.TopDeflection / ks, resultant / feFlex.TopDeflection / ks, tol, docFe, pair?.K2), basis);
         }
     }
 

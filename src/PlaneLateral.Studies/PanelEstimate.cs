@@ -67,8 +67,25 @@ internal static class PanelEstimate
         string top = ends == EndFixity.FixedFixed ? "top edge tied and guided (translates without rotating)" : "top edge tied";
         string how = extrapolated
             ? $"9-node plane-stress quadrilaterals on {c!.Stiffness.Length} meshes (finest {c.Unknowns[^1]} unknowns), base held, {top}, unit force through the tie; Richardson-extrapolated (observed order {c.ObservedOrder:0.00}), estimated discretisation error {100 * c.EstimatedError:0.00}%"
-            : $"9-node plane-stress quadrilaterals, finest mesh ({r.Analysis.Dofs.FreeCount} unknowns on the first mesh), base held, {top}, unit force through the tie; no extrapolation ({c?.Note ?? "single mesh"})";
-        return (new FeEstimate(ModelName, ComparisonStudy.Stiffness(u, k), how), null);
+            : $"9-node plane-stress quadrilaterals, finest mesh ({c?.Unknowns[^1] ?? r.Analysis.Solve.Unknowns} unknowns), base held, {top}, unit force through the tie; no extrapolation ({c?.Note ?? "single mesh"})";
+        return (new FeEstimate(ModelName, ComparisonStudy.Stiffness(u, k), how, EstimatedError: extrapolated ? c!.EstimatedError : null), null);
+    }
+
+    /// <summary>
+    /// What the converged panel, as the row's reference, says about the hand value (the head of the row's cause),
+    /// with the estimated discretisation error of the panel's number.
+    /// </summary>
+    public static string Judgement(double panelOverHand, double tol, double error)
+    {
+        var v = ComparisonRow.Judge(panelOverHand, tol);
+        string words = v switch
+        {
+            Studies.Verdict.WithinTolerance => "within the tolerance of the hand value",
+            Studies.Verdict.HandHigher => "softer than the hand value: by the continuum's measure the hand method is too stiff",
+            _ => "stiffer than the hand value: by the continuum's measure the hand method is too soft",
+        };
+        string err = (100 * error).ToString("0.000", System.Globalization.CultureInfo.InvariantCulture) + "%";
+        return $"reference, converged plane-stress panel: {panelOverHand.ToString("0.000", System.Globalization.CultureInfo.InvariantCulture)} of the hand value (estimated discretisation error {err}), {words}";
     }
 
     /// <summary>

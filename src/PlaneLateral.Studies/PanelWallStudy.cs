@@ -48,24 +48,23 @@ internal static class PanelWallStudy
             ? $"panel \"{panel.Id}\" as declared: plane-stress {element} on its {cv.Stiffness.Length} nested meshes (finest {cv.Unknowns[^1]} unknowns), base held, top tied, unit force through the tie; Richardson-extrapolated, observed order {F2(cv.ObservedOrder)}, estimated discretisation error {Pct3(cv.EstimatedError)}"
             : $"panel \"{panel.Id}\" as declared: plane-stress {element}, finest of {cv.Stiffness.Length} nested meshes ({cv.Unknowns[^1]} unknowns), not extrapolated: {cv.Note}";
         string lineHow = $"Timoshenko line members generated from the panel's geometry (equivalent frame: {frame.PierCount} pier member(s), {frame.SpandrelCount} spandrel(s) of their real depth, rigid zones where piers and spandrels overlap); base fixed, top free; unit force shared by the top joints, stiffness 1/(mean top deflection)";
-        // The line model first (the table's FE column), then the panel (its panel column): hand, line model and
-        // continuum side by side. The verdict is the line model's, as for a perforated-wall check; the cause adds the
-        // continuum's judgement of the hand method.
-        var estimates = new List<FeEstimate>
-        {
-            new(LineModelName, ComparisonStudy.Stiffness(u, line), lineHow),
-            new(PanelEstimate.ModelName, ComparisonStudy.Stiffness(u, k), panelHow),
-        };
+        // Hand, line model and continuum side by side. The converged panel is the reference (ReferenceChoice); the
+        // line models stand beside it with their own ratios.
+        var lines = new List<FeEstimate> { new(LineModelName, ComparisonStudy.Stiffness(u, line), lineHow) };
         if (frame.SpandrelCount > 0)
-            estimates.Add(new FeEstimate("equivalent frame, spandrels made rigid", ComparisonStudy.Stiffness(u, lineRigid),
+            lines.Add(new FeEstimate("equivalent frame, spandrels made rigid", ComparisonStudy.Stiffness(u, lineRigid),
                 $"the same frame with every spandrel's I and shear area multiplied by {EquivalentFrame.RigidFactor:G3}"));
+        var panelEstimate = new FeEstimate(PanelEstimate.ModelName, ComparisonStudy.Stiffness(u, k), panelHow, EstimatedError: extrapolated ? cv.EstimatedError : null);
+        var (ordered, basis, panelFirst) = ReferenceChoice.Order(lines, panelEstimate, tol, null);
         double aspect = panel.Height / panel.Length;
         bool none = panel.Openings.Count == 0;
-        string cause = PerforatedWallStudy.Cause(line / handSI, lineRigid / handSI, tol, frame.SpandrelCount, none ? aspect : double.NaN, none ? 0 : line / solid)
-            + PanelCause(k / handSI, tol, extrapolated ? cv.EstimatedError : double.NaN, none);
+        string lineCause = PerforatedWallStudy.Cause(line / handSI, lineRigid / handSI, tol, frame.SpandrelCount, none ? aspect : double.NaN, none ? 0 : line / solid);
+        string cause = panelFirst
+            ? ReferenceChoice.PanelFirstCause("reference, " + PanelCause(k / handSI, tol, cv.EstimatedError, none)[2..], lines[0], hand.Stiffness, lineCause)
+            : lineCause + PanelCause(k / handSI, tol, extrapolated ? cv.EstimatedError : double.NaN, none);
         yield return new ComparisonRow(c.Id, Kind, $"panel \"{panel.Id}\", cantilever", ComparedQuantity.Stiffness, ComparisonStudy.StiffnessUnit(u),
             new HandEstimate(hand.Stiffness, hand.Method.With($"lengths in {u.LengthSymbol}, forces in {u.ForceSymbol} (the breakdown's units)"), Detail: hand.Breakdown),
-            estimates, aspect, tol, cause);
+            ordered, aspect, tol, cause, basis);
     }
 
     public const string LineModelName = "Timoshenko line model (equivalent frame)";

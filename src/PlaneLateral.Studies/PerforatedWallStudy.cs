@@ -34,15 +34,18 @@ internal static class PerforatedWallStudy
             estimates.Add(new FeEstimate("equivalent frame, spandrels made rigid", ComparisonStudy.Stiffness(u, feRigid),
                 $"the same frame with every spandrel's I and shear area multiplied by {EquivalentFrame.RigidFactor:G3}: the gap left is the frame's own idealisation (pier heights, joints), not spandrel bending"));
         var (panel, skipped) = PanelEstimate.ForEnds(fixity, u, c.Id, c.Length, c.Height, c.Thickness, c.Material.E, c.Material.Nu, c.Openings);
-        if (panel is not null) estimates.Add(panel);
-        string panelNote = PanelEstimate.Verdict(panel is null ? double.NaN : panel.Value / hand.Stiffness, tol, skipped);
+        var (ordered, basis, panelFirst) = ReferenceChoice.Order(estimates, panel, tol, skipped);
         double aspect = c.Height / c.Length;
         // The same wall without openings bounds any wall with openings from above (removing material cannot stiffen an elastic body).
         double solid = Piers.Rectangular(fixity, 1.0, c.Height, c.Length, c.Thickness, c.Material.E, c.Material.G, c.FormFactor).Stiffness;
+        string frameCause = Cause(fe / handSI, feRigid / handSI, tol, asBuilt.SpandrelCount, c.Openings.Count == 0 ? aspect : double.NaN, c.Openings.Count == 0 ? 0 : fe / solid);
+        string cause = panelFirst
+            ? ReferenceChoice.PanelFirstCause(PanelEstimate.Judgement(panel!.Value / hand.Stiffness, tol, panel.EstimatedError!.Value), estimates[0], hand.Stiffness, frameCause)
+            : frameCause + PanelEstimate.Verdict(panel is null ? double.NaN : panel.Value / hand.Stiffness, tol, skipped);
         yield return new ComparisonRow(c.Id, "perforated-wall", c.Ends == CheckEnds.Cantilever ? "cantilever" : "fixed-fixed",
             ComparedQuantity.Stiffness, ComparisonStudy.StiffnessUnit(u),
             new HandEstimate(hand.Stiffness, hand.Method.With($"lengths in {u.LengthSymbol}, forces in {u.ForceSymbol} (the breakdown's units)"), Detail: hand.Breakdown),
-            estimates, aspect, tol, Cause(fe / handSI, feRigid / handSI, tol, asBuilt.SpandrelCount, c.Openings.Count == 0 ? aspect : double.NaN, c.Openings.Count == 0 ? 0 : fe / solid) + panelNote);
+            ordered, aspect, tol, cause, basis);
     }
 
     internal static double Stiffness(EquivalentFrame frame)

@@ -56,7 +56,7 @@ internal static class ShearSplitStudy
                 HandMethod? method = null;
                 for (int s = 0; s < stories; s++)
                 {
-                    var dv = FrameStoryStudy.DValue(model, fr, st[s]);
+                    var dv = FrameStoryStudy.DValue(model, fr, st[s], FrameStoryStudy.Bases(model, fr, st[s]));
                     drift += storyShear[s] / dv.Stiffness;
                     method = dv.Method;
                 }
@@ -79,7 +79,8 @@ internal static class ShearSplitStudy
                 yield return new ComparisonRow(c.Id, "shear-split", $"story {s + 1}: {c.Lines[i].Label}", ComparedQuantity.StoryShear, u.ForceSymbol,
                     new HandEstimate(handV, method),
                     [new FeEstimate("full model", feV, $"shear carried by the line's vertical members in story {s + 1} under load case \"{lc.Id}\" in the whole model ({ComparisonStudy.Pct(feShare)} of the lines' total; hand share {ComparisonStudy.Pct(split.Shares[i])})")],
-                    null, tol, Cause(ratio, tol, checks.Select(x => x is WallLineCheck).Distinct().Count() > 1));
+                    null, tol, Cause(ratio, tol, checks.Select(x => x is WallLineCheck).Distinct().Count() > 1),
+                    "full model: the whole model as given, under the case's loads; a story-shear split has no separate panel model");
             }
         }
     }

@@ -14,6 +14,9 @@ internal static class WallLineStudy
     /// <summary>Below this h/l a pier is squat and plane sections are doubtful (common practice; docs/hand-methods.md §2).</summary>
     public const double SquatAspectRatio = 0.5;
 
+    /// <summary>Name of the wall line's own FE estimate (its members alone).</summary>
+    public const string LineModelName = "line members, isolated";
+
     public static IEnumerable<ComparisonRow> Rows(StructureModel model, WallLineCheck c, double tol)
     {
         var u = model.Units;
@@ -30,28 +33,29 @@ internal static class WallLineStudy
             double feFlex = ComparisonStudy.SolveStiffness(Isolated(model, c, ends, withShear: false));
             double flexShare = fe / feFlex;   // Δ_flexure/Δ_total = (1/feFlex)/(1/fe)
             string top = ends == CheckEnds.Cantilever ? "top free" : "top held against rotation";
-            var feEstimate = new FeEstimate("line members, isolated", ComparisonStudy.Stiffness(u, fe),
+            var feEstimate = new FeEstimate(LineModelName, ComparisonStudy.Stiffness(u, fe),
                 $"the check's {c.Members.Count} Timoshenko member(s) alone, base fixed, {top}, unit lateral force at the top node; stiffness 1/Δ; shares from a second solve without shear deformation",
                 flexShare, 1 - flexShare);
-            var estimates = new List<FeEstimate> { feEstimate };
+            FeEstimate? panel = null;
+            string? noPanel = null;
             double thickness = double.IsFinite(depth) && depth > 0 ? m0.A / m0.Modifiers.A / depth : double.NaN;
-            string panelNote = "";
-            if (double.IsFinite(thickness))
-            {
-                if (m0.Modifiers != StiffnessModifiers.None)
-                    panelNote = PanelEstimate.Verdict(double.NaN, tol, "not modelled, because the wall's members carry stiffness modifiers (cracked-section I) that a continuum of the gross section cannot represent");
-                else
-                {
-                    var (panel, skipped) = PanelEstimate.ForEnds(fixity, u, c.Id, depth, h, thickness, m0.E, m0.E / (2 * m0.G) - 1, []);
-                    if (panel is not null) estimates.Add(panel);
-                    panelNote = PanelEstimate.Verdict(panel is null ? double.NaN : u.ToSI(panel.Value, Quantity.TranslationalStiffness) / hand.Stiffness, tol, skipped);
-                }
-            }
+            if (!double.IsFinite(thickness))
+                noPanel = "no plane-stress panel: the wall's section gives no depth to mesh";
+            else if (m0.Modifiers != StiffnessModifiers.None)
+                noPanel = "not modelled, because the wall's members carry stiffness modifiers (cracked-section I) that a continuum of the gross section cannot represent";
+            else
+                (panel, noPanel) = PanelEstimate.ForEnds(fixity, u, c.Id, depth, h, thickness, m0.E, m0.E / (2 * m0.G) - 1, []);
+            var (ordered, basis, panelFirst) = ReferenceChoice.Order([feEstimate], panel, tol, noPanel);
             double ratio = fe / hand.Stiffness;
+            double handValue = ComparisonStudy.Stiffness(u, hand.Stiffness);
+            string lineCause = Cause(ratio, tol, aspect, hand.ShearShare);
+            string cause = panelFirst
+                ? ReferenceChoice.PanelFirstCause(PanelEstimate.Judgement(panel!.Value / handValue, tol, panel.EstimatedError!.Value), feEstimate, handValue, lineCause)
+                : lineCause + (double.IsFinite(thickness) ? PanelEstimate.Verdict(panel is null ? double.NaN : panel.Value / handValue, tol, panel is null ? noPanel : null) : "");
             yield return new ComparisonRow(c.Id, "wall-line", ends == CheckEnds.Cantilever ? "cantilever" : "fixed-fixed",
                 ComparedQuantity.Stiffness, ComparisonStudy.StiffnessUnit(u),
-                new HandEstimate(ComparisonStudy.Stiffness(u, hand.Stiffness), hand.Method.With(Inputs(m0)), hand.FlexuralShare, hand.ShearShare),
-                estimates, aspect, tol, Cause(ratio, tol, aspect, hand.ShearShare) + panelNote);
+                new HandEstimate(handValue, hand.Method.With(Inputs(m0)), hand.FlexuralShare, hand.ShearShare),
+                ordered, aspect, tol, cause, basis);
         }
     }
 

@@ -30,6 +30,25 @@ public class FrameStoryTests
         Assert.Throws<ArgumentException>(() => FrameStory.RigidBeams(1, [new FrameColumn(1, 1, 1, null)]));
     }
 
+    [Fact]
+    public void RigidBeamsWithPinnedBasesAreCantilevers()
+    {
+        // Derived (REFERENCES.md "Portal frames"): a pinned-base column under a rigid beam is a cantilever from its held
+        // top, k = 3EI/h³, so a pinned portal with a rigid beam is 2·3EI/h³ = 6EI/h³, a quarter of the fixed 24EI/h³.
+        // Hand: E = 200, I = 50, h = 10 → 3·200·50/1000 = 30 per column, 60 for two.
+        var r = FrameStory.RigidBeams(10, [new FrameColumn(200, 50, PinnedBase: true), new FrameColumn(200, 50, PinnedBase: true)]);
+        Assert.Equal(60.0, r.Stiffness, 9);
+        Assert.Contains("pinned-base", r.Method.Name);
+        // The β → ∞ limit of the slope-deflection pinned portal (12EI/h³)·β/(2β+1) → 6EI/h³.
+        Assert.Equal(FrameStory.PortalPinnedBase(200, 50, 10, 1e12, 1).Stiffness, r.Stiffness, 6);
+        // With shear: Δ = h³/(3EI) + h/(G·A_s) (cantilever, derived). E = I = h = G = 1, A_s = 3 → 1/3 + 1/3 → k = 1.5,
+        // and 3EI/(h³(1 + Φ/4)) with Φ = 12/3 = 4 gives 3/2 too.
+        Assert.Equal(1.5, FrameStory.RigidBeams(1, [new FrameColumn(1, 1, 1, 3, PinnedBase: true)]).Stiffness, 12);
+        // Mixed: one fixed (12) and one pinned (3) column, E = I = h = 1.
+        var mixed = FrameStory.RigidBeams(1, [new FrameColumn(1, 1), new FrameColumn(1, 1, PinnedBase: true)]);
+        Assert.Equal([12.0, 3.0], mixed.ColumnStiffnesses.Select(k => Math.Round(k, 12)));
+    }
+
     // Derived by hand (slope-deflection), fixed-base portal, two columns k_c = EI_c/h, beam k_b = EI_b/L,
     // β = k_b/k_c, sway Δ, ψ = Δ/h, both top joints rotate θ (antisymmetric sway):
     //   column top  M_t = 2k_c(2θ − 3ψ), column base M_b = 2k_c(θ − 3ψ);

@@ -72,10 +72,13 @@ public class SweepTests
             var row = report.Rows.Single(r => r.Subject == subject);
             var point = sweep.Points.Single(p => p.Ends == ends && p.AspectRatio == 1.5);
             Near(row.Hand.Value, point.Hand.Stiffness, 1e-12, $"{subject} hand");
-            Near(row.Reference.Value, point.Fe[0].Value, 1e-9, $"{subject} FE");
+            // The sweep here runs the line members alone; the row's line model is its "line members, isolated" estimate
+            // (its reference may be a converged panel, which this sweep does not run).
+            var line = row.Estimate("line members, isolated")!;
+            Near(line.Value, point.Fe[0].Value, 1e-9, $"{subject} FE");
             Near(row.Hand.ShearShare!.Value, point.Hand.ShearShare, 1e-12, $"{subject} hand shear share");
-            Near(row.Reference.ShearShare!.Value, point.Fe[0].ShearShare!.Value, 1e-9, $"{subject} FE shear share");
-            Assert.Equal(row.Verdict, point.Verdict);
+            Near(line.ShearShare!.Value, point.Fe[0].ShearShare!.Value, 1e-9, $"{subject} FE shear share");
+            Assert.Equal(ComparisonRow.Judge(line.Value / row.Hand.Value, row.Tolerance), point.Verdict);
             Assert.Equal(1.5, row.AspectRatio);
         }
     }

@@ -106,4 +106,84 @@ public class FrameStoryTests
         Assert.Equal(["story 1 (h = 156 in)", "story 2 (h = 156 in)"], rows.Select(r => r.Subject));
         foreach (var r in rows) Models.Near(r.Hand.Value, r.Reference.Value, 1e-3, r.Subject);
     }
+
+    [Fact]
+    public void Pinned_base_rigid_beam_row_uses_the_cantilever_columns()
+    {
+        // Derived (slope-deflection; REFERENCES.md "Portal frames"): a pinned-base portal with a rigid beam has
+        // k = 2 × 3EI/h³ = 6EI/h³, a quarter of the fixed-base 24EI/h³. The FE with very stiff beams must reach it.
+        var rows = Models.Compare(Models.Portal(H, Span, Ic, Ic * 1e5, bases: "pinned")).Rows;
+        var rigid = rows.Single(r => r.Hand.Method.Name.StartsWith("Rigid-beam"));
+        Models.Near(6 * E * Ic / (H * H * H), rigid.Hand.Value, 1e-12, "6EI/h³");
+        Assert.Contains("pinned-base", rigid.Hand.Method.Name);
+        Models.Near(rigid.Hand.Value, rigid.Reference.Value, 1e-3, "FE with very stiff beams against 6EI/h³");
+        Assert.Equal(Verdict.WithinTolerance, rigid.Verdict);
+    }
+
+    [Theory]
+    [InlineData("pinned", 0.25)]
+    [InlineData("pinned", 1.0)]
+    [InlineData("pinned", 4.0)]
+    [InlineData("fixed", 0.5)]
+    [InlineData("fixed", 2.0)]
+    public void Portal_row_is_the_slope_deflection_closed_form_and_matches_the_FE(string bases, double beta)
+    {
+        // Slope-deflection, derived (REFERENCES.md "Portal frames"; Hibbeler, Structural Analysis, slope-deflection
+        // chapter): pinned k = (12EI_c/h³)·β/(2β+1); fixed k = (24EI_c/h³)(1+6β)/(4+6β); β = (I_b/L)/(I_c/h).
+        // The FE has no shear area and A = 1e6 in² (axial deformation negligible), so it must agree to about 1e-4.
+        double ib = beta * Ic / H * Span;
+        var rows = Models.Compare(Models.Portal(H, Span, Ic, ib, bases: bases)).Rows;
+        var portal = rows.Single(r => r.Hand.Method.Name.StartsWith("Single-bay portal"));
+        double k0 = E * Ic / (H * H * H);
+        double closed = bases == "pinned" ? 12 * k0 * beta / (2 * beta + 1) : 24 * k0 * (1 + 6 * beta) / (4 + 6 * beta);
+        Models.Near(closed, portal.Hand.Value, 1e-12, "closed form");
+        Models.Near(closed, portal.Reference.Value, 1e-3, "FE");
+        Assert.Equal(Verdict.WithinTolerance, portal.Verdict);
+        Assert.Contains(bases, portal.Hand.Method.Name);
+    }
+
+    [Fact]
+    public void Causes_name_only_the_effects_the_members_have()
+    {
+        // Common practice: members with no shear area have no shear deformation, so no cause may blame it. With the
+        // columns' area small (axially soft) a rigid-beam gap left after the beams are made rigid is axial shortening.
+        var rows = Models.Compare(Models.Portal(H, Span, Ic, Ic / 10, bases: "pinned")).Rows;
+        Assert.All(rows, r => Assert.DoesNotContain("shear deformation", r.Cause));
+        Assert.All(rows, r => Assert.DoesNotContain("shear and", r.Cause));
+        var soft = Models.Compare(Models.Portal(H, Span, Ic, Ic * 1e5, bases: "fixed", area: 0.05)).Rows
+            .Single(r => r.Hand.Method.Name.StartsWith("Rigid-beam"));
+        Assert.Equal(Verdict.HandHigher, soft.Verdict);
+        Assert.StartsWith("column axial shortening under overturning", soft.Cause);
+        Assert.DoesNotContain("shear", soft.Cause);
+        var sheared = Models.Compare(Models.Portal(H, Span, Ic, Ic * 1e5, columnShearArea: 0.05)).Rows
+            .Single(r => r.Hand.Method.Name.StartsWith("Single-bay portal"));
+        Assert.Contains("column shear deformation", sheared.Cause);
+    }
+
+    [Fact]
+    public void A_column_released_at_its_fixed_base_is_taken_as_pinned()
+    {
+        // Derived: a moment release at the column's lower end lets it rotate there whatever the support holds, so the
+        // rigid-beam story is 2 × 3EI/h³ = 6EI/h³ (REFERENCES.md "Portal frames"), and the FE with very stiff beams reaches it.
+        var model = new
+        {
+            formatVersion = 1,
+            units = new { force = "kip", length = "in" },
+            materials = new[] { new { id = "STEEL", E, nu = 0.3 } },
+            sections = new[] { new { id = "COL", shape = "general", A = 1e6, I = Ic }, new { id = "BEAM", shape = "general", A = 1e6, I = Ic * 1e5 } },
+            nodes = new[] { new { id = "A0", x = 0.0, y = 0.0 }, new { id = "A1", x = 0.0, y = H }, new { id = "B0", x = Span, y = 0.0 }, new { id = "B1", x = Span, y = H } },
+            members = new object[]
+            {
+                new { id = "CA", start = "A0", end = "A1", section = "COL", material = "STEEL", momentReleases = new[] { "start" } },
+                new { id = "CB", start = "B0", end = "B1", section = "COL", material = "STEEL", momentReleases = new[] { "start" } },
+                new { id = "BM", start = "A1", end = "B1", section = "BEAM", material = "STEEL" },
+            },
+            supports = new[] { new { node = "A0", type = "fixed" }, new { node = "B0", type = "fixed" } },
+            stiffnessAt = new[] { new { node = "A1", direction = "x" } },
+            comparisons = new[] { new { id = "P", kind = "frame-stories", members = new[] { "CA", "CB", "BM" } } },
+        };
+        var rigid = Models.Compare(model).Rows.Single(r => r.Hand.Method.Name.StartsWith("Rigid-beam"));
+        Models.Near(6 * E * Ic / (H * H * H), rigid.Hand.Value, 1e-12, "6EI/h³");
+        Models.Near(rigid.Hand.Value, rigid.Reference.Value, 1e-3, "FE");
+    }
 }

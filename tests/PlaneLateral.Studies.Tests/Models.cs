@@ -87,4 +87,13 @@ internal static class Models
             comparisons = new[] { new { id = "P", kind = "frame-stories", members = new[] { "CA", "CB", "BM" } } },
         };
     }
+
+    /// <summary>The row's first line-model estimate (its reference unless a converged plane-stress panel is).</summary>
+    public static FeEstimate Line(ComparisonRow r) => r.Fe.First(f => f.Model != ComparisonRow.PanelModelName);
+
+    /// <summary>FE/hand of the row's first line model.</summary>
+    public static double LineRatio(ComparisonRow r) => Line(r).Value / r.Hand.Value;
+
+    /// <summary>The verdict the row's first line model would give (the row's own verdict rests on its reference).</summary>
+    public static Verdict LineVerdict(ComparisonRow r) => ComparisonRow.Judge(LineRatio(r), r.Tolerance);
 }

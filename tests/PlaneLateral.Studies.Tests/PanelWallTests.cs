@@ -44,8 +44,15 @@ public class PanelWallTests
         Assert.Contains(panel.Openings, o => o.Bottom > 0);                           // a window
         var row = Assert.Single(ComparisonStudy.Run(model).Rows);
         Assert.Equal("panel-wall", row.Kind);
-        Assert.Equal(PanelWallStudy.LineModelName, row.Fe[0].Model);
+        // One reference per row: the converged panel (error well within a quarter of the tolerance) comes first, the
+        // line model beside it (docs/comparisons.md, "The reference").
+        Assert.Equal(PanelEstimate.ModelName, row.Reference.Model);
+        Assert.Equal(PanelWallStudy.LineModelName, row.Fe[1].Model);
+        Assert.StartsWith("converged plane-stress panel", row.ReferenceBasis);
         var fe = row.Fe.Single(f => f.Model == PanelEstimate.ModelName);
+        Assert.Equal(fe.EstimatedError, own0().Convergence!.EstimatedError);
+        Assert.Equal(ComparisonRow.Judge(fe.Value / row.Hand.Value, row.Tolerance), row.Verdict);
+        PanelResult own0() => Assert.Single(LinearStaticAnalysis.Run(model).Panels);
 
         // The row's panel number is the panel analysed on its own: the same stiffness to round-off (common practice).
         var own = Assert.Single(LinearStaticAnalysis.Run(model).Panels);
@@ -98,7 +105,7 @@ public class PanelWallTests
         // The hand cantilever formula (shear factor 1.2 = 1/κ) and the single Timoshenko line member are the same
         // closed form: their row numbers match it (derived).
         Models.Near(model.Units.FromSI(timoshenko, Quantity.TranslationalStiffness), row.Hand.Value, 1e-9, "hand");
-        Models.Near(model.Units.FromSI(timoshenko, Quantity.TranslationalStiffness), row.Fe[0].Value, 1e-9, "line model");
+        Models.Near(model.Units.FromSI(timoshenko, Quantity.TranslationalStiffness), row.Estimate(PanelWallStudy.LineModelName)!.Value, 1e-9, "line model");
         Assert.Equal(Verdict.WithinTolerance, ComparisonRow.Judge(row.Fe.Single(f => f.Model == PanelEstimate.ModelName).Value / row.Hand.Value, row.Tolerance));
     }
 
@@ -193,8 +200,9 @@ public class PanelWallTests
             int code = CliApp.Run(["compare", SquatWallPath, "--out", dir], o, e);
             Assert.True(code == 0, e.ToString());
             string text = o.ToString();
-            Assert.Contains("panel FE", text);
-            Assert.Contains("also: plane-stress panel", text);
+            Assert.Contains("reference FE model", text);
+            Assert.Contains("reference: converged plane-stress panel", text);
+            Assert.Contains("also: Timoshenko line model (equivalent frame)", text);
             Assert.Contains("panel-wall", File.ReadAllText(Path.Combine(dir, "comparisons.csv")));
             Assert.Contains("Timoshenko line model (equivalent frame)", File.ReadAllText(Path.Combine(dir, "comparisons.json")));
         }

@@ -20,10 +20,10 @@ public class WallLineTests
         Assert.Equal(2, report.Rows.Count);
         foreach (var row in report.Rows)
         {
-            Models.Near(row.Hand.Value, row.Reference.Value, 1e-9, $"{row.Subject} stiffness");
-            Models.Near(row.Hand.FlexuralShare!.Value, row.Reference.FlexuralShare!.Value, 1e-9, $"{row.Subject} flexural share");
-            Models.Near(row.Hand.ShearShare!.Value, row.Reference.ShearShare!.Value, 1e-9, $"{row.Subject} shear share");
-            Assert.Equal(Verdict.WithinTolerance, row.Verdict);
+            Models.Near(row.Hand.Value, Models.Line(row).Value, 1e-9, $"{row.Subject} stiffness");
+            Models.Near(row.Hand.FlexuralShare!.Value, Models.Line(row).FlexuralShare!.Value, 1e-9, $"{row.Subject} flexural share");
+            Models.Near(row.Hand.ShearShare!.Value, Models.Line(row).ShearShare!.Value, 1e-9, $"{row.Subject} shear share");
+            Assert.Equal(Verdict.WithinTolerance, Models.LineVerdict(row));
             Models.Near(h / l, row.AspectRatio!.Value, 1e-12, "h/l");
         }
     }
@@ -33,7 +33,7 @@ public class WallLineTests
     {
         // Cowper's κ gives a form factor other than 1.2; the check takes f = A/A_s from the member, so the two still agree.
         var report = Models.Compare(Models.WallLine(200, 160, 10, 2, shearFactor: "cowper"));
-        foreach (var row in report.Rows) Models.Near(row.Hand.Value, row.Reference.Value, 1e-9, row.Subject);
+        foreach (var row in report.Rows) Models.Near(row.Hand.Value, Models.Line(row).Value, 1e-9, row.Subject);
     }
 
     [Fact]
@@ -54,8 +54,8 @@ public class WallLineTests
         var report = Models.Compare(Models.WallLine(96, 240, 12, 1));
         foreach (var row in report.Rows)
         {
-            Assert.Equal(Verdict.WithinTolerance, row.Verdict);
-            Assert.StartsWith("squat", row.Cause);
+            Assert.Equal(Verdict.WithinTolerance, Models.LineVerdict(row));
+            Assert.Contains("squat", row.Cause);
             Assert.Contains("panel model", row.Cause);
         }
         var tall = Models.Compare(Models.WallLine(240, 240, 12, 1));
@@ -69,9 +69,9 @@ public class WallLineTests
         var rows = Models.Compare(Models.WallLine(300, 200, 10, 2)).Rows;
         var cant = rows.Single(r => r.Subject == "cantilever");
         var ff = rows.Single(r => r.Subject == "fixed-fixed");
-        Assert.True(ff.Reference.Value > cant.Reference.Value);
-        Assert.True(ff.Reference.ShearShare > cant.Reference.ShearShare);
-        double flexC = cant.Reference.FlexuralShare!.Value / cant.Reference.Value, flexF = ff.Reference.FlexuralShare!.Value / ff.Reference.Value;
+        Assert.True(Models.Line(ff).Value > Models.Line(cant).Value);
+        Assert.True(Models.Line(ff).ShearShare > Models.Line(cant).ShearShare);
+        double flexC = Models.Line(cant).FlexuralShare!.Value / Models.Line(cant).Value, flexF = Models.Line(ff).FlexuralShare!.Value / Models.Line(ff).Value;
         Models.Near(4.0, flexC / flexF, 1e-9, "ratio of flexural deflections");
     }
 }

@@ -14,11 +14,27 @@ public sealed class PanelResult
     /// <summary>
     /// Lateral stiffness at the top (N/m): 1/Δ, Δ the top displacement under a unit horizontal force through the top
     /// floor tie (with a guided top: the top held against rotation, the fixed-guided stiffness) (or, without ties, under a unit force spread uniformly along the top edge, Δ the mean top displacement).
+    /// On <see cref="Mesh"/> only (with a study: the base, coarsest mesh); the number to report is <see cref="ReportedStiffness"/>.
     /// </summary>
     public required double TopStiffness { get; init; }
 
-    /// <summary>Horizontal displacement (m) of every level (top last) in every load case, then every combination, in model order: [case][level].</summary>
+    /// <summary>
+    /// Horizontal displacement (m) of every level (top last) in every load case, then every combination, in model order:
+    /// [case][level]. With a convergence study these are Richardson-extrapolated over the study's meshes like the
+    /// stiffness, each with its estimated error in <see cref="LevelDisplacementErrors"/>; otherwise the mesh's own.
+    /// </summary>
     public required double[][] LevelDisplacements { get; init; }
+
+    /// <summary>Estimated relative discretisation error of each of <see cref="LevelDisplacements"/> ([case][level]; NaN where not extrapolated), or null without a convergence study.</summary>
+    public double[][]? LevelDisplacementErrors { get; init; }
+
+    /// <summary>
+    /// The panel's stiffness as reported: the extrapolated stiffness where the study extrapolates, else the finest
+    /// mesh's (N/m), with its estimated relative error (NaN: none); without a study, <see cref="TopStiffness"/> and NaN.
+    /// </summary>
+    public (double Value, double EstimatedError) ReportedStiffness => Convergence is { } c
+        ? double.IsFinite(c.Extrapolated) && c.Extrapolated > 0 ? (c.Extrapolated, c.EstimatedError) : (c.Stiffness[^1], double.NaN)
+        : (TopStiffness, double.NaN);
 
     /// <summary>The mesh-convergence study of the top stiffness, when the panel's mesh settings ask for more than one mesh.</summary>
     public PanelConvergenceResult? Convergence { get; init; }
@@ -43,11 +59,25 @@ public static class PanelAnalysis
         var mesh = PanelMesher.Mesh(panel);   // checks every problem, the finest study mesh's size included, before any work
         var result = Run(panel, mesh, caseIds, options, sourcePath, combinations);
         if (panel.Mesh.Refinements < 2) return result;
-        var study = PanelConvergence.Study(panel, panel.Mesh.Refinements, options, result);
+        // The load cases are solved on every mesh of the study too (one more right-hand side per factorisation) and
+        // their level displacements extrapolated like the stiffness, so that each carries its own error estimate.
+        var study = PanelConvergence.Study(panel, panel.Mesh.Refinements, options, result, caseIds, combinations);
+        var meshes = study.MeshLevelDisplacements;
+        int cases = result.LevelDisplacements.Length;
+        var disp = new double[cases][];
+        var errors = new double[cases][];
+        for (int c = 0; c < cases; c++)
+        {
+            int levels = result.LevelDisplacements[c].Length;
+            disp[c] = new double[levels];
+            errors[c] = new double[levels];
+            for (int l = 0; l < levels; l++)
+                (disp[c][l], errors[c][l]) = study.ExtrapolateValue(meshes.Select(m => m[c][l]).ToArray());
+        }
         return new PanelResult
         {
             Panel = result.Panel, Mesh = result.Mesh, Analysis = result.Analysis, TopStiffness = result.TopStiffness,
-            LevelDisplacements = result.LevelDisplacements, Convergence = study,
+            LevelDisplacements = disp, LevelDisplacementErrors = errors, Convergence = study,
         };
     }
 

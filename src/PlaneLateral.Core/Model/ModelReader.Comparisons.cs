@@ -7,6 +7,19 @@ namespace PlaneLateral.Model;
 // Reading of "comparisons": the checks that set hand methods beside the FE (docs/comparisons.md).
 public static partial class ModelReader
 {
+    /// <summary>Check kinds built from their own dimensions, with no reference to the model's members, nodes or supports.</summary>
+    private static readonly string[] SelfContainedKinds = ["perforated-wall", "coupled-wall"];
+
+    /// <summary>
+    /// True when the model declares comparison checks and every one is self-contained (a perforated-wall or coupled-wall
+    /// check built from its own dimensions): such a model needs no frame, so nodes, members, supports and sections may be
+    /// left out (docs/comparisons.md).
+    /// </summary>
+    private static bool ComparisonsOnly(JObject root) =>
+        root.TryGetValue("comparisons", out var t) && t is JArray { Count: > 0 } a
+        && a.All(c => c is JObject o && o.TryGetValue("kind", out var k) && k.Type == JTokenType.String && SelfContainedKinds.Contains((string)k!))
+        && !root.ContainsKey("nodes") && !root.ContainsKey("members");
+
     private sealed partial class Builder
     {
         // ---- comparisons (docs/comparisons.md) ----

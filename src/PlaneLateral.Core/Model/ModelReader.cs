@@ -100,8 +100,9 @@ public static partial class ModelReader
             ReadUnits(f);
 
             var materials = ReadMaterials(f.Objects("materials", true, "add \"materials\": [ {\"id\": \"...\", \"E\": ..., \"nu\": ...} ]"));
-            var sections = ReadSections(f.Objects("sections", true, "add \"sections\": [ {\"id\": \"...\", \"shape\": \"rectangle\", \"b\": ..., \"d\": ...} ]"));
-            bool hasPanels = HasPanels(root); // a model with wall panels may have no nodes, members or supports (ModelReader.Panels.cs)
+            bool checksOnly = ComparisonsOnly(root); // self-contained checks need no frame (ModelReader.Comparisons.cs)
+            var sections = ReadSections(f.Objects("sections", !checksOnly, "add \"sections\": [ {\"id\": \"...\", \"shape\": \"rectangle\", \"b\": ..., \"d\": ...} ]"));
+            bool hasPanels = HasPanels(root) || checksOnly; // a model with wall panels may have no nodes, members or supports (ModelReader.Panels.cs)
             var nodes = ReadNodes(f.Objects("nodes", !hasPanels, "add \"nodes\": [ {\"id\": \"...\", \"x\": ..., \"y\": ...} ]"));
             var members = ReadMembers(f.Objects("members", !hasPanels, "add \"members\": [ {\"id\": \"...\", \"start\": \"...\", \"end\": \"...\", \"section\": \"...\", \"material\": \"...\"} ]"), nodes);
             var supportsArr = f.Objects("supports", !hasPanels, "add \"supports\": [ {\"node\": \"...\", \"type\": \"fixed\"} ]");
@@ -121,7 +122,7 @@ public static partial class ModelReader
             f.RejectUnknownKeys();
 
             CheckConnectivity(nodes, members);
-            if (cases.Count == 0 && points.Count == 0 && panels.Count == 0)
+            if (cases.Count == 0 && points.Count == 0 && panels.Count == 0 && !checksOnly)
                 sink.Add(root, "the model has neither load cases nor stiffness points, so there is nothing to solve",
                     "add \"loadCases\" (e.g. a lateral load at the roof) or \"stiffnessAt\": [{\"node\": \"<roof node>\", \"direction\": \"x\"}]");
 

@@ -84,7 +84,15 @@ public static class PanelResultFiles
                 w.WriteEndObject();
                 P("floorTies", p.Panel.FloorTies);
                 if (p.Panel.Top == Model.PanelTop.Guided) P("top", "guided: the top edge translates without rotating (fixed-guided stiffness)");
-                P("topStiffness", Stiff(p.TopStiffness));
+                var (kRep, kErr) = p.ReportedStiffness;
+                P("topStiffness", Stiff(kRep));
+                P("topStiffnessEstimatedError", kErr);
+                P("topStiffnessOn", p.Convergence is null ? "the panel's one mesh (no error estimate)"
+                    : double.IsFinite(kErr) ? "Richardson extrapolation over the convergence meshes (estimated relative error beside it)"
+                    : "the finest convergence mesh, not extrapolated (no error estimate)");
+                P("topStiffnessBaseMesh", Stiff(p.TopStiffness));
+                if (p.Convergence is not null)
+                    P("nodalResults", "the nodal displacements and stresses in panel-stresses.csv and the checks in panel-checks.csv are on the base (coarsest) mesh of the study and carry no error estimate; the level displacements here are extrapolated like the stiffness, each with its own estimated relative error");
                 if (p.Convergence is { } cv)
                 {
                     w.WritePropertyName("convergence");
@@ -112,12 +120,14 @@ public static class PanelResultFiles
                     w.WriteStartObject();
                     P("id", cr.Id);
                     P("topDisplacement", Len(p.TopDisplacement(c)));
+                    if (p.LevelDisplacementErrors is { } te) P("topDisplacementEstimatedError", te[c][^1]);
                     w.WritePropertyName("levels");
                     w.WriteStartArray();
                     for (int l = 0; l < p.Mesh.Levels.Length; l++)
                     {
                         w.WriteStartObject();
                         P("height", Len(p.Mesh.Levels[l])); P("ux", Len(p.LevelDisplacements[c][l]));
+                        if (p.LevelDisplacementErrors is { } le) P("uxEstimatedError", le[c][l]);
                         w.WriteEndObject();
                     }
                     w.WriteEndArray();
