@@ -312,7 +312,9 @@ public sealed class SupernodalFactor : ISparseSpdFactor
         if (s.StoredEntries > Array.MaxLength)
             throw new InvalidOperationException($"The factor needs {s.StoredEntries} entries, more than the largest array holds.");
         var job = new NumericJob { S = s, L = new double[s.StoredEntries], Failed = new bool[n], Tol = tol, Values = a.Values, Native = native };
-        SupernodalSymbolic.LowerByColumn(a, s.Inv, out job.ColPtr, out job.Rows, out job.Source);
+        // The matrix by column in the new numbering, as the symbolic phase grouped it (not kept by the factor).
+        (job.ColPtr, job.Rows, job.Source) = (s.ColPtr!, s.RowsByCol!, s.SourceByCol!);
+        (s.ColPtr, s.RowsByCol, s.SourceByCol) = (null, null, null);
         var diag = new double[n];
         for (int j = 0; j < n; j++)
             for (int p = job.ColPtr[j]; p < job.ColPtr[j + 1]; p++)
