@@ -49,9 +49,9 @@ public static class SupernodalReport
             double res = ResidualRelative(a, x, b);
             Console.WriteLine($"  run {rep + 1}: order {tOrder:F3} s, symbolic {tSym:F3} s, factor (numeric) {tFac - tSym:F3} s, solve {tSolve:F3} s");
             Console.WriteLine($"    nnz(L) exact {an.ExactNonZeros}, stored {an.StoredNonZeros}, supernodes {an.Supernodes}, largest front {an.LargestFront}, flops {an.Flops:E3}, {an.Flops / (tFac - tSym) * 1e-9:F2} GFlop/s");
-            Console.WriteLine($"    residual {res:E2}, failures {f.PivotFailures.Count}, peak working set {Process.GetCurrentProcess().PeakWorkingSet64 / 1048576.0:F0} MiB");
+            Console.WriteLine($"    residual {res:E2}, failures {f.PivotFailures.Count}, numeric phase {f.NumericBytes / 1048576.0:F0} MiB (factor {f.FactorBytes / 1048576.0:F0} MiB), peak working set {Process.GetCurrentProcess().PeakWorkingSet64 / 1048576.0:F0} MiB");
             Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
-                $"RESULT n={a.Size} lnz={an.ExactNonZeros} lstored={an.StoredNonZeros} t_order={tOrder:F4} t_symbolic={tSym:F4} t_factor={tFac - tSym:F4} t_solve={tSolve:F4} peak_ws_mib={Process.GetCurrentProcess().PeakWorkingSet64 / 1048576.0:F0} relres={res:E3}"));
+                $"RESULT n={a.Size} lnz={an.ExactNonZeros} lstored={an.StoredNonZeros} t_order={tOrder:F4} t_symbolic={tSym:F4} t_factor={tFac - tSym:F4} t_solve={tSolve:F4} peak_ws_mib={Process.GetCurrentProcess().PeakWorkingSet64 / 1048576.0:F0} numeric_mib={f.NumericBytes / 1048576.0:F0} relres={res:E3}"));
         }
     }
 

@@ -30,14 +30,18 @@ internal static class FrontKernels
         Vector256.IsHardwareAccelerated && !(AppContext.TryGetSwitch(DenseKernels.ScalarKernelsSwitch, out bool scalar) && scalar);
 
     /// <summary>
-    /// Factorises the first <paramref name="k"/> columns of the m×m column-major lower matrix <paramref name="f"/>
-    /// (leading dimension m): F₁₁ = L₁₁L₁₁ᵀ, L₂₁ = F₂₁L₁₁⁻ᵀ, F₂₂ −= L₂₁L₂₁ᵀ.
+    /// Factorises the pivot columns of a front held in two pieces: its first <paramref name="k"/> columns, all m rows, in
+    /// <paramref name="l"/> from <paramref name="off"/> (column-major, leading dimension m: the supernode's block of the factor,
+    /// factorised in place), and its trailing (m−k)×(m−k) lower block in <paramref name="upd"/> (leading dimension m−k, the
+    /// update matrix): F₁₁ = L₁₁L₁₁ᵀ, L₂₁ = F₂₁L₁₁⁻ᵀ, F₂₂ −= L₂₁L₂₁ᵀ.
     /// A pivot d with !(diag &gt; 0) or !(d &gt; tol·diag) (diag = the original K_jj) is reported through
     /// <paramref name="onFailure"/> (local column, pivot); its column is set to the unit vector and the elimination goes on.
     /// </summary>
+    /// <remarks>Every entry receives the same operations in the same order as with the whole front in one m×m block (the
+    /// update of an entry is one product summed over the panel from zero, then subtracted), so the split changes no bit.</remarks>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    public static void PartialCholesky(double[] f, int m, int k, ReadOnlySpan<double> originalDiagonal, double tol,
-        double[] packBuffer, int threads, Action<int, double> onFailure)
+    public static void PartialCholesky(double[] l, int off, int m, int k, double[] upd, ReadOnlySpan<double> originalDiagonal,
+        double tol, double[] packBuffer, int threads, Action<int, double> onFailure)
     {
         for (int c0 = 0; c0 < k; c0 += PanelWidth)
         {
@@ -45,11 +49,11 @@ internal static class FrontKernels
             // Panel: left-looking inside the panel (columns c0..c0+w, already updated by all earlier panels).
             for (int c = c0; c < c0 + w; c++)
             {
-                var col = f.AsSpan(c * m + c, m - c);
+                var col = l.AsSpan(off + c * m + c, m - c);
                 for (int p = c0; p < c; p++)
                 {
-                    double alpha = f[p * m + c];
-                    if (alpha != 0.0) DenseKernels.SubtractScaled(col, alpha, f.AsSpan(p * m + c, m - c));
+                    double alpha = l[off + p * m + c];
+                    if (alpha != 0.0) DenseKernels.SubtractScaled(col, alpha, l.AsSpan(off + p * m + c, m - c));
                 }
                 double d = col[0];
                 double kjj = originalDiagonal[c];
@@ -60,20 +64,29 @@ internal static class FrontKernels
                     col[0] = 1.0;
                     continue;
                 }
-                double l = Math.Sqrt(d);
-                col[0] = l;
-                double rl = 1.0 / l;
+                double sq = Math.Sqrt(d);
+                col[0] = sq;
+                double rl = 1.0 / sq;
                 var below = col[1..];
                 for (int i = 0; i < below.Length; i++) below[i] *= rl;
             }
             int t0 = c0 + w;
-            if (t0 < m) RankUpdate(f, m, c0, w, t0, packBuffer, threads);
+            if (t0 >= m) continue;
+            // Trailing pivot columns t0..k−1 (in the factor), then the update block (rows and columns k..m−1).
+            if (t0 < k) RankUpdate(l, off, m, c0, w, t0, l, off + t0 * m + t0, m, k - t0, packBuffer, threads);
+            if (k < m) RankUpdate(l, off, m, c0, w, k, upd, 0, m - k, m - k, packBuffer, threads);
         }
     }
 
-    /// <summary>F[t0.., t0..] (lower) −= P·Pᵀ with P = F[t0.., c0..c0+w).</summary>
+    /// <summary>
+    /// C (lower part) −= P·P₁ᵀ with P = rows t0..m−1 of the panel columns c0..c0+w of the block at <paramref name="off"/> in
+    /// <paramref name="src"/> (leading dimension m) and P₁ its first <paramref name="cols"/> rows; C is (m−t0)×cols at
+    /// <paramref name="cOff"/> in <paramref name="c"/> with leading dimension <paramref name="ldc"/>, its (0,0) entry the
+    /// one of row t0, column t0.
+    /// </summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    internal static void RankUpdate(double[] f, int m, int c0, int w, int t0, double[] pack, int threads)
+    internal static void RankUpdate(double[] src, int off, int m, int c0, int w, int t0, double[] c, int cOff, int ldc, int cols,
+        double[] pack, int threads)
     {
         int r = m - t0;
         int strips = (r + MR - 1) / MR;
@@ -85,43 +98,44 @@ internal static class FrontKernels
             int baseS = s * w * MR;
             for (int p = 0; p < w; p++)
             {
-                int src = (c0 + p) * m + i0;
+                int from = off + (c0 + p) * m + i0;
                 int dst = baseS + p * MR;
                 int i = 0;
-                for (; i < rows; i++) pack[dst + i] = f[src + i];
+                for (; i < rows; i++) pack[dst + i] = src[from + i];
                 for (; i < MR; i++) pack[dst + i] = 0.0;
             }
         }
-        int colBlocks = (r + NR - 1) / NR;
-        if (r >= ParallelThreshold && threads > 1)
+        int colBlocks = (cols + NR - 1) / NR;
+        if (r >= ParallelThreshold && threads > 1 && colBlocks > 1)
         {
-            // Split the column blocks into chunks of about equal triangular area.
-            int chunks = threads * 4;
+            // Split the column blocks into chunks of about equal area (column block x spans rows x·NR .. r).
+            int chunks = Math.Min(threads * 4, colBlocks);
             var bounds = new int[chunks + 1];
-            double total = (double)colBlocks * (colBlocks + 1) / 2;
+            double rb = (double)(r + NR - 1) / NR;
+            double Area(double x) => x * rb - x * (x - 1) / 2;
+            double total = Area(colBlocks);
             int cb = 0;
-            for (int c = 1; c < chunks; c++)
+            for (int ch = 1; ch < chunks; ch++)
             {
-                double target = total * c / chunks;
-                // area of columns [0, x) = x·colBlocks − x(x−1)/2
-                while (cb < colBlocks && (double)(cb + 1) * colBlocks - (double)(cb + 1) * cb / 2 <= target) cb++;
-                bounds[c] = cb;
+                double target = total * ch / chunks;
+                while (cb < colBlocks && Area(cb + 1) <= target) cb++;
+                bounds[ch] = cb;
             }
             bounds[chunks] = colBlocks;
             Parallel.For(0, chunks, new ParallelOptions { MaxDegreeOfParallelism = threads },
-                c => UpdateColumns(f, m, t0, w, r, pack, bounds[c], bounds[c + 1]));
+                ch => UpdateColumns(c, cOff, ldc, w, r, cols, pack, bounds[ch], bounds[ch + 1]));
         }
-        else UpdateColumns(f, m, t0, w, r, pack, 0, colBlocks);
+        else UpdateColumns(c, cOff, ldc, w, r, cols, pack, 0, colBlocks);
     }
 
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private static void UpdateColumns(double[] f, int m, int t0, int w, int r, double[] pack, int cbFrom, int cbTo)
+    private static void UpdateColumns(double[] f, int cOff, int ldc, int w, int r, int cols, double[] pack, int cbFrom, int cbTo)
     {
         Span<double> tile = stackalloc double[MR * NR];
         for (int cb = cbFrom; cb < cbTo; cb++)
         {
-            int j = cb * NR;                // local column in the trailing block
-            int ncol = Math.Min(NR, r - j);
+            int j = cb * NR;                // local column of C
+            int ncol = Math.Min(NR, cols - j);
             int bStrip = j / MR, bLane = j % MR;
             int bBase = bStrip * w * MR + bLane;
             for (int s = j / MR; s * MR < r; s++)
@@ -133,20 +147,20 @@ internal static class FrontKernels
                 if (full)
                 {
                     // Whole 8×4 tile strictly inside the lower part: subtract in place.
-                    ref double cref = ref f[(t0 + j) * m + t0 + i];
-                    Kernel8x4(pack, aBase, bBase, w, ref cref, m);
+                    ref double cref = ref f[cOff + j * ldc + i];
+                    Kernel8x4(pack, aBase, bBase, w, ref cref, ldc);
                 }
                 else
                 {
                     TileScalarOrVector(pack, aBase, bBase, w, tile);
-                    for (int c = 0; c < ncol; c++)
+                    for (int cc = 0; cc < ncol; cc++)
                     {
-                        int gcol = j + c;
-                        int colStart = (t0 + gcol) * m + t0;
+                        int gcol = j + cc;
+                        int colStart = cOff + gcol * ldc;
                         for (int rr = 0; rr < nrow; rr++)
                         {
                             int grow = i + rr;
-                            if (grow >= gcol) f[colStart + grow] -= tile[c * MR + rr];
+                            if (grow >= gcol) f[colStart + grow] -= tile[cc * MR + rr];
                         }
                     }
                 }

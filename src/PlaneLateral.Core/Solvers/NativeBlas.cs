@@ -109,35 +109,38 @@ public static class NativeBlas
 
     /// <summary>
     /// The partial Cholesky factorisation of a front with OpenBLAS: F₁₁ = L₁₁L₁₁ᵀ (dpotrf), L₂₁ = F₂₁L₁₁⁻ᵀ (dtrsm),
-    /// F₂₂ −= L₂₁L₂₁ᵀ (dsyrk). The pivots are then checked against the project's pivot rule (d = l_jj² must exceed
-    /// tol·K_jj, both finite); if dpotrf stops or any pivot fails, the pivot block is restored from
-    /// <paramref name="save"/> and false is returned, before F₂₁ and F₂₂ are touched, so the managed kernel can redo the
-    /// front with the project's failure handling (unit column, mechanism shape).
+    /// F₂₂ −= L₂₁L₂₁ᵀ (dsyrk). The front is held as in <see cref="FrontKernels.PartialCholesky"/>: its k pivot columns at
+    /// <paramref name="off"/> in <paramref name="l"/> (leading dimension m), F₂₂ in <paramref name="upd"/> (leading dimension
+    /// m−k). The pivots are then checked against the project's pivot rule (d = l_jj² must exceed tol·K_jj, both finite); if
+    /// dpotrf stops or any pivot fails, the pivot block is restored from <paramref name="save"/> and false is returned,
+    /// before F₂₁ and F₂₂ are touched, so the managed kernel can redo the front with the project's failure handling (unit
+    /// column, mechanism shape).
     /// </summary>
     /// <param name="save">Scratch of at least k·k doubles.</param>
-    internal static bool TryPartialCholesky(double[] f, int m, int k, ReadOnlySpan<double> originalDiagonal, double tol, double[] save)
+    internal static bool TryPartialCholesky(double[] l, int off, int m, int k, double[] upd, ReadOnlySpan<double> originalDiagonal,
+        double tol, double[] save)
     {
         var lib = Library.Value ?? throw new InvalidOperationException("OpenBLAS is not loaded: " + _status);
-        for (int c = 0; c < k; c++) Array.Copy(f, (long)c * m, save, (long)c * k, k);
+        for (int c = 0; c < k; c++) Array.Copy(l, off + (long)c * m, save, (long)c * k, k);
         byte uplo = (byte)'L';
         int n = k, lda = m, info = 0;
-        lib.Potrf(ref uplo, ref n, ref f[0], ref lda, ref info, 1);
+        lib.Potrf(ref uplo, ref n, ref l[off], ref lda, ref info, 1);
         bool ok = info == 0;
         for (int c = 0; ok && c < k; c++)
         {
-            double l = f[(long)c * m + c], d = l * l, kjj = originalDiagonal[c];
+            double d0 = l[off + (long)c * m + c], d = d0 * d0, kjj = originalDiagonal[c];
             ok = kjj > 0.0 && d > tol * kjj && double.IsFinite(d) && double.IsFinite(kjj);
         }
         if (!ok)
         {
-            for (int c = 0; c < k; c++) Array.Copy(save, (long)c * k, f, (long)c * m, k);
+            for (int c = 0; c < k; c++) Array.Copy(save, (long)c * k, l, off + (long)c * m, k);
             return false;
         }
         int below = m - k;
         if (below > 0)
         {
-            lib.Trsm(ColMajor, Right, Lower, Trans, NonUnit, below, k, 1.0, ref f[0], m, ref f[k], m);
-            lib.Syrk(ColMajor, Lower, NoTrans, below, k, -1.0, ref f[k], m, 1.0, ref f[(long)k * m + k], m);
+            lib.Trsm(ColMajor, Right, Lower, Trans, NonUnit, below, k, 1.0, ref l[off], m, ref l[off + k], m);
+            lib.Syrk(ColMajor, Lower, NoTrans, below, k, -1.0, ref l[off + k], m, 1.0, ref upd[0], below);
         }
         return true;
     }

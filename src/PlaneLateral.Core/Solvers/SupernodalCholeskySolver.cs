@@ -180,14 +180,27 @@ public sealed class SupernodalFactor : ISparseSpdFactor
     /// <summary>Whether some fronts were factorised by native BLAS (for tests).</summary>
     internal int NativeFronts { get; private init; }
 
-    /// <summary>Per-worker scratch of the numeric factorisation: front, packing buffer, update-matrix stack, failures.</summary>
+    /// <summary>Bytes of the arrays the numeric factorisation allocated or reused: the factor, the workspaces (update block,
+    /// packing buffer, update-matrix stack, index maps), the subtree roots' update matrices and the matrix entries regrouped by
+    /// column. An upper bound of the phase's peak memory (the symbolic analysis and the matrix itself come on top).</summary>
+    public long NumericBytes { get; private init; }
+
+    /// <summary>Bytes of the factor's values (<c>8 × Σ m·k</c>).</summary>
+    public long FactorBytes => _l.LongLength * sizeof(double);
+
+    /// <summary>
+    /// Per-worker scratch of the numeric factorisation: the update block of the current front, the packing buffer, the
+    /// update-matrix stack (lower triangles, packed by column), index maps and failures. Sized once from the symbolic
+    /// analysis before any front is factorised, so nothing grows during the factorisation; kept between factorisations
+    /// (weakly, so the collector may take them back) so that a run that factorises several matrices maps its scratch once.
+    /// </summary>
     private sealed class Workspace
     {
-        public double[] Front = Array.Empty<double>();
+        public double[] Upd = Array.Empty<double>();
         public double[] Pack = Array.Empty<double>();
-        public int[] Map = null!;
+        public int[] Map = Array.Empty<int>();
         public int[] Rel = Array.Empty<int>();
-        public double[] Stack = new double[16];
+        public double[] Stack = Array.Empty<double>();
         public long Top;
         public readonly List<int> StackSuper = new();
         public readonly List<long> StackOffset = new();
@@ -195,15 +208,71 @@ public sealed class SupernodalFactor : ISparseSpdFactor
         public double[] Save = Array.Empty<double>();
         public int NativeFronts;
 
-        public void Reserve(int maxFront, int n)
+        public void Reserve(in Needs need, int n)
         {
-            Map ??= new int[n];
-            long need = (long)maxFront * maxFront;
-            if (Front.LongLength < need) Front = new double[need];
-            int packLen = ((maxFront + 7) / 8 + 1) * 8 * FrontKernels.PanelWidth;
+            if (Map.Length < n) Map = new int[n];
+            if (Upd.LongLength < (long)need.MaxUpdate * need.MaxUpdate) Upd = new double[(long)need.MaxUpdate * need.MaxUpdate];
+            int packLen = ((need.MaxFront + 7) / 8 + 1) * 8 * FrontKernels.PanelWidth;
             if (Pack.Length < packLen) Pack = new double[packLen];
-            if (Rel.Length < maxFront) Rel = new int[maxFront];
+            if (Rel.Length < need.MaxFront) Rel = new int[need.MaxFront];
+            if (Stack.LongLength < need.Stack) Stack = new double[need.Stack];
+            if (need.Native && Save.LongLength < (long)need.MaxPivots * need.MaxPivots) Save = new double[(long)need.MaxPivots * need.MaxPivots];
+            Top = 0;
+            StackSuper.Clear();
+            StackOffset.Clear();
+            Failures.Clear();
+            NativeFronts = 0;
         }
+
+        public long Bytes => 8 * (Upd.LongLength + Pack.LongLength + Stack.LongLength + Save.LongLength) + 4L * (Map.Length + Rel.Length);
+    }
+
+    /// <summary>What a workspace must hold for a set of supernodes: largest front, largest update block, peak of the
+    /// update-matrix stack (entries), largest pivot block.</summary>
+    private record struct Needs(int MaxFront, int MaxUpdate, long Stack, int MaxPivots, bool Native)
+    {
+        public static Needs Max(Needs a, Needs b) => new(Math.Max(a.MaxFront, b.MaxFront), Math.Max(a.MaxUpdate, b.MaxUpdate),
+            Math.Max(a.Stack, b.Stack), Math.Max(a.MaxPivots, b.MaxPivots), a.Native || b.Native);
+    }
+
+    private static readonly System.Collections.Concurrent.ConcurrentBag<WeakReference<Workspace>> Cache = new();
+
+    private static Workspace TakeWorkspace()
+    {
+        while (Cache.TryTake(out var r))
+            if (r.TryGetTarget(out var ws)) return ws;
+        return new Workspace();
+    }
+
+    private static void ReturnWorkspace(Workspace ws) => Cache.Add(new WeakReference<Workspace>(ws));
+
+    /// <summary>Packed lower triangle of an update block of order nb.</summary>
+    private static long Packed(int nb) => (long)nb * (nb + 1) / 2;
+
+    /// <summary>Replays the stack discipline of <see cref="FactorSupernode"/> over the supernodes <paramref name="nodes"/>
+    /// (in factorisation order) to find the workspace they need.</summary>
+    private static Needs Simulate(SupernodalSymbolic s, IEnumerable<int> nodes, bool[] subtreeRoot, bool native)
+    {
+        var stack = new List<(int Node, long Size)>();
+        long top = 0, peak = 0;
+        int maxFront = 1, maxUpdate = 0, maxPivots = 0;
+        foreach (int t in nodes)
+        {
+            int k = s.First[t + 1] - s.First[t], nb = s.PatternStart[t + 1] - s.PatternStart[t];
+            maxFront = Math.Max(maxFront, k + nb);
+            maxUpdate = Math.Max(maxUpdate, nb);
+            maxPivots = Math.Max(maxPivots, k);
+            while (stack.Count > 0 && s.Parent[stack[^1].Node] == t)
+            {
+                top -= stack[^1].Size;
+                stack.RemoveAt(stack.Count - 1);
+            }
+            if (nb == 0 || s.Parent[t] < 0 || subtreeRoot[t]) continue;
+            stack.Add((t, Packed(nb)));
+            top += Packed(nb);
+            peak = Math.Max(peak, top);
+        }
+        return new Needs(maxFront, maxUpdate, peak, maxPivots, native);
     }
 
     /// <summary>Shared inputs of the numeric factorisation.</summary>
@@ -222,14 +291,20 @@ public sealed class SupernodalFactor : ISparseSpdFactor
 
     /// <summary>
     /// Numeric factorisation. The supernodal tree is cut into independent subtrees of bounded work (fixed by the tree alone,
-    /// not by the thread count), which are factorised in parallel, each with its own front and update stack; the remaining
-    /// top of the tree is then factorised with the threads splitting the dense updates of its large fronts. The subtree roots
-    /// hand their update matrices to the top part in separate arrays. Every sum is formed in the same order whatever the
-    /// thread count, so the factor is bitwise the same with 1 or more threads.
+    /// not by the thread count), which are factorised in parallel, each with its own update block and update stack; the
+    /// remaining top of the tree is then factorised with the threads splitting the dense updates of its large fronts. The
+    /// subtree roots hand their update matrices to the top part in separate arrays. Every sum is formed in the same order
+    /// whatever the thread count, so the factor is bitwise the same with 1 or more threads.
     /// </summary>
-    /// <remarks>With <paramref name="native"/> the fronts of at least <see cref="NativeMinFront"/> rows go to OpenBLAS, which
+    /// <remarks>
+    /// <para>Memory: the factor is allocated once at its final size and each front's pivot columns are assembled and
+    /// factorised in place in it; only the front's update block lives in the workspace, whose buffers and stack are sized
+    /// from the symbolic analysis before the first front (the stack discipline is replayed on the tree), so nothing is
+    /// copied into the factor and nothing grows. Update matrices are stored as packed lower triangles.</para>
+    /// <para>With <paramref name="native"/> the fronts of at least <see cref="NativeMinFront"/> rows go to OpenBLAS, which
     /// threads each call itself; subtrees are then factorised one after the other, so that two threads of ours never
-    /// call the library at once, and results are no longer bitwise independent of the library's thread count.</remarks>
+    /// call the library at once, and results are no longer bitwise independent of the library's thread count.</para>
+    /// </remarks>
     internal static SupernodalFactor Create(SymmetricSparseMatrix a, int[] ordering, double tol, int threads, bool native = false)
     {
         var s = SupernodalSymbolic.Analyse(a, ordering);
@@ -237,7 +312,9 @@ public sealed class SupernodalFactor : ISparseSpdFactor
         if (s.StoredEntries > Array.MaxLength)
             throw new InvalidOperationException($"The factor needs {s.StoredEntries} entries, more than the largest array holds.");
         var job = new NumericJob { S = s, L = new double[s.StoredEntries], Failed = new bool[n], Tol = tol, Values = a.Values, Native = native };
-        SupernodalSymbolic.LowerByColumn(a, s.Inv, out job.ColPtr, out job.Rows, out job.Source);
+        // The matrix by column in the new numbering, as the symbolic phase grouped it (not kept by the factor).
+        (job.ColPtr, job.Rows, job.Source) = (s.ColPtr!, s.RowsByCol!, s.SourceByCol!);
+        (s.ColPtr, s.RowsByCol, s.SourceByCol) = (null, null, null);
         var diag = new double[n];
         for (int j = 0; j < n; j++)
             for (int p = job.ColPtr[j]; p < job.ColPtr[j + 1]; p++)
@@ -290,49 +367,83 @@ public sealed class SupernodalFactor : ISparseSpdFactor
         job.Handover = new double[ns][];
         var tasks = roots.Select(r => r.Node).ToArray(); // heaviest first
 
-        var workspaces = new System.Collections.Concurrent.ConcurrentBag<Workspace>();
-        var pool = new System.Collections.Concurrent.ConcurrentBag<Workspace>();
-        void RunSubtree(int root)
-        {
-            if (!pool.TryTake(out var ws)) ws = new Workspace();
-            int maxFront = 1;
-            for (int t = firstDesc[root]; t <= root; t++)
-                maxFront = Math.Max(maxFront, s.First[t + 1] - s.First[t] + s.PatternStart[t + 1] - s.PatternStart[t]);
-            ws.Reserve(maxFront, n);
-            for (int t = firstDesc[root]; t <= root; t++) FactorSupernode(job, ws, t, 1);
-            pool.Add(ws);
-            workspaces.Add(ws);
-        }
+        // Workspace sizes: every subtree workspace can take any subtree; the top part has its own.
+        var subtreeNeeds = new Needs(1, 0, 0, 0, native);
+        foreach (int r in tasks)
+            subtreeNeeds = Needs.Max(subtreeNeeds, Simulate(s, Enumerable.Range(firstDesc[r], r - firstDesc[r] + 1), job.SubtreeRoot, native));
+        var topNeeds = Simulate(s, Enumerable.Range(0, ns).Where(t => isTop[t]), job.SubtreeRoot, native);
+        long handoverBytes = 0;
+        foreach (int r in tasks)
+            if (s.Parent[r] >= 0) handoverBytes += 8 * Packed(s.PatternStart[r + 1] - s.PatternStart[r]);
+
         // Threads only pay off on large trees: on the 10k-unknown wall (work ≈ 10⁸) two threads were slower than one in
         // most paired runs on the (loaded) test machine. The cut above does not depend on this, so neither do the results.
         bool parallel = !native && threads > 1 && tasks.Length > 1 && total >= ParallelWorkThreshold;
+        int workers = parallel ? Math.Min(threads, tasks.Length) : 1;
+        var pool = new System.Collections.Concurrent.ConcurrentBag<Workspace>();
+        var used = new List<Workspace>();
+        for (int i = 0; i < workers && tasks.Length > 0; i++)
+        {
+            var ws = TakeWorkspace();
+            ws.Reserve(subtreeNeeds, n);
+            pool.Add(ws);
+            used.Add(ws);
+        }
+        var failures = new List<(int Position, PivotFailure Failure)>();
+        int nativeFronts = 0;
+        long bytes = 8 * job.L.LongLength + 8L * n + n + 12L * job.Rows.Length + 4L * (n + 1) + handoverBytes
+            + used.Sum(w => w.Bytes);
+        void RunSubtree(int root)
+        {
+            pool.TryTake(out var ws);
+            for (int t = firstDesc[root]; t <= root; t++) FactorSupernode(job, ws!, t, 1);
+            pool.Add(ws!);
+        }
         if (parallel)
-            Parallel.ForEach(tasks, new ParallelOptions { MaxDegreeOfParallelism = threads }, RunSubtree);
+            Parallel.ForEach(tasks, new ParallelOptions { MaxDegreeOfParallelism = workers }, RunSubtree);
         else
             foreach (int r in tasks) RunSubtree(r);
+        foreach (var ws in used)
+        {
+            failures.AddRange(ws.Failures);
+            nativeFronts += ws.NativeFronts;
+        }
+        // The top part: a subtree workspace when it is large enough (always so when one thread ran them), else its own.
+        if (isTop.Any(x => x))
+        {
+            Workspace top;
+            if (used.Count > 0 && Needs.Max(subtreeNeeds, topNeeds) == subtreeNeeds) top = used[0];
+            else
+            {
+                top = TakeWorkspace();
+                used.Add(top);
+            }
+            top.Reserve(topNeeds, n);
+            bytes += top == used[0] && used.Count > 0 && Needs.Max(subtreeNeeds, topNeeds) == subtreeNeeds ? 0 : top.Bytes;
+            for (int t = 0; t < ns; t++)
+                if (isTop[t]) FactorSupernode(job, top, t, threads);
+            failures.AddRange(top.Failures);
+            nativeFronts += top.NativeFronts;
+        }
+        foreach (var ws in used) ReturnWorkspace(ws);
 
-        var top = new Workspace();
-        int topFront = 1;
-        for (int t = 0; t < ns; t++)
-            if (isTop[t]) topFront = Math.Max(topFront, s.First[t + 1] - s.First[t] + s.PatternStart[t + 1] - s.PatternStart[t]);
-        top.Reserve(topFront, n);
-        for (int t = 0; t < ns; t++)
-            if (isTop[t]) FactorSupernode(job, top, t, threads);
-
-        var all = workspaces.Distinct().SelectMany(w => w.Failures).Concat(top.Failures).OrderBy(f => f.Position).ToArray();
+        var all = failures.OrderBy(f => f.Position).ToArray();
         return new SupernodalFactor(s, job.L, job.Failed, all.Select(f => f.Failure).ToArray(), all.Select(f => f.Position).ToArray())
         {
             SubtreesInParallel = parallel,
-            NativeFronts = workspaces.Distinct().Sum(w => w.NativeFronts) + top.NativeFronts,
+            NativeFronts = nativeFronts,
+            NumericBytes = bytes,
         };
     }
 
-    /// <summary>Assembles, factorises and passes on the front of supernode t.</summary>
+    /// <summary>Assembles, factorises and passes on the front of supernode t: its pivot columns in place in the factor,
+    /// its update block in the workspace, from where it goes onto the stack (or to the top part for a subtree root).</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static void FactorSupernode(NumericJob job, Workspace ws, int t, int threads)
     {
         var s = job.S;
-        var front = ws.Front;
+        var l = job.L;
+        var upd = ws.Upd;
         var map = ws.Map;
         var rel = ws.Rel;
         var colPtr = job.ColPtr;
@@ -342,16 +453,18 @@ public sealed class SupernodalFactor : ISparseSpdFactor
         int f0 = s.First[t], k = s.First[t + 1] - f0;
         int ps = s.PatternStart[t], nb = s.PatternStart[t + 1] - ps;
         int m = k + nb;
+        int off = (int)s.FactorOffset[t];
         for (int c = 0; c < k; c++) map[f0 + c] = c;
         for (int q = 0; q < nb; q++) map[s.PatternRows[ps + q]] = k + q;
-        Array.Clear(front, 0, m * m);
+        // The factor's block is still zero (fresh); the update block's lower triangle is cleared.
+        for (int c = 0; c < nb; c++) Array.Clear(upd, c * nb + c, nb - c);
 
         // The matrix columns of the supernode.
         for (int c = 0; c < k; c++)
         {
             int j = f0 + c;
-            int colBase = c * m;
-            for (int p = colPtr[j]; p < colPtr[j + 1]; p++) front[colBase + map[rows[p]]] += vals[source[p]];
+            int colBase = off + c * m;
+            for (int p = colPtr[j]; p < colPtr[j + 1]; p++) l[colBase + map[rows[p]]] += vals[source[p]];
         }
         // Extend-add: children on this workspace's stack (on top, popped last-first), then children handed over by other
         // workspaces (increasing order).
@@ -359,67 +472,81 @@ public sealed class SupernodalFactor : ISparseSpdFactor
         while (depth > 0 && s.Parent[ws.StackSuper[depth - 1]] == t)
         {
             int c = ws.StackSuper[--depth];
-            long off = ws.StackOffset[depth];
+            long from = ws.StackOffset[depth];
             ws.StackSuper.RemoveAt(depth);
             ws.StackOffset.RemoveAt(depth);
-            ExtendAdd(s, c, ws.Stack, off, front, m, map, rel);
-            ws.Top = off;
+            ExtendAdd(s, c, ws.Stack, from, l, off, m, k, upd, map, rel);
+            ws.Top = from;
         }
         for (int c = job.ChildHead[t]; c >= 0; c = job.ChildNext[c])
         {
             var h = job.Handover[c];
             if (h is null) continue;
-            ExtendAdd(s, c, h, 0, front, m, map, rel);
+            ExtendAdd(s, c, h, 0, l, off, m, k, upd, map, rel);
             job.Handover[c] = null;
         }
 
         bool done = false;
         if (job.Native && m >= NativeMinFront)
         {
-            if (ws.Save.LongLength < (long)k * k) ws.Save = new double[(long)k * k];
-            done = NativeBlas.TryPartialCholesky(front, m, k, job.Diag.AsSpan(f0, k), job.Tol, ws.Save);
+            done = NativeBlas.TryPartialCholesky(l, off, m, k, upd, job.Diag.AsSpan(f0, k), job.Tol, ws.Save);
             if (done) ws.NativeFronts++;
         }
-        if (!done) FrontKernels.PartialCholesky(front, m, k, job.Diag.AsSpan(f0, k), job.Tol, ws.Pack, threads, (c, piv) =>
+        if (!done) FrontKernels.PartialCholesky(l, off, m, k, upd, job.Diag.AsSpan(f0, k), job.Tol, ws.Pack, threads, (c, piv) =>
         {
             int j = f0 + c;
             ws.Failures.Add((j, new PivotFailure(s.Perm[j], piv, job.Diag[j])));
             job.Failed[j] = true;
         });
 
-        Array.Copy(front, 0, job.L, s.FactorOffset[t], (long)m * k);
-
         if (nb == 0 || s.Parent[t] < 0) return;
+        double[] dst;
+        long at;
         if (job.SubtreeRoot[t])
         {
-            var h = new double[(long)nb * nb];
-            for (int c = 0; c < nb; c++) Array.Copy(front, (long)(k + c) * m + k, h, (long)c * nb, nb);
-            job.Handover[t] = h;
-            return;
+            dst = new double[Packed(nb)];
+            at = 0;
+            job.Handover[t] = dst;
         }
-        long need = ws.Top + (long)nb * nb;
-        if (need > ws.Stack.LongLength)
+        else
         {
-            long size = Math.Max(need, ws.Stack.LongLength * 3 / 2);
-            if (size > Array.MaxLength) size = Array.MaxLength;
-            Array.Resize(ref ws.Stack, (int)size);
+            dst = ws.Stack;
+            at = ws.Top;
+            ws.StackSuper.Add(t);
+            ws.StackOffset.Add(at);
+            ws.Top = at + Packed(nb);
         }
-        for (int c = 0; c < nb; c++) Array.Copy(front, (long)(k + c) * m + k, ws.Stack, ws.Top + (long)c * nb, nb);
-        ws.StackSuper.Add(t);
-        ws.StackOffset.Add(ws.Top);
-        ws.Top = need;
+        for (int c = 0; c < nb; c++)
+        {
+            Array.Copy(upd, c * nb + c, dst, at, nb - c);
+            at += nb - c;
+        }
     }
 
+    /// <summary>Adds a child's update matrix (packed lower triangle at <paramref name="from"/> in <paramref name="src"/>) to
+    /// the front: its columns among the pivot columns go to the factor's block, the others to the update block.</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private static void ExtendAdd(SupernodalSymbolic s, int c, double[] src, long off, double[] front, int m, int[] map, int[] rel)
+    private static void ExtendAdd(SupernodalSymbolic s, int c, double[] src, long from, double[] l, int off, int m, int k,
+        double[] upd, int[] map, int[] rel)
     {
         int cps = s.PatternStart[c], cn = s.PatternStart[c + 1] - cps;
+        int nb = m - k;
         for (int q = 0; q < cn; q++) rel[q] = map[s.PatternRows[cps + q]];
+        long pos = from;
         for (int ca = 0; ca < cn; ca++)
         {
-            int dstCol = rel[ca] * m;
-            long srcCol = off + (long)ca * cn;
-            for (int rb = ca; rb < cn; rb++) front[dstCol + rel[rb]] += src[srcCol + rb];
+            int dc = rel[ca];
+            if (dc < k)
+            {
+                int dstCol = off + dc * m;
+                for (int rb = ca; rb < cn; rb++) l[dstCol + rel[rb]] += src[pos + rb - ca];
+            }
+            else
+            {
+                int dstCol = (dc - k) * nb - k;
+                for (int rb = ca; rb < cn; rb++) upd[dstCol + rel[rb]] += src[pos + rb - ca];
+            }
+            pos += cn - ca;
         }
     }
 

@@ -38,6 +38,9 @@ internal sealed class SupernodalSymbolic
     public long ExactNonZeros;          // nnz(L) of the exact (unamalgamated) pattern, diagonal included
     public double Flops;                // floating-point operations of the numeric factorisation (exact pattern)
     public int MaxFront;                // largest m
+    // P·K·Pᵀ's lower entries by column (LowerByColumn), built for the row patterns and handed to the numeric phase, which
+    // clears them when done so that the factor does not keep them.
+    public int[]? ColPtr, RowsByCol, SourceByCol;
 
     /// <summary>Entries of P·K·Pᵀ grouped by column (lower triangle: row ≥ column), with the source index of each.</summary>
     internal static void LowerByColumn(SymmetricSparseMatrix a, int[] inv, out int[] colPtr, out int[] rows, out int[] source)
@@ -241,7 +244,7 @@ internal sealed class SupernodalSymbolic
             for (int j = first[t]; j < first[t + 1]; j++) superOf[j] = t;
 
         // Row patterns: A's rows below the supernode in its columns, united with the children's patterns.
-        LowerByColumn(a, inv, out var colPtr, out var rowsByCol, out _);
+        LowerByColumn(a, inv, out var colPtr, out var rowsByCol, out var sourceByCol);
         var childHead = new int[ns];
         var childNext = new int[ns];
         Array.Fill(childHead, -1);
@@ -320,6 +323,9 @@ internal sealed class SupernodalSymbolic
             ExactNonZeros = exact,
             Flops = flops,
             MaxFront = maxFront,
+            ColPtr = colPtr,
+            RowsByCol = rowsByCol,
+            SourceByCol = sourceByCol,
         };
     }
 }
