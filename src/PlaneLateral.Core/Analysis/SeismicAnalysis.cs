@@ -85,7 +85,7 @@ public sealed class ModalModel
                 int p = massive[i], q = massive[j];
                 a[i, j] = Math.Sqrt(Masses[p]) * 0.5 * (Flexibility[p, q] + Flexibility[q, p]) * Math.Sqrt(Masses[q]);
             }
-        var (mu, psi) = SymmetricEigen.Solve(a);
+        var (mu, psi) = SymmetricEigen.Largest(a, Math.Min(count, n));   // only the modes reported: n² work per step, not n³
         double total = Masses.Sum();
         var modes = new List<Mode>();
         for (int k = 0; k < Math.Min(count, n); k++)
@@ -188,6 +188,7 @@ public static class SeismicAnalysis
     {
         var levels = model.Building.Levels;
         var eqs = new List<int>();
+        var slot = new Dictionary<int, int>();   // equation -> index in eqs (a list search here was quadratic in the levels)
         var masses = new List<double>();
         var levelDofs = levels.Select(_ => (IReadOnlyList<(int, double)>)[]).ToArray();
         foreach (var w in s.Weights)
@@ -199,8 +200,7 @@ public static class SeismicAnalysis
             var list = new List<(int, double)>();
             foreach (int e in free)
             {
-                int at = eqs.IndexOf(e);
-                if (at < 0) { at = eqs.Count; eqs.Add(e); masses.Add(0); }
+                if (!slot.TryGetValue(e, out int at)) { at = eqs.Count; slot[e] = at; eqs.Add(e); masses.Add(0); }
                 masses[at] += w.Weight / SeismicPresets.Gravity / free.Count;
                 list.Add((at, 1.0 / free.Count));
             }

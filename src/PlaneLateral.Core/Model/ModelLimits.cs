@@ -30,6 +30,11 @@ public static class ModelLimits
     /// <summary>Most openings in one perforated-wall check (their overlap test is quadratic).</summary>
     public const int MaxOpeningsPerWall = 100;
 
+    /// <summary>Most DOFs that carry mass in a model with a seismic block (one per weighted level with a diaphragm,
+    /// one per node of a weighted level without one): the periods need a dense eigen decomposition of that size, whose
+    /// time grows as its cube (docs/hardening.md gives the measured cost).</summary>
+    public const int MaxMassDofs = 2000;
+
     /// <summary>The problem when a file of <paramref name="bytes"/> exceeds <see cref="MaxFileBytes"/>, or null.</summary>
     internal static ModelDiagnostic? CheckFileSize(string file, long bytes) => bytes <= MaxFileBytes ? null :
         new ModelDiagnostic(file, 0, 0, "", $"the file is {bytes} bytes, more than the {MaxFileBytes} bytes (8 MiB) this version reads",
