@@ -44,7 +44,8 @@ public static partial class ModelReport
         var b = BuildingResult.Of(r);
         var blocks = new List<Block>();
         int fig = 0, sec = 0;
-        void Figure(Figure f) => blocks.Add(new FigureBlock(f, ++fig));
+        var figureNames = new HashSet<string>(StringComparer.Ordinal);
+        void Figure(Figure f) => blocks.Add(new FigureBlock(FigureNames.Unique(f, figureNames), ++fig));   // no two figures share a file
         string Section(string name) => $"{++sec}. {name}";
         var sr = SeismicResult.Of(r);
         bool frame = m.Members.Count > 0;
