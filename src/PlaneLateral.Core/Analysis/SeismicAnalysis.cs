@@ -207,6 +207,10 @@ public static class SeismicAnalysis
             levelDofs[w.Level] = list;
         }
         int n = eqs.Count;
+        if (n > ModelLimits.MaxMassDofs)   // levels without a diaphragm carry one mass DOF per node: bound the dense eigenproblem
+            throw new ModelInputException([new ModelDiagnostic(model.SourcePath, 0, 0, "$.seismic.weights",
+                $"the weighted levels carry {n} DOFs with mass (one per level with a diaphragm, one per free node of a level without one), more than the {ModelLimits.MaxMassDofs} whose periods this version computes",
+                "give the weighted levels a rigid diaphragm, or weigh fewer levels")]);
         var flex = new double[n, n];
         var b = new double[dofs.FreeCount];
         var x = new double[dofs.FreeCount];
