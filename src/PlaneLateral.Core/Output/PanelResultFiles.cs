@@ -80,7 +80,7 @@ public static class PanelResultFiles
                 w.WriteStartObject();
                 P("elements", p.Mesh.Mesh.Elements.Length); P("nodes", p.Mesh.Mesh.NodeCount); P("unknowns", p.Analysis.Solve.Unknowns);
                 P("elementSize", Len(p.Mesh.ElementSize)); P("narrowestStrip", Len(p.Mesh.NarrowestStrip)); P("largestAspect", p.Mesh.LargestAspect);
-                P("solver", p.Analysis.Solve.Solver);
+                P("solver", MachineFree.Solver(p.Analysis.Solve.Solver));
                 w.WriteEndObject();
                 P("floorTies", p.Panel.FloorTies);
                 if (p.Panel.Top == Model.PanelTop.Guided) P("top", "guided: the top edge translates without rotating (fixed-guided stiffness)");

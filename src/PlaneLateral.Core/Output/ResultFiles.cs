@@ -120,7 +120,7 @@ public static class ResultFiles
             w.WriteEndObject();
             w.WritePropertyName("solver");
             w.WriteStartObject();
-            w.WritePropertyName("method"); w.WriteValue(r.Solve.Solver);
+            w.WritePropertyName("method"); w.WriteValue(MachineFree.Solver(r.Solve.Solver));
             w.WritePropertyName("unknowns"); w.WriteValue(r.Solve.Unknowns);
             w.WritePropertyName("matrixNonZerosLower"); w.WriteValue(r.Solve.MatrixNonZerosLower);
             w.WritePropertyName("factorNonZeros"); w.WriteValue(r.Solve.FactorNonZeros);
