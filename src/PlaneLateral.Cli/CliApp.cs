@@ -14,6 +14,7 @@ public static class CliApp
 
     public static int Run(string[] args, TextWriter stdout, TextWriter stderr)
     {
+        using var inputs = CommandSupport.ProtectInputs(args);   // no output may replace a file named on the command line
         var root = BuildCommands(stdout, stderr);
         var parse = root.Parse(args);
         try

@@ -12,6 +12,12 @@ namespace PlaneLateral.Cli;
 /// </summary>
 internal static class CommandSupport
 {
+    /// <summary>
+    /// Marks every argument that names an existing file as an input of this run, so that no output set can replace it
+    /// (<see cref="AtomicFiles.ProtectInputs"/>; refused with exit 4). Dispose at the end of the run.
+    /// </summary>
+    public static IDisposable ProtectInputs(IEnumerable<string> args) => AtomicFiles.ProtectInputs(args);
+
     public static Argument<string> ModelArgument() =>
         new("model") { Description = "Model file (JSON, format described in docs/model-format.md)." };
 
@@ -66,6 +72,13 @@ internal static class CommandSupport
             written = write();
             exitCode = ExitCodes.Success;
             return true;
+        }
+        catch (OutputOverwritesInputException e)
+        {
+            stderr.Write($"{e.Message}\nFix: give --out a folder of its own (not the model's folder when a results file has the model's name). No {kind} file was written or replaced.\n");
+            written = [];
+            exitCode = ExitCodes.OutputFailed;
+            return false;
         }
         catch (IOException e)
         {

@@ -80,3 +80,38 @@ public static class PlotStyle
         return data.ToArray();
     }
 }
+
+/// <summary>
+/// File names of figures that stay unique and short whatever the ids in them: an id that is already a safe short name
+/// (ASCII letters, digits, '-', '.', '_'; at most <see cref="MaxIdChars"/> characters; not starting with '.') is used as it
+/// is; any other id becomes its safe characters, cut to that length, plus '-' and the first 8 hex digits of the SHA-256
+/// of the id (so "wind A", "wind_A" and "wind/A" get three names). Within one report, names equal but for letter case
+/// get "-2", "-3", ... (<see cref="Unique"/>), so they differ on case-insensitive file systems too. The report's Markdown
+/// names the file beside each figure.
+/// </summary>
+public static class FigureNames
+{
+    /// <summary>Longest id part of a figure name (characters); whole names stay far under the 255-byte limit of common file systems.</summary>
+    public const int MaxIdChars = 40;
+
+    /// <summary>The file-name part for <paramref name="id"/>.</summary>
+    public static string Slug(string id)
+    {
+        bool safe = id.Length > 0 && id.Length <= MaxIdChars && id[0] != '.' && id.All(c => char.IsAsciiLetterOrDigit(c) || c is '-' or '.' or '_');
+        if (safe) return id;
+        var chars = id.Select(c => char.IsAsciiLetterOrDigit(c) || c is '-' or '.' ? c : '_').Take(MaxIdChars).ToArray();
+        if (chars.Length > 0 && chars[0] == '.') chars[0] = '_';
+        byte[] hash = System.Security.Cryptography.SHA256.HashData(System.Text.Encoding.UTF8.GetBytes(id));
+        return new string(chars) + "-" + Convert.ToHexString(hash, 0, 4).ToLowerInvariant();
+    }
+
+    /// <summary><paramref name="figure"/> with a file name no earlier figure of <paramref name="used"/> has (compared
+    /// ignoring case); the name is added to <paramref name="used"/>.</summary>
+    public static Figure Unique(Figure figure, ISet<string> used)
+    {
+        string name = figure.FileName;
+        string stem = Path.GetFileNameWithoutExtension(name), ext = Path.GetExtension(name);
+        for (int k = 2; !used.Add(name.ToLowerInvariant()); k++) name = $"{stem}-{k}{ext}";
+        return name == figure.FileName ? figure : figure with { FileName = name };
+    }
+}

@@ -12,8 +12,8 @@ public static class ModelPlots
 {
     private static string F(double v, string fmt = "G4") => v.ToString(fmt, CultureInfo.InvariantCulture);
 
-    /// <summary>A file-name-safe form of an id (letters, digits, '-', '.'; others become '_').</summary>
-    public static string Slug(string id) => new(id.Select(c => char.IsAsciiLetterOrDigit(c) || c is '-' or '.' ? c : '_').ToArray());
+    /// <summary>A file-name-safe, short and distinct form of an id (<see cref="FigureNames.Slug"/>).</summary>
+    public static string Slug(string id) => FigureNames.Slug(id);
 
     /// <summary>The factor that draws the largest nodal displacement at about 8% of the model's size, rounded down to 1, 2 or 5 × 10^k.</summary>
     public static double ScaleFactor(double largestDisplacement, double modelSize)

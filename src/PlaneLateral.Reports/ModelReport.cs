@@ -44,7 +44,8 @@ public static partial class ModelReport
         var b = BuildingResult.Of(r);
         var blocks = new List<Block>();
         int fig = 0, sec = 0;
-        void Figure(Figure f) => blocks.Add(new FigureBlock(f, ++fig));
+        var figureNames = new HashSet<string>(StringComparer.Ordinal);
+        void Figure(Figure f) => blocks.Add(new FigureBlock(FigureNames.Unique(f, figureNames), ++fig));   // no two figures share a file
         string Section(string name) => $"{++sec}. {name}";
         var sr = SeismicResult.Of(r);
         bool frame = m.Members.Count > 0;
@@ -127,7 +128,7 @@ public static partial class ModelReport
         if (frame)
         {
         blocks.Add(new Heading(2, Section("Solution checks")));
-        blocks.Add(new Paragraph($"Solver {r.Solve.Solver}, {r.Solve.Unknowns} unknowns. The backward error measures how well the computed displacements satisfy K·u = f relative to the sizes of K, u and f; equilibrium compares reactions with applied loads."));
+        blocks.Add(new Paragraph($"Solver {PlaneLateral.Output.MachineFree.Solver(r.Solve.Solver)}, {r.Solve.Unknowns} unknowns. The backward error measures how well the computed displacements satisfy K·u = f relative to the sizes of K, u and f; equilibrium compares reactions with applied loads."));
         blocks.Add(new Table("Backward error and equilibrium per case", ["case", "kind", "backward error", "force imbalance", "moment imbalance", "verdict"],
             r.Cases.Select(c => (IReadOnlyList<string>)[c.Id, c.IsCombination ? "combination" : "load case", c.BackwardError.ToString("0.0E+0", CultureInfo.InvariantCulture),
                 c.Equilibrium.RelativeForceError.ToString("0.0E+0", CultureInfo.InvariantCulture), c.Equilibrium.RelativeMomentError.ToString("0.0E+0", CultureInfo.InvariantCulture),

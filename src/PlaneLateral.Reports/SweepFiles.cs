@@ -27,7 +27,7 @@ public static class SweepFiles
 
     private static string F(double v) => v.ToString("G12", CultureInfo.InvariantCulture);
 
-    private static string CsvField(string s) => s.IndexOfAny([',', '"', '\n']) >= 0 ? "\"" + s.Replace("\"", "\"\"") + "\"" : s;
+    private static string CsvField(string s) => PlaneLateral.Output.CsvText.Cell(s);   // the one escaper (quoting, formula neutralising)
 
     /// <summary>One line per point; hand deflections are for a unit force at the top (length per unit force).</summary>
     public static string Csv(SweepResult r, string producedBy)

@@ -250,10 +250,10 @@ public static class CoupledWallStudy
         sb.Append($"check,load,beam_depth_{lu},clear_span_to_depth,k_alpha_H,top_deflection_{lu}_continuous_medium,top_deflection_{lu}_continuous_medium_beam_shear,top_deflection_{lu}_independent_cantilevers,top_deflection_{lu}_one_solid_wall,top_deflection_{lu}_wide_column,top_deflection_{lu}_wide_column_no_shear,coupling_continuous_medium,coupling_continuous_medium_beam_shear,coupling_wide_column,coupling_wide_column_no_shear,top_deflection_{lu}_plane_stress_panel,coupling_plane_stress_panel\n");
         string ln = load == CoupledWallLoad.Uniform ? "uniform" : "top";
         foreach (var p in points)
-            sb.Append(string.Join(",", c.Id.Contains(',') ? $"\"{c.Id.Replace("\"", "\"\"")}\"" : c.Id, ln, L(p.BeamDepth), F(p.SpanToDepth), F(p.KAlphaH),
+            sb.Append(string.Join(",", PlaneLateral.Output.CsvText.Cell(c.Id), ln, L(p.BeamDepth), F(p.SpanToDepth), F(p.KAlphaH),
                 L(p.ClosedForm), L(p.ClosedFormBeamShear), L(p.Cantilevers), L(p.Solid), L(p.FeShear), L(p.FeNoShear),
                 F(p.DocClosedForm), F(p.DocClosedFormBeamShear), F(p.DocFeShear), F(p.DocFeNoShear), L(p.FePanel), F(p.DocPanel))).Append('\n');
-        sb.Append('"').Append("# ").Append(ComparisonReport.Caution.Replace("\"", "\"\"")).Append("\"\n");
+        sb.Append(PlaneLateral.Output.CsvText.Cell("# " + ComparisonReport.Caution)).Append('\n');
         return sb.ToString();
     }
 }

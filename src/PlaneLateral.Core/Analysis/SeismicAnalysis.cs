@@ -85,7 +85,7 @@ public sealed class ModalModel
                 int p = massive[i], q = massive[j];
                 a[i, j] = Math.Sqrt(Masses[p]) * 0.5 * (Flexibility[p, q] + Flexibility[q, p]) * Math.Sqrt(Masses[q]);
             }
-        var (mu, psi) = SymmetricEigen.Solve(a);
+        var (mu, psi) = SymmetricEigen.Largest(a, Math.Min(count, n));   // only the modes reported: n² work per step, not n³
         double total = Masses.Sum();
         var modes = new List<Mode>();
         for (int k = 0; k < Math.Min(count, n); k++)
@@ -187,6 +187,7 @@ public static class SeismicAnalysis
     {
         var levels = model.Building.Levels;
         var eqs = new List<int>();
+        var slot = new Dictionary<int, int>();   // equation -> index in eqs (a list search here was quadratic in the levels)
         var masses = new List<double>();
         var levelDofs = levels.Select(_ => (IReadOnlyList<(int, double)>)[]).ToArray();
         foreach (var w in s.Weights)
@@ -198,14 +199,17 @@ public static class SeismicAnalysis
             var list = new List<(int, double)>();
             foreach (int e in free)
             {
-                int at = eqs.IndexOf(e);
-                if (at < 0) { at = eqs.Count; eqs.Add(e); masses.Add(0); }
+                if (!slot.TryGetValue(e, out int at)) { at = eqs.Count; slot[e] = at; eqs.Add(e); masses.Add(0); }
                 masses[at] += w.Weight / SeismicPresets.Gravity / free.Count;
                 list.Add((at, 1.0 / free.Count));
             }
             levelDofs[w.Level] = list;
         }
         int n = eqs.Count;
+        if (n > ModelLimits.MaxMassDofs)   // levels without a diaphragm carry one mass DOF per node: bound the dense eigenproblem
+            throw new ModelInputException([new ModelDiagnostic(model.SourcePath, 0, 0, "$.seismic.weights",
+                $"the weighted levels carry {n} DOFs with mass (one per level with a diaphragm, one per free node of a level without one), more than the {ModelLimits.MaxMassDofs} whose periods this version computes",
+                "give the weighted levels a rigid diaphragm, or weigh fewer levels")]);
         var flex = new double[n, n];
         var b = new double[dofs.FreeCount];
         var x = new double[dofs.FreeCount];

@@ -30,6 +30,20 @@ public static class ModelLimits
     /// <summary>Most openings in one perforated-wall check (their overlap test is quadratic).</summary>
     public const int MaxOpeningsPerWall = 100;
 
+    /// <summary>Most DOFs that carry mass in a model with a seismic block (one per weighted level with a diaphragm,
+    /// one per node of a weighted level without one): the periods need a dense eigen decomposition of that size, whose
+    /// time grows as its cube (docs/hardening.md gives the measured cost).</summary>
+    public const int MaxMassDofs = 2000;
+
+    /// <summary>Most result entries: (nodes + members) × (load cases + combinations). Each entry keeps its numbers in
+    /// memory and in results.json (measured about 190 bytes of JSON and 1.2 KB of memory per entry), so this bounds
+    /// results.json near 0.4 GB and the run near 3 GB (docs/hardening.md).</summary>
+    public const long MaxResultEntries = 2_000_000;
+
+    /// <summary>Largest panel mesh a model may ask for with <c>mesh.maxNodes</c> (the aspect-ratio sweep's own finest
+    /// mesh is this size too).</summary>
+    public const int MaxPanelMeshNodes = 40_000;
+
     /// <summary>The problem when a file of <paramref name="bytes"/> exceeds <see cref="MaxFileBytes"/>, or null.</summary>
     internal static ModelDiagnostic? CheckFileSize(string file, long bytes) => bytes <= MaxFileBytes ? null :
         new ModelDiagnostic(file, 0, 0, "", $"the file is {bytes} bytes, more than the {MaxFileBytes} bytes (8 MiB) this version reads",
@@ -60,9 +74,33 @@ public static class ModelLimits
                 $"keep to at most {MaxCasesAndCombinations} load cases and combinations together; split the model's cases into several files");
             over = true;
         }
+        int members = (root["members"] as JArray)?.Count ?? 0, nodes = (root["nodes"] as JArray)?.Count ?? 0;
+        long entries = (long)(nodes + members) * (cases + combos);
+        if (entries > MaxResultEntries && nodes <= MaxNodes && members <= MaxMembers && cases + combos <= MaxCasesAndCombinations)
+        {
+            sink.Add(root["loadCases"] ?? root["combinations"], $"the model has {nodes} nodes and {members} members under {cases + combos} load cases and combinations: {entries} result entries, more than the {MaxResultEntries} this version holds in memory",
+                $"keep (nodes + members) × (load cases + combinations) at most {MaxResultEntries}: split the cases into several files (e.g. {Math.Max(1, MaxResultEntries / Math.Max(1, nodes + members))} cases each)");
+            over = true;
+        }
+        if (root["panels"] is JArray panels)
+            foreach (var p in panels)
+                if (p is JObject po && po["mesh"] is JObject mesh && mesh["maxNodes"] is JValue { Value: long or int or double } mn
+                    && Convert.ToDouble(mn.Value, System.Globalization.CultureInfo.InvariantCulture) > MaxPanelMeshNodes)
+                {
+                    sink.Add(mn, $"'maxNodes' asks for a mesh of up to {mn.Value} nodes, more than the {MaxPanelMeshNodes} this version builds (memory grows with the mesh: a 1 mm mesh of a 5 m × 6 m wall would need tens of GB)",
+                        $"give 'maxNodes' at most {MaxPanelMeshNodes}, and a larger element size or fewer refinements");
+                    over = true;
+                }
+        if (root["seismic"] is JObject seismic && seismic["weights"] is JArray weights && weights.Count > MaxMassDofs)
+        {
+            sink.Add(weights, $"the seismic block weighs {weights.Count} levels, more than the {MaxMassDofs} whose periods this version computes (a dense eigenproblem of that size)",
+                $"keep to at most {MaxMassDofs} weighted levels; lump the weights of neighbouring levels");
+            over = true;
+        }
         if (root["comparisons"] is JArray checks)
             foreach (var c in checks)
                 if (c is JObject co) Limit(co["openings"], MaxOpeningsPerWall, "openings in one wall");
         return over;
     }
 }
+

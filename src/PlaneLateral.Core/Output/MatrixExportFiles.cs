@@ -80,7 +80,7 @@ public static class MatrixExportFiles
 
     private static string F(double v) => v.ToString("R", CultureInfo.InvariantCulture);
 
-    private static string Csv(string s) => s.IndexOfAny([',', '"', '\n']) >= 0 ? "\"" + s.Replace("\"", "\"\"") + "\"" : s;
+    private static string Csv(string s) => PlaneLateral.Output.CsvText.Cell(s);   // the one escaper (quoting, formula neutralising)
 
     /// <summary>
     /// One row per nodal DOF that is an unknown, by equation then node: the equation's own DOF first, then the DOFs a

@@ -18,7 +18,7 @@ public static class PanelLinkFiles
 
     private static string F(double v) => v.ToString("G12", CultureInfo.InvariantCulture);
 
-    private static string Csv(string s) => s.IndexOfAny([',', '"', '\n']) >= 0 ? "\"" + s.Replace("\"", "\"\"") + "\"" : s;
+    private static string Csv(string s) => PlaneLateral.Output.CsvText.Cell(s);   // the one escaper (quoting, formula neutralising)
 
     private static string Forces(AnalysisResult r, PanelLinkResults links)
     {

@@ -19,7 +19,7 @@ public static class PanelResultFiles
 
     private static string F(double v) => v.ToString("G12", CultureInfo.InvariantCulture);
 
-    private static string Csv(string s) => s.IndexOfAny([',', '"', '\n']) >= 0 ? "\"" + s.Replace("\"", "\"\"") + "\"" : s;
+    private static string Csv(string s) => PlaneLateral.Output.CsvText.Cell(s);   // the one escaper (quoting, formula neutralising)
 
     private static string Stresses(AnalysisResult r)
     {
@@ -80,7 +80,7 @@ public static class PanelResultFiles
                 w.WriteStartObject();
                 P("elements", p.Mesh.Mesh.Elements.Length); P("nodes", p.Mesh.Mesh.NodeCount); P("unknowns", p.Analysis.Solve.Unknowns);
                 P("elementSize", Len(p.Mesh.ElementSize)); P("narrowestStrip", Len(p.Mesh.NarrowestStrip)); P("largestAspect", p.Mesh.LargestAspect);
-                P("solver", p.Analysis.Solve.Solver);
+                P("solver", MachineFree.Solver(p.Analysis.Solve.Solver));
                 w.WriteEndObject();
                 P("floorTies", p.Panel.FloorTies);
                 if (p.Panel.Top == Model.PanelTop.Guided) P("top", "guided: the top edge translates without rotating (fixed-guided stiffness)");

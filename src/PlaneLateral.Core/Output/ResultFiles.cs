@@ -39,7 +39,7 @@ public static class ResultFiles
 
     private static string F(double v) => v.ToString("G12", CultureInfo.InvariantCulture);
 
-    private static string Csv(string s) => s.IndexOfAny([',', '"', '\n']) >= 0 ? "\"" + s.Replace("\"", "\"\"") + "\"" : s;
+    private static string Csv(string s) => PlaneLateral.Output.CsvText.Cell(s);   // the one escaper (quoting, formula neutralising)
 
     private static string Displacements(AnalysisResult r)
     {
@@ -140,7 +140,7 @@ public static class ResultFiles
             w.WriteEndObject();
             w.WritePropertyName("solver");
             w.WriteStartObject();
-            w.WritePropertyName("method"); w.WriteValue(r.Solve.Solver);
+            w.WritePropertyName("method"); w.WriteValue(MachineFree.Solver(r.Solve.Solver));
             w.WritePropertyName("unknowns"); w.WriteValue(r.Solve.Unknowns);
             w.WritePropertyName("matrixNonZerosLower"); w.WriteValue(r.Solve.MatrixNonZerosLower);
             w.WritePropertyName("factorNonZeros"); w.WriteValue(r.Solve.FactorNonZeros);
