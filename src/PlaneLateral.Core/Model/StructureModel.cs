@@ -29,6 +29,8 @@ public sealed record StructureModel
     public IReadOnlyList<WallPanel> Panels { get; init; } = [];
     /// <summary>Story weights, base shear, periods and second-order settings under "seismic" (docs/seismic.md); null when absent.</summary>
     public SeismicData? Seismic { get; init; }
+    /// <summary>Footings on soil under supported nodes, whose springs are already in <see cref="Supports"/> (docs/footings.md); none by default.</summary>
+    public IReadOnlyList<Footing> Footings { get; init; } = [];
 
     /// <summary>Index of the node with the given id, or −1.</summary>
     public int NodeIndex(string id)
