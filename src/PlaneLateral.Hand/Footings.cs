@@ -262,7 +262,7 @@ public static class FlexibleBase
         double rock = p * h * h / rockingStiffness, slide = p / slidingStiffness;
         var method = fixedBase.Method with
         {
-            Name = fixedBase.Method.Name + ", on base springs: + P·h²/K_θ + P/K_h",
+            Name = "Cantilever on base springs, flexure and shear of the fixed-base pier plus rocking P·h²/K_θ and sliding P/K_h",
             Source = fixedBase.Method.Source + "; base terms derived (rigid-body rotation and translation of the base)",
             Assumptions = [.. fixedBase.Method.Assumptions.Where(a => a != "base fully fixed"),
                 "base on a rocking spring K_θ and a sliding spring K_h (a rigid footing on elastic soil)",
@@ -277,17 +277,18 @@ public static class FlexibleBase
     /// flexibilities add in series, 1/k̃ = 1/k + 1/K_y + h̄²/K_θ, and T ∝ 1/√k, so T̃/T = √(k/k̃).
     /// </summary>
     /// <param name="structureStiffness">k, the fixed-base lateral stiffness at the effective height (F/L), positive.</param>
-    /// <param name="slidingStiffness">K_y, the footing's lateral stiffness (F/L), positive.</param>
-    /// <param name="rockingStiffness">K_θ, the footing's rocking stiffness (F·L/rad), positive.</param>
+    /// <param name="slidingStiffness">K_y, the footing's lateral stiffness (F/L), positive; +∞ for a base held against sliding.</param>
+    /// <param name="rockingStiffness">K_θ, the footing's rocking stiffness (F·L/rad), positive; +∞ for a base held against rocking.</param>
     /// <param name="effectiveHeight">h̄, the effective height of the mode (L), positive.</param>
     public static HandValue PeriodRatio(double structureStiffness, double slidingStiffness, double rockingStiffness, double effectiveHeight)
     {
         Guard.Positive(structureStiffness, "The fixed-base stiffness k");
-        Guard.Positive(slidingStiffness, "The footing's lateral stiffness K_y");
-        Guard.Positive(rockingStiffness, "The footing's rocking stiffness K_θ");
         Guard.Positive(effectiveHeight, "The effective height h̄");
+        if (!(slidingStiffness > 0)) throw new ArgumentException($"The footing's lateral stiffness K_y must be positive (+∞ for a base held against sliding); got {slidingStiffness}.");
+        if (!(rockingStiffness > 0)) throw new ArgumentException($"The footing's rocking stiffness K_θ must be positive (+∞ for a base held against rocking); got {rockingStiffness}.");
         double k = structureStiffness, ky = slidingStiffness, kt = rockingStiffness, h = effectiveHeight;
-        return new HandValue(Math.Sqrt(1 + k / ky * (1 + ky * h * h / kt)), "period ratio T̃/T",
+        // k/K_y·(1 + K_y·h̄²/K_θ) multiplied out, so that a rigid direction (K = +∞) drops its term.
+        return new HandValue(Math.Sqrt(1 + k / ky + k * h * h / kt), "period ratio T̃/T",
             new HandMethod("Period lengthening of a single-mode structure on a flexible base",
                 "ASCE 7-16 §19.2.1.1, eq. 19.2-3 (from memory); the series-spring derivation gives the same",
                 ["one mode, the structure's mass lumped at the effective height h̄", "the footing's mass left out",

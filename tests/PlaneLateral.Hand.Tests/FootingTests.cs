@@ -147,5 +147,8 @@ public class FootingTests
         // 1 + 100/400·(1 + 400·400/1E5) = 1 + 0.25·2.6 = 1.65 → T̃/T = √1.65 = 1.284523.
         // Derived the same way from springs in series: 1/k̃ = 1/100 + 1/400 + 400/1E5 = 0.0165 → k/k̃ = 1.65.
         Assert.Equal(Math.Sqrt(1.65), FlexibleBase.PeriodRatio(100, 400, 1e5, 20).Value, 12);
+        // A base held against sliding drops the 1/K_y term: 1 + 100·400/1E5 = 1.4 (derived).
+        Assert.Equal(Math.Sqrt(1.4), FlexibleBase.PeriodRatio(100, double.PositiveInfinity, 1e5, 20).Value, 12);
+        Assert.Throws<ArgumentException>(() => FlexibleBase.PeriodRatio(100, 0, 1e5, 20));
     }
 }

@@ -130,3 +130,13 @@ public static class FootingSoilSprings
         return new FootingSprings(kx, ky, kz, kxx, kyy, along);
     }
 }
+
+/// <summary>
+/// A wall line standing on a footing, checked fixed-base and on the footing's springs side by side (the "footing-wall"
+/// comparison, docs/footings.md): a vertical chain of line members of one section, base first, whose base node has
+/// the footing <see cref="FootingId"/> under it.
+/// </summary>
+/// <param name="TopWeight">Weight lumped at the top (N) for the periods, or null for stiffness rows only.</param>
+public sealed record FootingWallCheck(string Id, string Description, double? Tolerance, CheckLocation At,
+    IReadOnlyList<int> Members, int BaseNode, int TopNode, string FootingId, double? TopWeight)
+    : ComparisonCheck(Id, Description, Tolerance, At);

@@ -11,7 +11,7 @@ public static partial class ModelReader
     {
         // ---- comparisons (docs/comparisons.md) ----
 
-        private static readonly string[] CheckKinds = ["wall-line", "perforated-wall", "frame-stories", "shear-split", "coupled-wall", "panel-wall"];
+        private static readonly string[] CheckKinds = ["wall-line", "perforated-wall", "frame-stories", "shear-split", "coupled-wall", "panel-wall", "footing-wall"];
 
         private CheckLocation Where(JToken t)
         {
@@ -78,6 +78,7 @@ public static partial class ModelReader
                     "shear-split" => ReadShearSplit(f, id, desc, tol, at, splits),
                     "coupled-wall" => ReadCoupledWall(f, id, desc, tol, at),
                     "panel-wall" => ReadPanelWall(f, id, desc, tol, at),
+                    "footing-wall" => ReadFootingWall(f, id, desc, tol, at, members),   // ModelReader.Footings.cs
                     null => SkipRest(f),
                     _ => UnknownKind(f, kind),
                 };
@@ -101,7 +102,7 @@ public static partial class ModelReader
 
         private static string KindOf(ComparisonCheck c) => c switch
         {
-            WallLineCheck => "wall-line", PerforatedWallCheck => "perforated-wall", FrameStoriesCheck => "frame-stories", CoupledWallCheck => "coupled-wall", PanelWallCheck => "panel-wall", _ => "shear-split",
+            WallLineCheck => "wall-line", PerforatedWallCheck => "perforated-wall", FrameStoriesCheck => "frame-stories", CoupledWallCheck => "coupled-wall", PanelWallCheck => "panel-wall", FootingWallCheck => "footing-wall", _ => "shear-split",
         };
 
         private ComparisonCheck? UnknownKind(JsonFields f, string kind)

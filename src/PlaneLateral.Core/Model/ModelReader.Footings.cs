@@ -96,6 +96,7 @@ public static partial class ModelReader
                     cautions.Add("no strain-compatible reduction of the soil modulus was given (G/G₀ = 1): under strong shaking G is lower (give \"modulusReduction\" in the soil)");
                 list.Add(new Footing(id, n, length, width, embedment, g0, reduction, nu, formulas, directions, springs, cautions));
             }
+            _footingList = list;
             return list;
         }
 
@@ -187,6 +188,55 @@ public static partial class ModelReader
                 }
             }
             return true;
+        }
+    }
+}
+
+// Reading of the "footing-wall" comparison check (docs/footings.md).
+public static partial class ModelReader
+{
+    private sealed partial class Builder
+    {
+        private List<Footing> _footingList = [];
+
+        private FootingWallCheck? ReadFootingWall(JsonFields f, string? id, string desc, double? tol, CheckLocation at, List<Member> members)
+        {
+            // The wall line itself reads as a "wall-line" check does (members base first, one section); only a cantilever
+            // is meaningful on a rocking base.
+            bool endsGiven = f.Has("ends");
+            var line = ReadWallLine(f, id, desc, tol, at, members);
+            if (endsGiven && line is not null && line.Ends.Any(e => e != CheckEnds.Cantilever))
+            {
+                sink.Add(f.Token("ends"), "a footing-wall check is a cantilever (top free); the base terms h²/K_θ and 1/K_h do not add to a pier held against rotation at the top",
+                    "leave \"ends\" out (or give [\"cantilever\"])");
+                return null;
+            }
+            var footingId = f.OptionalString("footing", "give the id of a footing listed under \"footings\", or leave it out to take the footing under the wall's base node");
+            string fu = _units.ForceSymbol;
+            double? weight = f.Has("topWeight")
+                ? Positive(f, "topWeight", Quantity.Force, "weight at the top", $"give the weight lumped at the wall's top > 0 in {fu}, for the periods; or leave it out")
+                : null;
+            if (line is null || weight is <= 0) return null;
+            Footing? footing = footingId is null
+                ? _footingList.FirstOrDefault(x => x.Node == line.BaseNode)
+                : _footingList.FirstOrDefault(x => x.Id == footingId);
+            var nodes = _nodesList!;
+            if (footing is null)
+            {
+                if (footingId is not null)
+                    sink.Add(f.Token("footing"), $"unknown footing \"{footingId}\"", $"use the id of a footing listed under \"footings\"{Suggest(footingId, _footingList.Select(x => x.Id))}");
+                else
+                    sink.Add(f.Object, $"no footing stands under the wall's base node \"{nodes[line.BaseNode].Id}\"",
+                        $"add a footing under \"{nodes[line.BaseNode].Id}\" (\"footings\": [{{\"id\": \"F1\", \"node\": \"{nodes[line.BaseNode].Id}\", ...}}], docs/footings.md), or check the wall as a \"wall-line\"");
+                return null;
+            }
+            if (footing.Node != line.BaseNode)
+            {
+                sink.Add(f.Token("footing"), $"footing \"{footing.Id}\" stands under node \"{nodes[footing.Node].Id}\", not under the wall's base node \"{nodes[line.BaseNode].Id}\"",
+                    "name the footing under the wall's lowest member, or list the wall's members from that footing up");
+                return null;
+            }
+            return new FootingWallCheck(line.Id, desc, tol, at, line.Members, line.BaseNode, line.TopNode, footing.Id, weight);
         }
     }
 }
