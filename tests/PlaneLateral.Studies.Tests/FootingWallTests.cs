@@ -156,3 +156,39 @@ public class FootingWallTests
         Assert.Contains("\"footings\"", d.Fix);
     }
 }
+
+/// <summary>The shipped footing examples (models/footings/*.json, invented data) read, solve and compare.</summary>
+public class ShippedFootingModelTests
+{
+    private static string Root()
+    {
+        for (var dir = new DirectoryInfo(AppContext.BaseDirectory); dir is not null; dir = dir.Parent)
+            if (File.Exists(Path.Combine(dir.FullName, "PlaneLateral.sln"))) return dir.FullName;
+        throw new InvalidOperationException("no folder above the test binary holds PlaneLateral.sln");
+    }
+
+    [Theory]
+    [InlineData("wall-on-footing.json")]
+    [InlineData("clinic-on-footing.json")]
+    public void FootingWallRowsAgreeHandAndFE(string file)
+    {
+        // Derived (see FootingWallTests): same beam theory and the same published footing formulas on both sides.
+        var model = ModelReader.ReadFile(Path.Combine(Root(), "models", "footings", file));
+        var footing = Assert.Single(model.Footings);
+        var support = model.Supports.Single(s => s.Node == footing.Node);
+        Assert.Equal(footing.Springs.Rocking, support.SpringRZ);
+        Assert.Equal(footing.Springs.Sliding, support.SpringX);
+        var rows = ComparisonStudy.Run(model).Rows.Where(r => r.Kind is "footing-wall" or "footing-period").ToList();
+        Assert.True(rows.Count >= 5);
+        foreach (var row in rows) Models.Near(row.Hand.Value, row.Reference.Value, 1e-9, $"{file} {row.Subject}");
+    }
+
+    [Fact]
+    public void TheWallOnFootingModelTakesItsSoilFromTheWaveVelocity()
+    {
+        // G₀ = (γ/g)·Vs² (Kramer 1996, ch. 5): 0.12 kcf / 32.174 ft/s² · (700 ft/s)² = 1827.6 ksf; × 0.7 = 1279.3 ksf.
+        var model = ModelReader.ReadFile(Path.Combine(Root(), "models", "footings", "wall-on-footing.json"));
+        var f = model.Footings[0];
+        Models.Near(0.12 / 32.174 * 700 * 700 * 0.7, model.Units.FromSI(f.ShearModulus, Quantity.Stress), 1e-5, "G");
+    }
+}
