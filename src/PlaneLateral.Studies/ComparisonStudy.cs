@@ -36,6 +36,7 @@ public static class ComparisonStudy
                     ShearSplitCheck s => ShearSplitStudy.Rows(model, s, tol, full ??= LinearStaticAnalysis.Run(model)),
                     CoupledWallCheck cw => CoupledWallStudy.Rows(model, cw, tol),
                     PanelWallCheck pw => PanelWallStudy.Rows(model, pw, tol),
+                    FootingWallCheck fw => FootingWallStudy.Rows(model, fw, tol),
                     _ => throw new InvalidOperationException($"unknown check type {check.GetType().Name}"),
                 });
             }

@@ -24,7 +24,7 @@ public static partial class ModelReader
     {
         // ---- comparisons (docs/comparisons.md) ----
 
-        private static readonly string[] CheckKinds = ["wall-line", "perforated-wall", "frame-stories", "shear-split", "coupled-wall", "panel-wall"];
+        private static readonly string[] CheckKinds = ["wall-line", "perforated-wall", "frame-stories", "shear-split", "coupled-wall", "panel-wall", "footing-wall"];
 
         private CheckLocation Where(JToken t)
         {
@@ -91,6 +91,7 @@ public static partial class ModelReader
                     "shear-split" => ReadShearSplit(f, id, desc, tol, at, splits),
                     "coupled-wall" => ReadCoupledWall(f, id, desc, tol, at),
                     "panel-wall" => ReadPanelWall(f, id, desc, tol, at),
+                    "footing-wall" => ReadFootingWall(f, id, desc, tol, at, members),   // ModelReader.Footings.cs
                     null => SkipRest(f),
                     _ => UnknownKind(f, kind),
                 };
@@ -114,7 +115,7 @@ public static partial class ModelReader
 
         private static string KindOf(ComparisonCheck c) => c switch
         {
-            WallLineCheck => "wall-line", PerforatedWallCheck => "perforated-wall", FrameStoriesCheck => "frame-stories", CoupledWallCheck => "coupled-wall", PanelWallCheck => "panel-wall", _ => "shear-split",
+            WallLineCheck => "wall-line", PerforatedWallCheck => "perforated-wall", FrameStoriesCheck => "frame-stories", CoupledWallCheck => "coupled-wall", PanelWallCheck => "panel-wall", FootingWallCheck => "footing-wall", _ => "shear-split",
         };
 
         private ComparisonCheck? UnknownKind(JsonFields f, string kind)

@@ -107,6 +107,7 @@ public static partial class ModelReader
             var members = ReadMembers(f.Objects("members", !hasPanels, "add \"members\": [ {\"id\": \"...\", \"start\": \"...\", \"end\": \"...\", \"section\": \"...\", \"material\": \"...\"} ]"), nodes);
             var supportsArr = f.Objects("supports", !hasPanels, "add \"supports\": [ {\"node\": \"...\", \"type\": \"fixed\"} ]");
             var supports = ReadSupports(supportsArr);
+            var footings = ReadFootings(f, supports, members, nodes);   // footing springs replace support restraints (ModelReader.Footings.cs)
             if (f.Token("supports") is JArray { Count: 0 } emptySupports && !hasPanels)
                 sink.Add(emptySupports, "the model has no supports, so it is free to move as a rigid body", "add at least one support, e.g. {\"node\": \"<base node>\", \"type\": \"fixed\"}");
             var cases = ReadLoadCases(f.Objects("loadCases", false, "give \"loadCases\" as an array of objects"), members);
@@ -144,6 +145,7 @@ public static partial class ModelReader
                 Comparisons = comparisons,
                 Panels = panels,
                 Seismic = seismic,
+                Footings = footings,
             };
         }
 

@@ -31,6 +31,8 @@ public sealed record StructureModel
     public SeismicData? Seismic { get; init; }
     /// <summary>Plausibility warnings about the input (Model/Plausibility.cs); they never change the answer. Empty when none.</summary>
     public IReadOnlyList<ModelWarning> Warnings { get; init; } = [];
+    /// <summary>Footings on soil under supported nodes, whose springs are already in <see cref="Supports"/> (docs/footings.md); none by default.</summary>
+    public IReadOnlyList<Footing> Footings { get; init; } = [];
 
     /// <summary>Index of the node with the given id, or −1.</summary>
     public int NodeIndex(string id)
