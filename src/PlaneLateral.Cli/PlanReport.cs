@@ -21,7 +21,7 @@ internal static class PlanReport
         sb.Append($"Building  {p.Title}\n");
         sb.Append($"File      {path}\n");
         sb.Append($"Units     force {force}, length {len}\n");
-        sb.Append($"Size      {p.FloorCount} floors, {p.Lines.Count} lines of resistance, {p.Cases.Count} load cases (accidental eccentricity {p.EccentricityRatio:0.###} of the plan dimension)\n");
+        sb.Append($"Size      {p.FloorCount} floors, {p.Lines.Count} lines of resistance, {p.Cases.Count} load cases, accidental eccentricity {p.EccentricityRatio:0.###}\n");
         sb.Append($"Method    each line condensed exactly on its {p.FloorCount} level DOF{(p.FloorCount == 1 ? "" : "s")} (one factorisation per line),\n" +
                   "          floors solved on (Ux, Uy, Rz), each line's planar model recovered under the level forces\n");
 
@@ -65,10 +65,11 @@ internal static class PlanReport
                         double.IsFinite(row.Gap) ? $"{100 * row.Gap:+0.0;-0.0;0.0}%" : "-");
             sb.Append(t.Render());
         }
-        sb.Append($"  Shears in {force}. Hand: each line's story stiffness from the line alone; design = total, except that a torsional part\n" +
-                  "  that reduces a line's shear is not taken. Direct columns: floors held against twist (what one planar direction gives).\n" +
-                  "  gap = FE total / hand total − 1: the line stiffness changes with the story (wall–frame interaction) and the centre of\n" +
-                  "  rigidity depends on the story and the load; for one story of lines with one stiffness each the two agree.\n");
+        sb.Append($"  Shears in {force}. Hand: each line's story stiffness from the line alone; design = total,\n" +
+                  "  except that a torsional part that reduces a line's shear is not taken. Direct columns: floors\n" +
+                  "  held against twist (what one planar direction gives). gap = FE total / hand total - 1: the line\n" +
+                  "  stiffness changes with the story (wall-frame interaction) and the centre of rigidity depends on\n" +
+                  "  the story and the load; for one story of lines with one stiffness each the two agree.\n");
 
         if (r.Rigidity.Count > 0)
         {
@@ -84,12 +85,12 @@ internal static class PlanReport
 
         if (r.Irregularity.Count > 0)
         {
-            sb.Append("\nTorsional irregularity (ASCE 7-16 Table 12.3-1: Type 1a above 1.2, 1b above 1.4; A_x eq. 12.8-14, 1 to 3)\n");
+            sb.Append("\nTorsional irregularity (ASCE 7-16 Table 12.3-1: 1a above 1.2, 1b above 1.4; A_x eq. 12.8-14)\n");
             var t = new TextTable("loading", "story", "case", $"max drift [{len}]", $"avg of ends [{len}]", "ratio", "type", "A_x").Numeric(1, 3, 4, 5, 7);
             foreach (var x in r.Irregularity)
                 t.Add(x.Direction, x.Story.ToString(), x.Case, L(x.MaxDrift), L(x.AverageDrift), x.Ratio.ToString("0.000"), x.Type, x.Ax.ToString("0.000"));
             sb.Append(t.Render());
-            sb.Append("  Drifts along the loading at the outline corners, with accidental torsion (the worst of the shifted cases).\n");
+            sb.Append("  Drifts along the loading at the outline corners, with accidental torsion (worst shifted case).\n");
         }
 
         sb.Append("\nCorner drifts (largest drift in plan at an outline corner, per story)\n");
@@ -107,13 +108,26 @@ internal static class PlanReport
         if (r.DriftChecks.Count > 0)
         {
             var lim = p.DriftLimit!;
-            sb.Append($"\nDrift check at the corners: δ = C_d·δ_e/I_e (ASCE 7-16 eq. 12.8-15), C_d = {lim.Cd}, I_e = {lim.Ie}, allowed ratio {lim.AllowedRatio}\n");
+            sb.Append($"\nCorner drift check: δ = C_d·δ_e/I_e (ASCE 7-16 eq. 12.8-15), C_d = {lim.Cd}, I_e = {lim.Ie}, allowed {lim.AllowedRatio}\n");
             var t = new TextTable("case", "story", "corner", $"δ [{len}]", "ratio", "allowed", "result").Numeric(1, 2, 3, 4, 5);
             foreach (var d in r.DriftChecks.Where(d => governing.Contains(d.Case)))
                 t.Add(d.Case, d.Story.ToString(), (d.Vertex + 1).ToString(), L(d.Amplified), d.Ratio.ToString("0.00000"), d.Allowed.ToString("0.000"), d.Within ? "within" : "exceeds");
             sb.Append(t.Render());
         }
-        sb.Append($"\nCaution: {ResultFiles.Caution}\n");
+        sb.Append("\n" + Wrap($"Caution: {ResultFiles.Caution}", 100));
         return sb.ToString();
+    }
+
+    private static string Wrap(string text, int width)
+    {
+        var sb = new StringBuilder();
+        int col = 0;
+        foreach (var word in text.Split(' '))
+        {
+            if (col > 0 && col + 1 + word.Length > width) { sb.Append('\n'); col = 0; }
+            if (col > 0) { sb.Append(' '); col++; }
+            sb.Append(word); col += word.Length;
+        }
+        return sb.Append('\n').ToString();
     }
 }
