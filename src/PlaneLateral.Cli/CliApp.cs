@@ -55,14 +55,14 @@ public static class CliApp
         };
         root.SetAction(_ =>
         {
-            stdout.Write($"No model given: solving the shipped demo model ({DemoModelPath}).\nUse 'planelateral solve <model.json>' for your own model, 'planelateral --help' for all commands.\n\n");
-            return Solve(DemoModelPath, null, stdout, stderr, withComparisons: true);
+            return PlanSolve.RunDemo(stdout, stderr);
         });
         return root;
     }
 
     private static int Solve(string modelPath, string? outDir, TextWriter stdout, TextWriter stderr, bool withComparisons = false)
     {
+        if (ModelReader.IsPlanFile(modelPath)) return PlanSolve.Run(modelPath, outDir, stdout, stderr);   // a building in plan (docs/plan.md)
         bool solved = CommandSupport.TrySolve(() =>
         {
             var model = ModelReader.ReadFile(modelPath);
@@ -92,6 +92,7 @@ public static class CliApp
 
     private static int Validate(string modelPath, TextWriter stdout, TextWriter stderr)
     {
+        if (ModelReader.IsPlanFile(modelPath)) return PlanSolve.Validate(modelPath, stdout, stderr);
         try
         {
             var m = ModelReader.ReadFile(modelPath);

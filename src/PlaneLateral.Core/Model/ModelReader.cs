@@ -123,7 +123,7 @@ public static partial class ModelReader
             f.RejectUnknownKeys();
 
             CheckConnectivity(nodes, members);
-            if (cases.Count == 0 && points.Count == 0 && panels.Count == 0 && !checksOnly)
+            if (cases.Count == 0 && points.Count == 0 && panels.Count == 0 && !checksOnly && !_partOfBuilding)
                 sink.Add(root, "the model has neither load cases nor stiffness points, so there is nothing to solve",
                     "add \"loadCases\" (e.g. a lateral load at the roof) or \"stiffnessAt\": [{\"node\": \"<roof node>\", \"direction\": \"x\"}]");
 

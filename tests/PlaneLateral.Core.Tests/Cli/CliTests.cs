@@ -30,11 +30,13 @@ public sealed class CliTests : IDisposable
         {
             var (code, stdout, stderr) = Run();
             Assert.True(code == 0, stderr);
-            Assert.Contains("shipped demo", stdout);
-            Assert.Contains("Lateral stiffness", stdout);
+            Assert.Contains("shipped demo building in plan", stdout);
+            Assert.Contains("Story shear per line", stdout);
+            Assert.Contains("Torsional irregularity", stdout);
+            Assert.Contains("Corner drifts", stdout);
             Assert.Contains("Caution", stdout);
-            foreach (var f in new[] { "results.json", "displacements.csv", "reactions.csv", "member-forces.csv", "checks.csv", "stiffness.csv" })
-                Assert.True(new FileInfo(Path.Combine(_dir, "planelateral-results", "demo-clinic", f)).Length > 0, f);
+            foreach (var f in new[] { "plan.json", "plan-floors.csv", "plan-corners.csv", "plan-line-stories.csv", "plan-torsional-irregularity.csv", "plan-checks.csv" })
+                Assert.True(new FileInfo(Path.Combine(_dir, "planelateral-results", "demo-building", f)).Length > 0, f);
         }
         finally
         {

@@ -245,7 +245,7 @@ public class SchemaTests
         var schema = JObject.Parse(File.ReadAllText(RepositoryFiles.SchemaPath));
         var defs = (JObject)schema["definitions"]!;
         string[] Keys(JToken o) => ((JObject)o["properties"]!).Properties().Select(p => p.Name).Order(StringComparer.Ordinal).ToArray();
-        Assert.Equal(new[] { "$schema", "combinations", "comparisons", "crackedSections", "description", "driftChecks", "formatVersion", "levels", "loadCases", "materials", "members", "nodes", "panels", "reference", "sections", "seismic", "stiffnessAt", "supports", "title", "units" }.Append("footings").Order(StringComparer.Ordinal), Keys(schema));
+        Assert.Equal(new[] { "$schema", "combinations", "comparisons", "crackedSections", "description", "driftChecks", "formatVersion", "levels", "loadCases", "materials", "members", "nodes", "panels", "plan", "reference", "sections", "seismic", "stiffnessAt", "supports", "title", "units" }.Append("footings").Order(StringComparer.Ordinal), Keys(schema));
         Assert.Equal(new[] { "description", "E", "G", "id", "nu" }.Order(StringComparer.Ordinal), Keys(defs["material"]!));
         Assert.Equal(new[] { "end", "id", "kind", "line", "material", "modifiers", "momentReleases", "rigidZones", "role", "section", "start" }, Keys(defs["member"]!));
         Assert.Equal(new[] { "node", "restrain", "springs", "type" }, Keys(defs["support"]!));

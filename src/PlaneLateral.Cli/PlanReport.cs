@@ -1,0 +1,133 @@
+using System.Text;
+using PlaneLateral.Analysis;
+using PlaneLateral.Model;
+using PlaneLateral.Output;
+using PlaneLateral.Studies;
+using PlaneLateral.Units;
+
+namespace PlaneLateral.Cli;
+
+/// <summary>The console summary of a building in plan (docs/plan.md): reads a <see cref="PlanResult"/>, prints tables of at most 100 columns.</summary>
+internal static class PlanReport
+{
+    public static string Render(PlanResult r, IReadOnlyList<PlanSplitStory> hand, string path)
+    {
+        var p = r.Plan;
+        var u = p.Units;
+        string len = u.LengthSymbol, force = u.ForceSymbol;
+        string L(double v) => TextTable.Num(u.FromSI(v, Quantity.Length));
+        string Fo(double v) => TextTable.Num(u.FromSI(v, Quantity.Force));
+        var sb = new StringBuilder();
+        sb.Append($"Building  {p.Title}\n");
+        sb.Append($"File      {path}\n");
+        sb.Append($"Units     force {force}, length {len}\n");
+        sb.Append($"Size      {p.FloorCount} floors, {p.Lines.Count} lines of resistance, {p.Cases.Count} load cases, accidental eccentricity {p.EccentricityRatio:0.###}\n");
+        sb.Append($"Method    each line condensed exactly on its {p.FloorCount} level DOF{(p.FloorCount == 1 ? "" : "s")} (one factorisation per line),\n" +
+                  "          floors solved on (Ux, Uy, Rz), each line's planar model recovered under the level forces\n");
+
+        sb.Append("\nLines of resistance\n");
+        var lt = new TextTable("line", "form", $"x [{len}]", $"y [{len}]", "direction", "members", $"level recovery error").Numeric(2, 3, 5, 6);
+        foreach (var l in r.Lines)
+            lt.Add(l.Line.Id, l.Line.Form switch { PlanLineForm.Wall => "wall", PlanLineForm.StoryStiffness => "story stiffness", PlanLineForm.File => "model file", _ => "model" },
+                L(l.Line.X0), L(l.Line.Y0), l.Line.DirectionLabel, l.Line.Model.Members.Count.ToString(), TextTable.Sci(l.RecoveryError));
+        sb.Append(lt.Render());
+
+        sb.Append("\nChecks of every floor solve (line forces against floor loads)\n");
+        var ct = new TextTable("case", $"ΣFx [{force}]", $"ΣFy [{force}]", $"ΣMz [{u.Label(Quantity.Moment)}]", "imbalance", "backward error").Numeric(1, 2, 3, 4, 5);
+        foreach (var c in r.Cases)
+            ct.Add(c.Case.Id, Fo(c.Equilibrium.AppliedFx), Fo(c.Equilibrium.AppliedFy), TextTable.Num(u.FromSI(c.Equilibrium.AppliedMz, Quantity.Moment)),
+                TextTable.Sci(c.Equilibrium.RelativeError), TextTable.Sci(c.BackwardError));
+        sb.Append(ct.Render());
+
+        foreach (var c in r.Cases.Where(c => c.Case.Eccentricity == 0))
+        {
+            sb.Append($"\nStory shear per line, case {c.Case.Id}: {c.Case.Description}\n" +
+                "  direct: floors held against twist; torsional: what the twist adds\n");
+            var t = new TextTable("story", "line", "dir", $"shear [{force}]", "share", $"direct [{force}]", $"torsional [{force}]").Numeric(0, 3, 4, 5, 6);
+            foreach (var s in c.LineStories.OrderByDescending(s => s.Story))
+            {
+                var line = p.Lines.First(l => l.Id == s.Line);
+                t.Add(s.Story.ToString(), s.Line, line.DirectionLabel, Fo(s.Shear), double.IsFinite(s.Share) ? s.Share.ToString("0.000") : "-", Fo(s.Direct), Fo(s.Torsional));
+            }
+            sb.Append(t.Render());
+        }
+
+        var governing = r.Irregularity.Select(t => t.Case).Distinct().ToList();
+        foreach (var id in governing)
+        {
+            var story = hand.Where(h => h.Case == id).OrderByDescending(h => h.Story).ToList();
+            if (story.Count == 0) continue;
+            sb.Append($"\nHand (relative rigidity with torsion) beside FE, case {id}\n");
+            var t = new TextTable("story", "line", $"hand direct", "hand tors.", "hand total", "hand design", "FE direct", "FE total", "gap").Numeric(0, 2, 3, 4, 5, 6, 7, 8);
+            foreach (var s in story)
+                foreach (var row in s.Rows)
+                    t.Add(s.Story.ToString(), row.Line, Fo(row.HandDirect), Fo(row.HandTorsional), Fo(row.HandTotal), Fo(row.HandDesign), Fo(row.FeDirect), Fo(row.FeTotal),
+                        double.IsFinite(row.Gap) ? $"{100 * row.Gap:+0.0;-0.0;0.0}%" : "-");
+            sb.Append(t.Render());
+        }
+        sb.Append($"  Shears in {force}. Hand: each line's story stiffness from the line alone; design = total,\n" +
+                  "  except that a torsional part that reduces a line's shear is not taken. Direct columns: floors\n" +
+                  "  held against twist (what one planar direction gives). gap = FE total / hand total - 1: the line\n" +
+                  "  stiffness changes with the story (wall-frame interaction) and the centre of rigidity depends on\n" +
+                  "  the story and the load; for one story of lines with one stiffness each the two agree.\n");
+
+        if (r.Rigidity.Count > 0)
+        {
+            sb.Append("\nCentre of rigidity per story (hand definition, lines' story stiffness alone) and centre of mass\n");
+            var t = new TextTable("loading", "story", $"x_R [{len}]", $"y_R [{len}]", $"x_M [{len}]", $"y_M [{len}]").Numeric(1, 2, 3, 4, 5);
+            foreach (var g in r.Rigidity)
+            {
+                var cm = p.Levels[g.Story].CentreOfMass;
+                t.Add(g.Direction, g.Story.ToString(), L(g.XR), L(g.YR), L(cm.X), L(cm.Y));
+            }
+            sb.Append(t.Render());
+        }
+
+        if (r.Irregularity.Count > 0)
+        {
+            sb.Append("\nTorsional irregularity (ASCE 7-16 Table 12.3-1: 1a above 1.2, 1b above 1.4; A_x eq. 12.8-14)\n");
+            var t = new TextTable("loading", "story", "case", $"max drift [{len}]", $"avg of ends [{len}]", "ratio", "type", "A_x").Numeric(1, 3, 4, 5, 7);
+            foreach (var x in r.Irregularity)
+                t.Add(x.Direction, x.Story.ToString(), x.Case, L(x.MaxDrift), L(x.AverageDrift), x.Ratio.ToString("0.000"), x.Type, x.Ax.ToString("0.000"));
+            sb.Append(t.Render());
+            sb.Append("  Drifts along the loading at the outline corners, with accidental torsion (worst shifted case).\n");
+        }
+
+        sb.Append("\nCorner drifts (largest drift in plan at an outline corner, per story)\n");
+        var dt = new TextTable("case", "story", "corner", $"x [{len}]", $"y [{len}]", $"drift [{len}]", "drift / height").Numeric(1, 2, 3, 4, 5, 6);
+        foreach (var c in r.Cases.Where(c => governing.Contains(c.Case.Id)))
+            foreach (var g in c.Vertices.GroupBy(v => v.Level).OrderByDescending(g => g.Key))
+            {
+                var v = g.OrderByDescending(v => Math.Sqrt(v.DriftX * v.DriftX + v.DriftY * v.DriftY)).ThenBy(v => v.Vertex).First();
+                double d = Math.Sqrt(v.DriftX * v.DriftX + v.DriftY * v.DriftY);
+                double h = p.Levels[v.Level].Elevation - p.Levels[v.Level - 1].Elevation;
+                dt.Add(c.Case.Id, v.Level.ToString(), (v.Vertex + 1).ToString(), L(v.At.X), L(v.At.Y), L(d), TextTable.Sci(d / h));
+            }
+        sb.Append(dt.Render());
+
+        if (r.DriftChecks.Count > 0)
+        {
+            var lim = p.DriftLimit!;
+            sb.Append($"\nCorner drift check: δ = C_d·δ_e/I_e (ASCE 7-16 eq. 12.8-15), C_d = {lim.Cd}, I_e = {lim.Ie}, allowed {lim.AllowedRatio}\n");
+            var t = new TextTable("case", "story", "corner", $"δ [{len}]", "ratio", "allowed", "result").Numeric(1, 2, 3, 4, 5);
+            foreach (var d in r.DriftChecks.Where(d => governing.Contains(d.Case)))
+                t.Add(d.Case, d.Story.ToString(), (d.Vertex + 1).ToString(), L(d.Amplified), d.Ratio.ToString("0.00000"), d.Allowed.ToString("0.000"), d.Within ? "within" : "exceeds");
+            sb.Append(t.Render());
+        }
+        sb.Append("\n" + Wrap($"Caution: {ResultFiles.Caution}", 100));
+        return sb.ToString();
+    }
+
+    private static string Wrap(string text, int width)
+    {
+        var sb = new StringBuilder();
+        int col = 0;
+        foreach (var word in text.Split(' '))
+        {
+            if (col > 0 && col + 1 + word.Length > width) { sb.Append('\n'); col = 0; }
+            if (col > 0) { sb.Append(' '); col++; }
+            sb.Append(word); col += word.Length;
+        }
+        return sb.Append('\n').ToString();
+    }
+}

@@ -1,0 +1,54 @@
+using PlaneLateral.Analysis;
+using PlaneLateral.Model;
+using PlaneLateral.Output;
+using PlaneLateral.Studies;
+
+namespace PlaneLateral.Cli;
+
+/// <summary>Solving a building in plan from the command line: read, solve, write the files, print <see cref="PlanReport"/>.</summary>
+internal static class PlanSolve
+{
+    /// <summary>The shipped demo building in plan.</summary>
+    public static string DemoPath => Path.Combine(AppContext.BaseDirectory, "models", "demo-building.json");
+
+    /// <summary>The no-argument run: the demo building, with a pointer to the planar demo.</summary>
+    public static int RunDemo(TextWriter stdout, TextWriter stderr)
+    {
+        stdout.Write($"No model given: solving the shipped demo building in plan ({DemoPath}).\n" +
+            "Use 'planelateral solve <model.json>' for your own model or building, 'planelateral solve models/demo-clinic.json' for the planar demo,\n" +
+            "'planelateral --help' for all commands.\n\n");
+        return Run(DemoPath, null, stdout, stderr);
+    }
+
+    public static int Run(string path, string? outDir, TextWriter stdout, TextWriter stderr)
+    {
+        bool solved = CommandSupport.TrySolve(() =>
+        {
+            var result = PlanAnalysis.Run(ModelReader.ReadPlanFile(path));
+            return (result, PlanHandSplit.Run(result));
+        }, stderr, out var solution, out int exit);
+        if (!solved) return exit;
+        var (r, hand) = solution;
+        string folder = outDir ?? CommandSupport.DefaultFolder(path);
+        if (!CommandSupport.TryWrite(() => AtomicFiles.WriteAll(folder, PlanFiles.Render(r)), "results", stderr, out var written, out exit)) return exit;
+        stdout.Write($"PlaneLateral {ResultFiles.Version}: building in plan, linear static analysis\n\n");
+        stdout.Write(PlanReport.Render(r, hand, path));
+        stdout.Write($"\nResults written to {folder}: {written.Count} files (plan-*.csv, plan.json, line-*-*.csv)\n");
+        return ExitCodes.Success;
+    }
+
+    public static int Validate(string path, TextWriter stdout, TextWriter stderr)
+    {
+        try
+        {
+            var p = ModelReader.ReadPlanFile(path);
+            stdout.Write($"{path}: valid building in plan. {p.FloorCount} floors, {p.Lines.Count} lines, {p.Cases.Count} load cases, units {p.Units}.\n");
+            return ExitCodes.Success;
+        }
+        catch (ModelInputException e)
+        {
+            stderr.Write(e.Message + "\n");
+            return ExitCodes.BadModel;
+        }
+    }
+}

@@ -1,0 +1,396 @@
+using MathNet.Numerics.LinearAlgebra.Double;
+using PlaneLateral.Model;
+
+namespace PlaneLateral.Analysis;
+
+/// <summary>
+/// Analysis of a building in plan with planar lines (docs/plan.md): each line is condensed exactly onto its level
+/// lateral DOFs (one factorisation of the line, one unit load per level: the flexibility F on the levels, K̂ = F⁻¹ —
+/// static condensation, Przemieniecki, <i>Theory of Matrix Structural Analysis</i>, 1968, ch. 9), mapped to the floors'
+/// (Ux, Uy, Rz) by u_line = cos α·Ux + sin α·Uy + r·Rz with r = x₀ sin α − y₀ cos α, and assembled K = Σ Tᵀ K̂ T
+/// (pseudo-three-dimensional analysis: Weaver &amp; Nelson, J. Struct. Div. ASCE 92(ST6), 1966). The floor system is
+/// solved for every case, each line's planar model is recovered under the level forces the floors put on it, and the
+/// whole is checked: ΣFx, ΣFy, ΣMz of the line forces against the floor loads and the backward error of every solve.
+/// </summary>
+public static class PlanAnalysis
+{
+    /// <summary>An eigenvalue of the scaled floor stiffness below this fraction of the largest marks a free floor motion.</summary>
+    public const double MechanismTolerance = 1e-10;
+
+    /// <exception cref="UnstableModelException">The lines cannot hold a floor in some direction or in rotation (names the floor DOF).</exception>
+    public static PlanResult Run(BuildingPlan plan, AnalysisOptions? options = null)
+    {
+        int n = plan.FloorCount;
+        var condensed = plan.Lines.Select(l => Condense(l, n, options)).ToList();
+        var k = Assemble(plan.Lines, condensed.Select(c => c.K).ToList(), n);
+        double size = plan.Size;
+        CheckStable(plan, k, size);
+
+        var scaled = Scaled(k, n, size);
+        var chol = DenseMatrix.OfArray(scaled).Cholesky();
+        var locked = Translational(k, n);
+        var lockedChol = DenseMatrix.OfArray(locked).Cholesky();
+
+        var cases = new List<(PlanLoadCase Case, double[] U, double[] ULocked, double Eta)>();
+        foreach (var c in plan.Cases)
+        {
+            var f = LoadVector(c, n);
+            var fs = (double[])f.Clone();
+            for (int l = 0; l < n; l++) fs[3 * l + 2] *= size;
+            var us = chol.Solve(DenseVector.OfArray(fs)).ToArray();
+            double eta = BackwardError(scaled, us, fs);
+            var u = (double[])us.Clone();
+            for (int l = 0; l < n; l++) u[3 * l + 2] *= size;
+            var ft = new double[2 * n];
+            for (int l = 0; l < n; l++) { ft[2 * l] = f[3 * l]; ft[2 * l + 1] = f[3 * l + 1]; }
+            var ut = lockedChol.Solve(DenseVector.OfArray(ft)).ToArray();
+            eta = Math.Max(eta, BackwardError(locked, ut, ft));
+            var ul = new double[3 * n];
+            for (int l = 0; l < n; l++) { ul[3 * l] = ut[2 * l]; ul[3 * l + 1] = ut[2 * l + 1]; }
+            cases.Add((c, u, ul, eta));
+        }
+
+        // Level forces on each line, per case: p = K̂ (T u).
+        var lineForces = plan.Lines.Select((line, i) => cases.Select(c => Multiply(condensed[i].K, Project(line, c.U, n))).ToArray()).ToArray();
+        var lineForcesLocked = plan.Lines.Select((line, i) => cases.Select(c => Multiply(condensed[i].K, Project(line, c.ULocked, n))).ToArray()).ToArray();
+
+        var lineResults = new List<PlanLineResult>();
+        for (int i = 0; i < plan.Lines.Count; i++)
+            lineResults.Add(Recover(plan.Lines[i], condensed[i], cases.Select(c => c.Case.Id).ToList(), lineForces[i], cases.Select(c => Project(plan.Lines[i], c.U, n)).ToList(), options));
+
+        var caseResults = new List<PlanCaseResult>();
+        for (int ci = 0; ci < cases.Count; ci++)
+        {
+            var (c, u, ul, eta) = cases[ci];
+            var motion = Enumerable.Range(0, n).Select(l => new FloorMotion(l + 1, u[3 * l], u[3 * l + 1], u[3 * l + 2])).ToList();
+            var lockedMotion = Enumerable.Range(0, n).Select(l => new FloorMotion(l + 1, ul[3 * l], ul[3 * l + 1], 0)).ToList();
+            var stories = StoryLoads(c, n);
+            var lineStories = new List<PlanLineStory>();
+            for (int s = 1; s <= n; s++)
+                for (int i = 0; i < plan.Lines.Count; i++)
+                {
+                    var line = plan.Lines[i];
+                    double v = Above(lineForces[i][ci], s), vd = Above(lineForcesLocked[i][ci], s);
+                    var st = stories[s - 1];
+                    double along = line.Cos * st.Vx + line.Sin * st.Vy;
+                    double scale = Math.Max(Math.Abs(st.Vx), Math.Abs(st.Vy));
+                    double share = Math.Abs(along) > 1e-9 * scale && scale > 0 ? v / along : double.NaN;
+                    var planar = StoryAnalysis.ForCase(lineResults[i].Recovered, lineResults[i].Recovered.Cases[ci]);
+                    double planarShear = planar.Stories.Count >= s ? planar.Stories[s - 1].Shear : double.NaN;
+                    var ulv = Project(line, u, n);
+                    double drift = ulv[s - 1] - (s >= 2 ? ulv[s - 2] : 0);
+                    lineStories.Add(new PlanLineStory(s, line.Id, v, share, vd, v - vd, planarShear, drift));
+                }
+            caseResults.Add(new PlanCaseResult(c, motion, lockedMotion, eta, Equilibrium(plan, c, lineForces.Select(lf => lf[ci]).ToList(), size),
+                stories, lineStories, Vertices(plan, motion)));
+        }
+
+        return new PlanResult
+        {
+            Plan = plan,
+            Lines = lineResults,
+            FloorStiffness = new MatrixView(k),
+            Cases = caseResults,
+            Rigidity = Rigidity(plan, condensed.Select(c => c.K).ToList()),
+            Irregularity = Irregularity(plan, caseResults),
+            DriftChecks = plan.DriftLimit is { } lim ? DriftChecks(plan, caseResults, lim) : [],
+        };
+    }
+
+    /// <summary>A line condensed on its levels: K̂ (N/m) and the checks of the condensation.</summary>
+    public sealed record Condensation(double[,] K, double SymmetryError, double BackwardError);
+
+    /// <summary>
+    /// The line's stiffness on its level DOFs: its planar model is factorised once and solved for a unit force at each
+    /// level (F_ij = ux at level i under the unit force at level j), and K̂ = F⁻¹ (exact static condensation onto the
+    /// loaded DOFs, since F is the corresponding block of K⁻¹ — derived).
+    /// </summary>
+    public static Condensation Condense(PlanLine line, int floors, AnalysisOptions? options = null)
+    {
+        var cases = Enumerable.Range(0, floors).Select(j => new LoadCase($"unit {j + 1}", "unit force at a level", [new NodalLoad(line.LevelNodes[j], 1.0, 0, 0)], [])).ToList();
+        var r = LinearStaticAnalysis.Run(ForLoads(line.Model, cases), options);
+        var flex = new double[floors, floors];
+        for (int j = 0; j < floors; j++)
+            for (int i = 0; i < floors; i++) flex[i, j] = r.Cases[j].Displacement(line.LevelNodes[i], Dof.X);
+        double biggest = 0, asym = 0;
+        for (int i = 0; i < floors; i++)
+            for (int j = 0; j < floors; j++) { biggest = Math.Max(biggest, Math.Abs(flex[i, j])); asym = Math.Max(asym, Math.Abs(flex[i, j] - flex[j, i])); }
+        for (int i = 0; i < floors; i++)
+            for (int j = 0; j < i; j++) flex[i, j] = flex[j, i] = 0.5 * (flex[i, j] + flex[j, i]);
+        var kk = DenseMatrix.OfArray(flex).Inverse().ToArray();
+        for (int i = 0; i < floors; i++)
+            for (int j = 0; j < i; j++) kk[i, j] = kk[j, i] = 0.5 * (kk[i, j] + kk[j, i]);
+        return new Condensation(kk, biggest == 0 ? 0 : asym / biggest, r.Cases.Count == 0 ? 0 : r.Cases.Max(c => c.BackwardError));
+    }
+
+    /// <summary>The line's model with the given load cases only (its own cases, checks and seismic block set aside).</summary>
+    private static StructureModel ForLoads(StructureModel m, IReadOnlyList<LoadCase> cases)
+    {
+        var b = m.Building;
+        return m with
+        {
+            LoadCases = cases, Combinations = [], StiffnessPoints = [], Comparisons = [], Seismic = null,
+            Building = new BuildingData { Levels = b.Levels, MemberLines = b.MemberLines, Lines = b.Lines, Modifiers = b.Modifiers, CrackedSections = b.CrackedSections },
+        };
+    }
+
+    /// <summary>K = Σ Tᵀ K̂ T on (Ux, Uy, Rz) per floor, T's row i = (cos α, sin α, r) at floor i.</summary>
+    public static double[,] Assemble(IReadOnlyList<PlanLine> lines, IReadOnlyList<double[,]> condensed, int floors)
+    {
+        var k = new double[3 * floors, 3 * floors];
+        for (int li = 0; li < lines.Count; li++)
+        {
+            var t = new[] { lines[li].Cos, lines[li].Sin, lines[li].Lever };
+            var kh = condensed[li];
+            for (int i = 0; i < floors; i++)
+                for (int j = 0; j < floors; j++)
+                    for (int a = 0; a < 3; a++)
+                        for (int b = 0; b < 3; b++) k[3 * i + a, 3 * j + b] += t[a] * kh[i, j] * t[b];
+        }
+        return k;
+    }
+
+    private static double[,] Scaled(double[,] k, int n, double size)
+    {
+        var s = (double[,])k.Clone();
+        for (int i = 0; i < 3 * n; i++)
+            for (int j = 0; j < 3 * n; j++) s[i, j] *= (i % 3 == 2 ? size : 1) * (j % 3 == 2 ? size : 1);
+        return s;
+    }
+
+    private static double[,] Translational(double[,] k, int n)
+    {
+        var t = new double[2 * n, 2 * n];
+        for (int i = 0; i < 2 * n; i++)
+            for (int j = 0; j < 2 * n; j++) t[i, j] = k[3 * (i / 2) + i % 2, 3 * (j / 2) + j % 2];
+        return t;
+    }
+
+    /// <summary>
+    /// Refuses a floor system with a free motion: eigenvalues of the scaled K (Rz times the plan size) below
+    /// <see cref="MechanismTolerance"/> of the largest. Each free motion is named by its largest floor DOF (rotation
+    /// first when the floor turns: all lines through one point).
+    /// </summary>
+    private static void CheckStable(BuildingPlan plan, double[,] k, double size)
+    {
+        int n = plan.FloorCount;
+        var (values, vectors) = SymmetricEigen.Solve(Scaled(k, n, size));
+        double top = Math.Max(values[0], 0);
+        var mechanisms = new List<Mechanism>();
+        for (int m = 0; m < values.Length; m++)
+        {
+            if (top > 0 && values[m] > MechanismTolerance * top) continue;
+            double big = 0;
+            for (int i = 0; i < 3 * n; i++) big = Math.Max(big, Math.Abs(vectors[i, m]));
+            NamedDof Name(int i) => new($"floor {plan.Levels[i / 3 + 1].Id}", (Dof)(i % 3));
+            var moving = Enumerable.Range(0, 3 * n).Where(i => Math.Abs(vectors[i, m]) > 1e-6 * big)
+                .OrderByDescending(i => i % 3 == 2 && Math.Abs(vectors[i, m]) > 0.1 * big ? 1 : 0).ThenByDescending(i => Math.Abs(vectors[i, m])).ThenBy(i => i).ToList();
+            mechanisms.Add(new Mechanism(Name(moving[0]), moving.Select(Name).ToList()));
+        }
+        if (mechanisms.Count > 0) throw new UnstableModelException(plan.SourcePath, mechanisms);
+    }
+
+    private static double[] LoadVector(PlanLoadCase c, int n)
+    {
+        var f = new double[3 * n];
+        foreach (var l in c.Loads) { f[3 * (l.Level - 1)] += l.Fx; f[3 * (l.Level - 1) + 1] += l.Fy; f[3 * (l.Level - 1) + 2] += l.Mz; }
+        return f;
+    }
+
+    /// <summary>The line's level displacements u_i = cos α·Ux_i + sin α·Uy_i + r·Rz_i (m).</summary>
+    public static double[] Project(PlanLine line, double[] u, int n)
+    {
+        var v = new double[n];
+        for (int l = 0; l < n; l++) v[l] = line.Cos * u[3 * l] + line.Sin * u[3 * l + 1] + line.Lever * u[3 * l + 2];
+        return v;
+    }
+
+    private static double[] Multiply(double[,] a, double[] x)
+    {
+        var y = new double[x.Length];
+        for (int i = 0; i < x.Length; i++)
+            for (int j = 0; j < x.Length; j++) y[i] += a[i, j] * x[j];
+        return y;
+    }
+
+    private static double Above(double[] p, int story)
+    {
+        double v = 0;
+        for (int l = story - 1; l < p.Length; l++) v += p[l];
+        return v;
+    }
+
+    private static double BackwardError(double[,] a, double[] x, double[] b)
+    {
+        int n = b.Length;
+        double r = 0, an = 0, xn = 0, bn = 0;
+        for (int i = 0; i < n; i++)
+        {
+            double s = -b[i], row = 0;
+            for (int j = 0; j < n; j++) { s += a[i, j] * x[j]; row += Math.Abs(a[i, j]); }
+            r = Math.Max(r, Math.Abs(s)); an = Math.Max(an, row); xn = Math.Max(xn, Math.Abs(x[i])); bn = Math.Max(bn, Math.Abs(b[i]));
+        }
+        double d = an * xn + bn;
+        return d == 0 ? 0 : r / d;
+    }
+
+    private static List<PlanStoryLoad> StoryLoads(PlanLoadCase c, int n)
+    {
+        var list = new List<PlanStoryLoad>();
+        for (int s = 1; s <= n; s++)
+        {
+            var above = c.Loads.Where(l => l.Level >= s).ToList();
+            list.Add(new PlanStoryLoad(s, above.Sum(l => l.Fx), above.Sum(l => l.Fy), above.Sum(l => l.Mz)));
+        }
+        return list;
+    }
+
+    private static PlanEquilibrium Equilibrium(BuildingPlan plan, PlanLoadCase c, IReadOnlyList<double[]> forces, double size)
+    {
+        double ax = c.Loads.Sum(l => l.Fx), ay = c.Loads.Sum(l => l.Fy), am = c.Loads.Sum(l => l.Mz);
+        double lx = 0, ly = 0, lm = 0;
+        for (int i = 0; i < plan.Lines.Count; i++)
+        {
+            var line = plan.Lines[i];
+            double p = forces[i].Sum();
+            lx += line.Cos * p; ly += line.Sin * p; lm += line.Lever * p;
+        }
+        double scale = new[] { ax, ay, lx, ly, am / size, lm / size }.Max(Math.Abs);
+        double err = new[] { ax - lx, ay - ly, (am - lm) / size }.Max(Math.Abs);
+        return new PlanEquilibrium(ax, ay, am, lx, ly, lm, scale == 0 ? err : err / scale);
+    }
+
+    private static List<PlanVertexMotion> Vertices(BuildingPlan plan, IReadOnlyList<FloorMotion> motion)
+    {
+        var list = new List<PlanVertexMotion>();
+        for (int l = 1; l < plan.Levels.Count; l++)
+        {
+            var outline = plan.Levels[l].Outline;
+            for (int v = 0; v < outline.Count; v++)
+            {
+                var (ux, uy) = motion[l - 1].At(outline[v]);
+                var (bx, by) = l >= 2 ? motion[l - 2].At(outline[v]) : (0, 0);
+                list.Add(new PlanVertexMotion(l, v, outline[v], ux, uy, ux - bx, uy - by));
+            }
+        }
+        return list;
+    }
+
+    /// <summary>Recovers the line's planar model under the level forces p (one case per building case), and checks its level displacements.</summary>
+    private static PlanLineResult Recover(PlanLine line, Condensation c, IReadOnlyList<string> ids, double[][] forces, IReadOnlyList<double[]> expected, AnalysisOptions? options)
+    {
+        var cases = ids.Select((id, ci) => new LoadCase(id, "level forces from the floors",
+            forces[ci].Select((p, l) => new NodalLoad(line.LevelNodes[l], p, 0, 0)).ToList(), [])).ToList();
+        var r = LinearStaticAnalysis.Run(ForLoads(line.Model, cases), options);
+        double err = 0, scale = 0;
+        for (int ci = 0; ci < ids.Count; ci++)
+            for (int l = 0; l < line.LevelNodes.Count; l++)
+            {
+                err = Math.Max(err, Math.Abs(r.Cases[ci].Displacement(line.LevelNodes[l], Dof.X) - expected[ci][l]));
+                scale = Math.Max(scale, Math.Abs(expected[ci][l]));
+            }
+        return new PlanLineResult(line, new MatrixView(c.K), c.SymmetryError, c.BackwardError, r, scale == 0 ? err : err / scale);
+    }
+
+    /// <summary>
+    /// Each line's story stiffness alone under the floor-force pattern of each loading direction (the line by itself,
+    /// loaded at its levels by the pattern: story shear over story drift), and the centre of rigidity they give per story.
+    /// </summary>
+    private static List<PlanStoryRigidity> Rigidity(BuildingPlan plan, IReadOnlyList<double[,]> condensed)
+    {
+        int n = plan.FloorCount;
+        var list = new List<PlanStoryRigidity>();
+        foreach (var dir in new[] { "x", "y" })
+        {
+            var c = plan.Cases.FirstOrDefault(x => x.Direction == dir && x.Eccentricity == 0);
+            if (c is null) continue;
+            var pattern = new double[n];
+            foreach (var l in c.Loads) pattern[l.Level - 1] += Math.Abs(dir == "x" ? l.Fx : l.Fy);
+            if (pattern.All(p => p == 0)) continue;
+            var drifts = condensed.Select(k =>
+            {
+                var u = DenseMatrix.OfArray(k).Solve(DenseVector.OfArray(pattern)).ToArray();
+                return Enumerable.Range(0, n).Select(s => u[s] - (s > 0 ? u[s - 1] : 0)).ToArray();
+            }).ToList();
+            for (int s = 1; s <= n; s++)
+            {
+                double v = Above(pattern, s);
+                var lines = plan.Lines.Select((line, i) => new PlanLineStiffness(line.Id, line.X0, line.Y0, line.Angle, v / drifts[i][s - 1])).ToList();
+                var (xr, yr) = CentreOfRigidity(plan.Lines, lines.Select(l => l.Stiffness).ToList());
+                list.Add(new PlanStoryRigidity(dir, s, lines, xr, yr));
+            }
+        }
+        return list;
+    }
+
+    /// <summary>
+    /// The point about which the story stiffnesses k_i of lines (c, s, r) couple no rotation with translation:
+    /// [[−Kxy, Kxx], [−Kyy, Kxy]]·(x_R, y_R) = (−Kxθ, −Kyθ) with Kxx = Σk c², Kxy = Σk c s, Kyy = Σk s², Kxθ = Σk c r,
+    /// Kyθ = Σk s r (derived from r' = r − (x_R s − y_R c)); for orthogonal lines x_R = Σk_y x / Σk_y, y_R = Σk_x y / Σk_x.
+    /// NaN where lines of only one direction make it undefined.
+    /// </summary>
+    public static (double X, double Y) CentreOfRigidity(IReadOnlyList<PlanLine> lines, IReadOnlyList<double> k)
+    {
+        double kxx = 0, kxy = 0, kyy = 0, kxt = 0, kyt = 0;
+        for (int i = 0; i < lines.Count; i++)
+        {
+            double c = lines[i].Cos, s = lines[i].Sin, r = lines[i].Lever;
+            kxx += k[i] * c * c; kxy += k[i] * c * s; kyy += k[i] * s * s; kxt += k[i] * c * r; kyt += k[i] * s * r;
+        }
+        double det = -kxy * kxy + kxx * kyy;
+        if (!(Math.Abs(det) > 1e-12 * Math.Max(kxx * kyy, 1e-300))) return (double.NaN, double.NaN);
+        // Cramer on [[−kxy, kxx], [−kyy, kxy]]·(x, y) = (−kxt, −kyt).
+        double x = (-kxt * kxy - kxx * -kyt) / det;
+        double y = (-kxy * -kyt - -kyy * -kxt) / det;
+        return (x, y);
+    }
+
+    private static List<TorsionalIrregularity> Irregularity(BuildingPlan plan, IReadOnlyList<PlanCaseResult> cases)
+    {
+        int n = plan.FloorCount;
+        var list = new List<TorsionalIrregularity>();
+        foreach (var dir in new[] { "x", "y" })
+        {
+            var withAcc = cases.Where(c => c.Case.Direction == dir && c.Case.Eccentricity != 0).ToList();
+            bool accidental = withAcc.Count > 0;
+            var use = accidental ? withAcc : cases.Where(c => c.Case.Direction == dir).ToList();
+            for (int s = 1; s <= n; s++)
+            {
+                TorsionalIrregularity? worst = null;
+                foreach (var c in use)
+                {
+                    var st = c.Stories[s - 1];
+                    double sign = Math.Sign(dir == "x" ? st.Vx : st.Vy);
+                    if (sign == 0) continue;
+                    var verts = c.Vertices.Where(v => v.Level == s).ToList();
+                    var drift = verts.Select(v => sign * (dir == "x" ? v.DriftX : v.DriftY)).ToList();
+                    var disp = verts.Select(v => sign * (dir == "x" ? v.Ux : v.Uy)).ToList();
+                    double dmax = drift.Max(), davg = 0.5 * (drift.Max() + drift.Min());
+                    double umax = disp.Max(), uavg = 0.5 * (disp.Max() + disp.Min());
+                    double ratio = davg > 0 ? dmax / davg : double.NaN;
+                    double ax = uavg > 0 ? Math.Clamp(Math.Pow(umax / (1.2 * uavg), 2), 1, 3) : double.NaN;
+                    string type = ratio > 1.4 ? "1b" : ratio > 1.2 ? "1a" : "none";
+                    var row = new TorsionalIrregularity(dir, s, c.Case.Id, accidental, dmax, davg, ratio, type, umax, uavg, ax);
+                    if (worst is null || !(worst.Ratio >= row.Ratio)) worst = row;
+                }
+                if (worst is not null) list.Add(worst);
+            }
+        }
+        return list;
+    }
+
+    private static List<CornerDriftCheck> DriftChecks(BuildingPlan plan, IReadOnlyList<PlanCaseResult> cases, PlanDriftLimit lim)
+    {
+        var list = new List<CornerDriftCheck>();
+        foreach (var c in cases)
+            for (int s = 1; s <= plan.FloorCount; s++)
+            {
+                double h = plan.Levels[s].Elevation - plan.Levels[s - 1].Elevation;
+                var worst = c.Vertices.Where(v => v.Level == s).OrderByDescending(v => Math.Sqrt(v.DriftX * v.DriftX + v.DriftY * v.DriftY)).ThenBy(v => v.Vertex).First();
+                double d = Math.Sqrt(worst.DriftX * worst.DriftX + worst.DriftY * worst.DriftY);
+                double amp = lim.Cd * d / lim.Ie;
+                list.Add(new CornerDriftCheck(c.Case.Id, s, worst.Vertex, worst.At, d, amp, h, amp / h, lim.AllowedRatio, amp / h <= lim.AllowedRatio));
+            }
+        return list;
+    }
+}

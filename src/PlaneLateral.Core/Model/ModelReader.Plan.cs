@@ -1,0 +1,487 @@
+using Newtonsoft.Json;
+using Newtonsoft.Json.Linq;
+using PlaneLateral.Units;
+
+namespace PlaneLateral.Model;
+
+/// <summary>Reading a building in plan (docs/plan.md): a file whose top level has the key "plan".</summary>
+public static partial class ModelReader
+{
+    /// <summary>The top-level key that only building files have.</summary>
+    public const string PlanKey = "plan";
+
+    /// <summary>
+    /// True when the file is a JSON object with a top-level "plan" key (a building in plan), false otherwise, including
+    /// when it cannot be read or parsed (the planar reader then reports why).
+    /// </summary>
+    public static bool IsPlanFile(string path)
+    {
+        try
+        {
+            using var reader = new JsonTextReader(new StreamReader(path));
+            if (!reader.Read() || reader.TokenType != JsonToken.StartObject) return false;
+            while (reader.Read())
+            {
+                if (reader.TokenType == JsonToken.PropertyName)
+                {
+                    if ((string?)reader.Value == PlanKey) return true;
+                    reader.Read();
+                    reader.Skip();
+                }
+                else if (reader.TokenType == JsonToken.EndObject) return false;
+            }
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException or JsonException or ArgumentException or NotSupportedException) { }
+        return false;
+    }
+
+    /// <summary>Reads and validates a building file; its line files are read from its own folder.</summary>
+    /// <exception cref="ModelInputException">Every problem found, in this file and in its line files.</exception>
+    public static BuildingPlan ReadPlanFile(string path)
+    {
+        string text;
+        try
+        {
+            if (ModelLimits.CheckFileSize(path, new FileInfo(path).Length) is { } tooLarge) throw new ModelInputException([tooLarge]);
+            text = File.ReadAllText(path);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException or NotSupportedException or ArgumentException)
+        {
+            throw new ModelInputException([new ModelDiagnostic(path, 0, 0, "", $"cannot read the file: {e.Message}", "check the path and that the file is readable")]);
+        }
+        return ParsePlan(text, path);
+    }
+
+    /// <summary>Reads a building from JSON text; <paramref name="fileName"/> names it in messages and fixes the folder line files are read from.</summary>
+    public static BuildingPlan ParsePlan(string json, string fileName)
+    {
+        JToken root;
+        try
+        {
+            using var reader = new JsonTextReader(new StringReader(json)) { DateParseHandling = DateParseHandling.None, FloatParseHandling = FloatParseHandling.Double };
+            root = JToken.ReadFrom(reader, new JsonLoadSettings
+            {
+                LineInfoHandling = LineInfoHandling.Load,
+                DuplicatePropertyNameHandling = DuplicatePropertyNameHandling.Error,
+                CommentHandling = CommentHandling.Ignore,
+            });
+        }
+        catch (JsonReaderException e)
+        {
+            throw new ModelInputException([new ModelDiagnostic(fileName, e.LineNumber, e.LinePosition, "$",
+                "the file is not valid JSON: " + StripLocation(e.Message), "correct the JSON syntax at that place (a missing comma, quote or bracket is the usual cause)")]);
+        }
+        var sink = new DiagnosticSink(fileName);
+        if (root is not JObject obj)
+        {
+            sink.Add(root, "a building file must be a JSON object {...}", "wrap the building in { } with \"formatVersion\", \"materials\" and \"plan\"");
+            throw new ModelInputException(sink.Items);
+        }
+        var builder = new Builder(sink, fileName);
+        var plan = builder.BuildPlan(obj);
+        var all = sink.Items.Concat(builder.LineFileProblems).ToList();
+        if (all.Count > 0 || plan is null) throw new ModelInputException(all);
+        return plan;
+    }
+
+    /// <summary>Standard gravity (m/s²), turning a seismic weight into a mass.</summary>
+    public const double StandardGravity = 9.80665;
+
+    private sealed partial class Builder
+    {
+        /// <summary>True while reading a line of a building: its own load cases are not needed (the building loads it).</summary>
+        private bool _partOfBuilding;
+
+        /// <summary>Problems found in line files (each names its own file).</summary>
+        private readonly List<ModelDiagnostic> _lineFileProblems = [];
+
+        public IReadOnlyList<ModelDiagnostic> LineFileProblems => _lineFileProblems;
+
+        public BuildingPlan? BuildPlan(JObject root)
+        {
+            var f = new JsonFields(root, sink);
+            f.OptionalString("$schema", "give \"$schema\" as the path or address of the schema file, a string");
+            f.OptionalString("description", "give a short description as a string");
+            f.OptionalObject("reference", "give \"reference\" as an object {\"source\": ..., \"values\": [...]}");
+            var title = f.OptionalString("title", "give the building a title as a string") ?? Path.GetFileNameWithoutExtension(fileName);
+            ReadFormatVersion(f);
+            ReadUnits(f);
+            ReadMaterials(f.Objects("materials", true, "add \"materials\": [ {\"id\": \"...\", \"E\": ..., \"nu\": ...} ] (an empty array when no wall uses one)"));
+            var p = f.OptionalObject(PlanKey, "give \"plan\" as an object with \"levels\", \"lines\" and \"loads\" (docs/plan.md)");
+            f.RejectUnknownKeys();
+            if (p is null) return null;
+
+            var pf = new JsonFields(p, sink);
+            var defaultOutline = pf.Has("outline") ? ReadOutline(pf.Token("outline")!) : null;
+            double ecc = pf.OptionalNumber("accidentalEccentricity", 0.05, "give the accidental eccentricity as a fraction of the plan dimension, e.g. 0.05");
+            if (double.IsFinite(ecc) && (ecc < 0 || ecc > 0.5))
+                sink.Add(pf.Token("accidentalEccentricity"), $"'accidentalEccentricity' {ecc} is outside [0, 0.5]", "give a fraction such as 0.05 (5 % of the plan dimension), or 0 for none");
+            var levels = ReadPlanLevels(pf, defaultOutline);
+            var lines = levels is null ? [] : ReadPlanLines(pf, levels);
+            var cases = levels is null ? [] : ReadPlanLoads(pf, levels, ecc);
+            PlanDriftLimit? drift = null;
+            if (pf.OptionalObject("driftCheck", "give \"driftCheck\": {\"Cd\": ..., \"Ie\": ..., \"allowedRatio\": ...}") is { } dc)
+            {
+                var d = new JsonFields(dc, sink);
+                double cd = d.OptionalNumber("Cd", 1.0, "give C_d as a number (1 for the elastic drift)");
+                double ie = d.OptionalNumber("Ie", 1.0, "give I_e as a number");
+                double ratio = d.RequiredNumber("allowedRatio", "give the allowable story drift ratio, e.g. 0.02");
+                if (double.IsFinite(cd) && !(cd >= 1 && cd <= 6.5)) sink.Add(d.Token("Cd"), $"'Cd' {cd} is outside [1, 6.5]", "give C_d from 1 to 6.5");
+                if (double.IsFinite(ie) && !(ie >= 1 && ie <= 1.5)) sink.Add(d.Token("Ie"), $"'Ie' {ie} is outside [1, 1.5]", "give I_e from 1.0 to 1.5");
+                if (double.IsFinite(ratio) && !(ratio > 0 && ratio <= 0.1)) sink.Add(d.Token("allowedRatio"), $"'allowedRatio' {ratio} is outside (0, 0.1]", "give the allowable drift ratio, e.g. 0.02");
+                d.RejectUnknownKeys();
+                drift = new PlanDriftLimit(cd, ie, ratio);
+            }
+            pf.RejectUnknownKeys();
+            if (sink.Any || _lineFileProblems.Count > 0 || levels is null) return null;
+            return new BuildingPlan
+            {
+                Title = title, SourcePath = fileName, Units = _units, Levels = levels, Lines = lines, Cases = cases,
+                EccentricityRatio = ecc, DriftLimit = drift,
+            };
+        }
+
+        private PlanPoint? ReadPoint(JToken t, string what)
+        {
+            if (t is JArray { Count: 2 } a && a.All(v => v.Type is JTokenType.Integer or JTokenType.Float))
+            {
+                double x = (double)a[0], y = (double)a[1];
+                if (double.IsFinite(x) && double.IsFinite(y) && Math.Abs(x) <= JsonFields.MaxMagnitude && Math.Abs(y) <= JsonFields.MaxMagnitude)
+                    return new PlanPoint(SI(x, Quantity.Length), SI(y, Quantity.Length));
+            }
+            sink.Add(t, $"{what} must be a point [x, y] of two numbers, found {JsonFields.Describe(t)}", $"write {what} as [x, y] in {_units.LengthSymbol}");
+            return null;
+        }
+
+        private List<PlanPoint>? ReadOutline(JToken t)
+        {
+            const string fix = "give the outline as [[x, y], [x, y], [x, y], ...]: at least three corners in order around the floor";
+            if (t is not JArray a || a.Count < 3) { sink.Add(t, "'outline' must be an array of at least three points", fix); return null; }
+            var pts = new List<PlanPoint>();
+            foreach (var v in a) if (ReadPoint(v, "an outline corner") is { } q) pts.Add(q);
+            if (pts.Count != a.Count) return null;
+            double size = Math.Max(pts.Max(q => q.X) - pts.Min(q => q.X), pts.Max(q => q.Y) - pts.Min(q => q.Y));
+            if (!(Math.Abs(PlanOutline.SignedArea(pts)) > 1e-9 * size * size)) { sink.Add(t, "the outline encloses no area", fix); return null; }
+            return pts;
+        }
+
+        private List<PlanLevel>? ReadPlanLevels(JsonFields pf, List<PlanPoint>? defaultOutline)
+        {
+            var items = pf.Objects("levels", true, "add \"levels\": [{\"id\": \"base\", \"elevation\": 0}, {\"id\": \"roof\", \"elevation\": ..., \"weight\": ...}]");
+            var seen = new HashSet<string>(StringComparer.Ordinal);
+            var raw = new List<(string Id, string Name, double Elevation, double Weight, PlanPoint? Mass, List<PlanPoint>? Outline, double Polar, JObject At)>();
+            foreach (var o in items)
+            {
+                var f = new JsonFields(o, sink);
+                var id = ReadId(f, seen, "level");
+                string name = f.OptionalString("name", "give the level's name as a string") ?? id ?? "";
+                double e = SI(f.RequiredNumber("elevation", $"give the level's elevation in {_units.LengthSymbol}"), Quantity.Length);
+                double w = f.Has("weight") ? Positive(f, "weight", Quantity.Force, "seismic weight", $"give the floor's seismic weight in {_units.ForceSymbol}") : double.NaN;
+                var mass = f.Token("massAt") is { } m ? ReadPoint(m, "'massAt'") : null;
+                var outline = f.Token("outline") is { } ot ? ReadOutline(ot) : defaultOutline;
+                double polar = f.Has("polarInertia") ? SI(SI(f.RequiredNumber("polarInertia", "give W·r² about the centre of mass"), Quantity.Force), Quantity.Area) : double.NaN;
+                f.RejectUnknownKeys();
+                if (id is not null) raw.Add((id, name, e, w, mass, outline, polar, o));
+            }
+            if (raw.Count < 2) { sink.Add(pf.Token("levels") ?? pf.Object, "a building needs the base and at least one floor level", "list the base (elevation 0) and every floor above it under \"levels\""); return null; }
+            raw.Sort((a, b) => a.Elevation.CompareTo(b.Elevation));
+            for (int i = 1; i < raw.Count; i++)
+                if (raw[i].Elevation == raw[i - 1].Elevation)
+                    sink.Add(raw[i].At, $"levels \"{raw[i - 1].Id}\" and \"{raw[i].Id}\" have the same elevation", "give each level its own elevation");
+            var list = new List<PlanLevel>();
+            for (int i = 0; i < raw.Count; i++)
+            {
+                var r = raw[i];
+                if (i > 0 && r.Outline is null)
+                {
+                    sink.Add(r.At, $"level \"{r.Id}\" has no plan outline", "give \"outline\" under \"plan\" (for every floor) or on the level");
+                    continue;
+                }
+                var outline = r.Outline ?? [];
+                var cm = r.Mass ?? (outline.Count >= 3 ? PlanOutline.Centroid(outline) : new PlanPoint(0, 0));
+                double polar = double.IsFinite(r.Polar) ? r.Polar / StandardGravity
+                    : double.IsFinite(r.Weight) && outline.Count >= 3 ? r.Weight / StandardGravity * (PlanOutline.PolarRadiusSquared(outline) + Sq(cm.X - PlanOutline.Centroid(outline).X) + Sq(cm.Y - PlanOutline.Centroid(outline).Y))
+                    : double.NaN;
+                if (i > 0 && outline.Count >= 3 && !PlanOutline.Contains(outline, cm, 1e-9 * Math.Max(1, Extent(outline))))
+                    sink.Add(r.At["massAt"] ?? r.At, $"the centre of mass of level \"{r.Id}\" lies outside its outline", "check 'massAt' and the outline's corners");
+                list.Add(new PlanLevel(i, r.Id, r.Name, r.Elevation, r.Weight, cm, outline, polar));
+            }
+            return sink.Any ? null : list;
+        }
+
+        private static double Sq(double v) => v * v;
+
+        private static double Extent(IReadOnlyList<PlanPoint> o) =>
+            Math.Max(o.Max(q => q.X) - o.Min(q => q.X), o.Max(q => q.Y) - o.Min(q => q.Y));
+
+        private List<PlanLine> ReadPlanLines(JsonFields pf, List<PlanLevel> levels)
+        {
+            var items = pf.Objects("lines", true, "add \"lines\": [{\"id\": \"A\", \"at\": [x, y], \"direction\": \"y\", \"wall\": {...}}] (docs/plan.md)");
+            var seen = new HashSet<string>(StringComparer.Ordinal);
+            var list = new List<PlanLine>();
+            var elevations = levels.Select(l => l.Elevation).ToArray();
+            double height = elevations[^1] - elevations[0];
+            double size = levels.Skip(1).Max(l => Extent(l.Outline));
+            foreach (var o in items)
+            {
+                var f = new JsonFields(o, sink);
+                var id = ReadId(f, seen, "line");
+                var at = f.Token("at") is { } t ? ReadPoint(t, "'at'") : null;
+                if (!f.Has("at")) sink.Add(o, "missing required key 'at'", $"give the line's plan position as \"at\": [x, y] in {_units.LengthSymbol}");
+                double angle = ReadDirection(f);
+                var forms = new[] { "model", "wall", "storyStiffness" }.Where(f.Has).ToList();
+                if (forms.Count != 1)
+                    sink.Add(o, forms.Count == 0 ? "the line has no structure" : $"the line has {string.Join(" and ", forms)}; give one",
+                        "give exactly one of \"model\" (a planar model, inline or a file name), \"wall\" or \"storyStiffness\"");
+                var loc = new CheckLocation(fileName, ((IJsonLineInfo)o).LineNumber, ((IJsonLineInfo)o).LinePosition, DiagnosticSink.PathOf(o));
+                if (id is null || at is null || !double.IsFinite(angle) || forms.Count != 1) { f.RejectUnknownKeys(); continue; }
+                string lid = id;
+                var units = _units;
+                StructureModel? model = null;
+                PlanLineForm form = PlanLineForm.Inline;
+                string source = fileName;
+                switch (forms[0])
+                {
+                    case "wall":
+                        form = PlanLineForm.Wall;
+                        model = ReadWall(f.OptionalObject("wall", "give \"wall\" as {\"length\": ..., \"thickness\": ..., \"material\": \"...\"}"), lid, elevations, at.Value, angle, levels);
+                        break;
+                    case "storyStiffness":
+                        form = PlanLineForm.StoryStiffness;
+                        model = ReadStoryStiffness(f.Token("storyStiffness")!, lid, elevations);
+                        break;
+                    default:
+                        var mt = f.Token("model")!;
+                        if (mt.Type == JTokenType.String) { form = PlanLineForm.File; model = ReadLineFile(mt, (string)mt!, out source); }
+                        else if (mt is JObject mo) model = new Builder(sink, fileName) { _partOfBuilding = true }.Build(mo);
+                        else sink.Add(mt, $"'model' must be a planar model {{...}} or the name of a file beside the building file, found {JsonFields.Describe(mt)}", "give the model inline or as \"line-a.json\"");
+                        break;
+                }
+                f.RejectUnknownKeys();
+                var levelNodes = model is null ? null : MatchLineLevels(model, levels, f.Object, lid, 1e-6 * Math.Max(height, 1));
+                if (!levels.Skip(1).All(l => PlanOutline.Contains(l.Outline, at.Value, 1e-6 * Math.Max(size, 1))))
+                    sink.Add(f.Token("at"), $"line \"{lid}\" stands outside the plan outline", "check 'at' against the outline's corners (a line stands on the floor it resists)");
+                if (model is not null && levelNodes is not null)
+                    list.Add(new PlanLine(lid, form, source, at.Value.X, at.Value.Y, angle, model, levelNodes, loc));
+            }
+            return list;
+        }
+
+        private double ReadDirection(JsonFields f)
+        {
+            var t = f.Token("direction");
+            const string fix = "give \"direction\": \"x\", \"y\" or an angle in degrees from plan X towards plan Y (e.g. 45)";
+            if (t is null) { sink.Add(f.Object, "missing required key 'direction'", fix); return double.NaN; }
+            if (t.Type == JTokenType.String)
+                return (string)t! switch { "x" => 0, "y" => Math.PI / 2, _ => Bad() };
+            if (t.Type is JTokenType.Integer or JTokenType.Float)
+            {
+                double deg = (double)t;
+                if (double.IsFinite(deg) && Math.Abs(deg) <= 360) return deg * Math.PI / 180;
+            }
+            return Bad();
+            double Bad() { sink.Add(t, $"unknown direction {t.ToString(Formatting.None)}", fix); return double.NaN; }
+        }
+
+        private StructureModel? ReadWall(JObject? o, string id, double[] elevations, PlanPoint at, double angle, List<PlanLevel> levels)
+        {
+            if (o is null) return null;
+            var f = new JsonFields(o, sink);
+            double length = Positive(f, "length", Quantity.Length, "wall length", $"give the wall's length in plan in {_units.LengthSymbol}");
+            double thickness = Positive(f, "thickness", Quantity.Length, "wall thickness", $"give the wall's thickness in {_units.LengthSymbol}");
+            var mat = f.RequiredString("material", "give the id of a material listed under \"materials\"");
+            double shear = f.OptionalNumber("shearFactor", 1.2, "give the shear form factor, 1.2 for a rectangle");
+            if (double.IsFinite(shear) && !(shear >= 1 && shear <= 2)) sink.Add(f.Token("shearFactor"), $"'shearFactor' {shear} is outside [1, 2]", "give 1.2 for a solid rectangle");
+            f.RejectUnknownKeys();
+            Material? material = null;
+            if (mat is not null && !_materials.TryGetValue(mat, out material))
+                sink.Add(f.Token("material"), $"unknown material \"{mat}\"", $"use one of: {string.Join(", ", _materials.Keys)}; or add it under \"materials\"");
+            if (material is null || !double.IsFinite(length) || !double.IsFinite(thickness) || !double.IsFinite(shear)) return null;
+            double tol = 1e-6 * Math.Max(1, levels.Skip(1).Max(l => Extent(l.Outline)));
+            foreach (int end in new[] { -1, 1 })
+            {
+                var p = new PlanPoint(at.X + end * length / 2 * Math.Cos(angle), at.Y + end * length / 2 * Math.Sin(angle));
+                if (!levels.Skip(1).All(l => PlanOutline.Contains(l.Outline, p, tol)))
+                    sink.Add(f.Token("length"), $"an end of wall \"{id}\" stands outside the plan outline", "shorten the wall or move its centre 'at' (the wall is centred on 'at')");
+            }
+            return PlanLineModels.Wall(id, fileName, elevations, length, thickness, material, shear, _units);
+        }
+
+        private StructureModel? ReadStoryStiffness(JToken t, string id, double[] elevations)
+        {
+            string fix = $"give one stiffness per story ({elevations.Length - 1}), story 1 first, in {_units.Label(Quantity.TranslationalStiffness)}";
+            if (t is not JArray a) { sink.Add(t, "'storyStiffness' must be an array of numbers", fix); return null; }
+            if (a.Count != elevations.Length - 1) { sink.Add(t, $"'storyStiffness' has {a.Count} values for {elevations.Length - 1} stories", fix); return null; }
+            var k = new List<double>();
+            foreach (var v in a)
+            {
+                if (v.Type is JTokenType.Integer or JTokenType.Float && (double)v > 0 && (double)v <= JsonFields.MaxMagnitude) k.Add(SI((double)v, Quantity.TranslationalStiffness));
+                else sink.Add(v, $"a story stiffness must be a number greater than zero, found {JsonFields.Describe(v)}", fix);
+            }
+            return k.Count == a.Count ? PlanLineModels.StoryStiffness(id, fileName, elevations, k, _units) : null;
+        }
+
+        private StructureModel? ReadLineFile(JToken at, string relative, out string full)
+        {
+            full = relative;
+            string folder = Path.GetDirectoryName(Path.GetFullPath(fileName)) ?? ".";
+            string candidate;
+            try { candidate = Path.GetFullPath(Path.Combine(folder, relative)); }
+            catch (Exception e) when (e is ArgumentException or NotSupportedException or PathTooLongException)
+            {
+                sink.Add(at, $"\"{relative}\" is not a usable file name", "give the name of a file in the building file's folder, e.g. \"line-a.json\"");
+                return null;
+            }
+            string rel = Path.GetRelativePath(folder, candidate);
+            if (Path.IsPathRooted(relative) || Path.IsPathRooted(rel) || rel == ".." || rel.StartsWith(".." + Path.DirectorySeparatorChar, StringComparison.Ordinal) || rel.StartsWith("../", StringComparison.Ordinal))
+            {
+                sink.Add(at, $"the line file \"{relative}\" lies outside the building file's folder", "put the line's model in the building file's folder (or below it) and give its path relative to the building file");
+                return null;
+            }
+            full = candidate;
+            if (!File.Exists(candidate))
+            {
+                sink.Add(at, $"the line file \"{relative}\" does not exist (looked for {candidate})", "check the file name; it is read relative to the building file");
+                return null;
+            }
+            try
+            {
+                string text = File.ReadAllText(candidate);
+                var root = JToken.Parse(text, new JsonLoadSettings { LineInfoHandling = LineInfoHandling.Load, DuplicatePropertyNameHandling = DuplicatePropertyNameHandling.Error, CommentHandling = CommentHandling.Ignore });
+                if (root is not JObject o) { sink.Add(at, $"the line file \"{relative}\" is not a JSON object", "give a planar model {...} in the file"); return null; }
+                var lineSink = new DiagnosticSink(candidate);
+                var m = new Builder(lineSink, candidate) { _partOfBuilding = true }.Build(o);
+                _lineFileProblems.AddRange(lineSink.Items);
+                return m;
+            }
+            catch (Exception e) when (e is JsonReaderException or IOException or UnauthorizedAccessException)
+            {
+                sink.Add(at, $"cannot read the line file \"{relative}\": {StripLocation(e.Message)}", "check that the file is readable JSON");
+                return null;
+            }
+        }
+
+        /// <summary>The line's node at each building level above the base, or null (with a diagnostic) when its levels do not match.</summary>
+        private int[]? MatchLineLevels(StructureModel m, List<PlanLevel> levels, JObject at, string id, double tol)
+        {
+            var own = m.Building.Levels;
+            string want = string.Join(", ", levels.Select(l => _units.FromSI(l.Elevation, Quantity.Length).ToString("0.###", System.Globalization.CultureInfo.InvariantCulture)));
+            string fix = $"give the line's model \"levels\" at the building's elevations ({want} {_units.LengthSymbol}), the base first";
+            if (own.Count != levels.Count || own.Zip(levels).Any(p => Math.Abs(p.First.Elevation - p.Second.Elevation) > tol))
+            {
+                string got = string.Join(", ", own.Select(l => _units.FromSI(l.Elevation, Quantity.Length).ToString("0.###", System.Globalization.CultureInfo.InvariantCulture)));
+                sink.Add(at, $"the levels of line \"{id}\" ({(own.Count == 0 ? "none" : got)}) do not match the building's levels", fix);
+                return null;
+            }
+            var nodes = new int[levels.Count - 1];
+            for (int i = 1; i < levels.Count; i++)
+            {
+                var l = own[i];
+                if (l.TiedNodes.Count > 0) nodes[i - 1] = l.TiedNodes[0];
+                else if (l.Nodes.Count == 1) nodes[i - 1] = l.Nodes[0];
+                else
+                {
+                    sink.Add(at, $"level \"{l.Id}\" of line \"{id}\" has {l.Nodes.Count} nodes and no rigid diaphragm, so the floor cannot be tied to it", "give the line's level \"diaphragm\": \"rigid\" (the default)");
+                    return null;
+                }
+            }
+            return nodes;
+        }
+
+        private List<PlanLoadCase> ReadPlanLoads(JsonFields pf, List<PlanLevel> levels, double ecc)
+        {
+            var items = pf.Objects("loads", true, "add \"loads\": [{\"id\": \"EX\", \"direction\": \"x\", \"forces\": [...]}] (docs/plan.md)");
+            var seen = new HashSet<string>(StringComparer.Ordinal);
+            var list = new List<PlanLoadCase>();
+            int floors = levels.Count - 1;
+            foreach (var o in items)
+            {
+                var f = new JsonFields(o, sink);
+                var id = ReadId(f, seen, "load");
+                string desc = f.OptionalString("description", "give a description as a string") ?? "";
+                bool hasForces = f.Has("forces"), hasPoints = f.Has("points");
+                if (hasForces == hasPoints)
+                {
+                    sink.Add(o, hasForces ? "the load has both 'forces' and 'points'" : "the load has neither 'forces' nor 'points'",
+                        "give \"direction\" with \"forces\" (one per floor, at the centres of mass) or \"points\" (forces and torques at given points)");
+                    f.RejectUnknownKeys();
+                    continue;
+                }
+                if (hasForces)
+                {
+                    string? dir = f.RequiredString("direction", "give \"direction\": \"x\" or \"y\"");
+                    if (dir is not null and not ("x" or "y")) { sink.Add(f.Token("direction"), $"unknown direction \"{dir}\"", "give \"x\" or \"y\""); dir = null; }
+                    bool accidental = f.OptionalBool("accidentalTorsion", true, "give true (the default: also the two cases with the centre of mass shifted) or false");
+                    var t = f.Token("forces")!;
+                    var forces = new List<double>();
+                    if (t is JArray a && a.Count == floors)
+                    {
+                        foreach (var v in a)
+                            if (v.Type is JTokenType.Integer or JTokenType.Float && double.IsFinite((double)v) && Math.Abs((double)v) <= JsonFields.MaxMagnitude) forces.Add(SI((double)v, Quantity.Force));
+                            else sink.Add(v, $"a floor force must be a number, found {JsonFields.Describe(v)}", $"give the force in {_units.ForceSymbol}");
+                    }
+                    else sink.Add(t, $"'forces' must be an array of {floors} numbers (one per floor, lowest first)", $"give one force per level above the base, in {_units.ForceSymbol}");
+                    f.RejectUnknownKeys();
+                    if (id is null || dir is null || forces.Count != floors) continue;
+                    list.Add(AtMass(id, id, desc, dir, 0, levels, forces, 0));
+                    if (accidental && ecc > 0)
+                    {
+                        list.Add(AtMass(id + "+ecc", id, desc, dir, +1, levels, forces, ecc));
+                        list.Add(AtMass(id + "-ecc", id, desc, dir, -1, levels, forces, ecc));
+                    }
+                }
+                else
+                {
+                    var loads = new List<PlanFloorLoad>();
+                    foreach (var po in f.Objects("points", true, "give \"points\": [{\"level\": \"...\", \"at\": [x, y], \"fx\": ..., \"fy\": ..., \"torque\": ...}]"))
+                    {
+                        var g = new JsonFields(po, sink);
+                        var lid = g.RequiredString("level", "give the id of a level above the base");
+                        var p = g.Token("at") is { } at ? ReadPoint(at, "'at'") : null;
+                        double fx = SI(g.OptionalNumber("fx", 0, $"give the force along X in {_units.ForceSymbol}"), Quantity.Force);
+                        double fy = SI(g.OptionalNumber("fy", 0, $"give the force along Y in {_units.ForceSymbol}"), Quantity.Force);
+                        double tz = SI(g.OptionalNumber("torque", 0, $"give the torque in {_units.Label(Quantity.Moment)}, counter-clockwise positive"), Quantity.Moment);
+                        g.RejectUnknownKeys();
+                        int li = levels.FindIndex(l => l.Id == lid);
+                        if (lid is not null && li < 1) { sink.Add(g.Token("level"), $"\"{lid}\" is not a level above the base", $"use one of: {string.Join(", ", levels.Skip(1).Select(l => l.Id))}"); continue; }
+                        if (li < 1) continue;
+                        var q = p ?? levels[li].CentreOfMass;
+                        loads.Add(new PlanFloorLoad(li, fx, fy, tz + q.X * fy - q.Y * fx));
+                    }
+                    f.RejectUnknownKeys();
+                    if (id is not null) list.Add(new PlanLoadCase(id, id, desc, "", 0, loads));
+                }
+            }
+            if (items.Count > 0 && list.Count == 0 && !sink.Any) sink.Add(pf.Object, "the building has no usable load", "add a load under \"loads\"");
+            return list;
+        }
+
+        /// <summary>
+        /// Floor forces along X or Y at each floor's centre of mass, shifted perpendicular to the forces by
+        /// <paramref name="sign"/>·<paramref name="ratio"/> of the floor's plan dimension perpendicular to them (ASCE 7-16
+        /// §12.8.4.2: 5 % of the dimension, each way).
+        /// </summary>
+        private static PlanLoadCase AtMass(string id, string family, string desc, string dir, int sign, List<PlanLevel> levels, List<double> forces, double ratio)
+        {
+            var loads = new List<PlanFloorLoad>();
+            for (int i = 1; i < levels.Count; i++)
+            {
+                var l = levels[i];
+                double f = forces[i - 1];
+                var c = l.CentreOfMass;
+                if (dir == "x")
+                {
+                    double e = sign * ratio * (l.Outline.Max(q => q.Y) - l.Outline.Min(q => q.Y));
+                    loads.Add(new PlanFloorLoad(i, f, 0, -(c.Y + e) * f));
+                }
+                else
+                {
+                    double e = sign * ratio * (l.Outline.Max(q => q.X) - l.Outline.Min(q => q.X));
+                    loads.Add(new PlanFloorLoad(i, 0, f, (c.X + e) * f));
+                }
+            }
+            string what = sign == 0 ? "at the centres of mass" : $"centres of mass shifted {(sign > 0 ? "+" : "−")}{ratio:0.###} of the plan dimension";
+            return new PlanLoadCase(id, family, string.IsNullOrEmpty(desc) ? what : $"{desc} ({what})", dir, sign, loads);
+        }
+    }
+}

@@ -1,0 +1,178 @@
+using System.Globalization;
+using System.Text;
+using Newtonsoft.Json;
+using Newtonsoft.Json.Linq;
+using PlaneLateral.Analysis;
+using PlaneLateral.Model;
+using PlaneLateral.Units;
+
+namespace PlaneLateral.Output;
+
+/// <summary>
+/// The results files of a building in plan (docs/plan.md), in the building's units: floor motions, outline corners,
+/// line story shears with their direct and torsional parts, centres of rigidity, torsional irregularity, corner drift
+/// checks, the checks of every solve, plan.json with everything and the caution, and each line's planar member forces,
+/// reactions and displacements. The text depends only on the input.
+/// </summary>
+public static class PlanFiles
+{
+    public static IReadOnlyList<(string Name, string Text)> Render(PlanResult r)
+    {
+        var files = new List<(string, string)>
+        {
+            ("plan.json", Json(r)),
+            ("plan-floors.csv", Floors(r)),
+            ("plan-corners.csv", Corners(r)),
+            ("plan-line-stories.csv", LineStories(r)),
+            ("plan-rigidity.csv", Rigidity(r)),
+            ("plan-torsional-irregularity.csv", Irregularity(r)),
+            ("plan-checks.csv", Checks(r)),
+        };
+        if (r.DriftChecks.Count > 0) files.Add(("plan-drift-checks.csv", Drifts(r)));
+        foreach (var line in r.Lines)
+        {
+            var own = ResultFiles.Render(line.Recovered).ToDictionary(f => f.Name, f => f.Text);
+            foreach (var name in new[] { "member-forces.csv", "reactions.csv", "displacements.csv" })
+                if (own.TryGetValue(name, out var text)) files.Add(($"line-{Safe(line.Line.Id)}-{name}", text));
+        }
+        return files;
+    }
+
+    /// <summary>A line id as a file-name part: letters, digits, '-' and '_' kept, anything else '_'.</summary>
+    public static string Safe(string id) => new(id.Select(ch => char.IsAsciiLetterOrDigit(ch) || ch is '-' or '_' ? ch : '_').ToArray());
+
+    private static string F(double v) => v.ToString("G12", CultureInfo.InvariantCulture);
+    private static string Csv(string s) => s.IndexOfAny([',', '"', '\n']) >= 0 ? "\"" + s.Replace("\"", "\"\"") + "\"" : s;
+
+    private static string Floors(PlanResult r)
+    {
+        var u = r.Plan.Units;
+        var sb = new StringBuilder($"case,level,Ux [{u.LengthSymbol}],Uy [{u.LengthSymbol}],Rz [rad],Ux locked [{u.LengthSymbol}],Uy locked [{u.LengthSymbol}]\n");
+        foreach (var c in r.Cases)
+            for (int i = 0; i < c.Motion.Count; i++)
+            {
+                var m = c.Motion[i]; var l = c.LockedMotion[i];
+                sb.Append($"{Csv(c.Case.Id)},{Csv(r.Plan.Levels[m.Level].Id)},{F(u.FromSI(m.Ux, Quantity.Length))},{F(u.FromSI(m.Uy, Quantity.Length))},{F(m.Rz)},{F(u.FromSI(l.Ux, Quantity.Length))},{F(u.FromSI(l.Uy, Quantity.Length))}\n");
+            }
+        return sb.ToString();
+    }
+
+    private static string Corners(PlanResult r)
+    {
+        var u = r.Plan.Units;
+        string len = u.LengthSymbol;
+        var sb = new StringBuilder($"case,level,corner,x [{len}],y [{len}],ux [{len}],uy [{len}],drift x [{len}],drift y [{len}]\n");
+        foreach (var c in r.Cases)
+            foreach (var v in c.Vertices)
+                sb.Append($"{Csv(c.Case.Id)},{Csv(r.Plan.Levels[v.Level].Id)},{v.Vertex + 1},{F(u.FromSI(v.At.X, Quantity.Length))},{F(u.FromSI(v.At.Y, Quantity.Length))},{F(u.FromSI(v.Ux, Quantity.Length))},{F(u.FromSI(v.Uy, Quantity.Length))},{F(u.FromSI(v.DriftX, Quantity.Length))},{F(u.FromSI(v.DriftY, Quantity.Length))}\n");
+        return sb.ToString();
+    }
+
+    private static string LineStories(PlanResult r)
+    {
+        var u = r.Plan.Units;
+        string fu = u.ForceSymbol;
+        var sb = new StringBuilder($"case,story,line,direction,shear [{fu}],share,direct [{fu}],torsional [{fu}],shear by the line's member statics [{fu}],line drift [{u.LengthSymbol}]\n");
+        foreach (var c in r.Cases)
+            foreach (var s in c.LineStories)
+            {
+                var line = r.Plan.Lines.First(l => l.Id == s.Line);
+                sb.Append($"{Csv(c.Case.Id)},{s.Story},{Csv(s.Line)},{line.DirectionLabel},{F(u.FromSI(s.Shear, Quantity.Force))},{F(s.Share)},{F(u.FromSI(s.Direct, Quantity.Force))},{F(u.FromSI(s.Torsional, Quantity.Force))},{F(u.FromSI(s.PlanarShear, Quantity.Force))},{F(u.FromSI(s.Drift, Quantity.Length))}\n");
+            }
+        return sb.ToString();
+    }
+
+    private static string Rigidity(PlanResult r)
+    {
+        var u = r.Plan.Units;
+        var sb = new StringBuilder($"loading,story,line,story stiffness alone [{u.Label(Quantity.TranslationalStiffness)}],x_R [{u.LengthSymbol}],y_R [{u.LengthSymbol}]\n");
+        foreach (var g in r.Rigidity)
+            foreach (var l in g.Lines)
+                sb.Append($"{g.Direction},{g.Story},{Csv(l.Line)},{F(u.FromSI(l.Stiffness, Quantity.TranslationalStiffness))},{F(u.FromSI(g.XR, Quantity.Length))},{F(u.FromSI(g.YR, Quantity.Length))}\n");
+        return sb.ToString();
+    }
+
+    private static string Irregularity(PlanResult r)
+    {
+        var u = r.Plan.Units;
+        string len = u.LengthSymbol;
+        var sb = new StringBuilder($"loading,story,governing case,with accidental torsion,max corner drift [{len}],average of the extreme corners [{len}],ratio,type (ASCE 7-16 Table 12.3-1),max corner displacement [{len}],average displacement [{len}],A_x (eq. 12.8-14)\n");
+        foreach (var t in r.Irregularity)
+            sb.Append($"{t.Direction},{t.Story},{Csv(t.Case)},{(t.WithAccidental ? "yes" : "no")},{F(u.FromSI(t.MaxDrift, Quantity.Length))},{F(u.FromSI(t.AverageDrift, Quantity.Length))},{F(t.Ratio)},{t.Type},{F(u.FromSI(t.MaxDisplacement, Quantity.Length))},{F(u.FromSI(t.AverageDisplacement, Quantity.Length))},{F(t.Ax)}\n");
+        return sb.ToString();
+    }
+
+    private static string Drifts(PlanResult r)
+    {
+        var u = r.Plan.Units;
+        string len = u.LengthSymbol;
+        var sb = new StringBuilder($"case,story,corner,x [{len}],y [{len}],elastic drift [{len}],amplified drift [{len}],height [{len}],ratio,allowed,result\n");
+        foreach (var d in r.DriftChecks)
+            sb.Append($"{Csv(d.Case)},{d.Story},{d.Vertex + 1},{F(u.FromSI(d.At.X, Quantity.Length))},{F(u.FromSI(d.At.Y, Quantity.Length))},{F(u.FromSI(d.Drift, Quantity.Length))},{F(u.FromSI(d.Amplified, Quantity.Length))},{F(u.FromSI(d.Height, Quantity.Length))},{F(d.Ratio)},{F(d.Allowed)},{(d.Within ? "within" : "exceeds")}\n");
+        return sb.ToString();
+    }
+
+    private static string Checks(PlanResult r)
+    {
+        var u = r.Plan.Units;
+        string fu = u.ForceSymbol, mu = u.Label(Quantity.Moment);
+        var sb = new StringBuilder($"what,backward error,applied Fx [{fu}],applied Fy [{fu}],applied Mz about origin [{mu}],lines Fx [{fu}],lines Fy [{fu}],lines Mz about origin [{mu}],relative imbalance\n");
+        foreach (var c in r.Cases)
+        {
+            var e = c.Equilibrium;
+            sb.Append($"case {Csv(c.Case.Id)},{F(c.BackwardError)},{F(u.FromSI(e.AppliedFx, Quantity.Force))},{F(u.FromSI(e.AppliedFy, Quantity.Force))},{F(u.FromSI(e.AppliedMz, Quantity.Moment))},{F(u.FromSI(e.LinesFx, Quantity.Force))},{F(u.FromSI(e.LinesFy, Quantity.Force))},{F(u.FromSI(e.LinesMz, Quantity.Moment))},{F(e.RelativeError)}\n");
+        }
+        foreach (var l in r.Lines)
+        {
+            double worst = l.Recovered.Cases.Count == 0 ? 0 : l.Recovered.Cases.Max(c => c.BackwardError);
+            sb.Append($"condensation of line {Csv(l.Line.Id)},{F(l.CondensationBackwardError)},,,,,,,\n");
+            sb.Append($"recovery of line {Csv(l.Line.Id)},{F(worst)},,,,,,,{F(l.RecoveryError)}\n");
+        }
+        return sb.ToString();
+    }
+
+    private static string Json(PlanResult r)
+    {
+        var u = r.Plan.Units;
+        double L(double v) => u.FromSI(v, Quantity.Length);
+        double Fo(double v) => u.FromSI(v, Quantity.Force);
+        var root = new JObject
+        {
+            ["program"] = $"PlaneLateral {ResultFiles.Version}",
+            ["caution"] = ResultFiles.Caution,
+            ["title"] = r.Plan.Title,
+            ["units"] = new JObject { ["force"] = u.ForceSymbol, ["length"] = u.LengthSymbol },
+            ["method"] = "each line condensed exactly on its level lateral DOFs (one factorisation per line), mapped to the floors' (Ux, Uy, Rz) and assembled; lines recovered under the level forces",
+            ["accidentalEccentricity"] = r.Plan.EccentricityRatio,
+            ["levels"] = new JArray(r.Plan.Levels.Select(l => new JObject
+            {
+                ["id"] = l.Id, ["elevation"] = L(l.Elevation), ["weight"] = double.IsFinite(l.Weight) ? Fo(l.Weight) : null,
+                ["massAt"] = new JArray(L(l.CentreOfMass.X), L(l.CentreOfMass.Y)),
+            })),
+            ["lines"] = new JArray(r.Lines.Select(l => new JObject
+            {
+                ["id"] = l.Line.Id, ["form"] = l.Line.Form.ToString(), ["at"] = new JArray(L(l.Line.X0), L(l.Line.Y0)),
+                ["direction"] = l.Line.DirectionLabel, ["condensationBackwardError"] = l.CondensationBackwardError,
+                ["flexibilitySymmetryError"] = l.SymmetryError, ["recoveryError"] = l.RecoveryError,
+            })),
+            ["cases"] = new JArray(r.Cases.Select(c => new JObject
+            {
+                ["id"] = c.Case.Id, ["description"] = c.Case.Description, ["backwardError"] = c.BackwardError,
+                ["equilibriumError"] = c.Equilibrium.RelativeError,
+                ["floors"] = new JArray(c.Motion.Select(m => new JObject { ["level"] = r.Plan.Levels[m.Level].Id, ["Ux"] = L(m.Ux), ["Uy"] = L(m.Uy), ["Rz"] = m.Rz })),
+                ["lineStories"] = new JArray(c.LineStories.Select(s => new JObject
+                {
+                    ["story"] = s.Story, ["line"] = s.Line, ["shear"] = Fo(s.Shear), ["share"] = double.IsFinite(s.Share) ? s.Share : null,
+                    ["direct"] = Fo(s.Direct), ["torsional"] = Fo(s.Torsional),
+                })),
+            })),
+            ["rigidity"] = new JArray(r.Rigidity.Select(g => new JObject { ["loading"] = g.Direction, ["story"] = g.Story, ["xR"] = L(g.XR), ["yR"] = L(g.YR) })),
+            ["torsionalIrregularity"] = new JArray(r.Irregularity.Select(t => new JObject
+            {
+                ["loading"] = t.Direction, ["story"] = t.Story, ["case"] = t.Case, ["ratio"] = double.IsFinite(t.Ratio) ? t.Ratio : null, ["type"] = t.Type,
+                ["Ax"] = double.IsFinite(t.Ax) ? t.Ax : null, ["withAccidentalTorsion"] = t.WithAccidental,
+            })),
+        };
+        return root.ToString(Formatting.Indented) + "\n";
+    }
+}
