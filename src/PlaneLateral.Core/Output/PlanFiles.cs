@@ -42,7 +42,7 @@ public static class PlanFiles
     public static string Safe(string id) => new(id.Select(ch => char.IsAsciiLetterOrDigit(ch) || ch is '-' or '_' ? ch : '_').ToArray());
 
     private static string F(double v) => v.ToString("G12", CultureInfo.InvariantCulture);
-    private static string Csv(string s) => s.IndexOfAny([',', '"', '\n']) >= 0 ? "\"" + s.Replace("\"", "\"\"") + "\"" : s;
+    private static string Csv(string s) => CsvText.Cell(s);   // the tool's one CSV escaper (quoting, control characters, formula-like text)
 
     private static string Floors(PlanResult r)
     {
