@@ -38,8 +38,10 @@ public sealed class PlausibilityTests : IDisposable
     public static TheoryData<string> ShippedModels()
     {
         var data = new TheoryData<string>();
+        // Planar models only: building files (docs/plan.md) are read by the plan reader, which has no plausibility
+        // warnings yet (an open item of the plan work).
         foreach (var f in Directory.GetFiles(Path.Combine(StrictInputTests.Repo(), "models"), "*.json", SearchOption.AllDirectories).Order(StringComparer.Ordinal))
-            data.Add(Path.GetRelativePath(StrictInputTests.Repo(), f));
+            if (!ModelReader.IsPlanFile(f)) data.Add(Path.GetRelativePath(StrictInputTests.Repo(), f));
         return data;
     }
 
