@@ -16,9 +16,14 @@ public static partial class ModelReader
     /// </summary>
     public static bool IsPlanFile(string path)
     {
+        // Read as every model is read (ModelFile: regular files only, bounded), never by an open stream: a device such
+        // as /dev/zero would be read for ever and a named pipe would block before the planar reader could refuse it.
+        string text;
+        try { text = ModelFile.ReadText(path); }
+        catch (ModelInputException) { return false; }
         try
         {
-            using var reader = new JsonTextReader(new StreamReader(path));
+            using var reader = new JsonTextReader(new StringReader(text));
             if (!reader.Read() || reader.TokenType != JsonToken.StartObject) return false;
             while (reader.Read())
             {

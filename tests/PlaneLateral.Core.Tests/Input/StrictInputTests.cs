@@ -194,23 +194,24 @@ public sealed class StrictInputTests : IDisposable
     }
 
     [Fact]
-    public void ADeviceIsRefusedBeforeItIsRead()
+    public async Task ADeviceIsRefusedBeforeItIsRead()
     {
         if (!File.Exists("/dev/zero")) return;   // a Unix device; Windows has none at that path
-        // /dev/zero reports a length of 0 and never ends: read, it grew to 4 GB before (exit 134).
-        var (code, err) = Validate("/dev/zero");
+        // /dev/zero reports a length of 0 and never ends: read, it grew to 4 GB before (exit 134), and a check that
+        // opened it to look for a building's "plan" key once spun on it for ever. A hang guard, not a timing.
+        var (code, err) = await Task.Run(() => Validate("/dev/zero")).WaitAsync(TimeSpan.FromSeconds(60));
         Assert.Equal(ExitCodes.BadModel, code);
         Assert.Contains("this is a character device, not a regular file", err);
     }
 
     [Fact]
-    public void ASocketIsRefusedBeforeItIsRead()
+    public async Task ASocketIsRefusedBeforeItIsRead()
     {
         if (OperatingSystem.IsWindows()) return;
         string path = Path.Combine(_dir, "model.sock");
         using var s = new Socket(AddressFamily.Unix, SocketType.Stream, ProtocolType.Unspecified);
         s.Bind(new UnixDomainSocketEndPoint(path));
-        var (code, err) = Validate(path);
+        var (code, err) = await Task.Run(() => Validate(path)).WaitAsync(TimeSpan.FromSeconds(60));   // hang guard
         Assert.Equal(ExitCodes.BadModel, code);
         Assert.Contains("this is a socket, not a regular file", err);
     }
@@ -232,6 +233,11 @@ public sealed class StrictInputTests : IDisposable
         var (code, err) = await Task.Run(() => Validate(path)).WaitAsync(TimeSpan.FromSeconds(60));
         Assert.Equal(ExitCodes.BadModel, code);
         Assert.Contains("this is a named pipe (FIFO), not a regular file", err);
+        // solve looks at the file first to tell a building in plan from a planar model: that look must not block either.
+        var o = new StringWriter(); var e = new StringWriter();
+        int solveCode = await Task.Run(() => CliApp.Run(["solve", path, "--out", Path.Combine(_dir, "out")], o, e)).WaitAsync(TimeSpan.FromSeconds(60));
+        Assert.Equal(ExitCodes.BadModel, solveCode);
+        Assert.Contains("this is a named pipe (FIFO), not a regular file", e.ToString());
     }
 
     /// <summary>A stream that never ends, as a device or a growing file may be.</summary>
