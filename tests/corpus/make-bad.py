@@ -179,6 +179,16 @@ add("fuzz-panel-far-from-origin", "fuzz finding", "so far from the origin that t
     wall_panel(lambda p: p.update({"x": 1e15})))
 add("panel-level-a-hair-above-door", "levels", "floor level 1 (y = 2.2000001 m) and the top of opening \"door\" (y = 2.2 m) are only",
     "$.panels[0].floorLevels[0]", wall_panel(lambda p: p.update({"floorLevels": [2.2000001], "storyForces": [{"case": "wind", "level": "top", "fx": 60}]})))
+def linked_wall(change):
+    here = os.path.dirname(os.path.abspath(__file__))
+    with open(os.path.join(here, "..", "..", "models", "panels", "wall-in-frame.json"), encoding="utf-8") as f:
+        d = json.load(f)
+    change(d)
+    return d
+# Found by the bounded fuzzing in CI: a seismic block that is not an object, in a model with linked panels, crashed the
+# link check (it looked for "secondOrder" inside a number) instead of being reported at its key.
+add("fuzz-seismic-not-an-object-beside-links", "fuzz finding", "'seismic' must be an object", "$.seismic",
+    linked_wall(lambda d: d.update({"seismic": 7})))
 add("panel-max-aspect-too-large", "magnitude", "the largest aspect ratio 1000000 is above 100", "$.panels[0].mesh.maxAspect",
     wall_panel(lambda p: p["mesh"].update({"maxAspect": 1e6})))
 # --- lenient JSON, refused since the reader is strict (RFC 8259 plus comments; Model/StrictJson.cs) ---

@@ -189,6 +189,7 @@ internal sealed class JsonFields
 internal sealed class DiagnosticSink(string file)
 {
     private readonly List<ModelDiagnostic> _items = [];
+    private readonly HashSet<ModelDiagnostic> _seen = [];
 
     public string File { get; } = file;
     public IReadOnlyList<ModelDiagnostic> Items => _items;
@@ -198,7 +199,8 @@ internal sealed class DiagnosticSink(string file)
     {
         int line = 0, col = 0;
         if (at is IJsonLineInfo li && li.HasLineInfo()) { line = li.LineNumber; col = li.LinePosition; }
-        _items.Add(new ModelDiagnostic(File, line, col, at is null ? "" : PathOf(at), problem, fix));
+        var d = new ModelDiagnostic(File, line, col, at is null ? "" : PathOf(at), problem, fix);
+        if (_seen.Add(d)) _items.Add(d);   // a key read by two steps (e.g. "seismic") is reported once
     }
 
     /// <summary>JSON path in "$.members[3].section" form.</summary>

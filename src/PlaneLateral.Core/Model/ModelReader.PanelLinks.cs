@@ -116,7 +116,7 @@ public static partial class ModelReader
         /// </summary>
         private void CheckPanelLinkSupports(IReadOnlyList<Support> supports, JToken? seismic)
         {
-            if (seismic?["secondOrder"] is { } secondOrder && _panelLinks.Count > 0)
+            if (seismic is JObject block && block["secondOrder"] is { } secondOrder && _panelLinks.Count > 0)   // a seismic block that is not an object is reported by its own reader
                 sink.Add(secondOrder, "the seismic block's second-order (P-delta) check cannot yet be used with panels linked to the frame: its geometric stiffness and the story's vertical load see the members only",
                     "remove \"secondOrder\" (the periods and story forces include the panels), or remove the panels' \"links\"");
             foreach (var (panel, link, at) in _panelLinks)
