@@ -42,40 +42,12 @@ public static partial class ModelReader
 
     /// <summary>Reads and validates a building file; its line files are read from its own folder.</summary>
     /// <exception cref="ModelInputException">Every problem found, in this file and in its line files.</exception>
-    public static BuildingPlan ReadPlanFile(string path)
-    {
-        string text;
-        try
-        {
-            if (ModelLimits.CheckFileSize(path, new FileInfo(path).Length) is { } tooLarge) throw new ModelInputException([tooLarge]);
-            text = File.ReadAllText(path);
-        }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException or NotSupportedException or ArgumentException)
-        {
-            throw new ModelInputException([new ModelDiagnostic(path, 0, 0, "", $"cannot read the file: {e.Message}", "check the path and that the file is readable")]);
-        }
-        return ParsePlan(text, path);
-    }
+    public static BuildingPlan ReadPlanFile(string path) => ParsePlan(ModelFile.ReadText(path), path);   // regular files only, bounded
 
     /// <summary>Reads a building from JSON text; <paramref name="fileName"/> names it in messages and fixes the folder line files are read from.</summary>
     public static BuildingPlan ParsePlan(string json, string fileName)
     {
-        JToken root;
-        try
-        {
-            using var reader = new JsonTextReader(new StringReader(json)) { DateParseHandling = DateParseHandling.None, FloatParseHandling = FloatParseHandling.Double };
-            root = JToken.ReadFrom(reader, new JsonLoadSettings
-            {
-                LineInfoHandling = LineInfoHandling.Load,
-                DuplicatePropertyNameHandling = DuplicatePropertyNameHandling.Error,
-                CommentHandling = CommentHandling.Ignore,
-            });
-        }
-        catch (JsonReaderException e)
-        {
-            throw new ModelInputException([new ModelDiagnostic(fileName, e.LineNumber, e.LinePosition, "$",
-                "the file is not valid JSON: " + StripLocation(e.Message), "correct the JSON syntax at that place (a missing comma, quote or bracket is the usual cause)")]);
-        }
+        var root = ReadTree(json, fileName);   // strict JSON, as every model (ModelReader.cs)
         var sink = new DiagnosticSink(fileName);
         if (root is not JObject obj)
         {
@@ -258,7 +230,7 @@ public static partial class ModelReader
                     default:
                         var mt = f.Token("model")!;
                         if (mt.Type == JTokenType.String) { form = PlanLineForm.File; model = ReadLineFile(mt, (string)mt!, out source); }
-                        else if (mt is JObject mo) model = new Builder(sink, fileName) { _partOfBuilding = true }.Build(mo);
+                        else if (mt is JObject mo) model = ModelLimits.CheckCounts(mo, sink) ? null : new Builder(sink, fileName) { _partOfBuilding = true }.Build(mo);
                         else sink.Add(mt, $"'model' must be a planar model {{...}} or the name of a file beside the building file, found {JsonFields.Describe(mt)}", "give the model inline or as \"line-a.json\"");
                         break;
                 }
@@ -349,21 +321,20 @@ public static partial class ModelReader
                 sink.Add(at, $"the line file \"{relative}\" does not exist (looked for {candidate})", "check the file name; it is read relative to the building file");
                 return null;
             }
-            try
+            JToken root;
+            try { root = ReadTree(ModelFile.ReadText(candidate), candidate); }   // as every model: regular file, bounded, strict JSON
+            catch (ModelInputException e)
             {
-                string text = File.ReadAllText(candidate);
-                var root = JToken.Parse(text, new JsonLoadSettings { LineInfoHandling = LineInfoHandling.Load, DuplicatePropertyNameHandling = DuplicatePropertyNameHandling.Error, CommentHandling = CommentHandling.Ignore });
-                if (root is not JObject o) { sink.Add(at, $"the line file \"{relative}\" is not a JSON object", "give a planar model {...} in the file"); return null; }
-                var lineSink = new DiagnosticSink(candidate);
-                var m = new Builder(lineSink, candidate) { _partOfBuilding = true }.Build(o);
-                _lineFileProblems.AddRange(lineSink.Items);
-                return m;
-            }
-            catch (Exception e) when (e is JsonReaderException or IOException or UnauthorizedAccessException)
-            {
-                sink.Add(at, $"cannot read the line file \"{relative}\": {StripLocation(e.Message)}", "check that the file is readable JSON");
+                sink.Add(at, $"cannot read the line file \"{relative}\" (its problems are listed under its own name)", "correct the line file");
+                _lineFileProblems.AddRange(e.Diagnostics);
                 return null;
             }
+            if (root is not JObject o) { sink.Add(at, $"the line file \"{relative}\" is not a JSON object", "give a planar model {...} in the file"); return null; }
+            var lineSink = new DiagnosticSink(candidate);
+            if (ModelLimits.CheckCounts(o, lineSink)) { _lineFileProblems.AddRange(lineSink.Items); return null; }
+            var m = new Builder(lineSink, candidate) { _partOfBuilding = true }.Build(o);
+            _lineFileProblems.AddRange(lineSink.Items);
+            return m;
         }
 
         /// <summary>The line's node at each building level above the base, or null (with a diagnostic) when its levels do not match.</summary>

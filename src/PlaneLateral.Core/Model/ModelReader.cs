@@ -25,8 +25,30 @@ public static partial class ModelReader
     /// <summary>Reads and validates a model from JSON text; <paramref name="fileName"/> is used in messages.</summary>
     public static StructureModel Parse(string json, string fileName = "<model>")
     {
+        var root = ReadTree(json, fileName);
+        var sink = new DiagnosticSink(fileName);
+        if (root is not JObject obj)
+        {
+            sink.Add(root, $"the model must be a JSON object {{...}}, found {JsonFields.Describe(root)}", "wrap the model in { } with keys such as \"formatVersion\", \"nodes\" and \"members\"");
+            throw new ModelInputException(sink.Items);
+        }
+
+        if (ModelLimits.CheckCounts(obj, sink)) throw new ModelInputException(sink.Items);
+        SuggestBudget.Reset();
+        var model = new Builder(sink, fileName).Build(obj);
+        if (sink.Any) throw new ModelInputException(sink.Items);
+        return model! with { Warnings = Plausibility.Check(model, obj, fileName) };
+    }
+
+    /// <summary>
+    /// The JSON tree of a model text (a planar model, a building file or a line file), with line information: at most
+    /// <see cref="ModelLimits.MaxFileBytes"/>, RFC 8259 only plus the comments the docs allow (the lenient forms the tree
+    /// builder would accept are refused first, StrictJson.cs), no text after the top-level value, no duplicate keys.
+    /// </summary>
+    /// <exception cref="ModelInputException">The text is too large or not valid JSON, with line, column and path.</exception>
+    internal static JToken ReadTree(string json, string fileName)
+    {
         if (ModelLimits.CheckFileSize(fileName, json.Length) is { } tooLarge) throw new ModelInputException([tooLarge]);
-        // RFC 8259 only (plus comments): the forms the tree builder would accept leniently are refused first (StrictJson.cs).
         var strict = StrictJson.Check(json);
         if (strict is { Lenient: true }) throw NotJson(fileName, strict);
         JToken root;
@@ -48,20 +70,8 @@ public static partial class ModelReader
             throw new ModelInputException([new ModelDiagnostic(fileName, e.LineNumber, e.LinePosition, path,
                 "the file is not valid JSON: " + StripLocation(e.Message), "correct the JSON syntax at that place (a missing comma, quote or bracket is the usual cause)")]);
         }
-
         if (strict is not null) throw NotJson(fileName, strict);
-        var sink = new DiagnosticSink(fileName);
-        if (root is not JObject obj)
-        {
-            sink.Add(root, $"the model must be a JSON object {{...}}, found {JsonFields.Describe(root)}", "wrap the model in { } with keys such as \"formatVersion\", \"nodes\" and \"members\"");
-            throw new ModelInputException(sink.Items);
-        }
-
-        if (ModelLimits.CheckCounts(obj, sink)) throw new ModelInputException(sink.Items);
-        SuggestBudget.Reset();
-        var model = new Builder(sink, fileName).Build(obj);
-        if (sink.Any) throw new ModelInputException(sink.Items);
-        return model! with { Warnings = Plausibility.Check(model, obj, fileName) };
+        return root;
     }
 
     private static ModelInputException NotJson(string fileName, StrictJson.Problem p) =>

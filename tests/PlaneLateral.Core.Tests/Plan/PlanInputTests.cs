@@ -110,6 +110,44 @@ public sealed class PlanInputTests : IDisposable
     }
 
     [Fact]
+    public void ABuildingFileIsReadAsStrictlyAsAPlanarModel()
+    {
+        // A zero-padded number is octal to a lenient reader (0144 = 100): refused in a building file as in a planar model
+        // (RFC 8259 §6 allows no leading zeros; docs/hardening.md "Strict JSON").
+        string text = Text(PlanBuilding([Wall("A", 0, 20, "y", 16), Wall("B", 60, 20, "y", 16), Wall("C", 30, 0, "x", 16)], LoadY, [0, 12], Box));
+        string padded = text.Replace("\"length\": 16.0", "\"length\": 016", StringComparison.Ordinal).Replace("\"length\": 16", "\"length\": 016", StringComparison.Ordinal);
+        Assert.NotEqual(text, padded);
+        var e = Assert.Throws<ModelInputException>(() => ModelReader.ParsePlan(padded, "building.json"));
+        Assert.Contains(e.Diagnostics, d => d.Problem.Contains("not valid JSON") && d.Line > 0);
+        // A trailing comma in a line file is refused there, under the line file's own name.
+        File.WriteAllText(Path.Combine(_dir, "wall-a.json"), PlanarWall("A", 0, 16, [0, 12]).ToString().TrimEnd().TrimEnd('}') + ",}");
+        string file = Path.Combine(_dir, "building.json");
+        File.WriteAllText(file, Text(PlanBuilding([new { id = "A", at = new[] { 0.0, 20 }, direction = "y", model = "wall-a.json" }, Wall("B", 60, 20, "y", 16), Wall("C", 30, 0, "x", 16)], LoadY, [0, 12], Box)));
+        var e2 = Assert.Throws<ModelInputException>(() => ModelReader.ReadPlanFile(file));
+        Assert.Contains(e2.Diagnostics, d => d.File.EndsWith("wall-a.json", StringComparison.Ordinal) && d.Problem.Contains("not valid JSON"));
+        Assert.Contains(e2.Diagnostics, d => d.JsonPath == "$.plan.lines[0].model");
+    }
+
+    [Fact]
+    public async Task ALineFileThatIsANamedPipeIsRefusedWithoutBlocking()
+    {
+        if (OperatingSystem.IsWindows()) return;
+        string fifo = Path.Combine(_dir, "wall-a.json");
+        try
+        {
+            using var p = System.Diagnostics.Process.Start(new System.Diagnostics.ProcessStartInfo("mkfifo", [fifo]) { UseShellExecute = false });
+            p!.WaitForExit();
+            if (p.ExitCode != 0) return;
+        }
+        catch (System.ComponentModel.Win32Exception) { return; }   // no mkfifo on this machine
+        string file = Path.Combine(_dir, "building.json");
+        File.WriteAllText(file, Text(PlanBuilding([new { id = "A", at = new[] { 0.0, 20 }, direction = "y", model = "wall-a.json" }, Wall("B", 60, 20, "y", 16), Wall("C", 30, 0, "x", 16)], LoadY, [0, 12], Box)));
+        // A hang guard, not a timing: opened for reading, a named pipe waits for a writer for ever.
+        var e = await Task.Run(() => Assert.Throws<ModelInputException>(() => ModelReader.ReadPlanFile(file))).WaitAsync(TimeSpan.FromSeconds(60));
+        Assert.Contains(e.Diagnostics, d => d.Problem.Contains("named pipe (FIFO)"));
+    }
+
+    [Fact]
     public void OnlyBuildingFilesAreTakenForBuildings()
     {
         Assert.True(ModelReader.IsPlanFile(Input.RepositoryFiles.ModelPath("demo-building.json")));
