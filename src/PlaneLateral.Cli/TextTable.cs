@@ -44,7 +44,8 @@ internal sealed class TextTable(params string[] headers)
     public static string Num(double v)
     {
         if (v == 0) return "0";
-        if (!double.IsFinite(v)) return v.ToString(CultureInfo.InvariantCulture);
+        if (double.IsNaN(v)) return "n/a";   // undefined (e.g. a centre of rigidity of a story without shear), never "NaN"
+        if (!double.IsFinite(v)) return v > 0 ? "inf" : "-inf";
         double a = Math.Abs(v);
         if (a >= 1e-3 && a < 1e7)
         {

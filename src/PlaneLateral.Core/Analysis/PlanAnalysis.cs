@@ -315,7 +315,8 @@ public static class PlanAnalysis
             for (int s = 1; s <= n; s++)
             {
                 double v = Above(pattern, s);
-                var lines = plan.Lines.Select((line, i) => new PlanLineStiffness(line.Id, line.X0, line.Y0, line.Angle, v / drifts[i][s - 1])).ToList();
+                // A story the pattern leaves without shear has no stiffness under it (0 / drift is not the line's stiffness): NaN, written empty.
+                var lines = plan.Lines.Select((line, i) => new PlanLineStiffness(line.Id, line.X0, line.Y0, line.Angle, v != 0 ? v / drifts[i][s - 1] : double.NaN)).ToList();
                 var (xr, yr) = CentreOfRigidity(plan.Lines, lines.Select(l => l.Stiffness).ToList());
                 list.Add(new PlanStoryRigidity(dir, s, lines, xr, yr));
             }

@@ -41,7 +41,8 @@ public static class PlanFiles
     /// <summary>A line id as a file-name part: letters, digits, '-' and '_' kept, anything else '_'.</summary>
     public static string Safe(string id) => new(id.Select(ch => char.IsAsciiLetterOrDigit(ch) || ch is '-' or '_' ? ch : '_').ToArray());
 
-    private static string F(double v) => v.ToString("G12", CultureInfo.InvariantCulture);
+    /// <summary>A number cell; empty where the number is undefined (a share of a nil story shear), as plan.json writes null.</summary>
+    private static string F(double v) => double.IsFinite(v) ? v.ToString("G12", CultureInfo.InvariantCulture) : "";
     private static string Csv(string s) => CsvText.Cell(s);   // the tool's one CSV escaper (quoting, control characters, formula-like text)
 
     private static string Floors(PlanResult r)
@@ -134,8 +135,8 @@ public static class PlanFiles
     private static string Json(PlanResult r)
     {
         var u = r.Plan.Units;
-        double L(double v) => u.FromSI(v, Quantity.Length);
-        double Fo(double v) => u.FromSI(v, Quantity.Force);
+        double? L(double v) => double.IsFinite(v) ? u.FromSI(v, Quantity.Length) : null;   // null where undefined, never "NaN"
+        double? Fo(double v) => double.IsFinite(v) ? u.FromSI(v, Quantity.Force) : null;
         var root = new JObject
         {
             ["program"] = $"PlaneLateral {ResultFiles.Version}",

@@ -148,6 +148,20 @@ public sealed class PlanInputTests : IDisposable
     }
 
     [Fact]
+    public void AStoryWithNoShearWritesAnEmptyShareNotNaN()
+    {
+        // Found by fuzzing: a load with nothing at the top level leaves the top story without shear, so each line's share
+        // (its shear over the story shear) is undefined; the CSV wrote "NaN". Derived: story shear = load above the cut = 0.
+        var r = Solve(PlanBuilding([Wall("A", 0, 20, "y", 16), Wall("B", 60, 20, "y", 16), Wall("C", 30, 0, "x", 16)],
+            [new { id = "EY", direction = "y", forces = new[] { 50.0, 0 } }], [0, 12, 24], Box));
+        Assert.Contains(r.Cases[0].LineStories, s => s.Story == 2 && double.IsNaN(s.Share));
+        var files = PlaneLateral.Output.PlanFiles.Render(r);
+        Assert.All(files, f => Assert.DoesNotContain("NaN", f.Text));
+        string csv = files.Single(f => f.Name == "plan-line-stories.csv").Text;
+        Assert.Contains(csv.Split('\n'), row => row.StartsWith("EY,2,A,", StringComparison.Ordinal) && row.Split(',')[5] == "");
+    }
+
+    [Fact]
     public void OnlyBuildingFilesAreTakenForBuildings()
     {
         Assert.True(ModelReader.IsPlanFile(Input.RepositoryFiles.ModelPath("demo-building.json")));
