@@ -18,6 +18,8 @@ internal static class PlanFloorReport
         string Fo(double v) => double.IsFinite(v) ? TextTable.Num(u.FromSI(v, Quantity.Force)) : "-";
         var sb = new StringBuilder();
         sb.Append($"\nFloors in plan: {string.Join(", ", d.Kinds.Select((k, i) => $"{p.Levels[i + 1].Id} {PlanFloor.Word(k)}"))}\n");
+        if (d.Kinds.Any(k => k != FloorKind.Rigid))
+            sb.Append("  The tables above are of the floors as given; the hand split beside them assumes rigid floors.\n");
         foreach (var note in d.Notes) sb.Append($"  {note}\n");
 
         if (d.Flexibility.Count > 0)

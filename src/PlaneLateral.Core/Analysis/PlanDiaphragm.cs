@@ -55,7 +55,7 @@ public static partial class PlanDiaphragm
             else lay.Rigid[l] = -1;
             if (kind != FloorKind.Rigid)
             {
-                var floor = kind == FloorKind.SemiRigid ? plan.FloorOf(l + 1) : null;
+                var floor = plan.FloorOf(l + 1);   // its openings shape the loads of a flexible floor too; its section is used only when semi-rigid
                 var bx = FloorBeam.Build(level, floor, false, lines.Where(x => x.Cos != 0).Select(x => x.Y0));
                 var by = FloorBeam.Build(level, floor, true, lines.Where(x => x.Sin != 0).Select(x => x.X0));
                 foreach (var b in new[] { bx, by })

@@ -57,7 +57,7 @@ public static partial class PlanDiaphragm
         else notes.Add("semi-rigid: no floor gives its section (thickness and material, or E and G)");
         Solved? flex = null;
         if (plan.Lines.FirstOrDefault(l => l.Cos != 0 && l.Sin != 0) is { } slanted) notes.Add($"flexible: line {slanted.Id} stands at an angle (the tributary split needs lines along X or Y)");
-        else if (plan.Lines.Count(l => l.Cos != 0) < 2 || plan.Lines.Count(l => l.Sin != 0) < 2) notes.Add("flexible: fewer than two lines in a direction");
+        else if (Positions(plan, true) < 2 || Positions(plan, false) < 2) notes.Add("flexible: fewer than two line positions in a direction");
         else flex = Try("flexible", Enumerable.Repeat(FloorKind.Flexible, n).ToArray());
 
         var variants = new[] { rigid, semi, flex };
@@ -74,6 +74,10 @@ public static partial class PlanDiaphragm
         var tests = semi is null ? [] : Flexibility(semi);
         return new DiaphragmStudy(KindsAsGiven(plan), VariantNames.Where((_, i) => variants[i] is not null).ToList(), notes, tests, envelope);
     }
+
+    /// <summary>How many different positions along the span the lines that carry loads along Y (<paramref name="alongX"/>) or X stand at.</summary>
+    public static int Positions(BuildingPlan plan, bool alongX) =>
+        plan.Lines.Where(l => alongX ? l.Sin != 0 : l.Cos != 0).Select(l => Math.Round((alongX ? l.X0 : l.Y0) / Math.Max(plan.Size, 1e-9), 9)).Distinct().Count();
 
     /// <summary>MDD, ADVE and their ratio per semi-rigid floor, direction and span, under each direction's case at the centres of mass.</summary>
     internal static List<FloorFlexibilityTest> Flexibility(Solved s)

@@ -83,9 +83,11 @@ public static partial class ModelReader
             if (kind == FloorKind.Flexible && lines.FirstOrDefault(l => l.Cos != 0 && l.Sin != 0) is { } slanted)
                 sink.Add(o, $"line \"{slanted.Id}\" stands at an angle under the flexible floor of level \"{levelId}\"", "a flexible floor shares its load by simple spans between lines along X or Y: turn the line to \"x\" or \"y\", or make the floor rigid or semi-rigid");
             string what = kind == FloorKind.Rigid ? "the floor's section (for the semi-rigid alternative)" : $"a {PlanFloor.Word(kind)} floor";
-            foreach (var (dir, count) in new[] { ("x", lines.Count(l => l.Cos != 0)), ("y", lines.Count(l => l.Sin != 0)) })
+            // Lines at one position count once: a floor spans between two different positions at least.
+            int Count(bool alongY) => lines.Where(l => alongY ? l.Sin != 0 : l.Cos != 0).Select(l => Math.Round(alongY ? l.X0 : l.Y0, 6)).Distinct().Count();
+            foreach (var (dir, count) in new[] { ("x", Count(false)), ("y", Count(true)) })
                 if (count < 2)
-                    sink.Add(o, $"{what} of level \"{levelId}\" has {count} line{(count == 1 ? "" : "s")} along {dir}; it spans between at least two",
+                    sink.Add(o, $"{what} of level \"{levelId}\" has {count} line{(count == 1 ? "" : "s")} along {dir} (by position); it spans between at least two",
                         $"add a line along {dir}, or make the floor rigid{(hasSection && kind == FloorKind.Rigid ? " without a section" : "")} (a rigid floor turns onto the other lines)");
         }
 

@@ -238,6 +238,8 @@ public sealed class DiaphragmTests
         object[] oneAlongY = [Springs("A", 0, 20, "y", 50), Springs("S", 60, 0, "x", 50), Springs("N", 60, 40, "x", 50)];
         Assert.Equal("$.plan.levels[1].floor", Refused(Building(new { kind = "semi-rigid", thickness = 1.0, material = "C" }, oneAlongY), "has 1 line along y").JsonPath);
         Refused(Building(new { kind = "flexible" }, oneAlongY), "has 1 line along y");
+        object[] twoAtOnePlace = [Springs("A", 0, 10, "y", 50), Springs("B", 0, 30, "y", 50), Springs("S", 60, 0, "x", 50), Springs("N", 60, 40, "x", 50)];
+        Refused(Building(new { kind = "flexible" }, twoAtOnePlace), "has 1 line along y (by position)");
         object[] slanted = [.. ThreeLines(50), Springs("D", 60, 20, 30.0, 50)];
         Refused(Building(new { kind = "flexible" }, slanted), "stands at an angle");
         var cut = new { kind = "semi-rigid", thickness = 1.0, material = "C", openings = new[] { new { from = new[] { 70.0, 0 }, to = new[] { 80.0, 40 } } } };
