@@ -31,8 +31,16 @@ internal static class PlanFloorReport
                     TextTable.Sci(u.FromSI(x.Mdd, Quantity.Length)), TextTable.Sci(u.FromSI(x.Adve, Quantity.Length)), double.IsFinite(x.Ratio) ? x.Ratio.ToString("0.000") : "-",
                     x.Flexible ? "flexible" : "no");
             sb.Append(t.Render());
+            foreach (var g in d.Flexibility.GroupBy(x => (x.Level, x.Direction)))
+            {
+                var w = g.Where(x => double.IsFinite(x.Ratio)).OrderByDescending(x => x.Ratio).FirstOrDefault();
+                if (w is null) continue;
+                sb.Append($"  {p.Levels[w.Level].Id}, loads along {w.Direction}: largest MDD/ADVE {w.Ratio:0.000} " +
+                    $"({(w.From == "" ? "end" : w.From)}-{(w.To == "" ? "end" : w.To)}): {(w.Flexible ? "flexible by eq. 12.3-1" : "not flexible by eq. 12.3-1")}\n");
+            }
             sb.Append("  MDD: the floor's largest in-plane deflection in the span from the line through it at the span's\n" +
-                      "  lines; ADVE: their average story drift. Flexible idealisation allowed where MDD/ADVE > 2.\n");
+                      "  lines; ADVE: their average story drift. Eq. 12.3-1 permits the flexible idealisation where\n" +
+                      "  MDD/ADVE > 2; the governing code decides.\n");
         }
 
         foreach (var family in p.Cases.Where(c => c.Direction is "x" or "y").GroupBy(c => c.Family))
