@@ -173,7 +173,7 @@ public static partial class PlanDiaphragm
         {
             Plan = plan,
             Lines = lineResults,
-            FloorStiffness = new MatrixView(s.K),
+            FloorStiffness = new MatrixView(FloorStiffness(s)),
             Cases = caseResults,
             Rigidity = PlanAnalysis.Rigidity(plan, kk),
             // Torsional irregularity applies to rigid and semi-rigid floors only (ASCE 7-16 Table 12.3-1).
@@ -181,6 +181,28 @@ public static partial class PlanDiaphragm
             DriftChecks = plan.DriftLimit is { } lim ? PlanAnalysis.DriftChecks(plan, caseResults, lim) : [],
             Diaphragms = Study(plan, kk),
         };
+    }
+
+    /// <summary>
+    /// The stiffness on the floors' (Ux, Uy, Rz), the floors' beam DOFs condensed out exactly (K_rr − K_rd K_dd⁻¹ K_dr,
+    /// static condensation), when every floor has those three DOFs; with a flexible floor (no floor DOFs) the whole
+    /// system's K (floor, floor-beam and flexible-level line DOFs).
+    /// </summary>
+    private static double[,] FloorStiffness(Solved s)
+    {
+        var lay = s.Layout;
+        if (lay.Rigid.Any(r => r < 0)) return s.K;
+        var r = lay.Rigid.SelectMany(r0 => new[] { r0, r0 + 1, r0 + 2 }).ToArray();
+        var d = Enumerable.Range(0, lay.N).Except(r).ToArray();
+        var a = DenseMatrix.Create(r.Length, r.Length, (i, j) => s.K[r[i], r[j]]);
+        if (d.Length == 0) return a.ToArray();
+        var krd = DenseMatrix.Create(r.Length, d.Length, (i, j) => s.K[r[i], d[j]]);
+        var kdd = DenseMatrix.Create(d.Length, d.Length, (i, j) => s.K[d[i], d[j]]);
+        var c = a - krd * kdd.Cholesky().Solve(krd.Transpose());
+        var res = c.ToArray();
+        for (int i = 0; i < r.Length; i++)
+            for (int j = 0; j < i; j++) res[i, j] = res[j, i] = 0.5 * (res[i, j] + res[j, i]);
+        return res;
     }
 
     /// <summary>

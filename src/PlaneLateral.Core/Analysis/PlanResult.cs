@@ -42,7 +42,8 @@ public sealed class PlanResult
     /// <summary>
     /// Floors that bend (docs/plan.md): the floor kinds, the code's flexibility test and the envelope of the line shears
     /// under rigid, semi-rigid and flexible floors; null when the building file gives no "floor" block. Where a floor
-    /// is not rigid, <see cref="FloorStiffness"/> is the whole system's (floor, floor-beam and flexible-level line DOFs).
+    /// is semi-rigid, <see cref="FloorStiffness"/> is condensed exactly onto the floors' (Ux, Uy, Rz); with a flexible floor
+    /// it is the whole system's (floor, floor-beam and flexible-level line DOFs).
     /// </summary>
     public DiaphragmStudy? Diaphragms { get; init; }
 
