@@ -114,6 +114,7 @@ internal static class PlanReport
                 t.Add(d.Case, d.Story.ToString(), (d.Vertex + 1).ToString(), L(d.Amplified), d.Ratio.ToString("0.00000"), d.Allowed.ToString("0.000"), d.Within ? "within" : "exceeds");
             sb.Append(t.Render());
         }
+        sb.Append(PlanFloorReport.Render(r));   // floors that bend: with a "floor" block only
         sb.Append("\n" + Wrap($"Caution: {ResultFiles.Caution}", 100));
         return sb.ToString();
     }

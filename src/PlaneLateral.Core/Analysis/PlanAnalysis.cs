@@ -22,6 +22,8 @@ public static class PlanAnalysis
     {
         int n = plan.FloorCount;
         var condensed = plan.Lines.Select(l => Condense(l, n, options)).ToList();
+        // Floors that bend (docs/plan.md): their own assembly; rigid floors keep the path below unchanged.
+        if (plan.Floors.Any(f => f.Kind != FloorKind.Rigid)) return PlanDiaphragm.Result(plan, condensed, options);
         var k = Assemble(plan.Lines, condensed.Select(c => c.K).ToList(), n);
         double size = plan.Size;
         CheckStable(plan, k, size);
@@ -94,6 +96,7 @@ public static class PlanAnalysis
             Rigidity = Rigidity(plan, condensed.Select(c => c.K).ToList()),
             Irregularity = Irregularity(plan, caseResults),
             DriftChecks = plan.DriftLimit is { } lim ? DriftChecks(plan, caseResults, lim) : [],
+            Diaphragms = PlanDiaphragm.Study(plan, condensed.Select(c => c.K).ToList()),
         };
     }
 
@@ -205,7 +208,7 @@ public static class PlanAnalysis
         return v;
     }
 
-    private static double[] Multiply(double[,] a, double[] x)
+    internal static double[] Multiply(double[,] a, double[] x)
     {
         var y = new double[x.Length];
         for (int i = 0; i < x.Length; i++)
@@ -213,14 +216,14 @@ public static class PlanAnalysis
         return y;
     }
 
-    private static double Above(double[] p, int story)
+    internal static double Above(double[] p, int story)
     {
         double v = 0;
         for (int l = story - 1; l < p.Length; l++) v += p[l];
         return v;
     }
 
-    private static double BackwardError(double[,] a, double[] x, double[] b)
+    internal static double BackwardError(double[,] a, double[] x, double[] b)
     {
         int n = b.Length;
         double r = 0, an = 0, xn = 0, bn = 0;
@@ -234,7 +237,7 @@ public static class PlanAnalysis
         return d == 0 ? 0 : r / d;
     }
 
-    private static List<PlanStoryLoad> StoryLoads(PlanLoadCase c, int n)
+    internal static List<PlanStoryLoad> StoryLoads(PlanLoadCase c, int n)
     {
         var list = new List<PlanStoryLoad>();
         for (int s = 1; s <= n; s++)
@@ -245,7 +248,7 @@ public static class PlanAnalysis
         return list;
     }
 
-    private static PlanEquilibrium Equilibrium(BuildingPlan plan, PlanLoadCase c, IReadOnlyList<double[]> forces, double size)
+    internal static PlanEquilibrium Equilibrium(BuildingPlan plan, PlanLoadCase c, IReadOnlyList<double[]> forces, double size)
     {
         double ax = c.Loads.Sum(l => l.Fx), ay = c.Loads.Sum(l => l.Fy), am = c.Loads.Sum(l => l.Mz);
         double lx = 0, ly = 0, lm = 0;
@@ -277,7 +280,7 @@ public static class PlanAnalysis
     }
 
     /// <summary>Recovers the line's planar model under the level forces p (one case per building case), and checks its level displacements.</summary>
-    private static PlanLineResult Recover(PlanLine line, Condensation c, IReadOnlyList<string> ids, double[][] forces, IReadOnlyList<double[]> expected, AnalysisOptions? options)
+    internal static PlanLineResult Recover(PlanLine line, Condensation c, IReadOnlyList<string> ids, double[][] forces, IReadOnlyList<double[]> expected, AnalysisOptions? options)
     {
         var cases = ids.Select((id, ci) => new LoadCase(id, "level forces from the floors",
             forces[ci].Select((p, l) => new NodalLoad(line.LevelNodes[l], p, 0, 0)).ToList(), [])).ToList();
@@ -296,7 +299,7 @@ public static class PlanAnalysis
     /// Each line's story stiffness alone under the floor-force pattern of each loading direction (the line by itself,
     /// loaded at its levels by the pattern: story shear over story drift), and the centre of rigidity they give per story.
     /// </summary>
-    private static List<PlanStoryRigidity> Rigidity(BuildingPlan plan, IReadOnlyList<double[,]> condensed)
+    internal static List<PlanStoryRigidity> Rigidity(BuildingPlan plan, IReadOnlyList<double[,]> condensed)
     {
         int n = plan.FloorCount;
         var list = new List<PlanStoryRigidity>();
@@ -346,7 +349,7 @@ public static class PlanAnalysis
         return (x, y);
     }
 
-    private static List<TorsionalIrregularity> Irregularity(BuildingPlan plan, IReadOnlyList<PlanCaseResult> cases)
+    internal static List<TorsionalIrregularity> Irregularity(BuildingPlan plan, IReadOnlyList<PlanCaseResult> cases)
     {
         int n = plan.FloorCount;
         var list = new List<TorsionalIrregularity>();
@@ -380,7 +383,7 @@ public static class PlanAnalysis
         return list;
     }
 
-    private static List<CornerDriftCheck> DriftChecks(BuildingPlan plan, IReadOnlyList<PlanCaseResult> cases, PlanDriftLimit lim)
+    internal static List<CornerDriftCheck> DriftChecks(BuildingPlan plan, IReadOnlyList<PlanCaseResult> cases, PlanDriftLimit lim)
     {
         var list = new List<CornerDriftCheck>();
         foreach (var c in cases)

@@ -39,6 +39,14 @@ public sealed class PlanResult
     /// <summary>Amplified drifts at the outline corners against the allowable ratio (empty without "driftCheck").</summary>
     public required IReadOnlyList<CornerDriftCheck> DriftChecks { get; init; }
 
+    /// <summary>
+    /// Floors that bend (docs/plan.md): the floor kinds, the code's flexibility test and the envelope of the line shears
+    /// under rigid, semi-rigid and flexible floors; null when the building file gives no "floor" block. Where a floor
+    /// is semi-rigid, <see cref="FloorStiffness"/> is condensed exactly onto the floors' (Ux, Uy, Rz); with a flexible floor
+    /// it is the whole system's (floor, floor-beam and flexible-level line DOFs).
+    /// </summary>
+    public DiaphragmStudy? Diaphragms { get; init; }
+
     /// <summary>Worst backward error of the floor solves (scaled system, Rz times the plan size).</summary>
     public double WorstBackwardError => Cases.Count == 0 ? 0 : Cases.Max(c => c.BackwardError);
 

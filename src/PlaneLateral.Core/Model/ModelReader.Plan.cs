@@ -96,6 +96,7 @@ public static partial class ModelReader
             var levels = ReadPlanLevels(pf, defaultOutline);
             var lines = levels is null ? [] : ReadPlanLines(pf, levels);
             var cases = levels is null ? [] : ReadPlanLoads(pf, levels, ecc);
+            var floors = levels is null ? [] : ReadFloors(levels, lines);
             PlanDriftLimit? drift = null;
             if (pf.OptionalObject("driftCheck", "give \"driftCheck\": {\"Cd\": ..., \"Ie\": ..., \"allowedRatio\": ...}") is { } dc)
             {
@@ -114,7 +115,7 @@ public static partial class ModelReader
             return new BuildingPlan
             {
                 Title = title, SourcePath = fileName, Units = _units, Levels = levels, Lines = lines, Cases = cases,
-                EccentricityRatio = ecc, DriftLimit = drift,
+                EccentricityRatio = ecc, DriftLimit = drift, Floors = floors,
             };
         }
 
@@ -157,6 +158,7 @@ public static partial class ModelReader
                 var mass = f.Token("massAt") is { } m ? ReadPoint(m, "'massAt'") : null;
                 var outline = f.Token("outline") is { } ot ? ReadOutline(ot) : defaultOutline;
                 double polar = f.Has("polarInertia") ? SI(SI(f.RequiredNumber("polarInertia", "give W·r² about the centre of mass"), Quantity.Force), Quantity.Area) : double.NaN;
+                if (f.OptionalObject("floor", "give \"floor\" as {\"kind\": \"rigid\" | \"semi-rigid\" | \"flexible\", ...} (docs/plan.md)") is { } floor && id is not null) _floorBlocks.Add((id, floor));
                 f.RejectUnknownKeys();
                 if (id is not null) raw.Add((id, name, e, w, mass, outline, polar, o));
             }

@@ -82,6 +82,15 @@ public sealed record BuildingPlan
 
     public PlanDriftLimit? DriftLimit { get; init; }
 
+    /// <summary>The floors' in-plane models that the file gives (docs/plan.md, "Floors that bend"); a floor not listed is rigid.</summary>
+    public IReadOnlyList<PlanFloor> Floors { get; init; } = [];
+
+    /// <summary>How the floor of a level (1 = lowest floor) works in its plane: rigid unless the file says otherwise.</summary>
+    public FloorKind KindOf(int level) => Floors.FirstOrDefault(f => f.Level == level)?.Kind ?? FloorKind.Rigid;
+
+    /// <summary>The floor block of a level, or null when the file gives none.</summary>
+    public PlanFloor? FloorOf(int level) => Floors.FirstOrDefault(f => f.Level == level);
+
     /// <summary>Floors (levels above the base).</summary>
     public int FloorCount => Levels.Count - 1;
 

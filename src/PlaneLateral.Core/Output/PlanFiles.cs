@@ -29,6 +29,7 @@ public static class PlanFiles
             ("plan-checks.csv", Checks(r)),
         };
         if (r.DriftChecks.Count > 0) files.Add(("plan-drift-checks.csv", Drifts(r)));
+        files.AddRange(PlanDiaphragmFiles.Render(r));   // floors that bend: with a "floor" block only
         foreach (var line in r.Lines)
         {
             var own = ResultFiles.Render(line.Recovered).ToDictionary(f => f.Name, f => f.Text);
@@ -174,6 +175,7 @@ public static class PlanFiles
                 ["Ax"] = double.IsFinite(t.Ax) ? t.Ax : null, ["withAccidentalTorsion"] = t.WithAccidental,
             })),
         };
+        if (PlanDiaphragmFiles.Json(r) is { } floors) root["floors"] = floors;
         return root.ToString(Formatting.Indented) + "\n";
     }
 }
