@@ -82,6 +82,9 @@ public sealed record BuildingPlan
 
     public PlanDriftLimit? DriftLimit { get; init; }
 
+    /// <summary>The seismic block: equivalent lateral forces from the plan modes, and the response spectrum analysis (null when not given).</summary>
+    public PlanSeismicData? Seismic { get; init; }
+
     /// <summary>Floors (levels above the base).</summary>
     public int FloorCount => Levels.Count - 1;
 
