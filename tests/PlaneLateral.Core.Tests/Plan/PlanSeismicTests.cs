@@ -221,4 +221,29 @@ public class PlanSeismicTests
         var e2 = Assert.Throws<ModelInputException>(() => ModelReader.ParsePlan(noWeight.ToString(), "b.json"));
         Assert.Contains(e2.Diagnostics, x => x.Problem.Contains("level \"L2\" has no \"weight\""));
     }
+
+    [Fact]
+    public void EveryShippedBuildingWithASeismicBlockBalancesModeByMode()
+    {
+        // Common practice: in each mode the lines' forces balance the mode's floor forces (ΣFx, ΣFy, ΣMz); every ELF case
+        // balances its floor loads; the modes reach 90 % of the mass in X and Y (§12.9.1.1).
+        var files = Directory.EnumerateFiles(Input.RepositoryFiles.ModelPath(""), "*.json", SearchOption.AllDirectories).Where(ModelReader.IsPlanFile).Order().ToList();
+        int seen = 0;
+        foreach (var file in files)
+        {
+            var (r, s) = PlanSeismic.Run(ModelReader.ReadPlanFile(file));
+            if (s is null) continue;
+            seen++;
+            Assert.True(r.WorstEquilibriumError < 1e-9, $"{file}: {r.WorstEquilibriumError}");
+            Assert.All(s.Elf.SelectMany(e => e.Cases), id => Assert.True(r.Case(id).Equilibrium.RelativeError < 1e-9));
+            if (s.Spectrum is { } sp)
+                foreach (var d in sp.Directions)
+                {
+                    Assert.True(d.EquilibriumError < 1e-9, $"{file} {d.Direction}: {d.EquilibriumError}");
+                    Assert.True(d.CumulativeShare >= 0.9, $"{file} {d.Direction}: {d.CumulativeShare}");
+                    Assert.True(d.Stories[0].ScaledShear >= d.Scaling.BaseShearElf * (1 - 1e-12), "scaled base shear not below V (§12.9.1.4.1)");
+                }
+        }
+        Assert.True(seen >= 1, "the demo building has a seismic block");
+    }
 }
