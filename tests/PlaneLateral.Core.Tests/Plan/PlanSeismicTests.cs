@@ -246,4 +246,32 @@ public class PlanSeismicTests
         }
         Assert.True(seen >= 1, "the demo building has a seismic block");
     }
+
+    /// <summary>
+    /// Published (Chopra, <i>Dynamics of Structures</i>, the uniform five-story shear frame of the MDOF chapter: floor
+    /// weight 100 kip, story stiffness 31.54 kip/in, h = 12 ft; periods 2.00, 0.6852, 0.4346, 0.3383, 0.2966 s — from
+    /// memory of the book, ../shared/REFERENCES.md) and derived (ω_n = 2√(k/m)·sin[(2n−1)π/(2(2N+1))]): the frame is
+    /// split into two equal story-stiffness lines along y at the ends of a symmetric plan, so the y modes do not twist.
+    /// </summary>
+    [Fact]
+    public void FiveStoryShearFrameInPlanHasThePublishedPeriods()
+    {
+        double k = 31.54 * 12;   // kip/ft per story
+        double[] el = [0, 12, 24, 36, 48, 60];
+        double[] half = Enumerable.Repeat(k / 2, 5).ToArray();
+        double[] stiffer = half.Select(v => 2 * v).ToArray();   // x unlike y: no repeated periods to mix the directions
+        var lines = new object[] { Springs("A", 0, 20, "y", half), Springs("B", 60, 20, "y", half), Springs("C", 30, 0, "x", stiffer), Springs("D", 30, 40, "x", stiffer) };
+        var modal = PlanModal.Solve(Read(Building(lines, el, Enumerable.Repeat(100.0, 5).ToArray(), null)));
+        var y = modal.Modes.Where(m => m.Dominant == "y").ToList();
+        Assert.Equal(5, y.Count);
+        double[] book = [2.00, 0.6852, 0.4346, 0.3383, 0.2966];
+        double m1 = 100 * Kip / SeismicPresets.Gravity, k1 = k * KipPerFt;
+        for (int n = 0; n < 5; n++)
+        {
+            Near(book[n], y[n].Period, n == 0 ? 5e-3 : 5e-4, $"mode {n + 1}, book");
+            double omega = 2 * Math.Sqrt(k1 / m1) * Math.Sin((2 * n + 1) * Math.PI / (2 * 11));
+            Near(omega, y[n].Omega, 1e-8, $"mode {n + 1}, closed form");
+        }
+        Near(1.0, y.Sum(m => m.Share[1]), 1e-9, "the y modes carry all the y mass");
+    }
 }
