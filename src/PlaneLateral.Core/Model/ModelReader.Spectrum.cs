@@ -73,7 +73,7 @@ public static partial class ModelReader
             {
                 double m = f.RequiredNumber("modes", "give the least number of modes to combine, a whole number ≥ 1");
                 if (double.IsFinite(m) && (m < 1 || m != Math.Floor(m))) sink.Add(f.Token("modes"), $"'modes' must be a whole number ≥ 1, found {Num(m)}", "give the least number of modes to combine");
-                else if (double.IsFinite(m) && m > availableModes)
+                else if (double.IsFinite(m) && availableModes > 0 && m > availableModes)
                     sink.Add(f.Token("modes"), $"'modes' asks for {Num(m)} modes and the model has {availableModes}", $"give at most {availableModes} (or leave 'modes' out: enough for 90 % of the mass)");
                 else if (double.IsFinite(m)) modes = (int)m;
             }
