@@ -75,6 +75,13 @@ internal static class PlanSeismicReport
                     t.Add(st.Story.ToString(CultureInfo.InvariantCulture), Fo(st.ElfShear), Fo(st.ModalShear), Fo(st.ScaledShear), (st.Corner + 1).ToString(CultureInfo.InvariantCulture),
                         L(st.Drift), L(st.DesignDrift), P(st.Ratio, "0.00000"), L(st.DriftFromCombinedDisplacements));
                 sb.Append(t.Render());
+                if (p.DriftLimit is { } lim)
+                {
+                    var worst = d.Stories.OrderByDescending(x => x.Ratio).First();
+                    var over = d.Stories.Where(x => x.Ratio > lim.AllowedRatio).Select(x => x.Story.ToString(CultureInfo.InvariantCulture)).ToList();
+                    sb.Append($"  Modal drift check, allowed δ/h {lim.AllowedRatio}: worst {P(worst.Ratio, "0.00000")} (story {worst.Story}); " +
+                              $"{(over.Count == 0 ? "all within" : "EXCEEDS in stories " + string.Join(", ", over))}\n");
+                }
                 var lt = new TextTable("story", "line", $"ELF [{force}]", $"modal [{force}]", $"scaled [{force}]", $"acc. torsion [{force}]", $"design [{force}]").Numeric(0, 2, 3, 4, 5, 6);
                 foreach (var l in d.Lines.Where(l => Along(p, l.Line, d.Direction)).OrderByDescending(l => l.Story).ThenBy(l => l.Line, StringComparer.Ordinal))
                     lt.Add(l.Story.ToString(CultureInfo.InvariantCulture), l.Line, Fo(l.Elf), Fo(l.Modal), Fo(l.Scaled), Fo(l.Torsion), Fo(l.Design));

@@ -150,6 +150,8 @@ public static class PlanSeismicFiles
                     {
                         ["story"] = st.Story, ["elfShear"] = Fo(st.ElfShear), ["modalShear"] = Fo(st.ModalShear), ["scaledShear"] = Fo(st.ScaledShear),
                         ["corner"] = st.Corner + 1, ["drift"] = L(st.Drift), ["designDrift"] = L(st.DesignDrift), ["ratio"] = st.Ratio,
+                        ["allowedRatio"] = r.Plan.DriftLimit is { } lim ? lim.AllowedRatio : null,
+                        ["within"] = r.Plan.DriftLimit is { } lim2 ? st.Ratio <= lim2.AllowedRatio : null,
                     })),
                 })),
             };

@@ -24,7 +24,7 @@ public sealed class SpectrumCliTests : IDisposable
         var (code, stdout, stderr) = Run("solve", RepositoryFiles.ModelPath("demo-building.json"), "--out", outDir);
         Assert.True(code == 0, stderr);
         Fits(stdout);
-        foreach (var heading in new[] { "Modes in plan", "Equivalent lateral forces", "Modal response spectrum", "Scaling:", "Δ comb." })
+        foreach (var heading in new[] { "Modes in plan", "Equivalent lateral forces", "Modal response spectrum", "Scaling:", "Δ comb.", "Modal drift check" })
             Assert.Contains(heading, stdout);
         foreach (var f in new[] { "plan-modes.csv", "plan-elf.csv", "plan-spectrum-stories.csv", "plan-spectrum-lines.csv", "plan-spectrum-modes.csv", "plan-seismic.json" })
             Assert.True(new FileInfo(Path.Combine(outDir, f)).Length > 0, f);
