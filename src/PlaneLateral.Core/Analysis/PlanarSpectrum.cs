@@ -21,7 +21,7 @@ public sealed record PlanarSpectrumResult(DesignSpectrum Spectrum, ResponseSpect
 
 /// <summary>
 /// Modal response spectrum analysis of a planar model (ASCE 7-16 §12.9.1, from memory): the modes on the mass DOFs of
-/// <see cref="SeismicAnalysis.Modal"/> (the stiffness condensed onto them exactly), enough of them for 90 % of the mass
+/// <c>SeismicAnalysis.Modal(model)</c> (the stiffness condensed onto them exactly), enough of them for 90 % of the mass
 /// (§12.9.1.1), per mode the forces f = M·φ·Γ·S_a·g/(R/I_e) and displacements u = F·f, the story shears and story
 /// drifts per mode, combined by CQC or SRSS, then scaled to the ELF base shear (§12.9.1.4).
 /// </summary>
