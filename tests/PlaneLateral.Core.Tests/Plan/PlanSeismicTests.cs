@@ -236,6 +236,16 @@ public class PlanSeismicTests
             seen++;
             Assert.True(r.WorstEquilibriumError < 1e-9, $"{file}: {r.WorstEquilibriumError}");
             Assert.All(s.Elf.SelectMany(e => e.Cases), id => Assert.True(r.Case(id).Equilibrium.RelativeError < 1e-9));
+            // §12.8.4.3: where A_x is applied, the amplified twins exist, balance, and twist more than the plain ±ecc cases.
+            foreach (var e in s.Elf.Where(e => s.Amplification.Any(a => a.Direction == e.Direction && a.Applied)))
+                foreach (var sign in new[] { "+", "-" })
+                {
+                    var amp = r.Case(e.Cases[0] + sign + "ecc·Ax");
+                    var plain = r.Case(e.Cases[0] + sign + "ecc");
+                    Assert.True(amp.Equilibrium.RelativeError < 1e-9);
+                    Assert.True(Math.Abs(amp.Stories[0].Mz - r.Case(e.Cases[0]).Stories[0].Mz) > Math.Abs(plain.Stories[0].Mz - r.Case(e.Cases[0]).Stories[0].Mz),
+                        "the amplified eccentricity gives the larger accidental torque");
+                }
             if (s.Spectrum is { } sp)
                 foreach (var d in sp.Directions)
                 {
