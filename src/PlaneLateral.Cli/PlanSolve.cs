@@ -24,15 +24,17 @@ internal static class PlanSolve
     {
         bool solved = CommandSupport.TrySolve(() =>
         {
-            var result = PlanAnalysis.Run(ModelReader.ReadPlanFile(path));
-            return (result, PlanHandSplit.Run(result));
+            var (result, seismic) = PlanSeismic.Run(ModelReader.ReadPlanFile(path));
+            return (result, PlanHandSplit.Run(result), seismic);
         }, stderr, out var solution, out int exit);
         if (!solved) return exit;
-        var (r, hand) = solution;
+        var (r, hand, seismic) = solution;
         string folder = outDir ?? CommandSupport.DefaultFolder(path);
-        if (!CommandSupport.TryWrite(() => AtomicFiles.WriteAll(folder, PlanFiles.Render(r)), "results", stderr, out var written, out exit)) return exit;
-        stdout.Write($"PlaneLateral {ResultFiles.Version}: building in plan, linear static analysis\n\n");
+        var files = seismic is null ? PlanFiles.Render(r) : [.. PlanFiles.Render(r), .. PlanSeismicFiles.Render(r, seismic)];
+        if (!CommandSupport.TryWrite(() => AtomicFiles.WriteAll(folder, files), "results", stderr, out var written, out exit)) return exit;
+        stdout.Write($"PlaneLateral {ResultFiles.Version}: building in plan, linear static analysis{(seismic is null ? "" : ", modes and seismic forces")}\n\n");
         stdout.Write(PlanReport.Render(r, hand, path));
+        if (seismic is not null) stdout.Write(PlanSeismicReport.Render(r, seismic));
         stdout.Write($"\nResults written to {folder}: {written.Count} files (plan-*.csv, plan.json, line-*-*.csv)\n");
         return ExitCodes.Success;
     }

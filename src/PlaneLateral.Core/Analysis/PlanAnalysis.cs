@@ -18,10 +18,11 @@ public static class PlanAnalysis
     public const double MechanismTolerance = 1e-10;
 
     /// <exception cref="UnstableModelException">The lines cannot hold a floor in some direction or in rotation (names the floor DOF).</exception>
-    public static PlanResult Run(BuildingPlan plan, AnalysisOptions? options = null)
+    /// <param name="condensed">The lines' condensations when already made (PlanSeismic makes them for the modes), else null.</param>
+    public static PlanResult Run(BuildingPlan plan, AnalysisOptions? options = null, IReadOnlyList<Condensation>? condensed = null)
     {
         int n = plan.FloorCount;
-        var condensed = plan.Lines.Select(l => Condense(l, n, options)).ToList();
+        condensed ??= plan.Lines.Select(l => Condense(l, n, options)).ToList();
         // Floors that bend (docs/plan.md): their own assembly; rigid floors keep the path below unchanged.
         if (plan.Floors.Any(f => f.Kind != FloorKind.Rigid)) return PlanDiaphragm.Result(plan, condensed, options);
         var k = Assemble(plan.Lines, condensed.Select(c => c.K).ToList(), n);
@@ -174,7 +175,7 @@ public static class PlanAnalysis
     /// <see cref="MechanismTolerance"/> of the largest. Each free motion is named by its largest floor DOF (rotation
     /// first when the floor turns: all lines through one point).
     /// </summary>
-    private static void CheckStable(BuildingPlan plan, double[,] k, double size)
+    internal static void CheckStable(BuildingPlan plan, double[,] k, double size)
     {
         int n = plan.FloorCount;
         var (values, vectors) = SymmetricEigen.Solve(Scaled(k, n, size));

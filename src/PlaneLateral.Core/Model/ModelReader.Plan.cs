@@ -110,12 +110,18 @@ public static partial class ModelReader
                 d.RejectUnknownKeys();
                 drift = new PlanDriftLimit(cd, ie, ratio);
             }
+            var seismic = ReadPlanSeismic(pf, levels);
+            // The modes, the equivalent lateral forces and the spectrum are solved on the rigid-floor system (three DOFs per
+            // floor, the floor's mass at its centre): beside a floor that bends they would be silently wrong, so refused.
+            if (seismic is not null && floors.FirstOrDefault(fl => fl.Kind != FloorKind.Rigid) is { } bent)
+                sink.Add(pf.Token("seismic"), $"the seismic block cannot yet be used with the {(bent.Kind == FloorKind.Flexible ? "flexible" : "semi-rigid")} floor of level \"{levels![bent.Level].Id}\": its modes and equivalent lateral forces assume rigid floors",
+                    "remove the level's \"floor\" block for the seismic run (rigid floors), or give the story forces as \"loads\" without the seismic block");
             pf.RejectUnknownKeys();
             if (sink.Any || _lineFileProblems.Count > 0 || levels is null) return null;
             return new BuildingPlan
             {
                 Title = title, SourcePath = fileName, Units = _units, Levels = levels, Lines = lines, Cases = cases,
-                EccentricityRatio = ecc, DriftLimit = drift, Floors = floors,
+                EccentricityRatio = ecc, DriftLimit = drift, Floors = floors, Seismic = seismic,
             };
         }
 
@@ -368,7 +374,7 @@ public static partial class ModelReader
 
         private List<PlanLoadCase> ReadPlanLoads(JsonFields pf, List<PlanLevel> levels, double ecc)
         {
-            var items = pf.Objects("loads", true, "add \"loads\": [{\"id\": \"EX\", \"direction\": \"x\", \"forces\": [...]}] (docs/plan.md)");
+            var items = pf.Objects("loads", !pf.Has("seismic"), "add \"loads\": [{\"id\": \"EX\", \"direction\": \"x\", \"forces\": [...]}] (docs/plan.md)");
             var seen = new HashSet<string>(StringComparer.Ordinal);
             var list = new List<PlanLoadCase>();
             int floors = levels.Count - 1;
@@ -401,11 +407,11 @@ public static partial class ModelReader
                     else sink.Add(t, $"'forces' must be an array of {floors} numbers (one per floor, lowest first)", $"give one force per level above the base, in {_units.ForceSymbol}");
                     f.RejectUnknownKeys();
                     if (id is null || dir is null || forces.Count != floors) continue;
-                    list.Add(AtMass(id, id, desc, dir, 0, levels, forces, 0));
+                    list.Add(PlanLoads.AtCentreOfMass(id, id, desc, dir, 0, levels, forces, 0));
                     if (accidental && ecc > 0)
                     {
-                        list.Add(AtMass(id + "+ecc", id, desc, dir, +1, levels, forces, ecc));
-                        list.Add(AtMass(id + "-ecc", id, desc, dir, -1, levels, forces, ecc));
+                        list.Add(PlanLoads.AtCentreOfMass(id + "+ecc", id, desc, dir, +1, levels, forces, ecc));
+                        list.Add(PlanLoads.AtCentreOfMass(id + "-ecc", id, desc, dir, -1, levels, forces, ecc));
                     }
                 }
                 else
@@ -432,34 +438,6 @@ public static partial class ModelReader
             }
             if (items.Count > 0 && list.Count == 0 && !sink.Any) sink.Add(pf.Object, "the building has no usable load", "add a load under \"loads\"");
             return list;
-        }
-
-        /// <summary>
-        /// Floor forces along X or Y at each floor's centre of mass, shifted perpendicular to the forces by
-        /// <paramref name="sign"/>·<paramref name="ratio"/> of the floor's plan dimension perpendicular to them (ASCE 7-16
-        /// §12.8.4.2: 5 % of the dimension, each way).
-        /// </summary>
-        private static PlanLoadCase AtMass(string id, string family, string desc, string dir, int sign, List<PlanLevel> levels, List<double> forces, double ratio)
-        {
-            var loads = new List<PlanFloorLoad>();
-            for (int i = 1; i < levels.Count; i++)
-            {
-                var l = levels[i];
-                double f = forces[i - 1];
-                var c = l.CentreOfMass;
-                if (dir == "x")
-                {
-                    double e = sign * ratio * (l.Outline.Max(q => q.Y) - l.Outline.Min(q => q.Y));
-                    loads.Add(new PlanFloorLoad(i, f, 0, -(c.Y + e) * f));
-                }
-                else
-                {
-                    double e = sign * ratio * (l.Outline.Max(q => q.X) - l.Outline.Min(q => q.X));
-                    loads.Add(new PlanFloorLoad(i, 0, f, (c.X + e) * f));
-                }
-            }
-            string what = sign == 0 ? "at the centres of mass" : $"centres of mass shifted {(sign > 0 ? "+" : "−")}{ratio:0.###} of the plan dimension";
-            return new PlanLoadCase(id, family, string.IsNullOrEmpty(desc) ? what : $"{desc} ({what})", dir, sign, loads);
         }
     }
 }

@@ -90,45 +90,8 @@ public static partial class ModelReader
             }
             else if (spectrumObj is null)
                 sink.Add(o, "the seismic block has neither 'baseShear' nor 'spectrum'", $"give \"baseShear\" in {fu}, or \"spectrum\": {{\"SDS\": ..., \"SD1\": ..., \"R\": ..., \"Ie\": ..., \"TL\": ...}}");
-            if (spectrumObj is not null)
-            {
-                var pf = new JsonFields(spectrumObj, sink);
-                double InRange(string key, double lo, double hi, bool loOpen, string what, double fallback = double.NaN)
-                {
-                    string fix = $"give {what} {(loOpen ? ">" : "≥")} {Num(lo)} and ≤ {Num(hi)}";
-                    double x = double.IsNaN(fallback) ? pf.RequiredNumber(key, fix) : pf.OptionalNumber(key, fallback, fix);
-                    if (double.IsFinite(x) && (x > hi || x < lo || (loOpen && x == lo)))
-                        sink.Add(pf.Token(key), $"'{key}' = {Num(x)} is out of range", fix);
-                    return x;
-                }
-                double sds = InRange("SDS", 0, 3, true, "S_DS in g");
-                double sd1 = InRange("SD1", 0, 2, true, "S_D1 in g");
-                double r = InRange("R", 1, 8, false, "the response modification coefficient R (ASCE 7-16 Table 12.2-1 lists 1.25 to 8, from memory)");
-                double ie = InRange("Ie", 1, 1.5, false, "the importance factor I_e", 1.0);
-                double tl = InRange("TL", 0, 20, true, "the long-period transition period T_L in s");
-                double s1 = pf.Has("S1") ? InRange("S1", 0, 3, false, "the mapped S_1 in g") : double.NaN;
-                pf.RejectUnknownKeys();
-                spectrum = new SpectralValues(sds, sd1, r, ie, tl, s1);
-            }
-
-            var period = PeriodUse.Capped;
-            double givenPeriod = double.NaN;
-            const string periodFix = "give \"period\": \"capped\" (the eigen period, not above Cu·Ta; the default), \"computed\", \"approximate\", or a period in s";
-            if (sf.Token("period") is { } pt)
-            {
-                if (pt.Type is JTokenType.Integer or JTokenType.Float)
-                {
-                    period = PeriodUse.Given;
-                    givenPeriod = sf.RequiredNumber("period", periodFix);
-                    if (double.IsFinite(givenPeriod) && (givenPeriod <= 0 || givenPeriod > 20)) sink.Add(pt, $"the period {Num(givenPeriod)} s is out of range", "give a period > 0 and ≤ 20 s");
-                }
-                else
-                {
-                    var ps = sf.OptionalString("period", periodFix);
-                    period = ps switch { "capped" => PeriodUse.Capped, "computed" => PeriodUse.Computed, "approximate" => PeriodUse.Approximate, _ => (PeriodUse)(-1) };
-                    if ((int)period < 0) { if (ps is not null) sink.Add(pt, $"unknown period choice \"{ps}\"", periodFix); period = PeriodUse.Capped; }
-                }
-            }
+            if (spectrumObj is not null) spectrum = ReadSpectralValues(spectrumObj);
+            var (period, givenPeriod) = ReadPeriodChoice(sf);
 
             int modes = 3;
             if (sf.Has("modes"))
@@ -157,6 +120,10 @@ public static partial class ModelReader
                 gf.RejectUnknownKeys();
                 if (g is not null) second = new SecondOrderSettings(g, cd, ie, beta);
             }
+            var responseSpectrum = ReadResponseSpectrum(sf, Math.Max(levels.Count - 1, 0));
+            if (responseSpectrum is not null && spectrumObj is null)
+                sink.Add(sf.Token("responseSpectrum"), "'responseSpectrum' needs 'spectrum' (R, I_e and the ELF base shear it is scaled to come from it)",
+                    "give \"spectrum\": {\"SDS\": ..., \"SD1\": ..., \"R\": ..., \"Ie\": ..., \"TL\": ...} instead of \"baseShear\"");
             sf.RejectUnknownKeys();
             if (caseId is null) return null;
             return new SeismicData
@@ -170,6 +137,7 @@ public static partial class ModelReader
                 GivenPeriod = givenPeriod,
                 Modes = modes,
                 SecondOrder = second,
+                ResponseSpectrum = responseSpectrum,
             };
         }
     }

@@ -91,6 +91,9 @@ public sealed record BuildingPlan
     /// <summary>The floor block of a level, or null when the file gives none.</summary>
     public PlanFloor? FloorOf(int level) => Floors.FirstOrDefault(f => f.Level == level);
 
+    /// <summary>The seismic block: equivalent lateral forces from the plan modes, and the response spectrum analysis (null when not given).</summary>
+    public PlanSeismicData? Seismic { get; init; }
+
     /// <summary>Floors (levels above the base).</summary>
     public int FloorCount => Levels.Count - 1;
 

@@ -56,6 +56,9 @@ public sealed class SeismicData
     public int Modes { get; init; } = 3;
 
     public SecondOrderSettings? SecondOrder { get; init; }
+
+    /// <summary>Modal response spectrum analysis beside the story forces (null when not asked).</summary>
+    public ResponseSpectrumSettings? ResponseSpectrum { get; init; }
 }
 
 /// <summary>

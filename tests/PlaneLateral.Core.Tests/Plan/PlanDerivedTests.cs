@@ -180,7 +180,7 @@ public class PlanDerivedTests
         Assert.True(files.Count >= 2, "the demo and Taly's example");
         foreach (var file in files)
         {
-            var r = PlanAnalysis.Run(ModelReader.ReadPlanFile(file));
+            var r = PlanSeismic.Run(ModelReader.ReadPlanFile(file)).Result;   // with the ELF cases of a seismic block
             AssertSolveChecks(r);
             double size = r.Plan.Size;
             foreach (var c in r.Cases)

@@ -17,6 +17,7 @@ public class SeismicSchemaTests
         period = 0.8,
         modes = 2,
         secondOrder = new { gravity = "EQ", Cd = 5.5, Ie = 1.0, beta = 0.9 },
+        responseSpectrum = new { combination = "SRSS", damping = 0.03, Cd = 5.5, modes = 2, points = new[] { new[] { 0.0, 0.4 }, new[] { 0.2, 1.0 }, new[] { 2.0, 0.1 } } },
     });
 
     [Fact]
@@ -32,7 +33,7 @@ public class SeismicSchemaTests
     {
         var defs = (JObject)JObject.Parse(File.ReadAllText(RepositoryFiles.SchemaPath))["definitions"]!;
         var keys = ((JObject)defs["seismic"]!["properties"]!).Properties().Select(p => p.Name).Order(StringComparer.Ordinal);
-        Assert.Equal(new[] { "baseShear", "loadCase", "modes", "period", "secondOrder", "spectrum", "structureType", "weights" }, keys);
+        Assert.Equal(new[] { "baseShear", "loadCase", "modes", "period", "responseSpectrum", "secondOrder", "spectrum", "structureType", "weights" }, keys);
     }
 
     public static TheoryData<string, object> Wrong() => new()
@@ -42,6 +43,9 @@ public class SeismicSchemaTests
         { "unknown period choice", new JObject { ["period"] = "longest" } },
         { "beta above 1", new JObject { ["secondOrder"] = new JObject { ["gravity"] = "EQ", ["Cd"] = 4.0, ["beta"] = 1.2 } } },
         { "unknown key", new JObject { ["shear"] = 1.0 } },
+        { "damping out of range", new JObject { ["responseSpectrum"] = new JObject { ["Cd"] = 4.0, ["damping"] = 0.6 } } },
+        { "unknown combination", new JObject { ["responseSpectrum"] = new JObject { ["Cd"] = 4.0, ["combination"] = "ABS" } } },
+        { "negative spectrum value", new JObject { ["responseSpectrum"] = new JObject { ["Cd"] = 4.0, ["points"] = new JArray(new JArray(0.0, 0.4), new JArray(1.0, -0.1)) } } },
     };
 
     [Theory]

@@ -1,0 +1,120 @@
+using System.Globalization;
+using System.Text;
+using PlaneLateral.Analysis;
+using PlaneLateral.Model;
+using PlaneLateral.Units;
+
+namespace PlaneLateral.Cli;
+
+/// <summary>The console tables of a building's seismic block: modes, equivalent lateral forces, A_x, and the response
+/// spectrum analysis beside the ELF (tables of at most 100 columns).</summary>
+internal static class PlanSeismicReport
+{
+    private static string P(double v, string f = "0.000") => double.IsFinite(v) ? v.ToString(f, CultureInfo.InvariantCulture) : "-";
+
+    public static string Render(PlanResult r, PlanSeismicResult s)
+    {
+        var p = r.Plan;
+        var u = p.Units;
+        string force = u.ForceSymbol, len = u.LengthSymbol;
+        string Fo(double v) => TextTable.Num(u.FromSI(v, Quantity.Force));
+        string L(double v) => TextTable.Num(u.FromSI(v, Quantity.Length));
+        var sb = new StringBuilder();
+
+        sb.Append("\nModes in plan (floor mass W/g at the centre of mass, J about it; K on Ux, Uy, Rz of every floor)\n");
+        var mt = new TextTable("mode", "period [s]", "dominant", "mass x", "mass y", "mass torsion", "cum. x", "cum. y", "cum. torsion").Numeric(0, 1, 3, 4, 5, 6, 7, 8);
+        foreach (var m in s.Modal.Modes)
+            mt.Add(m.Number.ToString(CultureInfo.InvariantCulture), P(m.Period, "0.0000"), m.Dominant, Pct(m.Share[0]), Pct(m.Share[1]), Pct(m.Share[2]),
+                Pct(m.Cumulative[0]), Pct(m.Cumulative[1]), Pct(m.Cumulative[2]));
+        sb.Append(mt.Render());
+        sb.Append($"  Effective mass shares; torsion about the building's centre of mass ({L(s.Modal.Pivot.X)}, {L(s.Modal.Pivot.Y)}) {len}.\n");
+
+        var sd = p.Seismic!;
+        sb.Append($"\nEquivalent lateral forces (ASCE 7-16 §12.8), S_DS = {sd.Spectrum.Sds}, S_D1 = {sd.Spectrum.Sd1}, R = {sd.Spectrum.R}, I_e = {sd.Spectrum.Ie}\n");
+        var et = new TextTable("dir", "mode", "T mode [s]", "Ta [s]", "Cu·Ta [s]", "T used [s]", "Cs", "k", $"V [{force}]").Numeric(1, 2, 3, 4, 5, 6, 7, 8);
+        foreach (var e in s.Elf)
+            et.Add(e.Direction, e.Mode.ToString(CultureInfo.InvariantCulture), P(e.ModalPeriod, "0.0000"), P(e.Ta, "0.0000"), P(e.Cu * e.Ta, "0.0000"), P(e.PeriodUsed, "0.0000"),
+                P(e.Cs, "0.0000"), P(e.Exponent), Fo(e.BaseShear));
+        sb.Append(et.Render());
+        foreach (var e in s.Elf)
+            sb.Append($"  {e.Direction}: T = {e.PeriodNote}; Cs by {e.CsNote}; cases {string.Join(", ", e.Cases)}\n");
+        var ft = new TextTable("level", $"Fx along x [{force}]", $"Fy along y [{force}]").Numeric(1, 2);
+        for (int l = p.FloorCount; l >= 1; l--)
+            ft.Add(p.Levels[l].Id, Fo(s.Elf[0].LevelForces[l - 1]), Fo(s.Elf[1].LevelForces[l - 1]));
+        sb.Append(ft.Render());
+        sb.Append("  Applied at the centres of mass and shifted ± the accidental eccentricity; their story and line\n" +
+                  "  shears, corner drifts and torsional irregularity are in the tables above.\n");
+
+        if (s.Amplification.Count > 0)
+        {
+            sb.Append("\nAmplification of the accidental torsion A_x = (δmax / 1.2 δavg)², 1 to 3 (ASCE 7-16 §12.8.4.3)\n");
+            var at = new TextTable("dir", "level", $"δmax [{len}]", $"δavg [{len}]", "A_x", "applied").Numeric(2, 3, 4);
+            foreach (var a in s.Amplification.OrderBy(a => a.Direction).ThenByDescending(a => a.Level))
+                at.Add(a.Direction, p.Levels[a.Level].Id, L(a.MaxDisplacement), L(a.AverageDisplacement), P(a.Ax), a.Applied ? "yes" : "no");
+            sb.Append(at.Render());
+            sb.Append("  Applied (cases <id>-x+ecc·Ax, <id>-x-ecc·Ax) only in a direction with a Type 1a or 1b torsional\n" +
+                      "  irregularity (SDC C to F assumed: the governing code decides).\n");
+        }
+
+        if (s.Spectrum is { } sp)
+        {
+            var rs = sp.Settings;
+            sb.Append($"\nModal response spectrum (ASCE 7-16 §12.9.1): {rs.Rule.ToString().ToUpperInvariant()}, ζ = {rs.Damping}, C_d = {rs.Cd}, R = {sp.R}, I_e = {sp.Ie}\n");
+            sb.Append(Wrap($"Spectrum: {sp.Spectrum.Describe()}", 100, "  "));
+            var pts = new TextTable("mode", "period [s]", "S_a [g]").Numeric(0, 1, 2);
+            foreach (var m in sp.Directions[0].Modes) pts.Add(m.Mode.ToString(CultureInfo.InvariantCulture), P(m.Period, "0.0000"), P(m.Sa, "0.0000"));
+            sb.Append(pts.Render());
+            foreach (var d in sp.Directions)
+            {
+                sb.Append($"\n  Along {d.Direction}: {d.ModesUsed} modes, {Pct(d.CumulativeShare)} of the mass (§12.9.1.1: at least 90 %); " +
+                          $"V_t = {Fo(d.Scaling.BaseShearModal)}, V = {Fo(d.Scaling.BaseShearElf)} {force}\n");
+                sb.Append(Wrap("Scaling: " + d.Scaling.Why + ".", 100, "  "));
+                var t = new TextTable("story", $"ELF [{force}]", $"modal [{force}]", $"scaled [{force}]", "corner", $"drift [{len}]", $"δ [{len}]", "δ/h", $"Δ comb. [{len}]")
+                    .Numeric(0, 1, 2, 3, 4, 5, 6, 7, 8);
+                foreach (var st in d.Stories.OrderByDescending(x => x.Story))
+                    t.Add(st.Story.ToString(CultureInfo.InvariantCulture), Fo(st.ElfShear), Fo(st.ModalShear), Fo(st.ScaledShear), (st.Corner + 1).ToString(CultureInfo.InvariantCulture),
+                        L(st.Drift), L(st.DesignDrift), P(st.Ratio, "0.00000"), L(st.DriftFromCombinedDisplacements));
+                sb.Append(t.Render());
+                if (p.DriftLimit is { } lim)
+                {
+                    var worst = d.Stories.OrderByDescending(x => x.Ratio).First();
+                    var over = d.Stories.Where(x => x.Ratio > lim.AllowedRatio).Select(x => x.Story.ToString(CultureInfo.InvariantCulture)).ToList();
+                    sb.Append($"  Modal drift check, allowed δ/h {lim.AllowedRatio}: worst {P(worst.Ratio, "0.00000")} (story {worst.Story}); " +
+                              $"{(over.Count == 0 ? "all within" : "EXCEEDS in stories " + string.Join(", ", over))}\n");
+                }
+                var lt = new TextTable("story", "line", $"ELF [{force}]", $"modal [{force}]", $"scaled [{force}]", $"acc. torsion [{force}]", $"design [{force}]").Numeric(0, 2, 3, 4, 5, 6);
+                foreach (var l in d.Lines.Where(l => Along(p, l.Line, d.Direction)).OrderByDescending(l => l.Story).ThenBy(l => l.Line, StringComparer.Ordinal))
+                    lt.Add(l.Story.ToString(CultureInfo.InvariantCulture), l.Line, Fo(l.Elf), Fo(l.Modal), Fo(l.Scaled), Fo(l.Torsion), Fo(l.Design));
+                sb.Append(lt.Render());
+            }
+            sb.Append("  drift: at the worst outline corner, story drift per mode, combined, times the drift factor,\n" +
+                      "  plus the static accidental torsion's (§12.9.1.5); δ = C_d·drift/I_e; Δ comb.: difference of\n" +
+                      "  the combined displacements, shown only to compare (it is not the drift).\n" +
+                      "  design = scaled + |accidental torsion| per line (torques from the ELF forces).\n");
+        }
+        sb.Append($"  {SeismicPresets.Status}.\n  A computed aid for a licensed engineer, not a code check.\n");
+        return sb.ToString();
+    }
+
+    private static bool Along(BuildingPlan p, string id, string dir)
+    {
+        var line = p.Lines.First(l => l.Id == id);
+        return dir == "x" ? Math.Abs(line.Cos) > 1e-9 : Math.Abs(line.Sin) > 1e-9;
+    }
+
+    private static string Pct(double v) => (100 * v).ToString("0.0", CultureInfo.InvariantCulture) + " %";
+
+    /// <summary>Words of <paramref name="text"/> in lines of at most <paramref name="width"/> columns, each starting with <paramref name="indent"/>.</summary>
+    internal static string Wrap(string text, int width, string indent)
+    {
+        var sb = new StringBuilder(indent);
+        int col = indent.Length;
+        foreach (var word in text.Split(' '))
+        {
+            if (col > indent.Length && col + 1 + word.Length > width) { sb.Append('\n').Append(indent); col = indent.Length; }
+            else if (col > indent.Length) { sb.Append(' '); col++; }
+            sb.Append(word); col += word.Length;
+        }
+        return sb.Append('\n').ToString();
+    }
+}

@@ -1,0 +1,280 @@
+using MathNet.Numerics.LinearAlgebra.Double;
+using PlaneLateral.Model;
+
+namespace PlaneLateral.Analysis;
+
+/// <summary>
+/// The equivalent lateral forces of one direction of a building in plan (ASCE 7-16 §12.8, from memory): the period of
+/// the mode with the largest effective mass along the direction, capped at C_u·T_a; C_s, V = C_s·W and
+/// F_x = C_vx·V from the planar code path (<see cref="SeismicAnalysis.ResponseCoefficient"/>,
+/// <see cref="SeismicAnalysis.VerticalDistribution"/>).
+/// </summary>
+/// <param name="Mode">The mode whose period is the modal period (largest effective mass along the direction).</param>
+/// <param name="LevelForces">F_x per floor (N), lowest first.</param>
+/// <param name="Cases">Ids of the generated cases: at the centres of mass, then +ecc and −ecc.</param>
+public sealed record PlanElfDirection(string Direction, int Mode, double ModalPeriod, double HeightFeet, double Ta, double Cu, double PeriodUsed, string PeriodNote,
+    double Cs, string CsNote, double Weight, double BaseShear, double Exponent, IReadOnlyList<double> Cvx, IReadOnlyList<double> LevelForces, IReadOnlyList<string> Cases);
+
+/// <summary>A_x of one floor and direction from the generated ±ecc cases (eq. 12.8-14), and whether it was applied.</summary>
+public sealed record PlanAmplification(string Direction, int Level, double MaxDisplacement, double AverageDisplacement, double Ax, bool Applied);
+
+/// <summary>One mode's contribution along an excitation direction: S_a (g) at its period, Γ, its base shears (reduced by R/I_e, N).</summary>
+public sealed record PlanSpectrumMode(string Direction, int Mode, double Period, double Sa, double Gamma, double BaseShearX, double BaseShearY, double BaseTorque);
+
+/// <summary>
+/// One story for an excitation direction: the ELF story shear (the generated case at the centres of mass), the combined
+/// modal story shear along the direction before and after the §12.9.1.4 force scaling, and the corner drift along the
+/// direction: per mode at each outline corner, combined, times the drift factor; plus the static accidental torsion's
+/// drift at that corner; δ = C_d·(that)/I_e. <see cref="DriftFromCombinedDisplacements"/> is the difference of the
+/// combined displacements at the same corner, shown only to make plain that it is not the drift.
+/// </summary>
+public sealed record PlanSpectrumStory(string Direction, int Story, double ElfShear, double ModalShear, double ScaledShear, int Corner, PlanPoint At,
+    double ModalDrift, double TorsionDrift, double Drift, double DesignDrift, double Height, double Ratio, double DriftFromCombinedDisplacements);
+
+/// <summary>A line's story shear for an excitation direction: combined modal (reduced), scaled, the static accidental torsion's share (its magnitude), design = scaled + torsion.</summary>
+public sealed record PlanSpectrumLine(string Direction, int Story, string Line, double Modal, double Scaled, double Torsion, double Design, double Elf);
+
+/// <summary>The response spectrum analysis of one excitation direction.</summary>
+public sealed record PlanSpectrumDirection(string Direction, int ModesUsed, double CumulativeShare, ModalScaling Scaling,
+    IReadOnlyList<PlanSpectrumMode> Modes, IReadOnlyList<PlanSpectrumStory> Stories, IReadOnlyList<PlanSpectrumLine> Lines, double EquilibriumError);
+
+/// <summary>Modal response spectrum analysis of a building in plan (docs/plan.md, docs/seismic.md).</summary>
+public sealed record PlanSpectrumResult(DesignSpectrum Spectrum, ResponseSpectrumSettings Settings, double R, double Ie, IReadOnlyList<PlanSpectrumDirection> Directions);
+
+/// <summary>Everything the seismic block of a building adds.</summary>
+public sealed record PlanSeismicResult(PlanModal Modal, IReadOnlyList<PlanElfDirection> Elf, IReadOnlyList<PlanAmplification> Amplification, PlanSpectrumResult? Spectrum);
+
+/// <summary>
+/// The seismic block of a building in plan: the modes on the floors' (Ux, Uy, Rz) (<see cref="PlanModal"/>), the
+/// equivalent lateral forces along X and Y as plan load cases at the centres of mass ± the accidental eccentricity
+/// (their results go through <see cref="PlanAnalysis.Run"/> like any case), A_x of the accidental torsion
+/// (§12.8.4.3) where a torsional irregularity is found, and the modal response spectrum analysis (§12.9.1).
+/// Every number from memory of ASCE 7-16 (confirm the edition); the governing code decides.
+/// </summary>
+public static class PlanSeismic
+{
+    /// <summary>Solves the building with its seismic cases (without a seismic block: <see cref="PlanAnalysis.Run"/>, and null).</summary>
+    /// <exception cref="UnstableModelException">The lines cannot hold a floor.</exception>
+    /// <exception cref="ModelInputException">A floor has no weight.</exception>
+    public static (PlanResult Result, PlanSeismicResult? Seismic) Run(BuildingPlan plan, AnalysisOptions? options = null)
+    {
+        if (plan.Seismic is not { } s) return (PlanAnalysis.Run(plan, options), null);
+        int n = plan.FloorCount;
+        var condensed = plan.Lines.Select(l => PlanAnalysis.Condense(l, n, options)).ToList();
+        var k = PlanAnalysis.Assemble(plan.Lines, condensed.Select(c => c.K).ToList(), n);
+        PlanAnalysis.CheckStable(plan, k, plan.Size);   // a free floor motion is refused with the DOF named
+        var modal = PlanModal.Solve(plan, k);
+
+        var elf = new[] { "x", "y" }.Select(d => Elf(plan, s, modal, d)).ToList();
+        var cases = plan.Cases.ToList();
+        foreach (var e in elf)
+        {
+            cases.Add(PlanLoads.AtCentreOfMass(e.Cases[0], s.CaseId, "equivalent lateral forces", e.Direction, 0, plan.Levels, e.LevelForces, 0));
+            if (plan.EccentricityRatio > 0)
+            {
+                cases.Add(PlanLoads.AtCentreOfMass(e.Cases[1], s.CaseId, "equivalent lateral forces", e.Direction, +1, plan.Levels, e.LevelForces, plan.EccentricityRatio));
+                cases.Add(PlanLoads.AtCentreOfMass(e.Cases[2], s.CaseId, "equivalent lateral forces", e.Direction, -1, plan.Levels, e.LevelForces, plan.EccentricityRatio));
+            }
+        }
+        var withElf = plan with { Cases = cases };
+        var result = PlanAnalysis.Run(withElf, options, condensed);
+
+        // A_x (§12.8.4.3): from the ELF ±ecc cases; applied where the direction has a Type 1a or 1b irregularity.
+        var amplification = new List<PlanAmplification>();
+        var ax = new Dictionary<string, double[]>();
+        if (plan.EccentricityRatio > 0)
+        {
+            foreach (var e in elf)
+            {
+                bool irregular = result.Irregularity.Any(t => t.Direction == e.Direction && t.Type != "none");
+                var a = new double[n];
+                for (int l = 1; l <= n; l++)
+                {
+                    double best = double.NaN, umax = double.NaN, uavg = double.NaN;
+                    foreach (var id in e.Cases.Skip(1))
+                    {
+                        var c = result.Case(id);
+                        var disp = c.Vertices.Where(v => v.Level == l).Select(v => e.Direction == "x" ? v.Ux : v.Uy).ToList();
+                        double mx = disp.Max(), mn = disp.Min(), avg = 0.5 * (mx + mn);
+                        double x = avg > 0 ? Math.Clamp(Math.Pow(mx / (1.2 * avg), 2), 1, 3) : 1;
+                        if (double.IsNaN(best) || x > best) { best = x; umax = mx; uavg = avg; }
+                    }
+                    a[l - 1] = irregular ? best : 1;
+                    amplification.Add(new PlanAmplification(e.Direction, l, umax, uavg, best, irregular && best > 1));
+                }
+                ax[e.Direction] = a;
+            }
+            var amplified = elf.Where(e => ax[e.Direction].Any(v => v > 1)).ToList();
+            if (amplified.Count > 0)
+            {
+                foreach (var e in amplified)
+                {
+                    cases.Add(PlanLoads.AtCentreOfMass(e.Cases[0] + "+ecc·Ax", s.CaseId, "equivalent lateral forces", e.Direction, +1, plan.Levels, e.LevelForces, plan.EccentricityRatio, ax[e.Direction], ""));
+                    cases.Add(PlanLoads.AtCentreOfMass(e.Cases[0] + "-ecc·Ax", s.CaseId, "equivalent lateral forces", e.Direction, -1, plan.Levels, e.LevelForces, plan.EccentricityRatio, ax[e.Direction], ""));
+                }
+                withElf = plan with { Cases = cases };
+                result = PlanAnalysis.Run(withElf, options, condensed);
+            }
+        }
+
+        PlanSpectrumResult? spectrum = null;
+        if (s.ResponseSpectrum is { } rs)
+            spectrum = Spectrum(withElf, s, rs, modal, condensed, elf, result, ax);
+        return (result, new PlanSeismicResult(modal, elf, amplification, spectrum));
+    }
+
+    private static PlanElfDirection Elf(BuildingPlan plan, PlanSeismicData s, PlanModal modal, string dir)
+    {
+        int d = dir == "x" ? 0 : 1;
+        var levels = plan.Levels;
+        var governing = modal.Modes.OrderByDescending(m => m.Share[d]).ThenBy(m => m.Number).First();
+        double t1 = governing.Period;
+        double hn = levels[^1].Elevation - levels[0].Elevation, hft = hn / 0.3048;
+        var (ct, xx, _) = SeismicPresets.PeriodCoefficients[s.StructureType];
+        double ta = ct * Math.Pow(hft, xx);
+        double cu = SeismicPresets.UpperLimitCoefficient(s.Spectrum.Sd1);
+        (double t, string note) = s.Period switch
+        {
+            PeriodUse.Given => (s.GivenPeriod, "given"),
+            PeriodUse.Approximate => (ta, "approximate period Ta"),
+            PeriodUse.Computed => (t1, $"period of mode {governing.Number}"),
+            _ => t1 <= cu * ta ? (t1, $"period of mode {governing.Number} (below Cu·Ta)") : (cu * ta, $"upper limit Cu·Ta (mode {governing.Number} is longer)"),
+        };
+        var (cs, csNote) = SeismicAnalysis.ResponseCoefficient(s.Spectrum, t);
+        var weights = levels.Select((l, i) => i == 0 ? 0 : l.Weight).ToArray();
+        double w = weights.Sum();
+        double v = cs * w;
+        double k = SeismicAnalysis.Exponent(t);
+        var heights = levels.Select(l => l.Elevation - levels[0].Elevation).ToArray();
+        var cvx = SeismicAnalysis.VerticalDistribution(weights, heights, k);
+        var f = cvx.Skip(1).Select(c => c * v).ToArray();
+        string id = $"{s.CaseId}-{dir}";
+        return new PlanElfDirection(dir, governing.Number, t1, hft, ta, cu, t, note, cs, csNote, w, v, k, cvx.Skip(1).ToArray(), f,
+            plan.EccentricityRatio > 0 ? [id, id + "+ecc", id + "-ecc"] : [id]);
+    }
+
+    private static PlanSpectrumResult Spectrum(BuildingPlan plan, PlanSeismicData s, ResponseSpectrumSettings rs, PlanModal modal,
+        IReadOnlyList<PlanAnalysis.Condensation> condensed, IReadOnlyList<PlanElfDirection> elf, PlanResult result, Dictionary<string, double[]> ax)
+    {
+        int n = plan.FloorCount;
+        var spec = rs.Table.Count > 0 ? new DesignSpectrum(rs.Table) : new DesignSpectrum(s.Spectrum.Sds, s.Spectrum.Sd1, s.Spectrum.TL);
+        double rie = s.Spectrum.R / s.Spectrum.Ie;
+        int count = Math.Max(modal.ModesFor(rs.MassShare, 0, 1), Math.Min(rs.Modes, modal.Modes.Count));
+        var modes = modal.Modes.Take(count).ToList();
+        var rho = ModalCombination.Correlation(modes.Select(m => m.Omega).ToList(), rs.Damping, rs.Rule);
+        var kchol = DenseMatrix.OfArray(modal.Stiffness).Cholesky();
+        var directions = new List<PlanSpectrumDirection>();
+        foreach (var e in elf)
+        {
+            int d = e.Direction == "x" ? 0 : 1;
+            // Per mode: reduced floor forces f = M·φ·Γ·S_a·g/(R/I_e) and displacements u = φ·Γ·S_a·g/(ω²·R/I_e).
+            var perMode = new List<(double[] F, double[] U)>();
+            var modeRows = new List<PlanSpectrumMode>();
+            double eqErr = 0;
+            foreach (var m in modes)
+            {
+                double sa = spec.Sa(m.Period), g = m.Participation[d];
+                double scale = g * sa * SeismicPresets.Gravity / rie;
+                var u = m.Shape.Select(x => x * scale / (m.Omega * m.Omega)).ToArray();
+                var f = PlanModal.Multiply(modal.Mass, m.Shape.Select(x => x * scale).ToArray());
+                perMode.Add((f, u));
+                double fx = 0, fy = 0, mz = 0;
+                for (int l = 0; l < n; l++) { fx += f[3 * l]; fy += f[3 * l + 1]; mz += f[3 * l + 2]; }
+                modeRows.Add(new PlanSpectrumMode(e.Direction, m.Number, m.Period, sa, g, fx, fy, mz));
+                eqErr = Math.Max(eqErr, Equilibrium(plan, condensed, u, fx, fy, mz));
+            }
+
+            // Static accidental torsion (§12.9.1.5): floor torques ±F_x·e·A_x from the ELF forces of this direction.
+            var torque = new double[3 * n];
+            for (int l = 0; l < n; l++)
+            {
+                var lv = plan.Levels[l + 1];
+                double dim = d == 0 ? lv.Outline.Max(q => q.Y) - lv.Outline.Min(q => q.Y) : lv.Outline.Max(q => q.X) - lv.Outline.Min(q => q.X);
+                torque[3 * l + 2] = e.LevelForces[l] * plan.EccentricityRatio * dim * (ax.TryGetValue(e.Direction, out var a) ? a[l] : 1);
+            }
+            var ut = kchol.Solve(DenseVector.OfArray(torque)).ToArray();
+
+            // Story shears along the direction, per mode; base shear V_t.
+            var storyModal = new double[n];
+            for (int st = 1; st <= n; st++)
+                storyModal[st - 1] = ModalCombination.Combine(perMode.Select(p => Above(p.F, st, d)).ToList(), rho);
+            double vt = storyModal[0];
+            var scaling = ModalScaling.Of(vt, e.BaseShear, e.Cs, e.CsNote, e.Weight);
+            var elfCase = result.Case(e.Cases[0]);
+
+            var stories = new List<PlanSpectrumStory>();
+            for (int st = 1; st <= n; st++)
+            {
+                var lv = plan.Levels[st];
+                double h = lv.Elevation - plan.Levels[st - 1].Elevation;
+                PlanSpectrumStory? worst = null;
+                for (int vi = 0; vi < lv.Outline.Count; vi++)
+                {
+                    var at = lv.Outline[vi];
+                    double Along(double[] u, int level) => level < 1 ? 0 : d == 0 ? u[3 * (level - 1)] - u[3 * (level - 1) + 2] * at.Y : u[3 * (level - 1) + 1] + u[3 * (level - 1) + 2] * at.X;
+                    double modalDrift = ModalCombination.Combine(perMode.Select(p => Along(p.U, st) - Along(p.U, st - 1)).ToList(), rho);
+                    double fromDisp = ModalCombination.Combine(perMode.Select(p => Along(p.U, st)).ToList(), rho)
+                        - ModalCombination.Combine(perMode.Select(p => Along(p.U, st - 1)).ToList(), rho);
+                    double tors = Math.Abs(Along(ut, st) - Along(ut, st - 1));
+                    double drift = scaling.DriftFactor * modalDrift + tors;
+                    double design = rs.Cd * drift / s.Spectrum.Ie;
+                    var row = new PlanSpectrumStory(e.Direction, st, Math.Abs(d == 0 ? elfCase.Stories[st - 1].Vx : elfCase.Stories[st - 1].Vy), storyModal[st - 1],
+                        scaling.ForceFactor * storyModal[st - 1], vi, at, modalDrift, tors, drift, design, h, design / h, fromDisp);
+                    if (worst is null || row.Drift > worst.Drift) worst = row;
+                }
+                stories.Add(worst!);
+            }
+
+            var lines = new List<PlanSpectrumLine>();
+            for (int i = 0; i < plan.Lines.Count; i++)
+            {
+                var line = plan.Lines[i];
+                var kh = condensed[i].K;
+                var perModeForces = perMode.Select(p => PlanModal.Multiply(kh, PlanAnalysis.Project(line, p.U, n))).ToList();
+                var torsForces = PlanModal.Multiply(kh, PlanAnalysis.Project(line, ut, n));
+                for (int st = 1; st <= n; st++)
+                {
+                    double modalShear = ModalCombination.Combine(perModeForces.Select(p => Sum(p, st)).ToList(), rho);
+                    double tors = Math.Abs(Sum(torsForces, st));
+                    double scaled = scaling.ForceFactor * modalShear;
+                    double elfShear = Math.Abs(elfCase.LineStories.First(x => x.Story == st && x.Line == line.Id).Shear);
+                    lines.Add(new PlanSpectrumLine(e.Direction, st, line.Id, modalShear, scaled, tors, scaled + tors, elfShear));
+                }
+            }
+            directions.Add(new PlanSpectrumDirection(e.Direction, count, modes[^1].Cumulative[d], scaling, modeRows, stories, lines, eqErr));
+        }
+        return new PlanSpectrumResult(spec, rs, s.Spectrum.R, s.Spectrum.Ie, directions);
+    }
+
+    /// <summary>Σ of the floor forces above the cut of a story along direction <paramref name="d"/> (0 X, 1 Y).</summary>
+    private static double Above(double[] f, int story, int d)
+    {
+        double v = 0;
+        for (int l = story - 1; 3 * l < f.Length; l++) v += f[3 * l + d];
+        return v;
+    }
+
+    private static double Sum(double[] p, int story)
+    {
+        double v = 0;
+        for (int l = story - 1; l < p.Length; l++) v += p[l];
+        return v;
+    }
+
+    /// <summary>Relative out-of-balance of the lines' forces against the mode's floor forces (ΣFx, ΣFy, ΣMz about the origin).</summary>
+    private static double Equilibrium(BuildingPlan plan, IReadOnlyList<PlanAnalysis.Condensation> condensed, double[] u, double fx, double fy, double mz)
+    {
+        int n = plan.FloorCount;
+        double lx = 0, ly = 0, lm = 0;
+        for (int i = 0; i < plan.Lines.Count; i++)
+        {
+            var line = plan.Lines[i];
+            double p = PlanModal.Multiply(condensed[i].K, PlanAnalysis.Project(line, u, n)).Sum();
+            lx += line.Cos * p; ly += line.Sin * p; lm += line.Lever * p;
+        }
+        double size = plan.Size;
+        double scale = new[] { fx, fy, mz / size, lx, ly, lm / size }.Max(Math.Abs);
+        double err = new[] { fx - lx, fy - ly, (mz - lm) / size }.Max(Math.Abs);
+        return scale == 0 ? err : err / scale;
+    }
+}

@@ -1,0 +1,107 @@
+using PlaneLateral.Model;
+
+namespace PlaneLateral.Analysis;
+
+/// <summary>One mode of the planar response spectrum analysis: S_a (g) at its period, Γ (mass-normalised shape), the
+/// effective mass share and its cumulative sum, and its base shear (reduced by R/I_e, N).</summary>
+public sealed record SpectrumModeRow(int Mode, double Period, double Omega, double Sa, double Gamma, double Share, double Cumulative, double BaseShear);
+
+/// <summary>
+/// One story: the ELF story shear (Σ F_x above the cut), the combined modal story shear before and after the force
+/// scaling, the story drift combined from the per-mode drifts (reduced elastic, times the drift factor), the design
+/// drift C_d·(that)/I_e, its ratio to the story height, and — for contrast only — the difference of the combined level
+/// displacements, which is not the drift (N, m).
+/// </summary>
+public sealed record SpectrumStoryRow(int Story, double ElfShear, double ModalShear, double ScaledShear, double Drift, double DesignDrift, double Height, double Ratio,
+    double DriftFromCombinedDisplacements, double Displacement);
+
+/// <summary>The modal response spectrum analysis of a planar model with a seismic block (docs/seismic.md).</summary>
+public sealed record PlanarSpectrumResult(DesignSpectrum Spectrum, ResponseSpectrumSettings Settings, double R, double Ie, int ModesUsed, double CumulativeShare,
+    ModalScaling Scaling, IReadOnlyList<SpectrumModeRow> Modes, IReadOnlyList<SpectrumStoryRow> Stories, double TotalMass);
+
+/// <summary>
+/// Modal response spectrum analysis of a planar model (ASCE 7-16 §12.9.1, from memory): the modes on the mass DOFs of
+/// <c>SeismicAnalysis.Modal(model)</c> (the stiffness condensed onto them exactly), enough of them for 90 % of the mass
+/// (§12.9.1.1), per mode the forces f = M·φ·Γ·S_a·g/(R/I_e) and displacements u = F·f, the story shears and story
+/// drifts per mode, combined by CQC or SRSS, then scaled to the ELF base shear (§12.9.1.4).
+/// </summary>
+public static class PlanarSpectrum
+{
+    /// <summary>Null when the model has no response spectrum block or its stiffness is singular.</summary>
+    public static PlanarSpectrumResult? Run(StructureModel model)
+    {
+        if (model.Seismic is not { ResponseSpectrum: { } rs, Spectrum: { } sv } s) return null;
+        var modal = SeismicAnalysis.Modal(model);
+        var elf = SeismicAnalysis.Forces(model);
+        if (modal is null || elf is null) return null;
+        var levels = model.Building.Levels;
+        int nl = levels.Count;
+        var spec = rs.Table.Count > 0 ? new DesignSpectrum(rs.Table) : new DesignSpectrum(sv.Sds, sv.Sd1, sv.TL);
+        double rie = sv.R / sv.Ie;
+
+        var massive = Enumerable.Range(0, modal.Masses.Length).Where(i => modal.Masses[i] > 0).ToArray();
+        int n = massive.Length;
+        var a = new double[n, n];
+        for (int i = 0; i < n; i++)
+            for (int j = 0; j < n; j++)
+            {
+                int p = massive[i], q = massive[j];
+                a[i, j] = Math.Sqrt(modal.Masses[p]) * 0.5 * (modal.Flexibility[p, q] + modal.Flexibility[q, p]) * Math.Sqrt(modal.Masses[q]);
+            }
+        var (mu, psi) = SymmetricEigen.Solve(a);   // μ = 1/ω², largest first = longest period first
+        double total = modal.Masses.Sum();
+        var all = new List<(double Omega, double Gamma, double Share, double[] Phi)>();
+        for (int k = 0; k < n; k++)
+        {
+            if (!(mu[k] > 0)) break;
+            double omega = 1 / Math.Sqrt(mu[k]);
+            var phi = new double[modal.Masses.Length];
+            for (int i = 0; i < n; i++) phi[massive[i]] = psi[i, k] / Math.Sqrt(modal.Masses[massive[i]]);   // φᵀMφ = 1
+            double l = 0;
+            for (int i = 0; i < phi.Length; i++) l += modal.Masses[i] * phi[i];
+            all.Add((omega, l, l * l / total, phi));
+        }
+        int count = 0;
+        double cumulative = 0;
+        while (count < all.Count && (cumulative < rs.MassShare - 1e-12 || count < rs.Modes)) cumulative += all[count++].Share;
+        var used = all.Take(count).ToList();
+        var rho = ModalCombination.Correlation(used.Select(m => m.Omega).ToList(), rs.Damping, rs.Rule);
+
+        var rows = new List<SpectrumModeRow>();
+        var levelForces = new List<double[]>();
+        var levelDisp = new List<double[]>();
+        double cum = 0;
+        foreach (var (m, idx) in used.Select((m, i) => (m, i)))
+        {
+            double t = 2 * Math.PI / m.Omega, sa = spec.Sa(t);
+            var f = modal.Masses.Select((mass, i) => mass * m.Phi[i] * m.Gamma * sa * SeismicPresets.Gravity / rie).ToArray();
+            var u = modal.Deflect(f);   // = φ·Γ·S_a·g/(ω²·R/I_e) on the mass DOFs (K·φ = ω²·M·φ)
+            var lf = new double[nl];
+            for (int l = 0; l < nl; l++)
+                foreach (var (d, _) in modal.LevelDofs[l]) lf[l] += f[d];
+            levelForces.Add(lf);
+            levelDisp.Add(modal.LevelValues(u));
+            cum += m.Share;
+            rows.Add(new SpectrumModeRow(idx + 1, t, m.Omega, sa, m.Gamma, m.Share, cum, lf.Sum()));
+        }
+
+        double Above(double[] p, int story) { double v = 0; for (int l = story; l < nl; l++) v += p[l]; return v; }
+        var modalShear = Enumerable.Range(1, nl - 1).Select(st => ModalCombination.Combine(levelForces.Select(p => Above(p, st)).ToList(), rho)).ToArray();
+        double vt = modalShear.Length > 0 ? modalShear[0] : 0;
+        var scaling = ModalScaling.Of(vt, elf.BaseShear, elf.Cs, elf.CsNote, elf.TotalWeight);
+        var stories = new List<SpectrumStoryRow>();
+        for (int st = 1; st < nl; st++)
+        {
+            double h = levels[st].Elevation - levels[st - 1].Elevation;
+            double drift = scaling.DriftFactor * ModalCombination.Combine(levelDisp.Select(u => u[st] - u[st - 1]).ToList(), rho);
+            double top = ModalCombination.Combine(levelDisp.Select(u => u[st]).ToList(), rho);
+            double below = ModalCombination.Combine(levelDisp.Select(u => u[st - 1]).ToList(), rho);
+            double design = rs.Cd * drift / sv.Ie;
+            double elfShear = 0;
+            for (int l = st; l < nl; l++) elfShear += elf.LevelForces[l];
+            stories.Add(new SpectrumStoryRow(st, elfShear, modalShear[st - 1], scaling.ForceFactor * modalShear[st - 1], drift, design, h, design / h,
+                scaling.DriftFactor * (top - below), scaling.DriftFactor * top));
+        }
+        return new PlanarSpectrumResult(spec, rs, sv.R, sv.Ie, count, cumulative, scaling, rows, stories, total);
+    }
+}

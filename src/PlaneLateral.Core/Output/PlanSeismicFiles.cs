@@ -1,0 +1,160 @@
+using System.Globalization;
+using System.Text;
+using Newtonsoft.Json;
+using Newtonsoft.Json.Linq;
+using PlaneLateral.Analysis;
+using PlaneLateral.Model;
+using PlaneLateral.Units;
+
+namespace PlaneLateral.Output;
+
+/// <summary>
+/// The seismic files of a building in plan (docs/plan.md): modes, the equivalent lateral forces per direction, A_x, the
+/// response spectrum's modes, stories and line shears, and plan-seismic.json with all of them, the caution and the
+/// scaling rule that applied. Building units; the text depends only on the input.
+/// </summary>
+public static class PlanSeismicFiles
+{
+    public const string Source = "ASCE 7-16 §11.4.6, §12.8, §12.9.1 (numbering and values from memory: confirm the edition); the governing code decides";
+
+    public static IReadOnlyList<(string Name, string Text)> Render(PlanResult r, PlanSeismicResult s)
+    {
+        var files = new List<(string, string)>
+        {
+            ("plan-modes.csv", Modes(r, s)),
+            ("plan-elf.csv", Elf(r, s)),
+        };
+        if (s.Amplification.Count > 0) files.Add(("plan-amplification.csv", Amplification(r, s)));
+        if (s.Spectrum is { } sp)
+        {
+            files.Add(("plan-spectrum-modes.csv", SpectrumModes(r, sp)));
+            files.Add(("plan-spectrum-stories.csv", SpectrumStories(r, sp)));
+            files.Add(("plan-spectrum-lines.csv", SpectrumLines(r, sp)));
+        }
+        files.Add(("plan-seismic.json", Json(r, s)));
+        return files;
+    }
+
+    private static string F(double v) => double.IsFinite(v) ? v.ToString("G12", CultureInfo.InvariantCulture) : "n/a";
+    private static string Csv(string s) => CsvText.Cell(s);
+
+    private static string Modes(PlanResult r, PlanSeismicResult s)
+    {
+        var p = r.Plan;
+        var sb = new StringBuilder("mode,period [s],omega [rad/s],dominant,share x,share y,share torsion,cumulative x,cumulative y,cumulative torsion,gamma x,gamma y");
+        foreach (var l in p.Levels.Skip(1)) sb.Append($",{Csv(l.Id + " Ux")},{Csv(l.Id + " Uy")},{Csv(l.Id + " Rz [1/" + p.Units.LengthSymbol + "]")}");
+        sb.Append('\n');
+        foreach (var m in s.Modal.Modes)
+        {
+            sb.Append($"{m.Number},{F(m.Period)},{F(m.Omega)},{m.Dominant},{F(m.Share[0])},{F(m.Share[1])},{F(m.Share[2])},{F(m.Cumulative[0])},{F(m.Cumulative[1])},{F(m.Cumulative[2])},{F(m.Participation[0])},{F(m.Participation[1])}");
+            foreach (var (ux, uy, rz) in m.Display(p)) sb.Append($",{F(ux)},{F(uy)},{F(rz / p.Units.FromSI(1, Quantity.Length))}");
+            sb.Append('\n');
+        }
+        return sb.ToString();
+    }
+
+    private static string Elf(PlanResult r, PlanSeismicResult s)
+    {
+        var u = r.Plan.Units;
+        string fu = u.ForceSymbol;
+        var sb = new StringBuilder($"direction,mode,modal period [s],Ta [s],Cu,Cu*Ta [s],period used [s],period note,Cs,Cs governed by,W [{fu}],V [{fu}],k,cases\n");
+        foreach (var e in s.Elf)
+            sb.Append($"{e.Direction},{e.Mode},{F(e.ModalPeriod)},{F(e.Ta)},{F(e.Cu)},{F(e.Cu * e.Ta)},{F(e.PeriodUsed)},{Csv(e.PeriodNote)},{F(e.Cs)},{Csv(e.CsNote)},{F(u.FromSI(e.Weight, Quantity.Force))},{F(u.FromSI(e.BaseShear, Quantity.Force))},{F(e.Exponent)},{Csv(string.Join(" ", e.Cases))}\n");
+        sb.Append($"\ndirection,level,Cvx,Fx [{fu}]\n");
+        foreach (var e in s.Elf)
+            for (int l = 0; l < e.LevelForces.Count; l++)
+                sb.Append($"{e.Direction},{Csv(r.Plan.Levels[l + 1].Id)},{F(e.Cvx[l])},{F(u.FromSI(e.LevelForces[l], Quantity.Force))}\n");
+        return sb.ToString();
+    }
+
+    private static string Amplification(PlanResult r, PlanSeismicResult s)
+    {
+        var u = r.Plan.Units;
+        var sb = new StringBuilder($"direction,level,max displacement [{u.LengthSymbol}],average of the ends [{u.LengthSymbol}],Ax,applied\n");
+        foreach (var a in s.Amplification)
+            sb.Append($"{a.Direction},{Csv(r.Plan.Levels[a.Level].Id)},{F(u.FromSI(a.MaxDisplacement, Quantity.Length))},{F(u.FromSI(a.AverageDisplacement, Quantity.Length))},{F(a.Ax)},{(a.Applied ? "yes" : "no")}\n");
+        return sb.ToString();
+    }
+
+    private static string SpectrumModes(PlanResult r, PlanSpectrumResult sp)
+    {
+        var u = r.Plan.Units;
+        string fu = u.ForceSymbol;
+        var sb = new StringBuilder($"direction,mode,period [s],Sa [g],gamma,base shear x [{fu}],base shear y [{fu}],base torque [{u.Label(Quantity.Moment)}]\n");
+        foreach (var d in sp.Directions)
+            foreach (var m in d.Modes)
+                sb.Append($"{d.Direction},{m.Mode},{F(m.Period)},{F(m.Sa)},{F(m.Gamma)},{F(u.FromSI(m.BaseShearX, Quantity.Force))},{F(u.FromSI(m.BaseShearY, Quantity.Force))},{F(u.FromSI(m.BaseTorque, Quantity.Moment))}\n");
+        return sb.ToString();
+    }
+
+    private static string SpectrumStories(PlanResult r, PlanSpectrumResult sp)
+    {
+        var u = r.Plan.Units;
+        string fu = u.ForceSymbol, lu = u.LengthSymbol;
+        double L(double v) => u.FromSI(v, Quantity.Length);
+        var sb = new StringBuilder($"direction,story,ELF shear [{fu}],modal shear [{fu}],scaled modal shear [{fu}],corner,x [{lu}],y [{lu}],modal drift [{lu}],accidental torsion drift [{lu}],drift [{lu}],design drift Cd*drift/Ie [{lu}],height [{lu}],design drift ratio,difference of combined displacements (not the drift) [{lu}]\n");
+        foreach (var d in sp.Directions)
+            foreach (var st in d.Stories)
+                sb.Append($"{d.Direction},{st.Story},{F(u.FromSI(st.ElfShear, Quantity.Force))},{F(u.FromSI(st.ModalShear, Quantity.Force))},{F(u.FromSI(st.ScaledShear, Quantity.Force))},{st.Corner + 1},{F(L(st.At.X))},{F(L(st.At.Y))},{F(L(st.ModalDrift))},{F(L(st.TorsionDrift))},{F(L(st.Drift))},{F(L(st.DesignDrift))},{F(L(st.Height))},{F(st.Ratio)},{F(L(st.DriftFromCombinedDisplacements))}\n");
+        return sb.ToString();
+    }
+
+    private static string SpectrumLines(PlanResult r, PlanSpectrumResult sp)
+    {
+        var u = r.Plan.Units;
+        string fu = u.ForceSymbol;
+        double Fo(double v) => u.FromSI(v, Quantity.Force);
+        var sb = new StringBuilder($"direction,story,line,ELF shear [{fu}],modal shear [{fu}],scaled modal shear [{fu}],accidental torsion [{fu}],design shear [{fu}]\n");
+        foreach (var d in sp.Directions)
+            foreach (var l in d.Lines)
+                sb.Append($"{d.Direction},{l.Story},{Csv(l.Line)},{F(Fo(l.Elf))},{F(Fo(l.Modal))},{F(Fo(l.Scaled))},{F(Fo(l.Torsion))},{F(Fo(l.Design))}\n");
+        return sb.ToString();
+    }
+
+    private static string Json(PlanResult r, PlanSeismicResult s)
+    {
+        var u = r.Plan.Units;
+        double L(double v) => u.FromSI(v, Quantity.Length);
+        double Fo(double v) => u.FromSI(v, Quantity.Force);
+        var root = new JObject
+        {
+            ["program"] = $"PlaneLateral {ResultFiles.Version}",
+            ["caution"] = ResultFiles.Caution,
+            ["source"] = Source,
+            ["units"] = new JObject { ["force"] = u.ForceSymbol, ["length"] = u.LengthSymbol },
+            ["modes"] = new JArray(s.Modal.Modes.Select(m => new JObject
+            {
+                ["mode"] = m.Number, ["period"] = m.Period, ["dominant"] = m.Dominant,
+                ["share"] = new JArray(m.Share), ["cumulative"] = new JArray(m.Cumulative), ["gamma"] = new JArray(m.Participation[0], m.Participation[1]),
+            })),
+            ["rotationPivot"] = new JArray(L(s.Modal.Pivot.X), L(s.Modal.Pivot.Y)),
+            ["equivalentLateralForces"] = new JArray(s.Elf.Select(e => new JObject
+            {
+                ["direction"] = e.Direction, ["mode"] = e.Mode, ["modalPeriod"] = e.ModalPeriod, ["Ta"] = e.Ta, ["Cu"] = e.Cu, ["periodUsed"] = e.PeriodUsed,
+                ["periodNote"] = e.PeriodNote, ["Cs"] = e.Cs, ["CsGovernedBy"] = e.CsNote, ["W"] = Fo(e.Weight), ["V"] = Fo(e.BaseShear), ["k"] = e.Exponent,
+                ["forces"] = new JArray(e.LevelForces.Select(Fo)), ["cases"] = new JArray(e.Cases),
+            })),
+            ["amplification"] = new JArray(s.Amplification.Select(a => new JObject { ["direction"] = a.Direction, ["level"] = r.Plan.Levels[a.Level].Id, ["Ax"] = a.Ax, ["applied"] = a.Applied })),
+        };
+        if (s.Spectrum is { } sp)
+            root["responseSpectrum"] = new JObject
+            {
+                ["spectrum"] = sp.Spectrum.Describe(), ["combination"] = sp.Settings.Rule.ToString().ToUpperInvariant(), ["damping"] = sp.Settings.Damping,
+                ["R"] = sp.R, ["Ie"] = sp.Ie, ["Cd"] = sp.Settings.Cd,
+                ["directions"] = new JArray(sp.Directions.Select(d => new JObject
+                {
+                    ["direction"] = d.Direction, ["modes"] = d.ModesUsed, ["massShare"] = d.CumulativeShare,
+                    ["Vt"] = Fo(d.Scaling.BaseShearModal), ["V"] = Fo(d.Scaling.BaseShearElf), ["forceFactor"] = d.Scaling.ForceFactor, ["driftFactor"] = d.Scaling.DriftFactor,
+                    ["scaling"] = d.Scaling.Why, ["modalEquilibriumError"] = d.EquilibriumError,
+                    ["stories"] = new JArray(d.Stories.Select(st => new JObject
+                    {
+                        ["story"] = st.Story, ["elfShear"] = Fo(st.ElfShear), ["modalShear"] = Fo(st.ModalShear), ["scaledShear"] = Fo(st.ScaledShear),
+                        ["corner"] = st.Corner + 1, ["drift"] = L(st.Drift), ["designDrift"] = L(st.DesignDrift), ["ratio"] = st.Ratio,
+                        ["allowedRatio"] = r.Plan.DriftLimit is { } lim ? lim.AllowedRatio : null,
+                        ["within"] = r.Plan.DriftLimit is { } lim2 ? st.Ratio <= lim2.AllowedRatio : null,
+                    })),
+                })),
+            };
+        return root.ToString(Formatting.Indented) + "\n";
+    }
+}
