@@ -31,6 +31,7 @@ internal static class PlanSolve
         var (r, hand) = solution;
         string folder = outDir ?? CommandSupport.DefaultFolder(path);
         if (!CommandSupport.TryWrite(() => AtomicFiles.WriteAll(folder, PlanFiles.Render(r)), "results", stderr, out var written, out exit)) return exit;
+        stderr.Write(ModelWarning.Lines(r.Plan.Warnings));   // plausibility warnings (Model/Plausibility.Plan.cs)
         stdout.Write($"PlaneLateral {ResultFiles.Version}: building in plan, linear static analysis\n\n");
         stdout.Write(PlanReport.Render(r, hand, path));
         stdout.Write($"\nResults written to {folder}: {written.Count} files (plan-*.csv, plan.json, line-*-*.csv)\n");
@@ -43,6 +44,7 @@ internal static class PlanSolve
         {
             var p = ModelReader.ReadPlanFile(path);
             stdout.Write($"{path}: valid building in plan. {p.FloorCount} floors, {p.Lines.Count} lines, {p.Cases.Count} load cases, units {p.Units}.\n");
+            stderr.Write(ModelWarning.Lines(p.Warnings));
             return ExitCodes.Success;
         }
         catch (ModelInputException e)

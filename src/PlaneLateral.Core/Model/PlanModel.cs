@@ -82,6 +82,9 @@ public sealed record BuildingPlan
 
     public PlanDriftLimit? DriftLimit { get; init; }
 
+    /// <summary>Plausibility warnings on the building file and its lines' models (Model/Plausibility.Plan.cs); none changes a number.</summary>
+    public IReadOnlyList<ModelWarning> Warnings { get; init; } = [];
+
     /// <summary>Floors (levels above the base).</summary>
     public int FloorCount => Levels.Count - 1;
 
