@@ -119,6 +119,7 @@ public static partial class ModelReader
             var comparisons = ReadComparisons(f.Objects("comparisons", false, "give \"comparisons\" as an array of checks, e.g. [{\"id\": \"...\", \"kind\": \"wall-line\", \"members\": [...]}] (docs/comparisons.md)"), members, supports, cases);
             var panels = ReadPanels(f.Objects("panels", false, "give \"panels\" as an array of objects"), materials);
             CheckPanelWalls(root, panels);
+            CheckPanelFootings(footings, panels);   // ModelReader.Footings.cs
             CheckPanelLinkSupports(supports, f.Token("seismic"));   // ModelReader.PanelLinks.cs
             f.RejectUnknownKeys();
 
