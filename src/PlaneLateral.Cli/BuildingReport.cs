@@ -73,7 +73,7 @@ internal static class BuildingReport
             var it = new TextTable("case", "story", $"stiffness [{ku}]", "k / k above", "k / mean of 3 above", "1a soft", "1b extreme").Numeric(1, 2, 3, 4);
             foreach (var i in br.Irregularity.Where(i => shown.Contains(i.CaseId)))
                 it.Add(i.CaseId, i.Story.Index.ToString(CultureInfo.InvariantCulture), TextTable.Num(u.FromSI(i.Stiffness, Quantity.TranslationalStiffness)), Ratio(i.RatioToAbove), Ratio(i.RatioToAverageAbove),
-                    i.Soft ? "yes" : "no", i.ExtremelySoft ? "yes" : "no");
+                    i.WindCase ? "n/a (wind)" : i.Soft ? "yes" : "no", i.WindCase ? "n/a (wind)" : i.ExtremelySoft ? "yes" : "no");
             sb.Append(it.Render());
         }
 

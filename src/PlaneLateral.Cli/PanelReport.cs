@@ -13,7 +13,7 @@ internal static class PanelReport
         if (r.Panels.Count == 0) return "";
         var u = r.Model.Units;
         string len = u.LengthSymbol, ku = u.Label(Quantity.TranslationalStiffness);
-        var sb = new StringBuilder("\nWall panels (plane-stress continuum; base held, floors tied exactly)\n");
+        var sb = new StringBuilder("\nWall panels (plane-stress continuum; base held, or on its footing where one is given; floors tied exactly)\n");
         var t = new TextTable("panel", "h/l", "openings", "element", "unknowns (finest)", $"top stiffness, finest mesh [{ku}]", "observed order", $"extrapolated [{ku}]", "est. error", "worst backward error")
             .Numeric(1, 2, 4, 5, 6, 7, 8, 9);
         foreach (var p in r.Panels)

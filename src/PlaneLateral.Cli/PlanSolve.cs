@@ -32,6 +32,7 @@ internal static class PlanSolve
         string folder = outDir ?? CommandSupport.DefaultFolder(path);
         var files = seismic is null ? PlanFiles.Render(r) : [.. PlanFiles.Render(r), .. PlanSeismicFiles.Render(r, seismic)];
         if (!CommandSupport.TryWrite(() => AtomicFiles.WriteAll(folder, files), "results", stderr, out var written, out exit)) return exit;
+        stderr.Write(ModelWarning.Lines(r.Plan.Warnings));   // plausibility warnings (Model/Plausibility.Plan.cs)
         stdout.Write($"PlaneLateral {ResultFiles.Version}: building in plan, linear static analysis{(seismic is null ? "" : ", modes and seismic forces")}\n\n");
         stdout.Write(PlanReport.Render(r, hand, path));
         if (seismic is not null) stdout.Write(PlanSeismicReport.Render(r, seismic));
@@ -45,6 +46,7 @@ internal static class PlanSolve
         {
             var p = ModelReader.ReadPlanFile(path);
             stdout.Write($"{path}: valid building in plan. {p.FloorCount} floors, {p.Lines.Count} lines, {p.Cases.Count} load cases, units {p.Units}.\n");
+            stderr.Write(ModelWarning.Lines(p.Warnings));
             return ExitCodes.Success;
         }
         catch (ModelInputException e)

@@ -28,18 +28,26 @@ internal static class SweepCommand
         var tol = new Option<string?>("--tolerance") { Description = "Band on FE/hand − 1, as 0.10 or 10%. Default 0.10." };
         var openingWidth = new Option<double?>("--opening-width") { Description = "Width of one centred window as a fraction of the wall length l, in (0, 1); give with --opening-height. Hand value: the perforated-wall method; FE: the panel with the window and the equivalent frame." };
         var openingHeight = new Option<double?>("--opening-height") { Description = "Height of the centred window as a fraction of the wall height h, in (0, 1); give with --opening-width." };
+        var footingLength = new Option<double?>("--footing-length") { Description = "Plan length of a footing under the wall, along the wall, in LENGTH (≥ the wall length). With --footing-width and --soil-shear-modulus: the FE wall stands on the footing's springs (Pais & Kausel), the hand pier formula keeps its fixed base, so FE/hand shows where ignoring the footing's rocking fails. Line members only." };
+        var footingWidth = new Option<double?>("--footing-width") { Description = "Plan width of the footing across the wall, in LENGTH." };
+        var footingEmbedment = new Option<double>("--footing-embedment") { Description = "Depth of the footing's base below grade, in LENGTH.", DefaultValueFactory = _ => 0 };
+        var soilG = new Option<double?>("--soil-shear-modulus") { Description = "Soil shear modulus G under the footing, in FORCE/LENGTH² (strain-compatible)." };
+        var soilNu = new Option<double>("--soil-poisson") { Description = "Soil Poisson's ratio, in (0, 0.5).", DefaultValueFactory = _ => 0.35 };
         var noPanel = new Option<bool>("--no-panel") { Description = "Leave out the plane-stress panel (faster); the Timoshenko line members become the reference." };
         var outOption = new Option<string?>("--out", "-o") { Description = "Folder for sweep.csv, sweep-ratio.png and sweep-shear-share.png. Default planelateral-results/sweep." };
         var cmd = new Command("sweep",
             "Vary a wall's aspect ratio h/l over a range, for cantilever and fixed-fixed ends, and set the hand formula (the pier formula, flexural, shear and total; with --opening-width and --opening-height, the perforated-wall method) beside the converged plane-stress panel and the Timoshenko line model at every point; write a CSV and two PNG figures.")
         {
             from, to, points, spacing, ends, units, material, e, g, nu, length, thickness, shearFactor, tol, openingWidth, openingHeight, noPanel, outOption,
+            footingLength, footingWidth, footingEmbedment, soilG, soilNu,
         };
         cmd.SetAction(p =>
         {
             var o = new SweepArgs(p.GetValue(from), p.GetValue(to), p.GetValue(points), p.GetValue(spacing)!, p.GetValue(ends)!,
                 p.GetValue(units)!, p.GetValue(material)!, p.GetValue(e), p.GetValue(g), p.GetValue(nu), p.GetValue(length),
-                p.GetValue(thickness), p.GetValue(shearFactor), p.GetValue(tol), p.GetValue(outOption)) { NoPanel = p.GetValue(noPanel), OpeningWidth = p.GetValue(openingWidth), OpeningHeight = p.GetValue(openingHeight) };
+                p.GetValue(thickness), p.GetValue(shearFactor), p.GetValue(tol), p.GetValue(outOption)) { NoPanel = p.GetValue(noPanel), OpeningWidth = p.GetValue(openingWidth), OpeningHeight = p.GetValue(openingHeight),
+                FootingLength = p.GetValue(footingLength), FootingWidth = p.GetValue(footingWidth), FootingEmbedment = p.GetValue(footingEmbedment),
+                SoilShearModulus = p.GetValue(soilG), SoilPoisson = p.GetValue(soilNu) };
             return Run(o, stdout, stderr);
         });
         return cmd;
@@ -59,7 +67,17 @@ internal static class SweepCommand
 
         public SweepOpening? Opening => OpeningWidth is double w && OpeningHeight is double h ? new SweepOpening(w, h) : null;
 
-        public IReadOnlyList<ISweepFeModel> Models() => AspectSweep.DefaultModels(Opening, panel: !NoPanel);
+        public double? FootingLength { get; init; }
+        public double? FootingWidth { get; init; }
+        public double FootingEmbedment { get; init; }
+        public double? SoilShearModulus { get; init; }
+        public double SoilPoisson { get; init; } = 0.35;
+
+        /// <summary>The footing, when its length, width and soil modulus are all given.</summary>
+        public SweepFooting? Footing => FootingLength is double fl && FootingWidth is double fw && SoilShearModulus is double sg
+            ? new SweepFooting(fl, fw, FootingEmbedment, sg, SoilPoisson) : null;
+
+        public IReadOnlyList<ISweepFeModel> Models() => Footing is not null ? AspectSweep.DefaultModels(panel: false) : AspectSweep.DefaultModels(Opening, panel: !NoPanel);
     }
 
     /// <summary>Turns the command line into a spec, listing every problem at once.</summary>
@@ -98,7 +116,10 @@ internal static class SweepCommand
         double t = a.Thickness ?? u.FromSI(8 * 0.0254, Quantity.Length);
         if ((a.OpeningWidth is null) != (a.OpeningHeight is null))
             problems.Add($"{(a.OpeningWidth is null ? "--opening-height" : "--opening-width")} is given without {(a.OpeningWidth is null ? "--opening-width" : "--opening-height")}. Fix: give both, e.g. --opening-width 0.3 --opening-height 0.4, or neither for the solid wall.");
-        var spec = new SweepSpec(a.From, a.To, a.Points, spacing, u, len, t, eVal, gVal, matName, a.ShearFactor, ends, tol) { Opening = a.Opening };
+        int footingKeys = (a.FootingLength is null ? 0 : 1) + (a.FootingWidth is null ? 0 : 1) + (a.SoilShearModulus is null ? 0 : 1);
+        if (footingKeys is 1 or 2)
+            problems.Add("a footing needs --footing-length, --footing-width and --soil-shear-modulus together. Fix: give all three (and optionally --footing-embedment, --soil-poisson), or none for a fixed base.");
+        var spec = new SweepSpec(a.From, a.To, a.Points, spacing, u, len, t, eVal, gVal, matName, a.ShearFactor, ends, tol) { Opening = a.Opening, Footing = a.Footing };
         if (problems.Count == 0) problems.AddRange(AspectSweep.Problems(spec, a.Models()));
         return problems.Count == 0 ? spec : null;
     }
@@ -136,6 +157,7 @@ internal static class SweepCommand
             : $"PlaneLateral {ResultFiles.Version}: aspect-ratio sweep of a wall with {spec.Opening.Words}\n\n");
         stdout.Write($"Wall      l = {spec.Length.ToString("G6", CultureInfo.InvariantCulture)} {u.LengthSymbol}, t = {spec.Thickness.ToString("G6", CultureInfo.InvariantCulture)} {u.LengthSymbol}, f = {spec.FormFactor.ToString("G4", CultureInfo.InvariantCulture)}\n");
         stdout.Write($"Material  {spec.MaterialName}: E = {spec.E.ToString("G6", CultureInfo.InvariantCulture)}, G = {spec.G.ToString("G6", CultureInfo.InvariantCulture)} {u.Label(Quantity.Stress)}\n");
+        if (spec.Footing is { } ft) stdout.Write($"Footing   {ft.Words(u)}; FE on its springs, hand = the fixed-base pier formula (FE/hand below 1: the footing's flexibility the hand ignores)\n");
         stdout.Write($"Range     h/l {spec.From.ToString("G6", CultureInfo.InvariantCulture)} to {spec.To.ToString("G6", CultureInfo.InvariantCulture)}, {spec.Points} points ({a.Spacing}), {string.Join(" and ", spec.Ends.Select(SweepFiles.EndsName))}\n\n");
         bool two = result.FeModels.Count > 1;
         var t = two

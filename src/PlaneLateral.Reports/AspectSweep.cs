@@ -39,6 +39,9 @@ public sealed record SweepSpec(
     /// <summary>One centred window at every point (its size as fractions of the wall's length and height), or null for the solid wall.</summary>
     public SweepOpening? Opening { get; init; }
 
+    /// <summary>A footing on soil under the wall at every point (the FE models stand on its springs; the hand pier formula keeps the fixed base), or null.</summary>
+    public SweepFooting? Footing { get; init; }
+
     /// <summary>The h/l values, smallest first.</summary>
     public double[] AspectRatios()
     {
@@ -69,6 +72,28 @@ public sealed record SweepOpening(double WidthFraction, double HeightFraction)
     public string Words => $"a centred window {WidthFraction.ToString("G4", CultureInfo.InvariantCulture)} l wide and {HeightFraction.ToString("G4", CultureInfo.InvariantCulture)} h high";
 }
 
+/// <summary>
+/// A rigid rectangular surface or embedded footing under the sweep's wall, on soil (in the spec's units): plan length
+/// along the wall (≥ the wall's length), width across it, embedment, soil shear modulus G and Poisson's ratio ν. Its
+/// static springs are those of the model's footings (Pais &amp; Kausel 1988, docs/footings.md), the same at every point.
+/// </summary>
+public sealed record SweepFooting(double Length, double Width, double Embedment, double ShearModulus, double PoissonRatio)
+{
+    /// <summary>Sliding and rocking springs in the wall's plane (SI: N/m, N·m/rad) for the spec's units.</summary>
+    public (double Sliding, double Rocking) Springs(UnitSystem u)
+    {
+        var k = FootingSoilSprings.Compute(FootingFormulaSet.PaisKausel, u.ToSI(Length, Quantity.Length), u.ToSI(Width, Quantity.Length),
+            u.ToSI(Embedment, Quantity.Length), u.ToSI(ShearModulus, Quantity.Stress), PoissonRatio);
+        return (k.Sliding, k.Rocking);
+    }
+
+    /// <summary>"a 288 × 72 in footing, embedment 24 in, on soil G = 4.9 ksi, ν = 0.35".</summary>
+    public string Words(UnitSystem u) =>
+        $"a {G(Length)} × {G(Width)} {u.LengthSymbol} footing, embedment {G(Embedment)} {u.LengthSymbol}, on soil G = {G(ShearModulus)} {u.Label(Quantity.Stress)}, ν = {G(PoissonRatio)} (Pais & Kausel 1988 springs)";
+
+    private static string G(double v) => v.ToString("G4", CultureInfo.InvariantCulture);
+}
+
 /// <summary>One wall of the sweep, in SI (m, N/m²), handed to each FE model.</summary>
 /// <param name="AspectRatio">h/l.</param>
 /// <param name="Height">h (m).</param>
@@ -81,6 +106,9 @@ public sealed record SweepWall(double AspectRatio, double Height, double Length,
 {
     /// <summary>The spec's centred window, or null for the solid wall.</summary>
     public SweepOpening? Opening { get; init; }
+
+    /// <summary>Sliding and rocking springs (N/m, N·m/rad) of a footing under the base, or null for a fixed base.</summary>
+    public (double Sliding, double Rocking)? BaseSprings { get; init; }
 
     /// <summary>The window in SI (m), or none.</summary>
     public IReadOnlyList<OpeningSpec> Openings => Opening is null ? [] : [Opening.For(Length, Height)];
@@ -112,7 +140,7 @@ public sealed class LineMemberWallModel(int segments = 4) : ISweepFeModel
     public string Name => "Timoshenko line members";
 
     public string Description =>
-        $"the wall as {segments} exact Timoshenko beam-columns on its centre line (A = t·l, I = t·l³/12, shear area A/f), base fixed, top free or held against rotation, unit force at the top; stiffness 1/Δ; shear share from a second solve without shear deformation";
+        $"the wall as {segments} exact Timoshenko beam-columns on its centre line (A = t·l, I = t·l³/12, shear area A/f), base fixed (or on the footing's sliding and rocking springs, when the sweep has a footing), top free or held against rotation, unit force at the top; stiffness 1/Δ; shear share from a second solve without shear deformation";
 
     public (double Stiffness, double? ShearShare) Solve(SweepWall w)
     {
@@ -132,7 +160,10 @@ public sealed class LineMemberWallModel(int segments = 4) : ISweepFeModel
         for (int m = 0; m < segments; m++)
             members.Add(new Member(m, $"wall-{m + 1}", m, m + 1, MemberKind.BeamColumn, "wall", mat.Id, w.E, w.G, a, i, shearArea,
                 false, false, 0, 0, StiffnessModifiers.None, "wall"));
-        var supports = new List<Support> { new(0, "fixed", true, true, true, 0, 0, 0) };
+        var supports = new List<Support>
+        {
+            w.BaseSprings is { } k ? new(0, "footing", false, true, false, k.Sliding, 0, k.Rocking) : new(0, "fixed", true, true, true, 0, 0, 0),
+        };
         if (w.Ends == EndFixity.FixedFixed) supports.Add(new Support(segments, "custom", false, false, true, 0, 0, 0));
         return new StructureModel
         {
@@ -216,6 +247,19 @@ public static class AspectSweep
             if (o.HeightFraction >= 1 - 1e-6 && o.HeightFraction < 1)
                 p.Add($"the opening height fraction {G(o.HeightFraction)} leaves wall above and below thinner than a millionth of the wall height. Fix: give --opening-height below 0.999999.");
         }
+        if (s.Footing is { } f)
+        {
+            if (!(double.IsFinite(f.Length) && f.Length > 0 && double.IsFinite(f.Width) && f.Width > 0))
+                p.Add($"the footing {G(f.Length)} × {G(f.Width)} is not positive. Fix: give --footing-length and --footing-width above 0.");
+            else if (f.Length < s.Length)
+                p.Add($"the footing length {G(f.Length)} is shorter than the wall length {G(s.Length)} it carries. Fix: give --footing-length at least the wall's length.");
+            if (!(double.IsFinite(f.Embedment) && f.Embedment >= 0)) p.Add($"the footing embedment {G(f.Embedment)} is negative. Fix: give --footing-embedment 0 or more.");
+            else if (double.IsFinite(f.Width) && f.Width > 0 && f.Embedment > 2 * Math.Min(f.Length, f.Width))
+                p.Add($"the footing embedment {G(f.Embedment)} is more than twice the footing's smaller side {G(Math.Min(f.Length, f.Width))}: beyond the range of the footing formulas. Fix: check --footing-embedment.");
+            if (!(double.IsFinite(f.ShearModulus) && f.ShearModulus > 0)) p.Add($"the soil shear modulus {G(f.ShearModulus)} is not positive. Fix: give --soil-shear-modulus above 0.");
+            if (!(f.PoissonRatio > 0 && f.PoissonRatio < 0.5)) p.Add($"the soil Poisson's ratio {G(f.PoissonRatio)} is outside (0, 0.5). Fix: give --soil-poisson such as 0.35.");
+            if (s.Opening is not null) p.Add("a footing with a window is not swept (the perforated-wall method and the equivalent frame take a fixed base). Fix: give the footing or the window, not both.");
+        }
         return p;
     }
 
@@ -233,7 +277,8 @@ public static class AspectSweep
     /// The models for a spec: <see cref="DefaultModels(bool)"/> for the solid wall; with an opening, the converged
     /// plane-stress panel with the window (the reference), then the equivalent frame of Timoshenko line members.
     /// </summary>
-    public static IReadOnlyList<ISweepFeModel> DefaultModels(SweepSpec spec, bool panel = true) => DefaultModels(spec.Opening, panel);
+    public static IReadOnlyList<ISweepFeModel> DefaultModels(SweepSpec spec, bool panel = true) =>
+        spec.Footing is not null ? DefaultModels(panel: false) : DefaultModels(spec.Opening, panel);
 
     /// <summary>As <see cref="DefaultModels(SweepSpec, bool)"/>, for a spec with this opening (null: the solid wall).</summary>
     public static IReadOnlyList<ISweepFeModel> DefaultModels(SweepOpening? opening, bool panel = true) =>
@@ -262,6 +307,9 @@ public static class AspectSweep
         double l = u.ToSI(spec.Length, Quantity.Length), t = u.ToSI(spec.Thickness, Quantity.Length);
         double e = u.ToSI(spec.E, Quantity.Stress), g = u.ToSI(spec.G, Quantity.Stress);
         var ratios = spec.AspectRatios();
+        (double, double)? springs = spec.Footing?.Springs(u);
+        if (springs is not null && models.Any(m => m is not LineMemberWallModel))
+            throw new ArgumentException("a sweep with a footing runs the Timoshenko line members only (the panel and the equivalent frame take a fixed base).");
         int n = ratios.Length * spec.Ends.Count;
         var points = new SweepPoint[n];
         int done = 0;
@@ -274,7 +322,7 @@ public static class AspectSweep
             var hand = spec.Opening is null
                 ? Piers.Rectangular(ends, 1.0, hUser, spec.Length, spec.Thickness, spec.E, spec.G, spec.FormFactor)
                 : PerforatedHand(spec, ends, hUser);
-            var wall = new SweepWall(aspect, aspect * l, l, t, e, g, spec.FormFactor, ends) { Opening = spec.Opening };
+            var wall = new SweepWall(aspect, aspect * l, l, t, e, g, spec.FormFactor, ends) { Opening = spec.Opening, BaseSprings = springs };
             var fe = new FeEstimate[models.Count];
             var errors = new double?[models.Count];
             for (int m = 0; m < models.Count; m++)

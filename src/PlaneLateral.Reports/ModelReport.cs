@@ -174,7 +174,7 @@ public static partial class ModelReport
         {
             blocks.Add(new Table("Stiffness (soft story) irregularity, ASCE 7-16 Table 12.3-2", ["case", "story", $"stiffness [{stiff}]", "k / k above", "k / mean of 3 above", "result"],
                 b.Irregularity.Select(x => (IReadOnlyList<string>)[x.CaseId, $"{x.Story.Index}", K(x.Stiffness), Pct(x.RatioToAbove, "0"), Pct(x.RatioToAverageAbove, "0"),
-                    x.ExtremelySoft ? "extreme soft story (1b)" : x.Soft ? "soft story (1a)" : "regular"]).ToList(), [1, 2, 3, 4]));
+                    x.Label]).ToList(), [1, 2, 3, 4]));
         }
 
         if (sr is not null) AddSeismic(blocks, Figure, r, b, sr, Section("Seismic story forces, periods and second-order effects"));

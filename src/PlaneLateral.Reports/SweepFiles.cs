@@ -55,6 +55,8 @@ public static class SweepFiles
         for (int m = 0; m < r.FeModels.Count; m++)
             sb.Append($"# fe{m + 1}: {r.FeModels[m]}: {r.FeDescriptions[m]}\n");
         sb.Append($"# wall: length {F(s.Length)} {len}, thickness {F(s.Thickness)} {len}; material {s.MaterialName}: E = {F(s.E)} {u.Label(Quantity.Stress)}, G = {F(s.G)} {u.Label(Quantity.Stress)}; shear form factor f = {F(s.FormFactor)}\n");
+        if (s.Footing is { } ft)
+            sb.Append($"# footing: {ft.Words(u)}; the FE wall stands on its sliding and rocking springs, the hand pier formula keeps its fixed base, so FE/hand shows what ignoring the footing costs\n");
         if (s.Opening is { } o)
         {
             sb.Append($"# opening: {o.Words} at every point (width {F(o.WidthFraction)} l, height {F(o.HeightFraction)} h, sill at {F((1 - o.HeightFraction) / 2)} h, left edge at {F((1 - o.WidthFraction) / 2)} l)\n");
@@ -223,7 +225,7 @@ public static class SweepFiles
     private static string Describe(SweepSpec s)
     {
         var u = s.Units;
-        return $"{(s.Opening is { } o ? $"wall with {o.Words}," : "solid wall")} l = {F(s.Length)} {u.LengthSymbol}, t = {F(s.Thickness)} {u.LengthSymbol}, {s.MaterialName} (E = {F(s.E)}, G = {F(s.G)} {u.Label(Quantity.Stress)}), f = {F(s.FormFactor)}";
+        return $"{(s.Opening is { } o ? $"wall with {o.Words}," : "solid wall")} l = {F(s.Length)} {u.LengthSymbol}, t = {F(s.Thickness)} {u.LengthSymbol}, {s.MaterialName} (E = {F(s.E)}, G = {F(s.G)} {u.Label(Quantity.Stress)}), f = {F(s.FormFactor)}{(s.Footing is { } ft ? $"; FE on {ft.Words(u)}" : "")}";
     }
 
     private static string Pct(double f) => (100 * f).ToString("0.#", CultureInfo.InvariantCulture) + "%";

@@ -134,6 +134,29 @@ internal static class FootingWallStudy
         SpringRZ = f.SpringDirections.Contains(Dof.RZ) ? f.Springs.Rocking : s.SpringRZ,
     };
 
+    /// <summary>
+    /// The hand rocking and sliding springs (N·m/rad, N/m) under a supported node with a footing, in the footing's own
+    /// formula set: the footing's spring in each direction it replaces, +∞ where the support keeps its restraint.
+    /// </summary>
+    internal static (double Rocking, double Sliding) HandBaseSprings(Footing f, Support s)
+    {
+        var k = HandSprings(f, Set(f.Formulas));
+        return (f.SpringDirections.Contains(Dof.RZ) ? k.Rocking : Finite(double.PositiveInfinity, s.RestrainRZ),
+            f.SpringDirections.Contains(Dof.X) ? k.Sliding : Finite(double.PositiveInfinity, s.RestrainX));
+    }
+
+    /// <summary>The model with every footing's springs replaced by restraints in the directions they replaced: the fixed-base model.</summary>
+    internal static StructureModel FixedBase(StructureModel model) => model with
+    {
+        Footings = [],
+        Supports = model.Supports.Select(s => model.Footings.FirstOrDefault(f => f.Node == s.Node) is not { } f ? s : s with
+        {
+            RestrainX = s.RestrainX || f.SpringDirections.Contains(Dof.X), SpringX = f.SpringDirections.Contains(Dof.X) ? 0 : s.SpringX,
+            RestrainY = s.RestrainY || f.SpringDirections.Contains(Dof.Y), SpringY = f.SpringDirections.Contains(Dof.Y) ? 0 : s.SpringY,
+            RestrainRZ = s.RestrainRZ || f.SpringDirections.Contains(Dof.RZ), SpringRZ = f.SpringDirections.Contains(Dof.RZ) ? 0 : s.SpringRZ,
+        }).ToList(),
+    };
+
     private static FlexibleBaseDeflection HandOnFooting(MemberDeflection handFixed, Footing f, FootingFormulas set, Support s)
     {
         var k = HandSprings(f, set);
@@ -143,15 +166,15 @@ internal static class FootingWallStudy
     }
 
     /// <summary>The hand library's springs for the footing (its own evaluation of the published formulas, SI).</summary>
-    private static (double Sliding, double Rocking, double Vertical) HandSprings(Footing f, FootingFormulas set)
+    internal static (double Sliding, double Rocking, double Vertical) HandSprings(Footing f, FootingFormulas set)
     {
         var soil = Soil.FromShearModulus(f.SmallStrainModulus, f.PoissonRatio, f.Reduction);
         return RigidFooting.By(set, f.Length, f.Width, f.Embedment, soil).InPlane(wallAlongLongSide: f.Length >= f.Width);
     }
 
-    private static double Finite(double k, bool restrained) => restrained ? double.PositiveInfinity : k;
+    internal static double Finite(double k, bool restrained) => restrained ? double.PositiveInfinity : k;
 
-    private static FootingFormulas Set(FootingFormulaSet s) => s == FootingFormulaSet.Gazetas ? FootingFormulas.Gazetas : FootingFormulas.PaisKausel;
+    internal static FootingFormulas Set(FootingFormulaSet s) => s == FootingFormulaSet.Gazetas ? FootingFormulas.Gazetas : FootingFormulas.PaisKausel;
 
     private static string SetName(FootingFormulaSet s) => s == FootingFormulaSet.Gazetas ? "Gazetas (1991)" : "Pais & Kausel (1988)";
 

@@ -37,8 +37,11 @@ internal static class ShearSplitStudy
         var storyShear = Enumerable.Range(0, stories).Select(s => forces.Skip(s).Sum()).ToArray();
         double total = forces.Sum();
 
-        // Hand stiffness of each line at the top under the case's level forces.
+        // Hand stiffness of each line at the top under the case's level forces: fixed base, and where a wall line stands
+        // on a footing, on its footing too (the wall's top deflection plus the base rotation M_base/K_θ times the height
+        // and the base slide V_base/K_h, derived: the wall's own forces are statically determinate).
         var hand = new List<(double K, HandMethod Method)>();
+        var handFooted = new List<(double K, HandMethod Method)>();
         foreach (var x in checks)
         {
             if (x is WallLineCheck w)
@@ -47,6 +50,13 @@ internal static class ShearSplitStudy
                 var heights = Enumerable.Range(0, stories).Select(s => lv[s + 1] - lv[s]).ToArray();
                 var r = StoryWall.Uniform(heights, forces, m0.E * m0.I, m0.G * m0.A, m0.A / m0.ShearArea);
                 hand.Add((total / r.Displacements[^1], r.Method));
+                var footing = model.Footings.FirstOrDefault(f => f.Node == w.BaseNode);
+                var support = model.Supports.FirstOrDefault(s => s.Node == w.BaseNode);
+                if (footing is null || support is null) { handFooted.Add(hand[^1]); continue; }
+                var (rock, slide) = FootingWallStudy.HandBaseSprings(footing, support);
+                double moment = Enumerable.Range(0, stories).Sum(s => forces[s] * (lv[s + 1] - lv[0]));
+                double top = r.Displacements[^1] + moment / rock * (lv[^1] - lv[0]) + total / slide;
+                handFooted.Add((total / top, r.Method.With($"on footing \"{footing.Id}\": top deflection + M_base·H/K_θ + V_base/K_h with K_θ = {ComparisonStudy.G4(u.FromSI(rock, Quantity.RotationalStiffness))} {u.Label(Quantity.RotationalStiffness)}, K_h = {ComparisonStudy.G4(u.FromSI(slide, Quantity.TranslationalStiffness))} {u.Label(Quantity.TranslationalStiffness)} (hand footing formulas; derived)")));
             }
             else
             {
@@ -61,26 +71,66 @@ internal static class ShearSplitStudy
                     method = dv.Method;
                 }
                 hand.Add((total / drift, method!.With("stories in series: top deflection = Σ story shear / ΣD of each story")));
+                handFooted.Add(hand[^1]);
             }
         }
         var cr = full.Cases.First(r => r.Id == lc.Id && !r.IsCombination);
-        for (int s = 0; s < stories; s++)
+        bool footed = model.Footings.Count > 0;
+        if (!footed)
+        {
+            foreach (var row in SplitRows(model, c, tol, checks, lv, storyShear, hand, cr, "", "full model", "shear carried by the line's vertical members in story {0} under load case \"{1}\" in the whole model", null))
+                yield return row;
+            yield break;
+        }
+        // On footings: the split as the model stands (hand with the base terms, FE with the footings' springs) and the
+        // fixed-base split beside it (hand without them, FE of the same model with the footings' springs replaced by
+        // restraints), so the engineer sees how the split moves.
+        var fixedModel = FootingWallStudy.FixedBase(model);
+        var fixedFull = LinearStaticAnalysis.Run(fixedModel);
+        var crFixed = fixedFull.Cases.First(r => r.Id == lc.Id && !r.IsCombination);
+        var fixedFe = FeShears(model, checks, crFixed, lv, stories);
+        var footedFe = FeShears(model, checks, cr, lv, stories);
+        foreach (var row in SplitRows(model, c, tol, checks, lv, storyShear, handFooted, cr, ", on footings", "full model, on footings",
+            "shear carried by the line's vertical members in story {0} under load case \"{1}\" in the whole model on its footings' springs", (fixedFe, hand, "fixed base")))
+            yield return row;
+        foreach (var row in SplitRows(model, c, tol, checks, lv, storyShear, hand, crFixed, ", fixed base", "full model, fixed base",
+            "shear carried by the line's vertical members in story {0} under load case \"{1}\" in the whole model with every footing's springs replaced by restraints", (footedFe, handFooted, "on footings")))
+            yield return row;
+    }
+
+    private static double[][] FeShears(StructureModel model, IReadOnlyList<ComparisonCheck> checks, CaseResult cr, List<double> lv, int stories) =>
+        Enumerable.Range(0, stories).Select(s => checks.Select(x => LineShear(model, cr, Vertical(model, x), lv[s], lv[s + 1])).ToArray()).ToArray();
+
+    private static IEnumerable<ComparisonRow> SplitRows(StructureModel model, ShearSplitCheck c, double tol, IReadOnlyList<ComparisonCheck> checks, List<double> lv,
+        double[] storyShear, List<(double K, HandMethod Method)> hand, CaseResult cr, string suffix, string feName, string feWhat,
+        (double[][] Fe, List<(double K, HandMethod Method)> Hand, string Label)? other)
+    {
+        var u = model.Units;
+        var lc = model.LoadCases[c.LoadCase];
+        for (int s = 0; s < storyShear.Length; s++)
         {
             var split = ShearDistribution.ByRelativeRigidity(storyShear[s], hand.Select(h => h.K).ToArray());
             var feShear = checks.Select(x => LineShear(model, cr, Vertical(model, x), lv[s], lv[s + 1])).ToArray();
+            var otherSplit = other is { } o ? ShearDistribution.ByRelativeRigidity(storyShear[s], o.Hand.Select(h => h.K).ToArray()) : null;
             for (int i = 0; i < checks.Count; i++)
             {
                 var method = split.Method.With(
                     $"line stiffness k = (total force)/(top deflection) by \"{hand[i].Method.Name}\" under the case's level forces: " +
                     string.Join(", ", checks.Select((_, j) => $"{c.Lines[j].Label} {ComparisonStudy.G4(ComparisonStudy.Stiffness(u, hand[j].K))} {ComparisonStudy.StiffnessUnit(u)}")));
+                if (hand[i].Method.Assumptions.Count > 0 && hand[i].Method.Assumptions[^1].StartsWith("on footing", StringComparison.Ordinal)) method = method.With(hand[i].Method.Assumptions[^1]);
                 double handV = u.FromSI(split.Forces[i], Quantity.Force), feV = u.FromSI(feShear[i], Quantity.Force);
                 double ratio = feShear[i] / split.Forces[i];
                 double feShare = feShear[i] / feShear.Sum();
-                yield return new ComparisonRow(c.Id, "shear-split", $"story {s + 1}: {c.Lines[i].Label}", ComparedQuantity.StoryShear, u.ForceSymbol,
+                string beside = other is { } ot
+                    ? $"; {ot.Label}: FE {ComparisonStudy.G4(u.FromSI(ot.Fe[s][i], Quantity.Force))} {u.ForceSymbol} ({ComparisonStudy.Pct(ot.Fe[s][i] / ot.Fe[s].Sum())}), hand {ComparisonStudy.G4(u.FromSI(otherSplit!.Forces[i], Quantity.Force))} {u.ForceSymbol} ({ComparisonStudy.Pct(otherSplit.Shares[i])})"
+                    : "";
+                yield return new ComparisonRow(c.Id, "shear-split", $"story {s + 1}: {c.Lines[i].Label}{suffix}", ComparedQuantity.StoryShear, u.ForceSymbol,
                     new HandEstimate(handV, method),
-                    [new FeEstimate("full model", feV, $"shear carried by the line's vertical members in story {s + 1} under load case \"{lc.Id}\" in the whole model ({ComparisonStudy.Pct(feShare)} of the lines' total; hand share {ComparisonStudy.Pct(split.Shares[i])})")],
+                    [new FeEstimate(feName, feV, string.Format(System.Globalization.CultureInfo.InvariantCulture, feWhat, s + 1, lc.Id) + $" ({ComparisonStudy.Pct(feShare)} of the lines' total; hand share {ComparisonStudy.Pct(split.Shares[i])}){beside}")],
                     null, tol, Cause(ratio, tol, checks.Select(x => x is WallLineCheck).Distinct().Count() > 1),
-                    "full model: the whole model as given, under the case's loads; a story-shear split has no separate panel model");
+                    feName == "full model, fixed base"
+                        ? "full model, fixed base: the whole model with every footing's springs replaced by restraints, under the case's loads; a story-shear split has no separate panel model"
+                        : "full model: the whole model as given, under the case's loads; a story-shear split has no separate panel model");
             }
         }
     }

@@ -45,8 +45,18 @@ public static class DriftCheck
 /// <param name="RatioToAverageAbove">k / mean k of the three stories above (NaN when fewer than three stories are above).</param>
 /// <param name="Soft">Type 1a: ratio to above &lt; 0.70 or to the average &lt; 0.80.</param>
 /// <param name="ExtremelySoft">Type 1b: ratio to above &lt; 0.60 or to the average &lt; 0.70.</param>
+/// <remarks>On a wind case (<see cref="WindCase"/>) the ratios are given but the seismic irregularity is not applied:
+/// Soft and ExtremelySoft are false and the outputs say "wind case: ratios only".</remarks>
 public sealed record StiffnessIrregularityRow(string CaseId, StoryResult Story, double Stiffness, double RatioToAbove, double RatioToAverageAbove,
-    bool Soft, bool ExtremelySoft);
+    bool Soft, bool ExtremelySoft)
+{
+    /// <summary>The case is a wind case (by its id or description, as the plausibility checks read it): Table 12.3-2 is a
+    /// seismic irregularity, so it is not applied and the row is not labelled with it.</summary>
+    public bool WindCase { get; init; }
+
+    /// <summary>The row's result in words: the Type 1a/1b label on an earthquake or other lateral case, "ratios only" on a wind case.</summary>
+    public string Label => WindCase ? "wind case: ratios only (Table 12.3-2 is a seismic check)" : ExtremelySoft ? "extreme soft story (1b)" : Soft ? "soft story (1a)" : "regular";
+}
 
 /// <summary>
 /// Stiffness–soft story irregularity (ASCE 7-16 Table 12.3-2, Types 1a and 1b): a story whose lateral stiffness is
@@ -58,11 +68,14 @@ public static class StiffnessIrregularity
 {
     public const double SoftToAbove = 0.70, SoftToAverage = 0.80, ExtremeToAbove = 0.60, ExtremeToAverage = 0.70;
 
-    public static IReadOnlyList<StiffnessIrregularityRow> Run(IReadOnlyList<CaseStories> stories)
+    /// <param name="stories">The story results of every case.</param>
+    /// <param name="isWind">Whether a case id is a wind case; its rows carry the ratios only (no Type 1a/1b flag).</param>
+    public static IReadOnlyList<StiffnessIrregularityRow> Run(IReadOnlyList<CaseStories> stories, Func<string, bool>? isWind = null)
     {
         var rows = new List<StiffnessIrregularityRow>();
         foreach (var cs in stories.Where(c => c.Lateral))
         {
+            bool wind = isWind?.Invoke(cs.CaseId) == true;
             var k = cs.Stories.Select(s => s.Stiffness).ToList();
             for (int i = 0; i < k.Count; i++)
             {
@@ -71,7 +84,7 @@ public static class StiffnessIrregularity
                 // NaN compares false, so a ratio that is not defined never flags.
                 bool soft = above < SoftToAbove || avg < SoftToAverage;
                 bool extreme = above < ExtremeToAbove || avg < ExtremeToAverage;
-                rows.Add(new StiffnessIrregularityRow(cs.CaseId, cs.Stories[i], k[i], above, avg, soft, extreme));
+                rows.Add(new StiffnessIrregularityRow(cs.CaseId, cs.Stories[i], k[i], above, avg, soft && !wind, extreme && !wind) { WindCase = wind });
             }
         }
         return rows;
@@ -92,6 +105,13 @@ public sealed class BuildingResult
     public static BuildingResult Of(AnalysisResult r)
     {
         var cases = StoryAnalysis.All(r);
-        return new BuildingResult { Cases = cases, DriftChecks = DriftCheck.Run(r, cases), Irregularity = StiffnessIrregularity.Run(cases) };
+        return new BuildingResult { Cases = cases, DriftChecks = DriftCheck.Run(r, cases), Irregularity = StiffnessIrregularity.Run(cases, id => IsWindCase(r.Model, id)) };
+    }
+
+    /// <summary>A wind case by its id or description (the plausibility checks' reading); a combination when one of its cases is.</summary>
+    public static bool IsWindCase(StructureModel model, string id)
+    {
+        if (model.LoadCases.FirstOrDefault(c => c.Id == id) is { } lc) return Plausibility.IsWind(lc);
+        return model.Combinations.FirstOrDefault(c => c.Id == id) is { } combo && combo.Factors.Any(f => f.Factor != 0 && Plausibility.IsWind(model.LoadCases[f.Case]));
     }
 }

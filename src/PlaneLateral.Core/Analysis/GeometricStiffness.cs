@@ -104,6 +104,12 @@ public static class GeometricStiffness
         var f = LoadVector(model, elements, dofs, caseId);
         var u = new double[dofs.FreeCount];
         factor.Solve(f, u);
+        return AxialForces(model, elements, dofs, u, caseId);
+    }
+
+    /// <summary>Axial tension (N, negative in compression) of every member's flexible segment from the solution <paramref name="u"/> of a case.</summary>
+    public static double[] AxialForces(StructureModel model, IReadOnlyList<FrameElement> elements, DofMap dofs, double[] u, string caseId)
+    {
         var loads = MemberLoads(model, caseId);
         var n = new double[elements.Count];
         for (int m = 0; m < elements.Count; m++)

@@ -116,6 +116,11 @@ public static partial class LinearStaticAnalysis
     {
         try
         {
+            if (model.Footings.FirstOrDefault(f => f.Panel == panel.Id) is { } ft)   // a panel on a footing (Analysis/PanelOnFooting.cs)
+                return PanelOnFooting.Run(panel, model.LoadCases.Select(c => c.Id).ToArray(),
+                    ft.SpringDirections.Contains(Dof.X) ? ft.Springs.Sliding : double.PositiveInfinity,
+                    ft.SpringDirections.Contains(Dof.Y) ? ft.Springs.Vertical : double.PositiveInfinity,
+                    ft.SpringDirections.Contains(Dof.RZ) ? ft.Springs.Rocking : double.PositiveInfinity, options, model.SourcePath, model.Combinations);
             return PanelAnalysis.Run(panel, model.LoadCases.Select(c => c.Id).ToArray(), options, model.SourcePath, model.Combinations);
         }
         catch (ArgumentException e)

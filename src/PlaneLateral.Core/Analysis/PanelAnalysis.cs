@@ -147,6 +147,9 @@ public static class PanelAnalysis
         throw new ArgumentException($"no floor level at {level} m");
     }
 
+    /// <summary>Uniform line load of total (fx, fy) along the solid length of a level (for <see cref="PanelOnFooting"/>).</summary>
+    internal static List<PlaneEdgeLoad> SpreadLoad(PanelMesh pm, int level, double fx, double fy) => Spread(pm, level, fx, fy);
+
     /// <summary>Uniform line load of total (fx, fy) along the solid length of a level.</summary>
     private static List<PlaneEdgeLoad> Spread(PanelMesh pm, int level, double fx, double fy)
     {

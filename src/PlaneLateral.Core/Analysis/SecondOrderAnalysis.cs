@@ -9,7 +9,7 @@ namespace PlaneLateral.Analysis;
 /// One story of the stability check (ASCE 7-16 §12.8.7, from memory — confirm the edition) beside the second-order
 /// analysis. SI: N, m.
 /// </summary>
-/// <param name="Px">Vertical gravity load at and above the story (N), from the gravity case by statics across the story's cut.</param>
+/// <param name="Px">Vertical gravity load at and above the story (N), from the gravity case by statics across the story's cut: the members crossing it and the wall panels linked to the frame.</param>
 /// <param name="Vx">Story shear of the story-force case (N).</param>
 /// <param name="ElasticDrift">First-order elastic drift δ_e (m).</param>
 /// <param name="DesignDrift">Δ = C_d·δ_e/I_e (m).</param>
@@ -59,11 +59,12 @@ public static class SecondOrderAnalysis
     public static double[] Solve(StructureModel model, string gravityCase, string lateralCase)
     {
         var elements = model.Members.Select(m => new FrameElement(m, model.Nodes[m.Start], model.Nodes[m.End])).ToArray();
-        var dofs = DofMap.Build(model, elements);
-        var factor = DefaultSolver.Create().Factorize(LinearStaticAnalysis.Assemble(model, elements, dofs));
+        var cf = new LinearStaticAnalysis.CondensedFrame(model, elements, null);
+        var dofs = cf.Dofs;
+        var factor = DefaultSolver.Create().Factorize(cf.Stiffness([]));
         if (factor.PivotFailures.Count > 0) throw new InvalidOperationException("the model is a mechanism; run the linear analysis for the details");
-        var f2 = CheckStable(model, elements, dofs, factor, gravityCase);
-        var f = GeometricStiffness.LoadVector(model, elements, dofs, lateralCase);
+        var f2 = CheckStable(cf, factor, gravityCase);
+        var f = cf.LoadVector(lateralCase);
         var u = new double[dofs.FreeCount];
         f2.Solve(f, u);
         var full = new double[3 * model.Nodes.Count];
@@ -75,11 +76,81 @@ public static class SecondOrderAnalysis
         return full;
     }
 
-    /// <summary>Factorises K + K_G; a failed pivot means the gravity load buckles the structure, reported naming the story.</summary>
-    public static ISparseSpdFactor CheckStable(StructureModel model, IReadOnlyList<FrameElement> elements, DofMap dofs, ISparseSpdFactor elastic, string gravityCase)
+    /// <summary>
+    /// The geometric stiffness of a gravity case, scaled by λ, as element matrices on the unknowns: each member under
+    /// its axial force (<see cref="GeometricStiffness.Global"/>), and for each wall panel linked to the frame, in each
+    /// story, the story P-Δ term of the vertical load P_p the panel carries across the story's cut: the shear
+    /// P_p·Δ/h that the load, displaced by the story drift Δ, adds (a leaning column of load P_p over the story height h;
+    /// the same P-Δ the stability coefficient θ = P_x·Δ/(V_x·h) measures, common practice). Δ is the story drift as the
+    /// story results take it, the mean x displacement of the top level's nodes less that of the bottom level's, so the
+    /// term is −(λ·P_p/h)·a·aᵀ with a the coefficients of that difference on the x unknowns. A panel's own plane-stress
+    /// geometric stiffness (the bowing of the wall between floors under its in-plane stresses) is left out.
+    /// </summary>
+    internal static List<(int[] Eqs, double[,] K)> GeometricTerms(LinearStaticAnalysis.CondensedFrame cf, double[] ug, string gravityCase, double lambda)
     {
-        var axial = GeometricStiffness.AxialForces(model, elements, dofs, elastic, gravityCase);
-        var f2 = DefaultSolver.Create().Factorize(GeometricStiffness.Assemble(model, elements, dofs, axial));
+        var model = cf.Model;
+        var dofs = cf.Dofs;
+        var axial = GeometricStiffness.AxialForces(model, cf.Elements, dofs, ug, gravityCase);
+        var list = cf.Elements.Select(e => (dofs.ElementEquations(e.Member), GeometricStiffness.Global(e, lambda * axial[e.Member.Index]))).ToList();
+        if (!cf.HasLinks) return list;
+        var links = cf.LinkForces(ug, gravityCase);
+        var lv = model.Building.Levels;
+        for (int i = 1; i < lv.Count; i++)
+        {
+            double h = lv[i].Elevation - lv[i - 1].Elevation;
+            double yc = StoryAnalysis.CutElevation(model, lv[i - 1].Elevation, lv[i].Elevation);
+            double p = model.Panels.Where(x => x.Links.Count > 0).Sum(x => PanelVerticalLoad(model, x, links, gravityCase, yc));
+            if (p == 0 || h <= 0 || lv[i].Nodes.Count == 0) continue;
+            var a = new Dictionary<int, double>();
+            void Add(Level l, double sign)
+            {
+                foreach (int n in l.Nodes)
+                {
+                    int eq = dofs.Equation(n, Dof.X);
+                    if (eq >= 0) a[eq] = a.GetValueOrDefault(eq) + sign / l.Nodes.Count;
+                }
+            }
+            Add(lv[i], 1);
+            Add(lv[i - 1], -1);
+            var eqs = a.Keys.Order().ToArray();
+            var k = new double[eqs.Length, eqs.Length];
+            for (int r = 0; r < eqs.Length; r++)
+                for (int c = 0; c < eqs.Length; c++) k[r, c] = -lambda * p / h * a[eqs[r]] * a[eqs[c]];
+            list.Add((eqs, k));
+        }
+        return list;
+    }
+
+    /// <summary>
+    /// The vertical load (N, compression positive) a linked panel carries across a horizontal cut at <paramref name="yc"/>
+    /// in a case, by statics of the panel with its links (derived, as <see cref="StoryPanels"/> does for the shear):
+    /// when its base is below the cut, P = −(Σ Fy of the links whose frame node is at or above the cut + Σ Fy of its own
+    /// loads at or above the cut); zero when its base is at or above the cut.
+    /// </summary>
+    internal static double PanelVerticalLoad(StructureModel model, WallPanel panel, IReadOnlyList<(WallPanel Panel, int Node, double Fx, double Fy, double Mz)> links,
+        string caseId, double yc)
+    {
+        if (panel.Y0 >= yc) return 0;
+        double above = links.Where(l => ReferenceEquals(l.Panel, panel) && model.Nodes[l.Node].Y >= yc).Sum(l => l.Fy);
+        foreach (var (c, fac) in Parts(model, caseId))
+            above += panel.Loads.Where(l => l.Case == c && panel.Y0 + l.Level >= yc).Sum(l => fac * l.Fy);
+        return -above;
+    }
+
+    private static IReadOnlyList<(int Case, double Factor)> Parts(StructureModel model, string id)
+    {
+        int i = model.LoadCases.ToList().FindIndex(c => c.Id == id);
+        return i >= 0 ? [(i, 1.0)] : model.Combinations.First(c => c.Id == id).Factors;
+    }
+
+    /// <summary>Factorises K + K_G; a failed pivot means the gravity load buckles the structure, reported naming the story.</summary>
+    internal static ISparseSpdFactor CheckStable(LinearStaticAnalysis.CondensedFrame cf, ISparseSpdFactor elastic, string gravityCase)
+    {
+        var model = cf.Model;
+        var dofs = cf.Dofs;
+        var ug = new double[dofs.FreeCount];
+        elastic.Solve(cf.LoadVector(gravityCase), ug);
+        var f2 = DefaultSolver.Create().Factorize(cf.Stiffness(GeometricTerms(cf, ug, gravityCase, 1.0)));
         if (f2.PivotFailures.Count == 0) return f2;
         var problems = new List<ModelDiagnostic>();
         // One message per story where pivots failed, naming the DOFs found there (in elimination order).
@@ -87,7 +158,7 @@ public static class SecondOrderAnalysis
         {
             var at = g.Select(d => $"\"{model.Nodes[d.Node].Id}\" {DofNames.Name(d.Dof)}").ToList();
             problems.Add(new ModelDiagnostic(model.SourcePath, 0, 0, "$.seismic.secondOrder.gravity",
-                $"the gravity load \"{gravityCase}\" buckles the structure {g.Key}: with the geometric stiffness of the members' axial forces the stiffness loses positive definiteness at {string.Join(", ", at.Take(6))}{(at.Count > 6 ? ", ..." : "")}",
+                $"the gravity load \"{gravityCase}\" buckles the structure {g.Key}: with the geometric stiffness of the members' axial forces{(cf.HasLinks ? " and the linked panels' vertical loads" : "")} the stiffness loses positive definiteness at {string.Join(", ", at.Take(6))}{(at.Count > 6 ? ", ..." : "")}",
                 "check the gravity loads and their units, the column and wall sections and the bracing of that story; a second-order analysis needs a gravity load below the buckling load"));
         }
         throw new ModelInputException(problems);
@@ -109,15 +180,17 @@ public static class SecondOrderAnalysis
     public static double CriticalLoadFactor(StructureModel model, string gravityCase, int maxUnknowns = 400)
     {
         var elements = model.Members.Select(m => new FrameElement(m, model.Nodes[m.Start], model.Nodes[m.End])).ToArray();
-        var dofs = DofMap.Build(model, elements);
+        var cf = new LinearStaticAnalysis.CondensedFrame(model, elements, null);
+        var dofs = cf.Dofs;
         if (dofs.FreeCount > maxUnknowns) return double.NaN;
-        var ks = LinearStaticAnalysis.Assemble(model, elements, dofs);
+        var ks = cf.Stiffness([]);
         var factor = DefaultSolver.Create().Factorize(ks);
         if (factor.PivotFailures.Count > 0) return double.NaN;
-        var axial = GeometricStiffness.AxialForces(model, elements, dofs, factor, gravityCase);
+        var ug = new double[dofs.FreeCount];
+        factor.Solve(cf.LoadVector(gravityCase), ug);
         var k = ks.ToDense();
         int n = k.GetLength(0);
-        var kg = GeometricStiffness.Assemble(model, elements, dofs, axial).ToDense();
+        var kg = cf.Stiffness(GeometricTerms(cf, ug, gravityCase, 1.0)).ToDense();
         for (int i = 0; i < n; i++) for (int j = 0; j < n; j++) kg[i, j] -= k[i, j];   // K_G alone
         var l = Cholesky(k);
         // C = L⁻¹ (−K_G) L⁻ᵀ.
@@ -216,6 +289,10 @@ public static class SecondOrderAnalysis
             var loads = StoryAnalysis.MemberLoadsOf(model, gravity);
             var elements = model.Members.Select(m => new FrameElement(m, model.Nodes[m.Start], model.Nodes[m.End])).ToArray();
             double thetaMax = ThetaMax(so.Beta, so.Cd);
+            // The link forces of the gravity case, for the vertical load the linked panels carry across each cut.
+            int gi = StoryPanels.IndexOf(r, gravity);
+            var linkForces = r.PanelLinks is null ? [] : r.PanelLinks.Cases[gi].Forces
+                .Select(f => (model.Panels.First(p => p.Id == f.Panel), f.Node, f.Fx, f.Fy, f.Mz)).ToList();
             foreach (var st in stories.Stories)
             {
                 double px = 0;
@@ -225,6 +302,7 @@ public static class SecondOrderAnalysis
                     if (Math.Min(ya, yb) < st.CutElevation && st.CutElevation < Math.Max(ya, yb))
                         px -= VerticalAcrossCut(model, elements[m], gravity.MemberForces[m], loads[m], st.CutElevation);
                 }
+                foreach (var p in model.Panels.Where(p => p.Links.Count > 0)) px += PanelVerticalLoad(model, p, linkForces, so.GravityCase, st.CutElevation);
                 double de = st.Drift, design = DriftCheck.Amplified(de, so.Cd, so.Ie);
                 double theta = Theta(px, Math.Abs(design), so.Ie, Math.Abs(st.Shear), st.Height, so.Cd);
                 string status = theta > thetaMax ? "EXCEEDS theta max" : theta > NeglectLimit ? "P-delta to be included" : "may be neglected";

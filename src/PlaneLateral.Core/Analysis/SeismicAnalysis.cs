@@ -177,7 +177,8 @@ public static class SeismicAnalysis
     {
         var s = model.Seismic ?? throw new InvalidOperationException("the model has no seismic block");
         var elements = model.Members.Select(m => new FrameElement(m, model.Nodes[m.Start], model.Nodes[m.End])).ToArray();
-        var (dofs, k) = LinearStaticAnalysis.StiffnessWithLinkedPanels(model, elements);   // linked wall panels condensed in
+        var cf = new LinearStaticAnalysis.CondensedFrame(model, elements, null);   // linked wall panels condensed in
+        var (dofs, k) = (cf.Dofs, cf.Stiffness([]));
         var factor = (solver ?? DefaultSolver.Create()).Factorize(k);
         if (factor.PivotFailures.Count > 0) return null;
         return Modal(model, s, dofs, factor);
@@ -284,7 +285,8 @@ public static class SeismicAnalysis
     {
         if (model.Seismic is not { } s) return model;
         var elements = model.Members.Select(m => new FrameElement(m, model.Nodes[m.Start], model.Nodes[m.End])).ToArray();
-        var (dofs, k) = LinearStaticAnalysis.StiffnessWithLinkedPanels(model, elements);   // linked wall panels condensed in
+        var cf = new LinearStaticAnalysis.CondensedFrame(model, elements, null);   // linked wall panels condensed in
+        var (dofs, k) = (cf.Dofs, cf.Stiffness([]));
         var factor = DefaultSolver.Create().Factorize(k);
         if (factor.PivotFailures.Count > 0) return model;
         var forces = Forces(model, Modal(model, s, dofs, factor));
@@ -298,7 +300,7 @@ public static class SeismicAnalysis
         }
         var cases = model.LoadCases.Select(c => c.Id == s.CaseId ? c with { NodalLoads = loads } : c).ToList();
         var prepared = model with { LoadCases = cases };
-        if (s.SecondOrder is { } so) SecondOrderAnalysis.CheckStable(prepared, elements, dofs, factor, so.GravityCase);
+        if (s.SecondOrder is { } so) SecondOrderAnalysis.CheckStable(cf.WithLoadsOf(prepared), factor, so.GravityCase);
         return prepared;
     }
 }

@@ -88,6 +88,42 @@ public sealed partial class DofMap
             else if (state[k] == DofState.Free) { equation[k] = dofOf.Count; dofOf.Add(k); }
             else equation[k] = -1;
         }
+        if (model.Members.Any(m => m.AxiallyRigid)) return ShareAxiallyRigid(model, equation, state, dofOf);
         return new DofMap(equation, state, dofOf.ToArray());
+    }
+
+    /// <summary>
+    /// Axially rigid members (<see cref="Member.AxiallyRigid"/>): the displacement along the member's axis (x for a
+    /// horizontal member, y for a vertical one) of its two ends shares one equation, joined with any sharing already made
+    /// (rigid diaphragms); equations renumbered in (node, dof) order, each reported as its group's lowest (node, dof).
+    /// Exact (no penalty): the member's own axial terms cancel in the shared equation. The reader has made sure both
+    /// ends are free along the axis.
+    /// </summary>
+    private static DofMap ShareAxiallyRigid(StructureModel model, int[] equation, DofState[] state, List<int> dofOf)
+    {
+        int n = dofOf.Count;
+        var parent = Enumerable.Range(0, n).ToArray();
+        int Find(int i) { while (parent[i] != i) { parent[i] = parent[parent[i]]; i = parent[i]; } return i; }
+        foreach (var m in model.Members.Where(m => m.AxiallyRigid))
+        {
+            var a = model.Nodes[m.Start]; var b = model.Nodes[m.End];
+            int d = Math.Abs(b.Y - a.Y) <= 1e-9 * Math.Abs(b.X - a.X) ? (int)Dof.X : (int)Dof.Y;
+            int ea = equation[3 * m.Start + d], eb = equation[3 * m.End + d];
+            if (ea < 0 || eb < 0) continue;
+            int ra = Find(ea), rb = Find(eb);
+            if (ra != rb) parent[Math.Max(ra, rb)] = Math.Min(ra, rb);
+        }
+        var renumber = new int[n];
+        Array.Fill(renumber, -1);
+        var newDofOf = new List<int>(n);
+        var result = new int[equation.Length];
+        for (int k = 0; k < equation.Length; k++)
+        {
+            if (equation[k] < 0) { result[k] = -1; continue; }
+            int root = Find(equation[k]);
+            if (renumber[root] < 0) { renumber[root] = newDofOf.Count; newDofOf.Add(k); }
+            result[k] = renumber[root];
+        }
+        return new DofMap(result, state, newDofOf.ToArray());
     }
 }

@@ -49,6 +49,12 @@ public sealed record Footing(string Id, int Node, double Length, double Width, d
     double SmallStrainModulus, double Reduction, double PoissonRatio, FootingFormulaSet Formulas,
     IReadOnlyList<Dof> SpringDirections, FootingSprings Springs, IReadOnlyList<string> Cautions)
 {
+    /// <summary>The wall panel whose base stands on the footing (a rigid footing under its base nodes), or null for a footing under a supported node (then <see cref="Node"/> ≥ 0; −1 here).</summary>
+    public string? Panel { get; init; }
+
+    /// <summary>Where the footing was declared (its JSON object), for messages; null when built in code.</summary>
+    public object? At { get; init; }
+
     /// <summary>The soil shear modulus the formulas use, G = reduction·G₀ (N/m²).</summary>
     public double ShearModulus => Reduction * SmallStrainModulus;
 

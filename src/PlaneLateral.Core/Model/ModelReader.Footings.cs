@@ -33,10 +33,11 @@ public static partial class ModelReader
                 var f = new JsonFields(o, sink);
                 var id = ReadId(f, seen, "footing");
                 f.OptionalString("description", "give a description as a string");
-                if (f.Token("panel") is { } panelToken)
-                    sink.Add(panelToken, "a footing under a wall panel's base is not supported yet",
-                        "model the wall as line members on a node with a support and put the footing under that node, or keep the panel's base fixed");
-                int n = NodeRef(f, "node", "supported node the footing stands under");
+                // Under a wall panel's base instead of a node: checked against the panel once the panels are read (CheckPanelFootings).
+                string? panelId = f.Has("panel") ? f.RequiredString("panel", "give the id of the wall panel whose base stands on the footing") : null;
+                if (f.Has("panel") && f.Has("node"))
+                    sink.Add(o, "the footing names both a \"node\" and a \"panel\"", "give \"node\" for a footing under a supported node, or \"panel\" for one under a wall panel's base, not both");
+                int n = f.Has("panel") ? -1 : NodeRef(f, "node", "supported node the footing stands under");
                 double length = Positive(f, "length", Quantity.Length, "footing length", $"give the footing's plan side in the model's plane (along x) > 0 in {len}");
                 double width = Positive(f, "width", Quantity.Length, "footing width", $"give the footing's plan side across the model's plane > 0 in {len}");
                 const string dfix = "give the depth of the footing's base below grade ≥ 0, or leave \"embedment\" out for a surface footing";
@@ -49,9 +50,22 @@ public static partial class ModelReader
                 var directions = ReadSpringDirections(f);
                 f.RejectUnknownKeys();
 
-                if (id is null || n < 0 || !(length > 0 && width > 0) || !(embedment >= 0) || !(g0 > 0) || !(reduction > 0 && reduction <= 1)
+                if (id is null || (n < 0 && panelId is null) || (panelId is not null && f.Has("node")) || !(length > 0 && width > 0) || !(embedment >= 0) || !(g0 > 0) || !(reduction > 0 && reduction <= 1)
                     || !(nu > 0 && nu < 0.5) || (int)formulas < 0 || directions is null)
                     continue;
+                if (panelId is not null)
+                {
+                    double smallerSide = Math.Min(length, width);
+                    if (embedment > MaxEmbedmentRatio * smallerSide)
+                    {
+                        sink.Add(f.Token("embedment"), $"an embedment of {_units.FromSI(embedment, Quantity.Length):G6} {len} is more than {MaxEmbedmentRatio:0} times the footing's smaller side ({_units.FromSI(smallerSide, Quantity.Length):G6} {len}): outside the range of the shallow-footing formulas",
+                            "check the embedment (the depth of the footing's base below grade, not its elevation)");
+                        continue;
+                    }
+                    var panelSprings = FootingSoilSprings.Compute(formulas, length, width, embedment, g0 * reduction, nu);
+                    list.Add(new Footing(id, -1, length, width, embedment, g0, reduction, nu, formulas, directions, panelSprings, []) { Panel = panelId, At = o });
+                    continue;
+                }
                 if (!onNode.Add(n)) { sink.Add(o, $"a second footing under node \"{nodes[n].Id}\"", "give each supported node at most one footing"); continue; }
                 int si = supports.FindIndex(s => s.Node == n);
                 if (si < 0)
@@ -98,6 +112,31 @@ public static partial class ModelReader
             }
             _footingList = list;
             return list;
+        }
+
+        /// <summary>
+        /// Each footing under a panel: the panel exists, stands alone (no links: a linked panel's base on a footing is not
+        /// offered), has one footing at most, and the footing is at least as long as the wall it carries.
+        /// </summary>
+        private void CheckPanelFootings(List<Footing> footings, IReadOnlyList<WallPanel> panels)
+        {
+            var seen = new HashSet<string>(StringComparer.Ordinal);
+            foreach (var ft in footings.Where(x => x.Panel is not null))
+            {
+                var at = ft.At as JObject;
+                var panel = panels.FirstOrDefault(p => p.Id == ft.Panel);
+                if (panel is null) { sink.Add(at?["panel"] ?? at, $"no wall panel \"{ft.Panel}\" for footing \"{ft.Id}\" to stand under", $"give the id of one of the panels ({string.Join(", ", panels.Select(p => $"\"{p.Id}\""))})"); continue; }
+                if (!seen.Add(panel.Id)) sink.Add(at, $"a second footing under panel \"{panel.Id}\"", "give each panel at most one footing");
+                if (panel.Links.Count > 0)
+                    sink.Add(at?["panel"] ?? at, $"panel \"{panel.Id}\" is linked to the frame; a linked panel's base on a footing is not offered",
+                        "put the footing under a panel that stands alone, or remove the panel's links");
+                if (panel.Mesh.Refinements > 1)
+                    sink.Add(at?["panel"] ?? at, $"panel \"{panel.Id}\" asks for a mesh study (\"refinements\": {panel.Mesh.Refinements}), which is not run for a panel on a footing",
+                        "give the panel \"refinements\": 1 (its results are then of the mesh given), or study the fixed-base panel in a model of its own");
+                if (ft.Length < panel.Length * (1 - 1e-9))
+                    sink.Add(at?["length"] ?? at, $"footing \"{ft.Id}\" is {_units.FromSI(ft.Length, Quantity.Length):G6} {_units.LengthSymbol} long, shorter than the {_units.FromSI(panel.Length, Quantity.Length):G6} {_units.LengthSymbol} wall panel \"{panel.Id}\" it carries",
+                        "give the footing's length in the wall's plane at least the wall's length (a footing is as long as its wall or longer)");
+            }
         }
 
         private static string DirectionKey(Dof d) => d switch { Dof.X => "x", Dof.Y => "y", _ => "rz" };

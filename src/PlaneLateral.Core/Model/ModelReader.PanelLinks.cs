@@ -110,15 +110,12 @@ public static partial class ModelReader
         }
 
         /// <summary>
-        /// A restraint at a linked frame node would fight the link. The seismic block's periods and story forces include
-        /// the linked panels (condensed onto their frame nodes); its second-order check takes the geometric stiffness and
-        /// the story's vertical load from the members only, so "secondOrder" is refused beside links until it includes them.
+        /// A restraint at a linked frame node would fight the link. (The seismic block, its second-order check included,
+        /// sees the linked panels: condensed into K, their vertical loads in P_x and in the story P-delta terms.)
         /// </summary>
         private void CheckPanelLinkSupports(IReadOnlyList<Support> supports, JToken? seismic)
         {
-            if (seismic is JObject block && block["secondOrder"] is { } secondOrder && _panelLinks.Count > 0)   // a seismic block that is not an object is reported by its own reader
-                sink.Add(secondOrder, "the seismic block's second-order (P-delta) check cannot yet be used with panels linked to the frame: its geometric stiffness and the story's vertical load see the members only",
-                    "remove \"secondOrder\" (the periods and story forces include the panels), or remove the panels' \"links\"");
+            _ = seismic;
             foreach (var (panel, link, at) in _panelLinks)
             {
                 var s = supports.FirstOrDefault(x => x.Node == link.Node);

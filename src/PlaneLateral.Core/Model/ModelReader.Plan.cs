@@ -58,7 +58,7 @@ public static partial class ModelReader
         var plan = builder.BuildPlan(obj);
         var all = sink.Items.Concat(builder.LineFileProblems).ToList();
         if (all.Count > 0 || plan is null) throw new ModelInputException(all);
-        return plan;
+        return plan with { Warnings = Plausibility.CheckPlan(plan, obj, fileName, builder.LineSources) };
     }
 
     /// <summary>Standard gravity (m/s²), turning a seismic weight into a mass.</summary>
@@ -73,6 +73,11 @@ public static partial class ModelReader
         private readonly List<ModelDiagnostic> _lineFileProblems = [];
 
         public IReadOnlyList<ModelDiagnostic> LineFileProblems => _lineFileProblems;
+
+        /// <summary>The lines given as planar models, with their JSON and file, for the plausibility checks.</summary>
+        private readonly List<Plausibility.PlanLineSource> _lineSources = [];
+
+        public IReadOnlyList<Plausibility.PlanLineSource> LineSources => _lineSources;
 
         public BuildingPlan? BuildPlan(JObject root)
         {
@@ -237,8 +242,17 @@ public static partial class ModelReader
                         break;
                     default:
                         var mt = f.Token("model")!;
-                        if (mt.Type == JTokenType.String) { form = PlanLineForm.File; model = ReadLineFile(mt, (string)mt!, out source); }
-                        else if (mt is JObject mo) model = ModelLimits.CheckCounts(mo, sink) ? null : new Builder(sink, fileName) { _partOfBuilding = true }.Build(mo);
+                        if (mt.Type == JTokenType.String)
+                        {
+                            form = PlanLineForm.File;
+                            model = ReadLineFile(mt, (string)mt!, out source, out var lineRoot);
+                            if (model is not null && lineRoot is not null) _lineSources.Add(new(lid, model, lineRoot, source));
+                        }
+                        else if (mt is JObject mo)
+                        {
+                            model = ModelLimits.CheckCounts(mo, sink) ? null : new Builder(sink, fileName) { _partOfBuilding = true }.Build(mo);
+                            if (model is not null) _lineSources.Add(new(lid, model, mo, fileName));
+                        }
                         else sink.Add(mt, $"'model' must be a planar model {{...}} or the name of a file beside the building file, found {JsonFields.Describe(mt)}", "give the model inline or as \"line-a.json\"");
                         break;
                 }
@@ -306,9 +320,10 @@ public static partial class ModelReader
             return k.Count == a.Count ? PlanLineModels.StoryStiffness(id, fileName, elevations, k, _units) : null;
         }
 
-        private StructureModel? ReadLineFile(JToken at, string relative, out string full)
+        private StructureModel? ReadLineFile(JToken at, string relative, out string full, out JObject? lineRoot)
         {
             full = relative;
+            lineRoot = null;
             string folder = Path.GetDirectoryName(Path.GetFullPath(fileName)) ?? ".";
             string candidate;
             try { candidate = Path.GetFullPath(Path.Combine(folder, relative)); }
@@ -342,6 +357,7 @@ public static partial class ModelReader
             if (ModelLimits.CheckCounts(o, lineSink)) { _lineFileProblems.AddRange(lineSink.Items); return null; }
             var m = new Builder(lineSink, candidate) { _partOfBuilding = true }.Build(o);
             _lineFileProblems.AddRange(lineSink.Items);
+            lineRoot = o;
             return m;
         }
 

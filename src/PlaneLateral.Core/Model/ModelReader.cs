@@ -117,6 +117,7 @@ public static partial class ModelReader
             var members = ReadMembers(f.Objects("members", !hasPanels, "add \"members\": [ {\"id\": \"...\", \"start\": \"...\", \"end\": \"...\", \"section\": \"...\", \"material\": \"...\"} ]"), nodes);
             var supportsArr = f.Objects("supports", !hasPanels, "add \"supports\": [ {\"node\": \"...\", \"type\": \"fixed\"} ]");
             var supports = ReadSupports(supportsArr);
+            CheckAxiallyRigid(members, supports, nodes);   // ModelReader.AxiallyRigid.cs
             var footings = ReadFootings(f, supports, members, nodes);   // footing springs replace support restraints (ModelReader.Footings.cs)
             if (f.Token("supports") is JArray { Count: 0 } emptySupports && !hasPanels)
                 sink.Add(emptySupports, "the model has no supports, so it is free to move as a rigid body", "add at least one support, e.g. {\"node\": \"<base node>\", \"type\": \"fixed\"}");
@@ -129,6 +130,7 @@ public static partial class ModelReader
             var comparisons = ReadComparisons(f.Objects("comparisons", false, "give \"comparisons\" as an array of checks, e.g. [{\"id\": \"...\", \"kind\": \"wall-line\", \"members\": [...]}] (docs/comparisons.md)"), members, supports, cases);
             var panels = ReadPanels(f.Objects("panels", false, "give \"panels\" as an array of objects"), materials);
             CheckPanelWalls(root, panels);
+            CheckPanelFootings(footings, panels);   // ModelReader.Footings.cs
             CheckPanelLinkSupports(supports, f.Token("seismic"));   // ModelReader.PanelLinks.cs
             f.RejectUnknownKeys();
 
@@ -464,6 +466,7 @@ public static partial class ModelReader
                 }
                 ReadLineTag(f);
                 var role = f.OptionalString("role", "give a role such as \"wall\", \"column\", \"beam\", \"coupling-beam\" or \"brace\"") ?? (kind == MemberKind.Brace ? "brace" : "");
+                bool axiallyRigid = f.OptionalBool("axiallyRigid", false, "give \"axiallyRigid\": true (exactly inextensible, along x or y) or false");   // ModelReader.AxiallyRigid.cs
                 f.RejectUnknownKeys();
 
                 if (id is not null) _unusable.Add("member:" + id); // until it reads whole
@@ -484,8 +487,10 @@ public static partial class ModelReader
                 var s = sec.Section;
                 double shearArea = s.ShearArea(mat.Nu) * mods.ShearArea;
                 _members[id] = list.Count;
+                if (axiallyRigid && !AlongAnAxis(nodes[a], nodes[b], f.Token("axiallyRigid")!, id)) continue;
                 list.Add(new Member(list.Count, id, a, b, kind, s.Id, mat.Id, mat.E, mat.G,
-                    s.A * mods.A, s.I * mods.I, shearArea, relStart, relEnd, rigidStart, rigidEnd, mods, role));
+                    s.A * mods.A, s.I * mods.I, shearArea, relStart, relEnd, rigidStart, rigidEnd, mods, role) { AxiallyRigid = axiallyRigid });
+                if (axiallyRigid) _axiallyRigidTokens[list.Count - 1] = f.Token("axiallyRigid")!;
             }
             return list;
         }

@@ -94,6 +94,9 @@ public sealed record BuildingPlan
     /// <summary>The seismic block: equivalent lateral forces from the plan modes, and the response spectrum analysis (null when not given).</summary>
     public PlanSeismicData? Seismic { get; init; }
 
+    /// <summary>Plausibility warnings on the building file and its lines' models (Model/Plausibility.Plan.cs); none changes a number.</summary>
+    public IReadOnlyList<ModelWarning> Warnings { get; init; } = [];
+
     /// <summary>Floors (levels above the base).</summary>
     public int FloorCount => Levels.Count - 1;
 

@@ -43,7 +43,7 @@ internal static partial class Plausibility
 
     private static bool Has(string s, string w) => s.Contains(w, StringComparison.OrdinalIgnoreCase);
 
-    private sealed class Checker(StructureModel m, JObject root, string file)
+    private sealed partial class Checker(StructureModel m, JObject root, string file)
     {
         private readonly List<ModelWarning> _items = [];
         private readonly UnitSystem _u = m.Units;

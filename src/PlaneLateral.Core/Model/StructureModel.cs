@@ -115,7 +115,15 @@ public sealed record Member(
     string SectionId, string MaterialId,
     double E, double G, double A, double I, double ShearArea,
     bool ReleaseStart, bool ReleaseEnd, double RigidStart, double RigidEnd,
-    StiffnessModifiers Modifiers, string Role);
+    StiffnessModifiers Modifiers, string Role)
+{
+    /// <summary>
+    /// Exactly inextensible ("axiallyRigid": true; docs/model-format.md): its two end nodes share one equation for the
+    /// displacement along its axis (a member along x or y), an exact constraint without a large stiffness. Its axial
+    /// force is then a constraint force, not found from its own deformation (reported 0, as for a beam in a rigid diaphragm).
+    /// </summary>
+    public bool AxiallyRigid { get; init; }
+}
 
 /// <summary>A support at a node: restrained DOFs and elastic springs (N/m or N·m/rad) on the others.</summary>
 public sealed record Support(int Node, string Type, bool RestrainX, bool RestrainY, bool RestrainRZ, double SpringX, double SpringY, double SpringRZ)

@@ -87,7 +87,7 @@ public static class BuildingFiles
         var u = r.Model.Units;
         var sb = new StringBuilder($"case,story,stiffness [{u.Label(Quantity.TranslationalStiffness)}],ratio to story above,ratio to mean of three above,type 1a soft (<0.70 or <0.80),type 1b extreme (<0.60 or <0.70)\n");
         foreach (var i in br.Irregularity)
-            sb.Append($"{Csv(i.CaseId)},{i.Story.Index},{F(u.FromSI(i.Stiffness, Quantity.TranslationalStiffness))},{F(i.RatioToAbove)},{F(i.RatioToAverageAbove)},{(i.Soft ? "yes" : "no")},{(i.ExtremelySoft ? "yes" : "no")}\n");
+            sb.Append($"{Csv(i.CaseId)},{i.Story.Index},{F(u.FromSI(i.Stiffness, Quantity.TranslationalStiffness))},{F(i.RatioToAbove)},{F(i.RatioToAverageAbove)},{(i.WindCase ? "not applied (wind case)" : i.Soft ? "yes" : "no")},{(i.WindCase ? "not applied (wind case)" : i.ExtremelySoft ? "yes" : "no")}\n");
         return sb.ToString();
     }
 
@@ -184,7 +184,7 @@ public static class BuildingFiles
                 w.WriteStartObject();
                 P("case", i.CaseId); P("story", i.Story.Index); P("stiffness", u.FromSI(i.Stiffness, Quantity.TranslationalStiffness));
                 P("ratioToAbove", i.RatioToAbove); P("ratioToMeanOfThreeAbove", i.RatioToAverageAbove);
-                P("type1aSoft", i.Soft); P("type1bExtremelySoft", i.ExtremelySoft);
+                P("type1aSoft", i.Soft); P("type1bExtremelySoft", i.ExtremelySoft); P("windCaseRatiosOnly", i.WindCase);
                 w.WriteEndObject();
             }
             w.WriteEndArray();

@@ -64,7 +64,7 @@ public static class PanelResultFiles
             w.WriteStartObject();
             P("producedBy", $"PlaneLateral {ResultFiles.Version}");
             P("caution", ResultFiles.Caution);
-            P("method", "Plane-stress continuum (see docs/panels.md): base held in x and y; with floor ties every node of a level shares one horizontal displacement (exact constraint). Top stiffness = 1 / top displacement under a unit horizontal force through the top tie (without ties: spread along the top edge, mean top displacement).");
+            P("method", "Plane-stress continuum (see docs/panels.md): base held in x and y (a panel on a footing: its base nodes follow the rigid footing on its springs, docs/footings.md); with floor ties every node of a level shares one horizontal displacement (exact constraint). Top stiffness = 1 / top displacement under a unit horizontal force through the top tie (without ties: spread along the top edge, mean top displacement).");
             w.WritePropertyName("units");
             w.WriteStartObject();
             P("length", u.LengthSymbol); P("force", u.ForceSymbol); P("stress", u.Label(Quantity.Stress)); P("stiffness", u.Label(Quantity.TranslationalStiffness));

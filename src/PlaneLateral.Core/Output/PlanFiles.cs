@@ -146,6 +146,11 @@ public static class PlanFiles
             ["units"] = new JObject { ["force"] = u.ForceSymbol, ["length"] = u.LengthSymbol },
             ["method"] = "each line condensed exactly on its level lateral DOFs (one factorisation per line), mapped to the floors' (Ux, Uy, Rz) and assembled; lines recovered under the level forces",
             ["accidentalEccentricity"] = r.Plan.EccentricityRatio,
+            // Plausibility of the input (Model/Plausibility.Plan.cs); they do not change any number.
+            ["warnings"] = new JArray(r.Plan.Warnings.Select(x => new JObject
+            {
+                ["file"] = Path.GetFileName(x.File), ["line"] = x.Line, ["column"] = x.Column, ["path"] = x.JsonPath, ["problem"] = x.Problem, ["fix"] = x.Fix,
+            })),
             ["levels"] = new JArray(r.Plan.Levels.Select(l => new JObject
             {
                 ["id"] = l.Id, ["elevation"] = L(l.Elevation), ["weight"] = double.IsFinite(l.Weight) ? Fo(l.Weight) : null,

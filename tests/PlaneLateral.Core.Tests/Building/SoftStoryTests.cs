@@ -82,4 +82,25 @@ public class SoftStoryTests
         Assert.True(double.IsNaN(rows[0].RatioToAverageAbove));
         Assert.False(rows[0].Soft);
     }
+
+    [Fact]
+    public void AWindCaseGetsTheRatiosButNotTheSeismicLabel()
+    {
+        // Table 12.3-2 (ASCE 7-16) is a seismic irregularity: on a wind case the ratios are worked out but no Type 1a/1b
+        // flag is raised, and the row says why (issue: a soft-story check on a wind case must not carry the seismic label).
+        var json = ToJObject(BuildingModels.ShearBuilding(H, [500, 1000, 1000, 1000], [10, 20, 30, 40]));
+        json["loadCases"]![0]!["id"] = "W";
+        json["loadCases"]![0]!["description"] = "wind from the west (invented)";
+        var r = Solve(json);
+        var br = BuildingResult.Of(r);
+        Assert.All(br.Irregularity, x => Assert.True(x.WindCase, $"case {x.CaseId} is a wind case"));
+        Near(0.5, br.Irregularity[0].RatioToAbove, 1e-9, "the ratio is still given (I ratio, derived)");
+        Assert.False(br.Irregularity[0].Soft || br.Irregularity[0].ExtremelySoft, "no seismic flag on a wind case");
+        Assert.DoesNotContain("soft story", br.Irregularity[0].Label);
+        Assert.Contains("wind case", br.Irregularity[0].Label);
+        // The same model under an earthquake case keeps the flag (control).
+        var eq = BuildingResult.Of(Solve(BuildingModels.ShearBuilding(H, [500, 1000, 1000, 1000], [10, 20, 30, 40])));
+        Assert.True(eq.Irregularity[0].ExtremelySoft && !eq.Irregularity[0].WindCase);
+        Assert.Equal("extreme soft story (1b)", eq.Irregularity[0].Label);
+    }
 }

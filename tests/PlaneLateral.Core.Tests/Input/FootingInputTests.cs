@@ -82,11 +82,21 @@ public class FootingInputTests
     }
 
     [Fact]
-    public void AFootingUnderAPanelIsRefusedClearly()
+    public void AFootingNamingBothANodeAndAPanelIsRefused()
     {
         var m = FootingTests.Wall();
         Footing(m)["panel"] = "P1";
-        Single(m, "wall panel's base is not supported yet");
+        Single(m, "names both a \"node\" and a \"panel\"");
+    }
+
+    [Fact]
+    public void AFootingUnderAnUnknownPanelIsRefused()
+    {
+        var m = FootingTests.Wall();
+        var f = Footing(m);
+        f.Remove("node");
+        f["panel"] = "P1";
+        Single(m, "no wall panel \"P1\"");
     }
 
     [Fact]

@@ -38,10 +38,10 @@ public sealed class PlausibilityTests : IDisposable
     public static TheoryData<string> ShippedModels()
     {
         var data = new TheoryData<string>();
-        // Planar models only: building files (docs/plan.md) are read by the plan reader, which has no plausibility
-        // warnings yet (an open item of the plan work).
+        // Every shipped file: planar models through the planar reader, building files (docs/plan.md) through the plan
+        // reader, which runs the planar checks on each line's model and its own on the building file.
         foreach (var f in Directory.GetFiles(Path.Combine(StrictInputTests.Repo(), "models"), "*.json", SearchOption.AllDirectories).Order(StringComparer.Ordinal))
-            if (!ModelReader.IsPlanFile(f)) data.Add(Path.GetRelativePath(StrictInputTests.Repo(), f));
+            data.Add(Path.GetRelativePath(StrictInputTests.Repo(), f));
         return data;
     }
 
@@ -49,8 +49,66 @@ public sealed class PlausibilityTests : IDisposable
     [MemberData(nameof(ShippedModels))]
     public void NoShippedModelWarns(string relative)
     {
-        var m = ModelReader.ReadFile(Path.Combine(Repo, relative));
-        Assert.True(m.Warnings.Count == 0, $"{relative}:\n{string.Join("\n", m.Warnings)}");
+        string path = Path.Combine(Repo, relative);
+        var warnings = ModelReader.IsPlanFile(path) ? ModelReader.ReadPlanFile(path).Warnings : ModelReader.ReadFile(path).Warnings;
+        Assert.True(warnings.Count == 0, $"{relative}:\n{string.Join("\n", warnings)}");
+    }
+
+    // ---- buildings in plan -----------------------------------------------------------------------------------------
+
+    private static IReadOnlyList<ModelWarning> PlanWarnings(JObject building) => ModelReader.ParsePlan(building.ToString(), Path.Combine(Repo, "models", "plausible-building.json")).Warnings;
+
+    [Fact]
+    public void ABuildingWithoutUnitsSaysSoAndItsStoryHeightsAndPlanSizeAreJudged()
+    {
+        // The demo building (kip–ft) with its "units" left out (and its inline lines' too, so that their levels still
+        // match): read as kip–inch, its 14 ft stories become 14 in (0.36 m, below the 1.8 m floor of building stories)
+        // and its plan a few feet become inches (derived: × 0.0254 m/in).
+        var o = Load("models/demo-building.json");
+        o.Remove("units");
+        foreach (var l in ((JArray)o["plan"]!["lines"]!).OfType<JObject>()) (l["model"] as JObject)?.Remove("units");
+        var w = PlanWarnings(o);
+        Assert.Contains(w, x => x.Problem.Contains("building file has no \"units\" key") && x.JsonPath == "$");
+        // The story height and the building's E are both out of range as kip–inch and both in range as kip–ft, so the
+        // fix names kip and ft.
+        Assert.Contains(w, x => x.Problem.Contains("the height of the story below level") && x.Line > 0 && x.Fix.Contains("\"force\": \"kip\", \"length\": \"ft\""));
+        Assert.Contains(w, x => x.Problem.StartsWith("E of material", StringComparison.Ordinal) && x.JsonPath.StartsWith("$.materials", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void ABuildingPlanGivenInTheWrongLengthUnitWarnsOnItsSize()
+    {
+        // The demo's outline multiplied by 1000 (as if given in mm in a kip–ft file): 96 000 ft is no building.
+        var o = Load("models/demo-building.json");
+        var outline = o["plan"]!["outline"] as JArray ?? ((JArray)o["plan"]!["levels"]!).OfType<JObject>().Select(l => l["outline"]).OfType<JArray>().First();
+        foreach (var pt in outline.OfType<JArray>()) { pt[0] = (double)pt[0]! * 1000; pt[1] = (double)pt[1]! * 1000; }
+        foreach (var l in ((JArray)o["plan"]!["lines"]!).OfType<JObject>())
+            if (l["at"] is JArray at) { at[0] = (double)at[0]! * 1000; at[1] = (double)at[1]! * 1000; }
+        var w = PlanWarnings(o);
+        Assert.Contains(w, x => x.Problem.Contains("the plan's largest dimension") && x.Problem.Contains("above the range of buildings"));
+    }
+
+    [Fact]
+    public void ABuildingWallWithThicknessAndLengthSwappedWarns()
+    {
+        var o = Load("models/demo-building.json");
+        var wall = (JObject)((JArray)o["plan"]!["lines"]!).OfType<JObject>().First(l => l["wall"] is JObject)["wall"]!;
+        (wall["length"], wall["thickness"]) = (wall["thickness"]!.DeepClone(), wall["length"]!.DeepClone());
+        var w = PlanWarnings(o);
+        Assert.Contains(w, x => x.Problem.Contains("look swapped") && x.JsonPath.StartsWith("$.plan.lines[", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void ALineModelOfABuildingGetsThePlanarChecks()
+    {
+        // A line given as a planar model inside the building: its E set in psi instead of ksi is judged in the line's own
+        // units, and the warning names the line.
+        var o = Load("models/demo-building.json");
+        var line = ((JArray)o["plan"]!["lines"]!).OfType<JObject>().First(l => l["model"] is JObject);
+        var mat = (JObject)((JArray)line["model"]!["materials"]!)[0];
+        mat["E"] = (double)mat["E"]! * 1000 * 144;   // ksf → psf-sized number read as ksf (derived: a factor 144 000 too large)
+        var w = PlanWarnings(o);
+        Assert.Contains(w, x => x.Problem.StartsWith($"line \"{line["id"]}\": E of material", StringComparison.Ordinal));
     }
 
     // ---- units -------------------------------------------------------------------------------------------------------

@@ -247,7 +247,7 @@ public class SchemaTests
         string[] Keys(JToken o) => ((JObject)o["properties"]!).Properties().Select(p => p.Name).Order(StringComparer.Ordinal).ToArray();
         Assert.Equal(new[] { "$schema", "combinations", "comparisons", "crackedSections", "description", "driftChecks", "formatVersion", "levels", "loadCases", "materials", "members", "nodes", "panels", "plan", "reference", "sections", "seismic", "stiffnessAt", "supports", "title", "units" }.Append("footings").Order(StringComparer.Ordinal), Keys(schema));
         Assert.Equal(new[] { "description", "E", "G", "id", "nu" }.Order(StringComparer.Ordinal), Keys(defs["material"]!));
-        Assert.Equal(new[] { "end", "id", "kind", "line", "material", "modifiers", "momentReleases", "rigidZones", "role", "section", "start" }, Keys(defs["member"]!));
+        Assert.Equal(new[] { "axiallyRigid", "end", "id", "kind", "line", "material", "modifiers", "momentReleases", "rigidZones", "role", "section", "start" }, Keys(defs["member"]!));
         Assert.Equal(new[] { "node", "restrain", "springs", "type" }, Keys(defs["support"]!));
         Assert.Equal(new[] { "axes", "direction", "member", "w", "wEnd", "wStart" }, Keys(defs["memberLoad"]!));
     }

@@ -94,14 +94,19 @@ public class PanelLinkInputTests
     }
 
     [Fact]
-    public void ASecondOrderCheckBesideLinksIsRefused()
+    public void ASecondOrderCheckBesideLinksIsNoLongerRefused()
     {
-        // Its geometric stiffness and story vertical load would see the members only (docs/panels.md); the periods
-        // and story forces include the panels, so the seismic block itself is accepted.
+        // It was refused while its geometric stiffness and story vertical load saw the members only; both now include
+        // the linked panels (LinkedPanelSecondOrderTests), so the model reads without error.
         var o = ToJObject(PanelLinkTests.SlenderWall(1, 6, 10));
-        o["seismic"] = new Newtonsoft.Json.Linq.JObject { ["secondOrder"] = new Newtonsoft.Json.Linq.JObject() };
-        var e = Assert.Throws<ModelInputException>(() => ModelReader.Parse(o.ToString(), "test.json"));
-        Assert.Contains(e.Diagnostics, d => d.JsonPath == "$.seismic.secondOrder" && d.Problem.Contains("cannot yet be used with panels linked"));
+        o["loadCases"] = Newtonsoft.Json.Linq.JArray.FromObject(new object[] { new { id = "G", nodalLoads = new[] { new { node = "T", fy = -10.0 } } } });
+        ((Newtonsoft.Json.Linq.JArray)o["nodes"]!).Add(Newtonsoft.Json.Linq.JObject.FromObject(new { id = "B", x = 0.5, y = 0.0 }));
+        o["members"] = Newtonsoft.Json.Linq.JArray.FromObject(new[] { new { id = "strut", start = "B", end = "T", section = "COL", material = "C", kind = "brace" } });
+        o["supports"] = Newtonsoft.Json.Linq.JArray.FromObject(new[] { new { node = "B", type = "fixed" } });
+        o["levels"] = Newtonsoft.Json.Linq.JArray.FromObject(new[] { new { id = "L0", elevation = 0.0, diaphragm = "none" }, new { id = "L1", elevation = 6.0, diaphragm = "rigid" } });
+        o["seismic"] = Newtonsoft.Json.Linq.JObject.FromObject(new { loadCase = "ELF", weights = new[] { new { level = "L1", weight = 100.0 } }, baseShear = 10.0, secondOrder = new { gravity = "G", Cd = 4.0 } });
+        var m = ModelReader.Parse(o.ToString(), "test.json");
+        Assert.NotNull(m.Seismic!.SecondOrder);
     }
 
     [Fact]
