@@ -113,9 +113,8 @@ public static partial class ModelReader
         /// A restraint at a linked frame node would fight the link. (The seismic block, its second-order check included,
         /// sees the linked panels: condensed into K, their vertical loads in P_x and in the story P-delta terms.)
         /// </summary>
-        private void CheckPanelLinkSupports(IReadOnlyList<Support> supports, JToken? seismic)
+        private void CheckPanelLinkSupports(IReadOnlyList<Support> supports)
         {
-            _ = seismic;
             foreach (var (panel, link, at) in _panelLinks)
             {
                 var s = supports.FirstOrDefault(x => x.Node == link.Node);

@@ -131,7 +131,7 @@ public static partial class ModelReader
             var panels = ReadPanels(f.Objects("panels", false, "give \"panels\" as an array of objects"), materials);
             CheckPanelWalls(root, panels);
             CheckPanelFootings(footings, panels);   // ModelReader.Footings.cs
-            CheckPanelLinkSupports(supports, f.Token("seismic"));   // ModelReader.PanelLinks.cs
+            CheckPanelLinkSupports(supports);   // ModelReader.PanelLinks.cs
             f.RejectUnknownKeys();
 
             CheckConnectivity(nodes, members);
