@@ -9,15 +9,16 @@ namespace PlaneLateral.Cli;
 /// <summary>The building tables the solve command prints: stories, line shares, drift checks, soft story, modifiers.</summary>
 internal static class BuildingReport
 {
-    public static string Render(AnalysisResult r)
+    public static string Render(ModelResult run)
     {
+        var r = run.Analysis;
         var m = r.Model;
         var b = m.Building;
         if (ReferenceEquals(b, BuildingData.Empty)) return "";
         var u = m.Units;
         string len = u.LengthSymbol, force = u.ForceSymbol, ku = u.Label(Quantity.TranslationalStiffness);
         double L(double v) => u.FromSI(v, Quantity.Length);
-        var br = BuildingResult.Of(r);
+        var br = run.Building;
         var sb = new StringBuilder();
 
         if (b.Levels.Count > 0)
@@ -55,7 +56,7 @@ internal static class BuildingReport
                 sb.Append(lt.Render());
             }
 
-            var split = LineAlone.SplitAll(r, br.Cases, out var skipped);
+            var (split, skipped) = (run.LineSplit, run.LineSplitSkipped);
             var loadCaseSplit = split.Where(x => !br.Cases.First(c => c.CaseId == x.CaseId).IsCombination).ToList();
             if (loadCaseSplit.Count > 0)
             {

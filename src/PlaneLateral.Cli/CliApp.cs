@@ -66,9 +66,9 @@ public static class CliApp
         bool solved = CommandSupport.TrySolve(() =>
         {
             var model = ModelReader.ReadFile(modelPath);
-            var result = LinearStaticAnalysis.Run(model);
-            var comparisons = withComparisons && model.Comparisons.Count > 0 ? ComparisonStudy.Run(model, ComparisonStudy.DefaultTolerance, result) : null;
-            return (result, comparisons);
+            var run = ModelRun.Run(model);   // every result, computed once; what follows only reads it
+            var comparisons = withComparisons && model.Comparisons.Count > 0 ? ComparisonStudy.Run(model, ComparisonStudy.DefaultTolerance, run.Analysis) : null;
+            return (run, comparisons);
         }, stderr, out var solution, out int exit);
         if (!solved) return exit;
         var (result, comparisons) = solution;

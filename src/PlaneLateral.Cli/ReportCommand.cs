@@ -39,9 +39,9 @@ internal static class ReportCommand
         {
             var model = ModelReader.ReadFile(modelPath);
             warnings = model.Warnings;
-            var result = LinearStaticAnalysis.Run(model);
-            var comparisons = model.Comparisons.Count > 0 ? ComparisonStudy.Run(model, tol, result) : null;
-            return ModelReport.Build(result, comparisons, Path.GetFileName(modelPath), $"PlaneLateral {ResultFiles.Version}");
+            var run = ModelRun.Run(model);   // every result, computed once; the report only reads it
+            var comparisons = model.Comparisons.Count > 0 ? ComparisonStudy.Run(model, tol, run.Analysis) : null;
+            return ModelReport.Build(run, comparisons, Path.GetFileName(modelPath), $"PlaneLateral {ResultFiles.Version}");
         }, stderr, out var doc, out int exit);
         if (!solved) return exit;
         stderr.Write(ModelWarning.Lines(warnings));

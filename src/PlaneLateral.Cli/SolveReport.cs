@@ -9,8 +9,9 @@ namespace PlaneLateral.Cli;
 /// <summary>The compact summary the solve command prints.</summary>
 internal static class SolveReport
 {
-    public static string Render(AnalysisResult r, string modelPath)
+    public static string Render(ModelResult run, string modelPath)
     {
+        var r = run.Analysis;
         var m = r.Model;
         var u = m.Units;
         string len = u.LengthSymbol, force = u.ForceSymbol;
@@ -53,10 +54,10 @@ internal static class SolveReport
             sb.Append(t.Render());
             sb.Append("  imbalance: largest relative out-of-balance of ΣF and ΣM (reactions against applied loads); backward error: ‖K·u − f‖ / (‖K‖·‖u‖ + ‖f‖).\n");
         }
-        sb.Append(BuildingReport.Render(r));
+        sb.Append(BuildingReport.Render(run));
         sb.Append(PanelReport.Render(r));
         sb.Append(PanelLinkReport.Render(r));
-        sb.Append(SeismicReport.Render(r));
+        sb.Append(SeismicReport.Render(run));
         sb.Append($"\nCaution: {ResultFiles.Caution}\n");
         return sb.ToString();
     }

@@ -20,6 +20,7 @@ public static class PlanAnalysis
     /// <exception cref="UnstableModelException">The lines cannot hold a floor in some direction or in rotation (names the floor DOF).</exception>
     public static PlanResult Run(BuildingPlan plan, AnalysisOptions? options = null)
     {
+        options = AnalysisOptions.ForRun(options);   // one solver for the run: each line's stiffness factorised once (condensation and recovery)
         int n = plan.FloorCount;
         var condensed = plan.Lines.Select(l => Condense(l, n, options)).ToList();
         var k = Assemble(plan.Lines, condensed.Select(c => c.K).ToList(), n);

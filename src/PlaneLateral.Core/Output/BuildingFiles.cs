@@ -14,18 +14,19 @@ namespace PlaneLateral.Output;
 /// </summary>
 public static class BuildingFiles
 {
-    public static IReadOnlyList<(string Name, string Text)> Render(AnalysisResult r)
+    public static IReadOnlyList<(string Name, string Text)> Render(ModelResult run)
     {
+        var r = run.Analysis;
         var b = r.Model.Building;
         if (ReferenceEquals(b, BuildingData.Empty)) return [];
-        var br = BuildingResult.Of(r);
+        var br = run.Building;
         var files = new List<(string, string)>();
         if (br.HasStories)
         {
             files.Add(("stories.csv", Stories(r, br)));
             files.Add(("story-lines.csv", StoryLines(r, br)));
             files.Add(("soft-story.csv", SoftStory(r, br)));
-            var split = LineAlone.SplitAll(r, br.Cases, out _);
+            var split = run.LineSplit;
             if (split.Count > 0) files.Add(("line-split.csv", Split(r, split)));
         }
         if (b.DriftChecks.Count > 0) files.Add(("drift-checks.csv", Drift(r, br)));

@@ -31,7 +31,7 @@ public static class PlanFiles
         if (r.DriftChecks.Count > 0) files.Add(("plan-drift-checks.csv", Drifts(r)));
         foreach (var line in r.Lines)
         {
-            var own = ResultFiles.Render(line.Recovered).ToDictionary(f => f.Name, f => f.Text);
+            var own = ResultFiles.Planar(line.Recovered).ToDictionary(f => f.Name, f => f.Text);
             foreach (var name in new[] { "member-forces.csv", "reactions.csv", "displacements.csv" })
                 if (own.TryGetValue(name, out var text)) files.Add(($"line-{Safe(line.Line.Id)}-{name}", text));
         }
