@@ -9,7 +9,7 @@ namespace PlaneLateral.Cli;
 /// <summary>The building tables the solve command prints: stories, line shares, drift checks, soft story, modifiers.</summary>
 internal static class BuildingReport
 {
-    public static string Render(ModelResult run)
+    public static string Render(ModelResult run, Detail detail = Detail.Normal)
     {
         var r = run.Analysis;
         var m = r.Model;
@@ -30,8 +30,8 @@ internal static class BuildingReport
             sb.Append(t.Render());
         }
 
-        // The console shows lateral load cases; combinations (sums of them) and gravity-only cases are in the files.
-        var lateral = br.Cases.Where(c => c.Lateral && !c.IsCombination).ToList();
+        // The console shows lateral load cases (and at full detail the lateral combinations); gravity-only cases are in the files.
+        var lateral = br.Cases.Where(c => c.Lateral && (detail == Detail.Full || !c.IsCombination)).ToList();
         var shown = lateral.Select(c => c.CaseId).ToHashSet();
         if (br.HasStories)
         {
@@ -57,7 +57,7 @@ internal static class BuildingReport
             }
 
             var (split, skipped) = (run.LineSplit, run.LineSplitSkipped);
-            var loadCaseSplit = split.Where(x => !br.Cases.First(c => c.CaseId == x.CaseId).IsCombination).ToList();
+            var loadCaseSplit = split.Where(x => shown.Contains(x.CaseId)).ToList();
             if (loadCaseSplit.Count > 0)
             {
                 sb.Append("\nStory shear split: each line's story stiffness alone (same level forces) and the split it implies, beside the split in the structure\n");
