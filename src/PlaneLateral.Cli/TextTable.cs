@@ -5,8 +5,8 @@ namespace PlaneLateral.Cli;
 
 /// <summary>
 /// A plain fixed-width text table: left-aligned text columns, right-aligned number columns, fitted to a width (100
-/// columns unless told): headers wrap onto more lines at their spaces, long texts of a text column move to numbered
-/// notes under the table, and a table still too wide is printed in parts, each repeating the first column.
+/// columns unless told): headers wrap onto more lines at their spaces, long texts of a text column move to lettered
+/// notes under the table ([a], [b], ...), and a table still too wide is printed in parts, each repeating the first column.
 /// </summary>
 internal sealed class TextTable(params string[] headers)
 {
@@ -54,7 +54,7 @@ internal sealed class TextTable(params string[] headers)
                 if (r[col].Length <= ShortText) continue;
                 int k = notes.IndexOf(r[col]);
                 if (k < 0) { notes.Add(r[col]); k = notes.Count - 1; }
-                r[col] = $"[{k + 1}]";
+                r[col] = $"[{Letter(k)}]";
             }
         }
         Func<int, int> w = wrap ? Fitted : Natural;
@@ -80,9 +80,12 @@ internal sealed class TextTable(params string[] headers)
             sb.Append(indent).Append(new string('-', Total(w, cols))).Append('\n');
             foreach (var r in rows) Line(sb, indent, cols.Select(c => (c, r[c])).ToList(), w);
         }
-        for (int k = 0; k < notes.Count; k++) sb.Append(indent).Append($"[{k + 1}] {notes[k]}\n");
+        for (int k = 0; k < notes.Count; k++) sb.Append(indent).Append($"[{Letter(k)}] {notes[k]}\n");
         return sb.ToString();
     }
+
+    /// <summary>a, b, …, z, aa, ab, …: the table's own notes, apart from any numbered notes of the text around it.</summary>
+    private static string Letter(int k) => k < 26 ? ((char)('a' + k)).ToString() : Letter(k / 26 - 1) + (char)('a' + k % 26);
 
     private void Line(StringBuilder sb, string indent, List<(int Col, string Text)> cells, Func<int, int> width)
     {
