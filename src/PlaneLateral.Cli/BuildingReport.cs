@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Text;
 using PlaneLateral.Analysis;
 using PlaneLateral.Model;
+using PlaneLateral.Output;
 using PlaneLateral.Units;
 
 namespace PlaneLateral.Cli;
@@ -9,15 +10,16 @@ namespace PlaneLateral.Cli;
 /// <summary>The building tables the solve command prints: stories, line shares, drift checks, soft story, modifiers.</summary>
 internal static class BuildingReport
 {
-    public static string Render(AnalysisResult r)
+    public static string Render(ModelResult run, Detail detail = Detail.Normal)
     {
+        var r = run.Analysis;
         var m = r.Model;
         var b = m.Building;
         if (ReferenceEquals(b, BuildingData.Empty)) return "";
         var u = m.Units;
         string len = u.LengthSymbol, force = u.ForceSymbol, ku = u.Label(Quantity.TranslationalStiffness);
         double L(double v) => u.FromSI(v, Quantity.Length);
-        var br = BuildingResult.Of(r);
+        var br = run.Building;
         var sb = new StringBuilder();
 
         if (b.Levels.Count > 0)
@@ -29,19 +31,16 @@ internal static class BuildingReport
             sb.Append(t.Render());
         }
 
-        // The console shows lateral load cases; combinations (sums of them) and gravity-only cases are in the files.
-        var lateral = br.Cases.Where(c => c.Lateral && !c.IsCombination).ToList();
+        // The console shows lateral load cases (and at full detail the lateral combinations); gravity-only cases are in the files.
+        var lateral = br.Cases.Where(c => c.Lateral && (detail == Detail.Full || !c.IsCombination)).ToList();
         var shown = lateral.Select(c => c.CaseId).ToHashSet();
         if (br.HasStories)
         {
-            sb.Append("\nStories (lateral load cases; combinations and gravity-only cases are in stories.csv)\n");
-            var t = new TextTable("case", "story", "levels", $"height [{len}]", $"top ux [{len}]", $"drift [{len}]", "drift ratio", $"shear [{force}]", $"stiffness [{ku}]")
-                .Numeric(1, 3, 4, 5, 6, 7, 8);
-            foreach (var c in lateral)
-                foreach (var s in c.Stories)
-                    t.Add(c.CaseId, s.Index.ToString(CultureInfo.InvariantCulture), $"{s.Bottom.Id}-{s.Top.Id}", TextTable.Num(L(s.Height)), TextTable.Num(L(s.TopDisplacement)),
-                        TextTable.Num(L(s.Drift)), TextTable.Num(s.DriftRatio), TextTable.Num(u.FromSI(s.Shear, Quantity.Force)), TextTable.Num(u.FromSI(s.Stiffness, Quantity.TranslationalStiffness)));
-            sb.Append(t.Render());
+            sb.Append(detail == Detail.Full ? "\nStories (lateral cases and combinations; gravity-only cases are in stories.csv)\n"
+                : "\nStories (lateral load cases; combinations and gravity-only cases are in stories.csv)\n");
+            sb.Append(TableView.Render(BuildingTables.Stories(run),
+                ["case", "story", "bottom level", "top level", "height", "top displacement", "drift", "drift ratio", "story shear", "story stiffness"],
+                row => shown.Contains((string)row[0])));
 
             if (StoryPanels.Lines(r.Model).Count > 0)
             {
@@ -55,8 +54,8 @@ internal static class BuildingReport
                 sb.Append(lt.Render());
             }
 
-            var split = LineAlone.SplitAll(r, br.Cases, out var skipped);
-            var loadCaseSplit = split.Where(x => !br.Cases.First(c => c.CaseId == x.CaseId).IsCombination).ToList();
+            var (split, skipped) = (run.LineSplit, run.LineSplitSkipped);
+            var loadCaseSplit = split.Where(x => shown.Contains(x.CaseId)).ToList();
             if (loadCaseSplit.Count > 0)
             {
                 sb.Append("\nStory shear split: each line's story stiffness alone (same level forces) and the split it implies, beside the split in the structure\n");
@@ -79,15 +78,11 @@ internal static class BuildingReport
 
         if (br.DriftChecks.Count > 0)
         {
-            sb.Append("\nDrift check: amplified drift = Cd·elastic drift / Ie (ASCE 7-16 eq. 12.8-15) against the allowable drift ratio\n");
-            var t = new TextTable("check", "case", "story", $"elastic [{len}]", "Cd", "Ie", $"amplified [{len}]", "ratio", "allowed", "result", "margin").Numeric(2, 3, 4, 5, 6, 7, 8, 10);
-            foreach (var d in br.DriftChecks)
-                t.Add(d.Check.Id, d.CaseId, d.Story.Index.ToString(CultureInfo.InvariantCulture), TextTable.Num(L(d.ElasticDrift)), TextTable.Num(d.Check.Cd), TextTable.Num(d.Check.Ie),
-                    TextTable.Num(L(d.AmplifiedDrift)), TextTable.Num(d.Ratio), TextTable.Num(d.Allowed), d.Passes ? "within" : "EXCEEDS",
-                    (100 * d.Margin).ToString("0.0", CultureInfo.InvariantCulture) + " %");
-            sb.Append(t.Render());
+            var drift = BuildingTables.DriftChecks(run);
+            sb.Append('\n').Append(drift.Title).Append('\n');
+            sb.Append(TableView.Render(drift, ["check", "case", "story", "elastic drift", "Cd", "Ie", "amplified drift", "drift ratio", "allowed ratio", "result", "margin"]));
             foreach (var c in b.DriftChecks) sb.Append($"  {c.Id}: allowable ratio {TextTable.Num(c.AllowedRatio)}, {c.LimitSource}.\n");
-            sb.Append("  margin: share of the allowable drift left. A computed aid, not a code check: the governing code decides.\n");
+            foreach (var note in drift.Notes) sb.Append($"  {note}\n");
         }
 
         if (b.Modifiers.Count > 0 && (b.CrackedSections is not null || b.Modifiers.Any(a => a.Modifiers != StiffnessModifiers.None)))

@@ -36,11 +36,12 @@ public static class CliApp
         var modelArg = CommandSupport.ModelArgument();
         var outOption = CommandSupport.OutOption("the results files");
 
+        var detailOption = Summary.DetailOption();
         var solve = new Command("solve", "Solve every load case and combination of a model; print a summary and write results (JSON and CSV).")
         {
-            modelArg, outOption,
+            modelArg, outOption, detailOption,
         };
-        solve.SetAction(p => Solve(p.GetValue(modelArg)!, p.GetValue(outOption), stdout, stderr));
+        solve.SetAction(p => Solve(p.GetValue(modelArg)!, p.GetValue(outOption), p.GetValue(detailOption), stdout, stderr));
 
         var validateArg = new Argument<string>("model") { Description = "Model file to check." };
         var validate = new Command("validate", "Read and check a model file without solving it; list every problem found.") { validateArg };
@@ -53,22 +54,30 @@ public static class CliApp
             solve, validate, CompareCommand.Build(stdout, stderr), CouplingSweepCommand.Build(stdout, stderr), SweepCommand.Build(stdout, stderr), ReportCommand.Build(stdout, stderr),
             ExportCommand.Build(stdout, stderr),
         };
-        root.SetAction(_ =>
+        var rootDetail = Summary.DetailOption();
+        root.Options.Add(rootDetail);
+        root.SetAction(p =>
         {
-            return PlanSolve.RunDemo(stdout, stderr);
+            if (!Summary.TryDetail(p.GetValue(rootDetail), out var detail, out string error)) { stderr.Write(error + "\n"); return ExitCodes.Usage; }
+            return PlanSolve.RunDemo(stdout, stderr, detail);
         });
         return root;
     }
 
-    private static int Solve(string modelPath, string? outDir, TextWriter stdout, TextWriter stderr, bool withComparisons = false)
+    private static int Solve(string modelPath, string? outDir, string? detailText, TextWriter stdout, TextWriter stderr, bool withComparisons = false)
     {
-        if (ModelReader.IsPlanFile(modelPath)) return PlanSolve.Run(modelPath, outDir, stdout, stderr);   // a building in plan (docs/plan.md)
+        if (!Summary.TryDetail(detailText, out var detail, out string error))
+        {
+            stderr.Write(error + "\nNothing was written.\n");
+            return ExitCodes.Usage;
+        }
+        if (ModelReader.IsPlanFile(modelPath)) return PlanSolve.Run(modelPath, outDir, stdout, stderr, detail);   // a building in plan (docs/plan.md)
         bool solved = CommandSupport.TrySolve(() =>
         {
             var model = ModelReader.ReadFile(modelPath);
-            var result = LinearStaticAnalysis.Run(model);
-            var comparisons = withComparisons && model.Comparisons.Count > 0 ? ComparisonStudy.Run(model, ComparisonStudy.DefaultTolerance, result) : null;
-            return (result, comparisons);
+            var run = ModelRun.Run(model);   // every result, computed once; what follows only reads it
+            var comparisons = withComparisons && model.Comparisons.Count > 0 ? ComparisonStudy.Run(model, ComparisonStudy.DefaultTolerance, run.Analysis) : null;
+            return (run, comparisons);
         }, stderr, out var solution, out int exit);
         if (!solved) return exit;
         var (result, comparisons) = solution;
@@ -83,10 +92,16 @@ public static class CliApp
         if (!wrote) return exit;
 
         stderr.Write(ModelWarning.Lines(result.Model.Warnings));   // plausibility warnings (Model/Plausibility.cs)
-        stdout.Write($"PlaneLateral {ResultFiles.Version}: linear static analysis\n\n");
-        stdout.Write(SolveReport.Render(result, modelPath));
-        if (comparisons is not null) stdout.Write("\n" + CompareReport.Render(comparisons));
-        stdout.Write($"\nResults written to {folder}: {string.Join(", ", written.Select(Path.GetFileName))}\n");
+        var text = new System.Text.StringBuilder($"PlaneLateral {ResultFiles.Version}: linear static analysis\n\n");
+        text.Append(Summary.Planar(result, comparisons, modelPath));
+        if (detail != Detail.Summary)
+        {
+            text.Append('\n').Append(SolveReport.Render(result, modelPath, detail));
+            if (comparisons is not null) text.Append('\n').Append(CompareReport.Render(comparisons));
+        }
+        else text.Append($"\nCaution: {ResultFiles.Caution}\n");
+        text.Append($"\nResults written to {folder}: {string.Join(", ", written.Select(Path.GetFileName))}\n");
+        stdout.Write(ConsoleText.Fit(text.ToString()));
         return ExitCodes.Success;
     }
 

@@ -19,11 +19,12 @@ internal static class CompareCommand
         {
             Description = "Band on FE/hand − 1 for checks that set none of their own, as a fraction (0.10) or a percentage (10%). Default 0.10.",
         };
+        var detailOption = Summary.DetailOption();
         var cmd = new Command("compare", "Set each hand-method number beside the finite-element number for the model's comparison checks, with the gap and its likely cause; print a table and write comparisons.json and comparisons.csv.")
         {
-            modelArg, outOption, tolOption,
+            modelArg, outOption, tolOption, detailOption,
         };
-        cmd.SetAction(p => Run(p.GetValue(modelArg)!, p.GetValue(outOption), p.GetValue(tolOption), stdout, stderr));
+        cmd.SetAction(p => Run(p.GetValue(modelArg)!, p.GetValue(outOption), p.GetValue(tolOption), p.GetValue(detailOption), stdout, stderr));
         return cmd;
     }
 
@@ -50,9 +51,9 @@ internal static class CompareCommand
         return true;
     }
 
-    private static int Run(string modelPath, string? outDir, string? tolText, TextWriter stdout, TextWriter stderr)
+    private static int Run(string modelPath, string? outDir, string? tolText, string? detailText, TextWriter stdout, TextWriter stderr)
     {
-        if (!TryTolerance(tolText, out double tol, out string error))
+        if (!TryTolerance(tolText, out double tol, out string error) || !Summary.TryDetail(detailText, out var detail, out error))
         {
             stderr.Write(error + "\nNothing was written.\n");
             return ExitCodes.Usage;
@@ -68,10 +69,12 @@ internal static class CompareCommand
         string folder = outDir ?? CommandSupport.DefaultFolder(modelPath);
         if (!CommandSupport.TryWrite(() => AtomicFiles.WriteAll(folder, ComparisonFiles.Render(report, $"PlaneLateral {ResultFiles.Version}")), "comparison", stderr, out var written, out exit))
             return exit;
-        stdout.Write($"PlaneLateral {ResultFiles.Version}: hand methods beside the finite-element model\n\n");
-        stdout.Write($"Model     {report.ModelTitle}\nFile      {modelPath}\n\n");
-        stdout.Write(CompareReport.Render(report));
-        stdout.Write($"\nComparisons written to {folder}: {string.Join(", ", written.Select(Path.GetFileName))}\n");
+        var text = new StringBuilder($"PlaneLateral {ResultFiles.Version}: hand methods beside the finite-element model\n\n");
+        text.Append(Summary.Compare(report, modelPath));
+        if (detail != Detail.Summary) text.Append($"\nFile      {modelPath}\n\n").Append(CompareReport.Render(report));
+        else text.Append($"\nCaution: {ComparisonReport.Caution}\n");
+        text.Append($"\nComparisons written to {folder}: {string.Join(", ", written.Select(Path.GetFileName))}\n");
+        stdout.Write(ConsoleText.Fit(text.ToString()));
         return ExitCodes.Success;
     }
 }

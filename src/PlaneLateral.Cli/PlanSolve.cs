@@ -12,15 +12,13 @@ internal static class PlanSolve
     public static string DemoPath => Path.Combine(AppContext.BaseDirectory, "models", "demo-building.json");
 
     /// <summary>The no-argument run: the demo building, with a pointer to the planar demo.</summary>
-    public static int RunDemo(TextWriter stdout, TextWriter stderr)
-    {
-        stdout.Write($"No model given: solving the shipped demo building in plan ({DemoPath}).\n" +
+    public static int RunDemo(TextWriter stdout, TextWriter stderr, Detail detail = Detail.Normal) =>
+        Run(DemoPath, null, stdout, stderr, detail,
+            $"No model given: this is the shipped demo building in plan ({DemoPath}).\n" +
             "Use 'planelateral solve <model.json>' for your own model or building, 'planelateral solve models/demo-clinic.json' for the planar demo,\n" +
-            "'planelateral --help' for all commands.\n\n");
-        return Run(DemoPath, null, stdout, stderr);
-    }
+            "'planelateral --help' for all commands.\n");
 
-    public static int Run(string path, string? outDir, TextWriter stdout, TextWriter stderr)
+    public static int Run(string path, string? outDir, TextWriter stdout, TextWriter stderr, Detail detail = Detail.Normal, string? note = null)
     {
         bool solved = CommandSupport.TrySolve(() =>
         {
@@ -33,10 +31,17 @@ internal static class PlanSolve
         var files = seismic is null ? PlanFiles.Render(r) : [.. PlanFiles.Render(r), .. PlanSeismicFiles.Render(r, seismic)];
         if (!CommandSupport.TryWrite(() => AtomicFiles.WriteAll(folder, files), "results", stderr, out var written, out exit)) return exit;
         stderr.Write(ModelWarning.Lines(r.Plan.Warnings));   // plausibility warnings (Model/Plausibility.Plan.cs)
-        stdout.Write($"PlaneLateral {ResultFiles.Version}: building in plan, linear static analysis{(seismic is null ? "" : ", modes and seismic forces")}\n\n");
-        stdout.Write(PlanReport.Render(r, hand, path));
-        if (seismic is not null) stdout.Write(PlanSeismicReport.Render(r, seismic));
-        stdout.Write($"\nResults written to {folder}: {written.Count} files (plan-*.csv, plan.json, line-*-*.csv)\n");
+        var text = new System.Text.StringBuilder($"PlaneLateral {ResultFiles.Version}: building in plan, linear static analysis{(seismic is null ? "" : ", modes and seismic forces")}\n\n");
+        text.Append(Summary.Plan(r, hand, path));
+        if (note is not null) text.Append('\n').Append(note);
+        if (detail != Detail.Summary)
+        {
+            text.Append('\n').Append(PlanReport.Render(r, hand, path));
+            if (seismic is not null) text.Append(PlanSeismicReport.Render(r, seismic));
+        }
+        else text.Append($"\nCaution: {ResultFiles.Caution}\n");
+        text.Append($"\nResults written to {folder}: {written.Count} files (plan-*.csv, plan.json, line-*-*.csv)\n");
+        stdout.Write(ConsoleText.Fit(text.ToString()));
         return ExitCodes.Success;
     }
 

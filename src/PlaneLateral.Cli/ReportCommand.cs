@@ -18,18 +18,19 @@ internal static class ReportCommand
         {
             Description = "Band on FE/hand − 1 for comparison checks that set none of their own, as 0.10 or 10%. Default 0.10.",
         };
+        var detailOption = Summary.DetailOption();
         var cmd = new Command("report",
             "Solve a model and write a report: one self-contained HTML file with the figures embedded, a Markdown twin and the PNG figures (inputs, units, assumptions, formulas and sources, tables, drift checks, hand methods beside FE, verdicts, cautions).")
         {
-            modelArg, outOption, tolOption,
+            modelArg, outOption, tolOption, detailOption,
         };
-        cmd.SetAction(p => Run(p.GetValue(modelArg)!, p.GetValue(outOption), p.GetValue(tolOption), stdout, stderr));
+        cmd.SetAction(p => Run(p.GetValue(modelArg)!, p.GetValue(outOption), p.GetValue(tolOption), p.GetValue(detailOption), stdout, stderr));
         return cmd;
     }
 
-    private static int Run(string modelPath, string? outDir, string? tolText, TextWriter stdout, TextWriter stderr)
+    private static int Run(string modelPath, string? outDir, string? tolText, string? detailText, TextWriter stdout, TextWriter stderr)
     {
-        if (!CompareCommand.TryTolerance(tolText, out double tol, out string error))
+        if (!CompareCommand.TryTolerance(tolText, out double tol, out string error) || !Summary.TryDetail(detailText, out var detail, out error))
         {
             stderr.Write(error + "\nNothing was written.\n");
             return ExitCodes.Usage;
@@ -39,19 +40,22 @@ internal static class ReportCommand
         {
             var model = ModelReader.ReadFile(modelPath);
             warnings = model.Warnings;
-            var result = LinearStaticAnalysis.Run(model);
-            var comparisons = model.Comparisons.Count > 0 ? ComparisonStudy.Run(model, tol, result) : null;
-            return ModelReport.Build(result, comparisons, Path.GetFileName(modelPath), $"PlaneLateral {ResultFiles.Version}");
-        }, stderr, out var doc, out int exit);
+            var run = ModelRun.Run(model);   // every result, computed once; the report only reads it
+            var comparisons = model.Comparisons.Count > 0 ? ComparisonStudy.Run(model, tol, run.Analysis) : null;
+            return (Summary.Planar(run, comparisons, modelPath), ModelReport.Build(run, comparisons, Path.GetFileName(modelPath), $"PlaneLateral {ResultFiles.Version}"));
+        }, stderr, out var built, out int exit);
         if (!solved) return exit;
+        var (summary, doc) = built;
         stderr.Write(ModelWarning.Lines(warnings));
         string folder = outDir ?? CommandSupport.DefaultFolder(modelPath, "report");
         if (!CommandSupport.TryWrite(() => OutputSet.WriteAll(folder, ModelReport.Render(doc)), "report", stderr, out var written, out exit))
             return exit;
-        stdout.Write($"PlaneLateral {ResultFiles.Version}: report\n\n{doc.Title}\n");
-        stdout.Write($"{doc.Tables.Count()} tables, {doc.Figures.Count()} figures.\n");
-        stdout.Write($"\nCaution: {ModelReport.Caution}\n");
-        stdout.Write($"\nReport written to {folder}: {string.Join(", ", written.Select(Path.GetFileName))}\n");
+        var text = new System.Text.StringBuilder($"PlaneLateral {ResultFiles.Version}: report\n\n");
+        text.Append(summary);
+        if (detail != Detail.Summary) text.Append($"\n{doc.Title}\n{doc.Tables.Count()} tables, {doc.Figures.Count()} figures.\n");
+        text.Append($"\nCaution: {ModelReport.Caution}\n");
+        text.Append($"\nReport written to {folder}: {string.Join(", ", written.Select(Path.GetFileName))}\n");
+        stdout.Write(ConsoleText.Fit(text.ToString()));
         return ExitCodes.Success;
     }
 }

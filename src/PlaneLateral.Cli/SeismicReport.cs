@@ -9,9 +9,10 @@ namespace PlaneLateral.Cli;
 /// <summary>The seismic tables the solve command prints: periods, story forces, stability coefficient and second-order drifts.</summary>
 internal static class SeismicReport
 {
-    public static string Render(AnalysisResult r)
+    public static string Render(ModelResult run)
     {
-        var sr = SeismicResult.Of(r);
+        var r = run.Analysis;
+        var sr = run.Seismic;
         if (sr is null) return "";
         var m = r.Model;
         var s = m.Seismic!;

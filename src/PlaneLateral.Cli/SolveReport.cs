@@ -9,19 +9,20 @@ namespace PlaneLateral.Cli;
 /// <summary>The compact summary the solve command prints.</summary>
 internal static class SolveReport
 {
-    public static string Render(AnalysisResult r, string modelPath)
+    public static string Render(ModelResult run, string modelPath, Detail detail = Detail.Normal)
     {
+        var r = run.Analysis;
         var m = r.Model;
         var u = m.Units;
         string len = u.LengthSymbol, force = u.ForceSymbol;
         var sb = new StringBuilder();
-        sb.Append($"Model     {m.Title}\n");
+        sb.Append("Details\n");
         sb.Append($"File      {modelPath}\n");
-        sb.Append($"Units     force {force}, length {len}\n");
         sb.Append($"Size      {m.Nodes.Count} nodes, {m.Members.Count} members, {m.Supports.Count} supports, {m.LoadCases.Count} load cases, {m.Combinations.Count} combinations\n");
         if (m.Members.Count > 0)
         {
-            sb.Append($"Solver    {r.Solve.Solver}; {r.Solve.Unknowns} unknowns, {r.Solve.FactorNonZeros} entries in the factor, {r.Solve.RightHandSides} right-hand sides on one factorisation\n");
+            sb.Append($"Solve     {r.Solve.Unknowns} unknowns, {r.Solve.FactorNonZeros} entries in the factor, {r.Solve.RightHandSides} right-hand sides on one factorisation; " +
+                $"{run.Factorizations} distinct matrices factorised in the run (frame, K + K_G, panels, lines alone)\n");
             if (r.Conditioning is { } cond) sb.Append($"Condition {TextTable.Sci(cond.ScaledKappa1)} (1-norm estimate of the diagonally scaled stiffness; warning above {TextTable.Sci(cond.Threshold)})\n");
         }
         foreach (var note in r.Notes) sb.Append($"Note      {note}\n");
@@ -53,10 +54,10 @@ internal static class SolveReport
             sb.Append(t.Render());
             sb.Append("  imbalance: largest relative out-of-balance of ΣF and ΣM (reactions against applied loads); backward error: ‖K·u − f‖ / (‖K‖·‖u‖ + ‖f‖).\n");
         }
-        sb.Append(BuildingReport.Render(r));
+        sb.Append(BuildingReport.Render(run, detail));
         sb.Append(PanelReport.Render(r));
         sb.Append(PanelLinkReport.Render(r));
-        sb.Append(SeismicReport.Render(r));
+        sb.Append(SeismicReport.Render(run));
         sb.Append($"\nCaution: {ResultFiles.Caution}\n");
         return sb.ToString();
     }

@@ -37,17 +37,18 @@ public static partial class ModelReport
     /// <summary>Builds the report document.</summary>
     /// <param name="comparisons">The model's hand-vs-FE rows, or null when it declares none.</param>
     /// <param name="modelFileName">The model's file name as shown in the report (no folder, so the report does not depend on where it was run).</param>
-    public static ReportDocument Build(AnalysisResult r, ComparisonReport? comparisons, string modelFileName, string producedBy)
+    public static ReportDocument Build(ModelResult run, ComparisonReport? comparisons, string modelFileName, string producedBy)
     {
+        var r = run.Analysis;
         var m = r.Model;
         var u = m.Units;
-        var b = BuildingResult.Of(r);
+        var b = run.Building;
         var blocks = new List<Block>();
         int fig = 0, sec = 0;
         var figureNames = new HashSet<string>(StringComparer.Ordinal);
         void Figure(Figure f) => blocks.Add(new FigureBlock(FigureNames.Unique(f, figureNames), ++fig));   // no two figures share a file
         string Section(string name) => $"{++sec}. {name}";
-        var sr = SeismicResult.Of(r);
+        var sr = run.Seismic;
         bool frame = m.Members.Count > 0;
         string L(double si) => F(u.FromSI(si, Quantity.Length));
         string Fo(double si) => F(u.FromSI(si, Quantity.Force));

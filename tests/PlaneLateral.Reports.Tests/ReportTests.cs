@@ -12,8 +12,8 @@ public class ReportTests
     private static ReportDocument DemoDocument()
     {
         var model = ModelReader.ReadFile(DemoPath);
-        var result = LinearStaticAnalysis.Run(model);
-        return ModelReport.Build(result, ComparisonStudy.Run(model, ComparisonStudy.DefaultTolerance, result), "demo-clinic.json", "test");
+        var run = ModelRun.Run(model);
+        return ModelReport.Build(run, ComparisonStudy.Run(model, ComparisonStudy.DefaultTolerance, run.Analysis), "demo-clinic.json", "test");
     }
 
     [Theory]
@@ -108,7 +108,7 @@ public class ReportTests
         }
         """;
         var model = ModelReader.Parse(json, "pier.json");
-        var doc = ModelReport.Build(LinearStaticAnalysis.Run(model), null, "pier.json", "test");
+        var doc = ModelReport.Build(ModelRun.Run(model), null, "pier.json", "test");
         var f = Assert.Single(doc.Figures);
         Assert.Equal("shape-H.png", f.FileName);
         ValidPng(f.Png, PlotStyle.Width, PlotStyle.Height, f.FileName);

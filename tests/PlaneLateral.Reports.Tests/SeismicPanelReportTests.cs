@@ -17,8 +17,8 @@ public class SeismicPanelReportTests
     private static (AnalysisResult Result, ReportDocument Doc) Demo()
     {
         var model = ModelReader.ReadFile(DemoPath);
-        var result = LinearStaticAnalysis.Run(model);
-        return (result, ModelReport.Build(result, ComparisonStudy.Run(model, ComparisonStudy.DefaultTolerance, result), "demo-clinic.json", "test"));
+        var run = ModelRun.Run(model);
+        return (run.Analysis, ModelReport.Build(run, ComparisonStudy.Run(model, ComparisonStudy.DefaultTolerance, run.Analysis), "demo-clinic.json", "test"));
     }
 
     /// <summary>The body rows of the Markdown table whose caption starts with <paramref name="caption"/>, cells trimmed.</summary>
@@ -177,7 +177,7 @@ public class SeismicPanelReportTests
         Assert.True(ds.ColourMax > ds.ColourMin);
         ValidPng(du.Figure.Png, du.Figure.Width, du.Figure.Height, du.Figure.FileName);
         ValidPng(ds.Figure.Png, ds.Figure.Width, ds.Figure.Height, ds.Figure.FileName);
-        var doc = ModelReport.Build(r, null, "wall.json", "test");
+        var doc = ModelReport.Build(ModelRun.Run(r.Model), null, "wall.json", "test");
         var methods = Assert.Single(doc.Tables, t => t.Caption == "Methods, formulas and their published sources");
         Assert.Contains(methods.Rows, row => row[0] == (element == "quad4" ? "4-node incompatible-mode quadrilateral (QM6)" : "9-node Lagrangian quadrilateral"));
     }

@@ -22,13 +22,22 @@ public static class LineAlone
     /// <summary>Story results of <paramref name="line"/> standing alone under the level forces of case <paramref name="caseId"/>.</summary>
     /// <exception cref="ArgumentException">The model has no such line, or fewer than two levels.</exception>
     /// <exception cref="UnstableModelException">The line alone is a mechanism (e.g. it leans on another line).</exception>
-    public static CaseStories Stories(AnalysisResult r, string caseId, string line)
+    public static CaseStories Stories(AnalysisResult r, string caseId, string line, AnalysisOptions? options = null) =>
+        Stories(r, [caseId], line, options)[0];
+
+    /// <summary>
+    /// Story results of <paramref name="line"/> standing alone under the level forces of each case in
+    /// <paramref name="caseIds"/>, in that order: one model of the line with one load case per case, so its stiffness is
+    /// factorised once whatever the number of cases.
+    /// </summary>
+    /// <exception cref="ArgumentException">The model has no such line, or fewer than two levels.</exception>
+    /// <exception cref="UnstableModelException">The line alone is a mechanism (e.g. it leans on another line).</exception>
+    public static IReadOnlyList<CaseStories> Stories(AnalysisResult r, IReadOnlyList<string> caseIds, string line, AnalysisOptions? options = null)
     {
         var model = r.Model;
         var b = model.Building;
         if (!StoryPanels.Lines(model).Contains(line)) throw new ArgumentException($"the model has no line \"{line}\"", nameof(line));
         if (b.Levels.Count < 2) throw new ArgumentException("the model has fewer than two levels, so no stories", nameof(r));
-        var source = r.Case(caseId);
 
         var memberIdx = Enumerable.Range(0, model.Members.Count).Where(i => b.MemberLines[i] == line).ToList();
         var panelIdx = Enumerable.Range(0, model.Panels.Count).Where(i => model.Panels[i].Links.Count > 0 && StoryPanels.LineOf(model.Panels[i]) == line).ToList();
@@ -40,17 +49,25 @@ public static class LineAlone
         var supports = model.Supports.Where(s => newIndex.ContainsKey(s.Node)).Select(s => s with { Node = newIndex[s.Node] }).ToList();
 
         var levels = new List<Level>();
-        var loads = new List<NodalLoad>();
-        var applied = AppliedFx(model, source);
-        var panelFx = LinkedPanelLevelFx(model, source);
-        for (int li = 0; li < b.Levels.Count; li++)
+        foreach (var l in b.Levels)
         {
-            var l = b.Levels[li];
             var at = l.Nodes.Where(newIndex.ContainsKey).Select(n => newIndex[n]).ToList();
-            var tied = l.Rigid ? at : [];
-            levels.Add(l with { Nodes = at, TiedNodes = tied });
-            double fx = l.Nodes.Sum(n => applied[n]) + panelFx[li];
-            if (fx != 0 && at.Count > 0) loads.Add(new NodalLoad(at[0], fx, 0, 0));
+            levels.Add(l with { Nodes = at, TiedNodes = l.Rigid ? at : [] });
+        }
+        var loadCases = new List<LoadCase>();
+        foreach (var caseId in caseIds)
+        {
+            var source = r.Case(caseId);
+            var loads = new List<NodalLoad>();
+            var applied = AppliedFx(model, source);
+            var panelFx = LinkedPanelLevelFx(model, source);
+            for (int li = 0; li < b.Levels.Count; li++)
+            {
+                var at = levels[li].Nodes;
+                double fx = b.Levels[li].Nodes.Sum(n => applied[n]) + panelFx[li];
+                if (fx != 0 && at.Count > 0) loads.Add(new NodalLoad(at[0], fx, 0, 0));
+            }
+            loadCases.Add(new LoadCase(caseId, $"level forces of {caseId}", loads, []));
         }
         var sub = new StructureModel
         {
@@ -62,7 +79,7 @@ public static class LineAlone
             Nodes = nodes,
             Members = members,
             Supports = supports,
-            LoadCases = [new LoadCase(caseId, $"level forces of {caseId}", loads, [])],
+            LoadCases = loadCases,
             Combinations = [],
             StiffnessPoints = [],
             // The line's linked wall panels with their links, without their own loads (the level forces carry them).
@@ -75,19 +92,23 @@ public static class LineAlone
                 Modifiers = memberIdx.Select((i, k) => b.Modifiers.Count > i ? b.Modifiers[i] with { Member = k } : new ModifierAssignment(k, members[k].Modifiers, "")).ToList(),
             },
         };
-        var result = LinearStaticAnalysis.Run(sub);
-        return StoryAnalysis.ForCase(result, result.Cases[0]);
+        var result = LinearStaticAnalysis.Run(sub, options);
+        return result.Cases.Select(c => StoryAnalysis.ForCase(result, c)).ToList();
     }
 
     /// <summary>
     /// For every story of case <paramref name="caseId"/>: each line's stiffness alone, the split those stiffnesses give, and
     /// the share the line takes in the whole structure.
     /// </summary>
-    public static IReadOnlyList<LineSplitRow> Split(AnalysisResult r, string caseId)
+    public static IReadOnlyList<LineSplitRow> Split(AnalysisResult r, string caseId, AnalysisOptions? options = null)
     {
-        var whole = StoryAnalysis.ForCase(r, r.Case(caseId));
         var lines = StoryPanels.Lines(r.Model);
-        var alone = lines.ToDictionary(l => l, l => Stories(r, caseId, l));
+        var alone = lines.ToDictionary(l => l, l => Stories(r, caseId, l, options));
+        return Rows(StoryAnalysis.ForCase(r, r.Case(caseId)), lines, alone);
+    }
+
+    private static IReadOnlyList<LineSplitRow> Rows(CaseStories whole, IReadOnlyList<string> lines, Dictionary<string, CaseStories> alone)
+    {
         var rows = new List<LineSplitRow>();
         foreach (var s in whole.Stories)
         {
@@ -103,20 +124,30 @@ public static class LineAlone
     }
 
     /// <summary>
-    /// <see cref="Split"/> for every lateral case with two or more lines; a case where some line alone is a mechanism is
-    /// left out and named in <paramref name="skipped"/>.
+    /// <see cref="Split"/> for every lateral case with two or more lines, each line analysed alone once for all those
+    /// cases; when some line alone is a mechanism no split can be made, and every case is named in <paramref name="skipped"/>.
     /// </summary>
-    public static IReadOnlyList<(string CaseId, IReadOnlyList<LineSplitRow> Rows)> SplitAll(AnalysisResult r, IReadOnlyList<CaseStories> stories, out IReadOnlyList<string> skipped)
+    public static IReadOnlyList<(string CaseId, IReadOnlyList<LineSplitRow> Rows)> SplitAll(AnalysisResult r, IReadOnlyList<CaseStories> stories, out IReadOnlyList<string> skipped,
+        AnalysisOptions? options = null)
     {
         var list = new List<(string, IReadOnlyList<LineSplitRow>)>();
-        var skip = new List<string>();
-        if (StoryPanels.Lines(r.Model).Count >= 2 && r.Model.Building.Levels.Count >= 2)
-            foreach (var c in stories.Where(c => c.Lateral))
-            {
-                try { list.Add((c.CaseId, Split(r, c.CaseId))); }
-                catch (UnstableModelException) { skip.Add(c.CaseId); }
-            }
-        skipped = skip;
+        skipped = [];
+        var lines = StoryPanels.Lines(r.Model);
+        var lateral = stories.Where(c => c.Lateral).ToList();
+        if (lines.Count < 2 || r.Model.Building.Levels.Count < 2 || lateral.Count == 0) return list;
+        var ids = lateral.Select(c => c.CaseId).ToList();
+        var alone = new Dictionary<string, IReadOnlyList<CaseStories>>();
+        try
+        {
+            foreach (var line in lines) alone[line] = Stories(r, ids, line, options);
+        }
+        catch (UnstableModelException)
+        {
+            skipped = ids;   // the line's stiffness does not depend on the case: a mechanism alone is one in every case
+            return list;
+        }
+        for (int i = 0; i < lateral.Count; i++)
+            list.Add((ids[i], Rows(lateral[i], lines, lines.ToDictionary(l => l, l => alone[l][i]))));
         return list;
     }
 

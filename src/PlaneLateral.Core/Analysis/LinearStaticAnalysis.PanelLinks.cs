@@ -75,7 +75,7 @@ public static partial class LinearStaticAnalysis
         public PanelResult? Result { get; set; }
     }
 
-    private sealed partial class LinkedPanels
+    internal sealed partial class LinkedPanels
     {
         private readonly List<LinkedPanel> _panels;
         private double[][]? _frameLoads;

@@ -16,22 +16,11 @@ public static partial class LinearStaticAnalysis
     {
         private readonly LinkedPanels? _links;
 
-        internal CondensedFrame(StructureModel model, FrameElement[] elements, AnalysisOptions? options)
+        /// <summary>The condensation of a run's frame system (its elements, DOFs and linked panels), with <paramref name="model"/>'s loads.</summary>
+        internal CondensedFrame(StructureModel model, FrameSystem system)
         {
-            Model = model;
-            Elements = elements;
-            var dofs = DofMap.Build(model, elements);
-            _links = LinkedPanels.Prepare(model, options ?? new AnalysisOptions());
-            Dofs = _links is null ? dofs : dofs.WithAttachedRotations(_links.Masters);
+            Model = model; Elements = system.Elements; Dofs = system.Dofs; _links = system.Links;
         }
-
-        private CondensedFrame(CondensedFrame other, StructureModel model)
-        {
-            Model = model; Elements = other.Elements; Dofs = other.Dofs; _links = other._links;
-        }
-
-        /// <summary>The same condensation for a model that differs only in its frame loads (the generated story-force case filled in).</summary>
-        public CondensedFrame WithLoadsOf(StructureModel model) => new(this, model);
 
         public StructureModel Model { get; }
         public FrameElement[] Elements { get; }
@@ -75,7 +64,7 @@ public static partial class LinearStaticAnalysis
         }
     }
 
-    private sealed partial class LinkedPanels
+    internal sealed partial class LinkedPanels
     {
         public void AddCondensed(SymmetricMatrixBuilder builder, DofMap dofs)
         {

@@ -13,6 +13,17 @@ public sealed record AnalysisOptions
 
     /// <summary>A pivot below this fraction of its original diagonal marks a mechanism.</summary>
     public double PivotTolerance { get; init; } = 1e-10;
+
+    /// <summary>
+    /// The options of one analysis run: the solver the user chose (the default when none) wrapped once in a
+    /// <see cref="FactorOnceSolver"/>, so that every stage of the run uses that solver and no matrix is factorised twice.
+    /// This is the one place where the default solver stands in for a choice not made.
+    /// </summary>
+    public static AnalysisOptions ForRun(AnalysisOptions? options)
+    {
+        options ??= new AnalysisOptions();
+        return options.Solver is FactorOnceSolver ? options : options with { Solver = new FactorOnceSolver(options.Solver ?? DefaultSolver.Create()) };
+    }
 }
 
 /// <summary>
@@ -26,17 +37,56 @@ public static partial class LinearStaticAnalysis
     /// <exception cref="ModelInputException">A load acts on a DOF that nothing can resist (e.g. a moment at a pinned-only joint).</exception>
     public static AnalysisResult Run(StructureModel model, AnalysisOptions? options = null)
     {
-        options ??= new AnalysisOptions();
-        model = SeismicAnalysis.Prepare(model);   // fills in the generated story-force case, if any (docs/seismic.md)
-        var solver = options.Solver ?? DefaultSolver.Create();
+        options = AnalysisOptions.ForRun(options);
+        var system = Setup(model, options);
+        var prepared = SeismicAnalysis.Stage(model, system).Model;   // the generated story-force case, if any (docs/seismic.md)
+        return Solve(prepared, system, options);
+    }
+
+    /// <summary>
+    /// The frame's assembled system of one run, wall panels linked to it condensed in, factorised once: the stiffness
+    /// the static, period, story-force and second-order stages all work on.
+    /// </summary>
+    internal sealed class FrameSystem
+    {
+        public required FrameElement[] Elements { get; init; }
+        public required DofMap Dofs { get; init; }
+        internal LinkedPanels? Links { get; init; }
+        public required SymmetricSparseMatrix K { get; init; }
+        public required ISparseSpdFactor Factor { get; init; }
+        public required ISparseSpdSolver Solver { get; init; }
+        public required AnalysisOptions Options { get; init; }
+        /// <summary>True when wall panels are linked to the frame (their condensed stiffness is part of <see cref="K"/>).</summary>
+        public bool HasLinkedPanels => Links is not null;
+        /// <summary>True when a pivot failed: the model is a mechanism (reported by <see cref="Solve"/>).</summary>
+        public bool Singular => Factor.PivotFailures.Count > 0;
+    }
+
+    /// <summary>
+    /// Stage 1 of a run: members, DOF map, linked panels condensed onto their frame nodes, the stiffness assembled and
+    /// factorised once with the run's solver. A mechanism is not reported here but by <see cref="Solve"/>.
+    /// </summary>
+    internal static FrameSystem Setup(StructureModel model, AnalysisOptions options)
+    {
+        var solver = options.Solver ?? throw new ArgumentException("the run's options carry no solver (use AnalysisOptions.ForRun)", nameof(options));
         var elements = model.Members.Select(m => new FrameElement(m, model.Nodes[m.Start], model.Nodes[m.End])).ToArray();
         var dofs = DofMap.Build(model, elements);
         var links = LinkedPanels.Prepare(model, options);   // wall panels tied to frame nodes (LinearStaticAnalysis.PanelLinks.cs)
         if (links is not null) dofs = dofs.WithAttachedRotations(links.Masters);
         CheckLoadsOnHeldRotations(model, dofs);
-
         var k = links is null ? Assemble(model, elements, dofs) : links.Assemble(model, elements, dofs);
         var factor = solver.Factorize(k, options.PivotTolerance);
+        return new FrameSystem { Elements = elements, Dofs = dofs, Links = links, K = k, Factor = factor, Solver = solver, Options = options };
+    }
+
+    /// <summary>
+    /// The static stage of a run: every load case and stiffness point solved on the system's one factor, the
+    /// combinations superposed, each result checked. <paramref name="model"/> is the model with its generated cases filled in.
+    /// </summary>
+    /// <exception cref="UnstableModelException">The model is a mechanism.</exception>
+    internal static AnalysisResult Solve(StructureModel model, FrameSystem system, AnalysisOptions options)
+    {
+        var (elements, dofs, links, k, factor, solver) = (system.Elements, system.Dofs, system.Links, system.K, system.Factor, system.Solver);
         if (factor.PivotFailures.Count > 0) throw Unstable(model, dofs, factor);
         double kNorm = k.InfinityNorm();
         var condition = Conditioning.Estimate(model, elements, k, factor);
@@ -92,7 +142,7 @@ public static partial class LinearStaticAnalysis
         {
             Model = model,
             Dofs = dofs,
-            Solve = new SolveSummary(solver.Description, dofs.FreeCount, k.NonZerosLower, factor.FactorNonZeros, model.LoadCases.Count + model.StiffnessPoints.Count),
+            Solve = new SolveSummary(solver.DescriptionFor(dofs.FreeCount), dofs.FreeCount, k.NonZerosLower, factor.FactorNonZeros, model.LoadCases.Count + model.StiffnessPoints.Count),
             Cases = cases,
             Stiffness = stiffness,
             Notes = Conditioning.WithNote(Notes(model, dofs), condition),

@@ -21,6 +21,7 @@ public static class PlanAnalysis
     /// <param name="condensed">The lines' condensations when already made (PlanSeismic makes them for the modes), else null.</param>
     public static PlanResult Run(BuildingPlan plan, AnalysisOptions? options = null, IReadOnlyList<Condensation>? condensed = null)
     {
+        options = AnalysisOptions.ForRun(options);   // one solver for the run: each line's stiffness factorised once (condensation and recovery)
         int n = plan.FloorCount;
         condensed ??= plan.Lines.Select(l => Condense(l, n, options)).ToList();
         // Floors that bend (docs/plan.md): their own assembly; rigid floors keep the path below unchanged.

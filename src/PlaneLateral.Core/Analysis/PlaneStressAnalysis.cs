@@ -107,8 +107,8 @@ public static class PlaneStressAnalysis
     public static PlaneAnalysisResult Run(PlaneStressProblem p, IReadOnlyList<PlaneLoadCase> cases, AnalysisOptions? options = null,
         IReadOnlyList<(string Id, IReadOnlyList<(int Case, double Factor)> Factors)>? combinations = null)
     {
-        options ??= new AnalysisOptions();
-        var solver = options.Solver ?? DefaultSolver.Create();
+        options = AnalysisOptions.ForRun(options);   // the run's solver (the user's choice, or the default when none)
+        var solver = options.Solver!;
         var mesh = p.Mesh;
         int n = mesh.NodeCount;
 
@@ -191,7 +191,7 @@ public static class PlaneStressAnalysis
         return new PlaneAnalysisResult
         {
             Dofs = dofs,
-            Solve = new SolveSummary(solver.Description, dofs.FreeCount, k.NonZerosLower, factor.FactorNonZeros, cases.Count + flex.Length),
+            Solve = new SolveSummary(solver.DescriptionFor(dofs.FreeCount), dofs.FreeCount, k.NonZerosLower, factor.FactorNonZeros, cases.Count + flex.Length),
             Cases = results,
             TieFlexibility = flex,
             System = new LinearSystem { Stiffness = k, CaseIds = cases.Select(c => c.Id).ToArray(), LoadVectors = loads.Select(l => l.F).ToArray() },

@@ -35,8 +35,17 @@ public sealed class SeismicResult
     /// <summary>Factor on the gravity load at which the structure buckles (dense solve; NaN when not worked out, +∞ when the gravity load does not soften it).</summary>
     public required double CriticalLoadFactor { get; init; }
 
-    /// <summary>The seismic results of a solved model; null when it has no seismic block.</summary>
-    public static SeismicResult? Of(AnalysisResult r) => SecondOrderAnalysis.Seismic(r);
+    /// <summary>
+    /// The seismic results of a solved model, worked out again from its model (one more factorisation of K and of
+    /// K + K_G); null when it has no seismic block. A run (<see cref="ModelRun"/>) holds them already: read
+    /// <see cref="ModelResult.Seismic"/> there.
+    /// </summary>
+    public static SeismicResult? Of(AnalysisResult r, AnalysisOptions? options = null)
+    {
+        options = AnalysisOptions.ForRun(options);
+        var system = LinearStaticAnalysis.Setup(r.Model, options);
+        return SecondOrderAnalysis.Seismic(r, SeismicAnalysis.Stage(r.Model, system), system);
+    }
 }
 
 /// <summary>
@@ -56,17 +65,23 @@ public static class SecondOrderAnalysis
 
     /// <summary>Full nodal displacements (3 per node) of <paramref name="lateralCase"/> with the geometric stiffness of <paramref name="gravityCase"/>.</summary>
     /// <exception cref="ModelInputException">The gravity load buckles the structure.</exception>
-    public static double[] Solve(StructureModel model, string gravityCase, string lateralCase)
+    public static double[] Solve(StructureModel model, string gravityCase, string lateralCase, AnalysisOptions? options = null)
     {
-        var elements = model.Members.Select(m => new FrameElement(m, model.Nodes[m.Start], model.Nodes[m.End])).ToArray();
-        var cf = new LinearStaticAnalysis.CondensedFrame(model, elements, null);
-        var dofs = cf.Dofs;
-        var factor = DefaultSolver.Create().Factorize(cf.Stiffness([]));
-        if (factor.PivotFailures.Count > 0) throw new InvalidOperationException("the model is a mechanism; run the linear analysis for the details");
-        var f2 = CheckStable(cf, factor, gravityCase);
+        options = AnalysisOptions.ForRun(options);
+        var system = LinearStaticAnalysis.Setup(model, options);
+        if (system.Singular) throw new InvalidOperationException("the model is a mechanism; run the linear analysis for the details");
+        var cf = new LinearStaticAnalysis.CondensedFrame(model, system);
+        var f2 = CheckStable(cf, system.Factor, gravityCase, system.Solver);
+        return Solve(cf, f2, lateralCase);
+    }
+
+    /// <summary>The second-order displacements of <paramref name="lateralCase"/> on the run's factor of K + K_G (linked panels condensed in).</summary>
+    internal static double[] Solve(LinearStaticAnalysis.CondensedFrame cf, ISparseSpdFactor secondOrder, string lateralCase)
+    {
+        var (model, dofs) = (cf.Model, cf.Dofs);
         var f = cf.LoadVector(lateralCase);
         var u = new double[dofs.FreeCount];
-        f2.Solve(f, u);
+        secondOrder.Solve(f, u);
         var full = new double[3 * model.Nodes.Count];
         for (int j = 0; j < full.Length; j++)
         {
@@ -143,14 +158,17 @@ public static class SecondOrderAnalysis
         return i >= 0 ? [(i, 1.0)] : model.Combinations.First(c => c.Id == id).Factors;
     }
 
-    /// <summary>Factorises K + K_G; a failed pivot means the gravity load buckles the structure, reported naming the story.</summary>
-    internal static ISparseSpdFactor CheckStable(LinearStaticAnalysis.CondensedFrame cf, ISparseSpdFactor elastic, string gravityCase)
+    /// <summary>
+    /// Factorises K + K_G with <paramref name="solver"/> (the run's); a failed pivot means the gravity load buckles the
+    /// structure, reported naming the story.
+    /// </summary>
+    internal static ISparseSpdFactor CheckStable(LinearStaticAnalysis.CondensedFrame cf, ISparseSpdFactor elastic, string gravityCase, ISparseSpdSolver solver)
     {
         var model = cf.Model;
         var dofs = cf.Dofs;
         var ug = new double[dofs.FreeCount];
         elastic.Solve(cf.LoadVector(gravityCase), ug);
-        var f2 = DefaultSolver.Create().Factorize(cf.Stiffness(GeometricTerms(cf, ug, gravityCase, 1.0)));
+        var f2 = solver.Factorize(cf.Stiffness(GeometricTerms(cf, ug, gravityCase, 1.0)));
         if (f2.PivotFailures.Count == 0) return f2;
         var problems = new List<ModelDiagnostic>();
         // One message per story where pivots failed, naming the DOFs found there (in elimination order).
@@ -177,14 +195,22 @@ public static class SecondOrderAnalysis
     /// The factor λ on the gravity load at which det(K + λ·K_G) = 0, the smallest positive one: from the dense
     /// eigenproblem L⁻¹(−K_G)L⁻ᵀ·y = (1/λ)·y with K = L·Lᵀ. For models of up to <paramref name="maxUnknowns"/> unknowns; NaN beyond.
     /// </summary>
-    public static double CriticalLoadFactor(StructureModel model, string gravityCase, int maxUnknowns = 400)
+    public static double CriticalLoadFactor(StructureModel model, string gravityCase, int maxUnknowns = 400, AnalysisOptions? options = null)
     {
-        var elements = model.Members.Select(m => new FrameElement(m, model.Nodes[m.Start], model.Nodes[m.End])).ToArray();
-        var cf = new LinearStaticAnalysis.CondensedFrame(model, elements, null);
-        var dofs = cf.Dofs;
+        options = AnalysisOptions.ForRun(options);
+        var system = LinearStaticAnalysis.Setup(model, options);
+        return CriticalLoadFactor(new LinearStaticAnalysis.CondensedFrame(model, system), system, gravityCase, maxUnknowns);
+    }
+
+    /// <summary>
+    /// <see cref="CriticalLoadFactor(StructureModel, string, int, AnalysisOptions)"/> on a run's system: the gravity axial
+    /// forces are solved on its factor of K (linked panels condensed in). The eigenproblem needs K's Cholesky factor as a
+    /// dense matrix, so for the (small) models it is made for, K is also factorised densely here.
+    /// </summary>
+    internal static double CriticalLoadFactor(LinearStaticAnalysis.CondensedFrame cf, LinearStaticAnalysis.FrameSystem system, string gravityCase, int maxUnknowns = 400)
+    {
+        var (dofs, factor, ks) = (cf.Dofs, system.Factor, system.K);
         if (dofs.FreeCount > maxUnknowns) return double.NaN;
-        var ks = cf.Stiffness([]);
-        var factor = DefaultSolver.Create().Factorize(ks);
         if (factor.PivotFailures.Count > 0) return double.NaN;
         var ug = new double[dofs.FreeCount];
         factor.Solve(cf.LoadVector(gravityCase), ug);
@@ -269,12 +295,15 @@ public static class SecondOrderAnalysis
         return face + load;
     }
 
-    internal static SeismicResult? Seismic(AnalysisResult r)
+    /// <summary>
+    /// The seismic stage's results of a solved model: story results of the generated case, the stability coefficient,
+    /// the second-order drifts on the stage's factor of K + K_G, and the buckling load factor.
+    /// </summary>
+    internal static SeismicResult? Seismic(AnalysisResult r, SeismicAnalysis.SeismicStage stage, LinearStaticAnalysis.FrameSystem system)
     {
         var model = r.Model;
         if (model.Seismic is not { } s) return null;
-        var forces = SeismicAnalysis.Forces(model);
-        if (forces is null) return null;
+        if (stage.Forces is not { } forces) return null;
         var lateral = r.Case(s.CaseId);
         var stories = StoryAnalysis.ForCase(r, lateral);
         var rows = new List<StabilityRow>();
@@ -282,12 +311,13 @@ public static class SecondOrderAnalysis
         double critical = double.NaN;
         if (s.SecondOrder is { } so)
         {
-            var u2 = Solve(model, so.GravityCase, s.CaseId);
+            var cf = new LinearStaticAnalysis.CondensedFrame(model, system);
+            var u2 = Solve(cf, stage.SecondOrder ?? throw new InvalidOperationException("the seismic stage made no factor of K + K_G"), s.CaseId);
             var levels = model.Building.Levels;
             var ux2 = levels.Select(l => l.Nodes.Count == 0 ? 0 : l.Nodes.Average(n => u2[3 * n])).ToArray();
             var gravity = r.Case(so.GravityCase);
             var loads = StoryAnalysis.MemberLoadsOf(model, gravity);
-            var elements = model.Members.Select(m => new FrameElement(m, model.Nodes[m.Start], model.Nodes[m.End])).ToArray();
+            var elements = system.Elements;
             double thetaMax = ThetaMax(so.Beta, so.Cd);
             // The link forces of the gravity case, for the vertical load the linked panels carry across each cut.
             int gi = StoryPanels.IndexOf(r, gravity);
@@ -316,7 +346,7 @@ public static class SecondOrderAnalysis
                     double ratio = Math.Abs(a) / row.Story.Height;
                     drift2.Add(new DriftCheckRow(check, s.CaseId + " (2nd order)", row.Story, row.SecondOrderDrift, a, ratio, check.AllowedRatio, ratio <= check.AllowedRatio, 1 - ratio / check.AllowedRatio));
                 }
-            critical = CriticalLoadFactor(model, so.GravityCase);
+            critical = CriticalLoadFactor(cf, system, so.GravityCase);
         }
         return new SeismicResult { Forces = forces, Stories = stories, Stability = rows, SecondOrderDriftChecks = drift2, CriticalLoadFactor = critical };
     }

@@ -176,12 +176,8 @@ public static class SeismicAnalysis
     public static ModalModel? Modal(StructureModel model, ISparseSpdSolver? solver = null)
     {
         var s = model.Seismic ?? throw new InvalidOperationException("the model has no seismic block");
-        var elements = model.Members.Select(m => new FrameElement(m, model.Nodes[m.Start], model.Nodes[m.End])).ToArray();
-        var cf = new LinearStaticAnalysis.CondensedFrame(model, elements, null);   // linked wall panels condensed in
-        var (dofs, k) = (cf.Dofs, cf.Stiffness([]));
-        var factor = (solver ?? DefaultSolver.Create()).Factorize(k);
-        if (factor.PivotFailures.Count > 0) return null;
-        return Modal(model, s, dofs, factor);
+        var system = LinearStaticAnalysis.Setup(model, AnalysisOptions.ForRun(new AnalysisOptions { Solver = solver }));   // linked wall panels condensed in
+        return system.Singular ? null : Modal(model, s, system.Dofs, system.Factor);
     }
 
     private static ModalModel Modal(StructureModel model, SeismicData s, DofMap dofs, ISparseSpdFactor factor)
@@ -232,10 +228,10 @@ public static class SeismicAnalysis
     }
 
     /// <summary>Periods, base shear and story forces of a model with a seismic block; null when K is singular.</summary>
-    public static StoryForces? Forces(StructureModel model)
+    public static StoryForces? Forces(StructureModel model, AnalysisOptions? options = null)
     {
-        var modal = Modal(model);
-        return modal is null ? null : Forces(model, modal);
+        if (model.Seismic is null) throw new InvalidOperationException("the model has no seismic block");
+        return Stage(model, LinearStaticAnalysis.Setup(model, AnalysisOptions.ForRun(options))).Forces;
     }
 
     private static StoryForces Forces(StructureModel model, ModalModel modal)
@@ -276,19 +272,33 @@ public static class SeismicAnalysis
     }
 
     /// <summary>
+    /// Stage 2 of a run, on the frame's one factor of K: periods and story forces, the model with the generated
+    /// story-force case filled in, and, with second-order settings, K + K_G factorised once (which also checks that the
+    /// gravity load does not buckle the structure).
+    /// </summary>
+    /// <param name="Model">The model with the generated case filled in (the model itself when it has no seismic block).</param>
+    /// <param name="Forces">Periods and story forces; null without a seismic block or when K is singular.</param>
+    /// <param name="SecondOrder">The factor of K + K_G of the gravity case; null without second-order settings.</param>
+    internal sealed record SeismicStage(StructureModel Model, StoryForces? Forces, ISparseSpdFactor? SecondOrder);
+
+    /// <summary>
     /// The model with the generated story-force case filled in (nodal loads in +x at each level's diaphragm; at a level
     /// without a diaphragm, shared equally among its nodes free in x). Unchanged when it has no seismic block or K is
     /// singular (the static analysis then reports the mechanism).
     /// </summary>
     /// <exception cref="ModelInputException">The gravity load of the second-order settings buckles the structure.</exception>
-    public static StructureModel Prepare(StructureModel model)
+    public static StructureModel Prepare(StructureModel model, AnalysisOptions? options = null)
     {
-        if (model.Seismic is not { } s) return model;
-        var elements = model.Members.Select(m => new FrameElement(m, model.Nodes[m.Start], model.Nodes[m.End])).ToArray();
-        var cf = new LinearStaticAnalysis.CondensedFrame(model, elements, null);   // linked wall panels condensed in
-        var (dofs, k) = (cf.Dofs, cf.Stiffness([]));
-        var factor = DefaultSolver.Create().Factorize(k);
-        if (factor.PivotFailures.Count > 0) return model;
+        if (model.Seismic is null) return model;
+        return Stage(model, LinearStaticAnalysis.Setup(model, AnalysisOptions.ForRun(options))).Model;
+    }
+
+    /// <summary>The seismic stage of a run (see <see cref="SeismicStage"/>), on the run's frame system.</summary>
+    /// <exception cref="ModelInputException">The gravity load of the second-order settings buckles the structure.</exception>
+    internal static SeismicStage Stage(StructureModel model, LinearStaticAnalysis.FrameSystem system)
+    {
+        if (model.Seismic is not { } s || system.Singular) return new SeismicStage(model, null, null);
+        var (elements, dofs, factor) = (system.Elements, system.Dofs, system.Factor);
         var forces = Forces(model, Modal(model, s, dofs, factor));
         var loads = new List<NodalLoad>();
         var levels = model.Building.Levels;
@@ -300,7 +310,7 @@ public static class SeismicAnalysis
         }
         var cases = model.LoadCases.Select(c => c.Id == s.CaseId ? c with { NodalLoads = loads } : c).ToList();
         var prepared = model with { LoadCases = cases };
-        if (s.SecondOrder is { } so) SecondOrderAnalysis.CheckStable(cf.WithLoadsOf(prepared), factor, so.GravityCase);
-        return prepared;
+        var secondOrder = s.SecondOrder is { } so ? SecondOrderAnalysis.CheckStable(new LinearStaticAnalysis.CondensedFrame(prepared, system), factor, so.GravityCase, system.Solver) : null;
+        return new SeismicStage(prepared, forces, secondOrder);
     }
 }

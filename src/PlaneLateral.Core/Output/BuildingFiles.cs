@@ -14,21 +14,22 @@ namespace PlaneLateral.Output;
 /// </summary>
 public static class BuildingFiles
 {
-    public static IReadOnlyList<(string Name, string Text)> Render(AnalysisResult r)
+    public static IReadOnlyList<(string Name, string Text)> Render(ModelResult run)
     {
+        var r = run.Analysis;
         var b = r.Model.Building;
         if (ReferenceEquals(b, BuildingData.Empty)) return [];
-        var br = BuildingResult.Of(r);
+        var br = run.Building;
         var files = new List<(string, string)>();
         if (br.HasStories)
         {
-            files.Add(("stories.csv", Stories(r, br)));
+            files.Add(("stories.csv", BuildingTables.Stories(run).ToCsv()));
             files.Add(("story-lines.csv", StoryLines(r, br)));
             files.Add(("soft-story.csv", SoftStory(r, br)));
-            var split = LineAlone.SplitAll(r, br.Cases, out _);
+            var split = run.LineSplit;
             if (split.Count > 0) files.Add(("line-split.csv", Split(r, split)));
         }
-        if (b.DriftChecks.Count > 0) files.Add(("drift-checks.csv", Drift(r, br)));
+        if (b.DriftChecks.Count > 0) files.Add(("drift-checks.csv", BuildingTables.DriftChecks(run).ToCsv()));
         files.Add(("member-stiffness.csv", MemberStiffness(r)));
         files.Add(("stories.json", Json(r, br)));
         return files;
@@ -39,17 +40,6 @@ public static class BuildingFiles
     private static string Csv(string s) => PlaneLateral.Output.CsvText.Cell(s);   // the one escaper (quoting, formula neutralising)
 
     private static string LineName(string l) => l.Length == 0 ? "(no line)" : l;
-
-    private static string Stories(AnalysisResult r, BuildingResult br)
-    {
-        var u = r.Model.Units;
-        string len = u.LengthSymbol, fu = u.ForceSymbol, ku = u.Label(Quantity.TranslationalStiffness);
-        var sb = new StringBuilder($"case,kind,story,bottom level,top level,height [{len}],top displacement [{len}],drift [{len}],drift ratio,cut at y [{len}],story shear [{fu}],story stiffness [{ku}]\n");
-        foreach (var c in br.Cases)
-            foreach (var s in c.Stories)
-                sb.Append($"{Csv(c.CaseId)},{(c.IsCombination ? "combination" : "load case")},{s.Index},{Csv(s.Bottom.Id)},{Csv(s.Top.Id)},{F(u.FromSI(s.Height, Quantity.Length))},{F(u.FromSI(s.TopDisplacement, Quantity.Length))},{F(u.FromSI(s.Drift, Quantity.Length))},{F(s.DriftRatio)},{F(u.FromSI(s.CutElevation, Quantity.Length))},{F(u.FromSI(s.Shear, Quantity.Force))},{F(u.FromSI(s.Stiffness, Quantity.TranslationalStiffness))}\n");
-        return sb.ToString();
-    }
 
     private static string StoryLines(AnalysisResult r, BuildingResult br)
     {
@@ -69,16 +59,6 @@ public static class BuildingFiles
         foreach (var (id, rows) in split)
             foreach (var x in rows)
                 sb.Append($"{Csv(id)},{x.Story},{Csv(x.Line)},{F(u.FromSI(x.AloneStiffness, Quantity.TranslationalStiffness))},{F(x.AloneShare)},{F(x.InStructureShare)}\n");
-        return sb.ToString();
-    }
-
-    private static string Drift(AnalysisResult r, BuildingResult br)
-    {
-        var u = r.Model.Units;
-        string len = u.LengthSymbol;
-        var sb = new StringBuilder($"check,case,story,height [{len}],elastic drift [{len}],Cd,Ie,amplified drift [{len}],drift ratio,allowed ratio,result,margin,limit source\n");
-        foreach (var d in br.DriftChecks)
-            sb.Append($"{Csv(d.Check.Id)},{Csv(d.CaseId)},{d.Story.Index},{F(u.FromSI(d.Story.Height, Quantity.Length))},{F(u.FromSI(d.ElasticDrift, Quantity.Length))},{F(d.Check.Cd)},{F(d.Check.Ie)},{F(u.FromSI(d.AmplifiedDrift, Quantity.Length))},{F(d.Ratio)},{F(d.Allowed)},{(d.Passes ? "within" : "exceeds")},{F(d.Margin)},{Csv(d.Check.LimitSource)}\n");
         return sb.ToString();
     }
 

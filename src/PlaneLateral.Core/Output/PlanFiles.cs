@@ -32,7 +32,7 @@ public static class PlanFiles
         files.AddRange(PlanDiaphragmFiles.Render(r));   // floors that bend: with a "floor" block only
         foreach (var line in r.Lines)
         {
-            var own = ResultFiles.Render(line.Recovered).ToDictionary(f => f.Name, f => f.Text);
+            var own = ResultFiles.Planar(line.Recovered).ToDictionary(f => f.Name, f => f.Text);
             foreach (var name in new[] { "member-forces.csv", "reactions.csv", "displacements.csv" })
                 if (own.TryGetValue(name, out var text)) files.Add(($"line-{Safe(line.Line.Id)}-{name}", text));
         }

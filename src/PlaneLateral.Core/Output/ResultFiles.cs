@@ -22,8 +22,25 @@ public static class ResultFiles
     public static string Version =>
         typeof(ResultFiles).Assembly.GetCustomAttribute<AssemblyInformationalVersionAttribute>()?.InformationalVersion.Split('+')[0] ?? "0.0.0";
 
-    /// <summary>File name → text of every results file.</summary>
-    public static IReadOnlyList<(string Name, string Text)> Render(AnalysisResult result) =>
+    /// <summary>File name → text of every results file of a run (it only reads the run's results).</summary>
+    public static IReadOnlyList<(string Name, string Text)> Render(ModelResult run) =>
+    [
+        .. Static(run.Analysis),
+        .. BuildingFiles.Render(run),
+        .. PanelResultFiles.Render(run.Analysis),
+        .. PanelLinkFiles.Render(run.Analysis),
+        .. SeismicFiles.Render(run),
+    ];
+
+    /// <summary>The files of the static results alone (no building or seismic files): JSON, displacements, reactions, member forces, checks, stiffness, panels.</summary>
+    public static IReadOnlyList<(string Name, string Text)> Planar(AnalysisResult result) =>
+    [
+        .. Static(result),
+        .. PanelResultFiles.Render(result),
+        .. PanelLinkFiles.Render(result),
+    ];
+
+    private static IReadOnlyList<(string Name, string Text)> Static(AnalysisResult result) =>
     [
         ("results.json", Json(result)),
         ("displacements.csv", Displacements(result)),
@@ -31,10 +48,6 @@ public static class ResultFiles
         ("member-forces.csv", MemberForces(result)),
         ("checks.csv", Checks(result)),
         ("stiffness.csv", Stiffness(result)),
-        .. BuildingFiles.Render(result),
-        .. PanelResultFiles.Render(result),
-        .. PanelLinkFiles.Render(result),
-        .. SeismicFiles.Render(result),
     ];
 
     private static string F(double v) => v.ToString("G12", CultureInfo.InvariantCulture);

@@ -16,9 +16,10 @@ public static class SeismicFiles
 {
     public const string Source = "ASCE 7-16 §12.8 (numbering and values from memory: confirm the edition); the governing code decides";
 
-    public static IReadOnlyList<(string Name, string Text)> Render(AnalysisResult r)
+    public static IReadOnlyList<(string Name, string Text)> Render(ModelResult run)
     {
-        var sr = SeismicResult.Of(r);
+        var r = run.Analysis;
+        var sr = run.Seismic;
         if (sr is null) return [];
         var files = new List<(string, string)> { ("periods.csv", Periods(r, sr)), ("story-forces.csv", StoryForcesCsv(r, sr)) };
         if (sr.Stability.Count > 0) files.Add(("second-order.csv", SecondOrder(r, sr)));

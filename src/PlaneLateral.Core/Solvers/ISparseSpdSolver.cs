@@ -9,6 +9,9 @@ public interface ISparseSpdSolver
     /// <summary>One-line description, e.g. "envelope Cholesky, reverse Cuthill–McKee order (managed)".</summary>
     string Description { get; }
 
+    /// <summary>What runs on a matrix of order <paramref name="size"/>, in one short line (a solver that picks by size names the one it picks).</summary>
+    string DescriptionFor(int size) => Description;
+
     /// <summary>
     /// Orders and factorises <paramref name="matrix"/>. Never throws for a singular or indefinite matrix:
     /// a pivot that fails is recorded in <see cref="ISparseSpdFactor.PivotFailures"/>, its DOF is held at zero,

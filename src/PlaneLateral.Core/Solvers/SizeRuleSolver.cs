@@ -32,6 +32,9 @@ public sealed class SizeRuleSolver : ISparseSpdSolver
     public string Description => $"below {Threshold} unknowns: {Small.Description}; from {Threshold}: {Large.Description}";
 
     /// <inheritdoc />
+    public string DescriptionFor(int size) => For(size).DescriptionFor(size);
+
+    /// <inheritdoc />
     public ISparseSpdFactor Factorize(SymmetricSparseMatrix matrix, double relativePivotTolerance = 1e-10)
     {
         ArgumentNullException.ThrowIfNull(matrix);

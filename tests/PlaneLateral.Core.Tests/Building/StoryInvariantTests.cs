@@ -101,7 +101,7 @@ public class StoryInvariantTests
     private static void AssertFilesBalance(AnalysisResult r, string name)
     {
         var u = r.Model.Units;
-        var files = ResultFiles.Render(r).ToDictionary(f => f.Name, f => f.Text);
+        var files = ResultFiles.Render(ModelRun.Run(r.Model)).ToDictionary(f => f.Name, f => f.Text);
         var csv = new Dictionary<string, (double Fx, double Fy)>();
         foreach (var line in files["reactions.csv"].Split('\n').Skip(1).Where(l => l.Length > 0))
         {

@@ -1,0 +1,99 @@
+using System.Globalization;
+using System.Text;
+using PlaneLateral.Analysis;
+using PlaneLateral.Units;
+
+namespace PlaneLateral.Output;
+
+/// <summary>How a column's cells are written: text, a number, or a fraction shown as a percentage on screen.</summary>
+public enum CellKind { Text, Number, Percent }
+
+/// <summary>One column of a <see cref="ResultTable"/>: its name and unit (empty for a ratio or text).</summary>
+public sealed record TableColumn(string Name, string Unit = "", CellKind Kind = CellKind.Number)
+{
+    /// <summary>"name [unit]", or the name alone without a unit.</summary>
+    public string Header => Unit.Length == 0 ? Name : $"{Name} [{Unit}]";
+}
+
+/// <summary>
+/// A results table built once (title, columns with units, rows, notes) and rendered to each output: CSV here (one header
+/// row, numbers to 12 significant figures, culture-invariant, text through the one escaper), the console by the command
+/// line's table printer. Cells are text (string) or numbers (double, in the table's units).
+/// </summary>
+public sealed class ResultTable
+{
+    public required string Title { get; init; }
+    public required IReadOnlyList<TableColumn> Columns { get; init; }
+    public required IReadOnlyList<IReadOnlyList<object>> Rows { get; init; }
+    public IReadOnlyList<string> Notes { get; init; } = [];
+
+    /// <summary>The index of the column named <paramref name="name"/>.</summary>
+    public int Column(string name)
+    {
+        for (int i = 0; i < Columns.Count; i++) if (Columns[i].Name == name) return i;
+        throw new ArgumentException($"the table \"{Title}\" has no column \"{name}\"", nameof(name));
+    }
+
+    public string ToCsv()
+    {
+        var sb = new StringBuilder(string.Join(",", Columns.Select(c => c.Header))).Append('\n');
+        foreach (var row in Rows)
+            sb.Append(string.Join(",", row.Select(cell => cell switch
+            {
+                double v => double.IsFinite(v) ? v.ToString("G12", CultureInfo.InvariantCulture) : "n/a",
+                int i => i.ToString(CultureInfo.InvariantCulture),
+                _ => CsvText.Cell(cell?.ToString() ?? ""),
+            }))).Append('\n');
+        return sb.ToString();
+    }
+}
+
+/// <summary>The building layer's tables, built once from a run for the console and the files alike.</summary>
+public static class BuildingTables
+{
+    /// <summary>Story results of every case and combination.</summary>
+    public static ResultTable Stories(ModelResult run)
+    {
+        var u = run.Model.Units;
+        string len = u.LengthSymbol, fu = u.ForceSymbol, ku = u.Label(Quantity.TranslationalStiffness);
+        double L(double v) => u.FromSI(v, Quantity.Length);
+        var rows = new List<IReadOnlyList<object>>();
+        foreach (var c in run.Building.Cases)
+            foreach (var s in c.Stories)
+                rows.Add([c.CaseId, c.IsCombination ? "combination" : "load case", s.Index, s.Bottom.Id, s.Top.Id, L(s.Height), L(s.TopDisplacement), L(s.Drift),
+                    s.DriftRatio, L(s.CutElevation), u.FromSI(s.Shear, Quantity.Force), u.FromSI(s.Stiffness, Quantity.TranslationalStiffness)]);
+        return new ResultTable
+        {
+            Title = "Stories",
+            Columns =
+            [
+                new("case", Kind: CellKind.Text), new("kind", Kind: CellKind.Text), new("story"), new("bottom level", Kind: CellKind.Text), new("top level", Kind: CellKind.Text),
+                new("height", len), new("top displacement", len), new("drift", len), new("drift ratio"), new("cut at y", len), new("story shear", fu), new("story stiffness", ku),
+            ],
+            Rows = rows,
+        };
+    }
+
+    /// <summary>Amplified drift against the allowable ratio, every check, case and story.</summary>
+    public static ResultTable DriftChecks(ModelResult run)
+    {
+        var u = run.Model.Units;
+        string len = u.LengthSymbol;
+        double L(double v) => u.FromSI(v, Quantity.Length);
+        var rows = run.Building.DriftChecks.Select(d => (IReadOnlyList<object>)
+            [d.Check.Id, d.CaseId, d.Story.Index, L(d.Story.Height), L(d.ElasticDrift), d.Check.Cd, d.Check.Ie, L(d.AmplifiedDrift), d.Ratio, d.Allowed,
+             d.Passes ? "within" : "exceeds", d.Margin, d.Check.LimitSource]).ToList();
+        return new ResultTable
+        {
+            Title = "Drift check: amplified drift = Cd·elastic drift / Ie (ASCE 7-16 eq. 12.8-15) against the allowable drift ratio",
+            Columns =
+            [
+                new("check", Kind: CellKind.Text), new("case", Kind: CellKind.Text), new("story"), new("height", len), new("elastic drift", len), new("Cd"), new("Ie"),
+                new("amplified drift", len), new("drift ratio"), new("allowed ratio"), new("result", Kind: CellKind.Text), new("margin", Kind: CellKind.Percent),
+                new("limit source", Kind: CellKind.Text),
+            ],
+            Rows = rows,
+            Notes = ["margin: share of the allowable drift left. A computed aid, not a code check: the governing code decides."],
+        };
+    }
+}
