@@ -77,7 +77,7 @@ internal static class SeismicReport
                     TextTable.Num(d.Ratio), TextTable.Num(d.Allowed), d.Passes ? "within" : "EXCEEDS", (100 * d.Margin).ToString("0.0", CultureInfo.InvariantCulture) + " %");
             sb.Append(t.Render());
         }
-        sb.Append(SpectrumReport.Render(r));
+        sb.Append(SpectrumReport.Render(r, run.Spectrum));
         sb.Append($"  Periods, Cs, k and θ: {SeismicPresets.Status}. A computed aid for a licensed engineer, not a code check.\n");
         return sb.ToString();
     }

@@ -10,9 +10,9 @@ internal static class SpectrumReport
 {
     private static string P(double v, string f) => double.IsFinite(v) ? v.ToString(f, CultureInfo.InvariantCulture) : "-";
 
-    public static string Render(AnalysisResult r)
+    public static string Render(AnalysisResult r, PlanarSpectrumResult? s)
     {
-        if (PlanarSpectrum.Run(r.Model) is not { } s) return "";
+        if (s is null) return "";
         var u = r.Model.Units;
         string force = u.ForceSymbol, len = u.LengthSymbol;
         string Fo(double v) => TextTable.Num(u.FromSI(v, Quantity.Force));

@@ -140,7 +140,7 @@ internal static class Summary
         var flagged = r.Irregularity.Where(i => i.Type != "none").ToList();
         lines.Add(Row("Irregular", flagged.Count == 0 ? "torsional (Table 12.3-1 1a/1b): none flagged"
             : $"torsional: {flagged.Count} story-case(s), worst {Worst(flagged)}"));
-        lines.Add(Row("Warnings", "none"));
+        lines.Add(Row("Warnings", p.Warnings.Count == 0 ? "none" : $"{p.Warnings.Count} about the input (listed before this summary)"));
         var solver = r.Lines.Select(l => l.Recovered.Solve.Solver).Distinct().ToList();
         lines.Add(Row("Solver", $"lines: {string.Join("; ", solver)}"));
         lines.Add(Row("", "floors: dense Cholesky of the (Ux, Uy, Rz) stiffness of all floors"));

@@ -23,6 +23,8 @@ public sealed class ModelResult
 
     /// <summary>Periods, story forces, stability and second-order results; null without a seismic block.</summary>
     public required SeismicResult? Seismic { get; init; }
+    /// <summary>The modal response spectrum analysis (docs/seismic.md, "Response spectrum"), or null without a <c>responseSpectrum</c> block.</summary>
+    public PlanarSpectrumResult? Spectrum { get; init; }
 
     /// <summary>What ran on the frame's stiffness, in one short line (the solver a size rule picked, not the rule).</summary>
     public required string Solver { get; init; }
@@ -44,7 +46,8 @@ public sealed class ModelResult
 /// <item>static: every load case, stiffness point and combination on K's factor; wall panels; linked-panel recovery;</item>
 /// <item>building: stories, lines, drift checks, soft story (statics on the static results, no solve);</item>
 /// <item>line alone: each line's own model, factorised once for all lateral cases;</item>
-/// <item>second order: drifts on the factor of K + K_G, stability coefficient, buckling factor.</item>
+/// <item>second order: drifts on the factor of K + K_G, stability coefficient, buckling factor;</item>
+/// <item>response spectrum: on stage 2's modes and story forces.</item>
 /// </list>
 /// A matrix met twice in one run (a panel's interior in its condensation and its recovery, a panel's own model in the
 /// whole and in its line alone) is factorised once (<see cref="FactorOnceSolver"/>).
@@ -67,9 +70,10 @@ public static class ModelRun
         };
         var split = LineAlone.SplitAll(analysis, stories, out var skipped, options);   // 5
         var seismic = SecondOrderAnalysis.Seismic(analysis, seismicStage, system);     // 6
+        var spectrum = PlanarSpectrum.Run(seismicStage.Model, seismicStage.Modal, seismicStage.Forces);   // 7 (on stage 2's modes)
         return new ModelResult
         {
-            Analysis = analysis, Building = building, LineSplit = split, LineSplitSkipped = skipped, Seismic = seismic,
+            Analysis = analysis, Building = building, LineSplit = split, LineSplitSkipped = skipped, Seismic = seismic, Spectrum = spectrum,
             Solver = analysis.Solve.Solver, Factorizations = solver.Factorizations, FactorizationRequests = solver.Requests,
         };
     }

@@ -28,11 +28,12 @@ public sealed record PlanarSpectrumResult(DesignSpectrum Spectrum, ResponseSpect
 public static class PlanarSpectrum
 {
     /// <summary>Null when the model has no response spectrum block or its stiffness is singular.</summary>
-    public static PlanarSpectrumResult? Run(StructureModel model)
+    public static PlanarSpectrumResult? Run(StructureModel model) => Run(model, SeismicAnalysis.Modal(model), SeismicAnalysis.Forces(model));
+
+    /// <summary>On a run's modes and story forces (<see cref="ModelRun"/>: no factorisation of its own).</summary>
+    internal static PlanarSpectrumResult? Run(StructureModel model, ModalModel? modal, StoryForces? elf)
     {
         if (model.Seismic is not { ResponseSpectrum: { } rs, Spectrum: { } sv } s) return null;
-        var modal = SeismicAnalysis.Modal(model);
-        var elf = SeismicAnalysis.Forces(model);
         if (modal is null || elf is null) return null;
         var levels = model.Building.Levels;
         int nl = levels.Count;

@@ -279,7 +279,7 @@ public static class SeismicAnalysis
     /// <param name="Model">The model with the generated case filled in (the model itself when it has no seismic block).</param>
     /// <param name="Forces">Periods and story forces; null without a seismic block or when K is singular.</param>
     /// <param name="SecondOrder">The factor of K + K_G of the gravity case; null without second-order settings.</param>
-    internal sealed record SeismicStage(StructureModel Model, StoryForces? Forces, ISparseSpdFactor? SecondOrder);
+    internal sealed record SeismicStage(StructureModel Model, StoryForces? Forces, ISparseSpdFactor? SecondOrder, ModalModel? Modal = null);
 
     /// <summary>
     /// The model with the generated story-force case filled in (nodal loads in +x at each level's diaphragm; at a level
@@ -299,7 +299,8 @@ public static class SeismicAnalysis
     {
         if (model.Seismic is not { } s || system.Singular) return new SeismicStage(model, null, null);
         var (elements, dofs, factor) = (system.Elements, system.Dofs, system.Factor);
-        var forces = Forces(model, Modal(model, s, dofs, factor));
+        var modal = Modal(model, s, dofs, factor);
+        var forces = Forces(model, modal);
         var loads = new List<NodalLoad>();
         var levels = model.Building.Levels;
         for (int l = 1; l < levels.Count; l++)
@@ -311,6 +312,6 @@ public static class SeismicAnalysis
         var cases = model.LoadCases.Select(c => c.Id == s.CaseId ? c with { NodalLoads = loads } : c).ToList();
         var prepared = model with { LoadCases = cases };
         var secondOrder = s.SecondOrder is { } so ? SecondOrderAnalysis.CheckStable(new LinearStaticAnalysis.CondensedFrame(prepared, system), factor, so.GravityCase, system.Solver) : null;
-        return new SeismicStage(prepared, forces, secondOrder);
+        return new SeismicStage(prepared, forces, secondOrder, modal);
     }
 }

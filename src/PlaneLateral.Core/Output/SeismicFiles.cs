@@ -24,7 +24,7 @@ public static class SeismicFiles
         var files = new List<(string, string)> { ("periods.csv", Periods(r, sr)), ("story-forces.csv", StoryForcesCsv(r, sr)) };
         if (sr.Stability.Count > 0) files.Add(("second-order.csv", SecondOrder(r, sr)));
         files.Add(("seismic.json", Json(r, sr)));
-        if (PlanarSpectrum.Run(r.Model) is { } rs) files.AddRange(SpectrumFiles.Render(r, rs));
+        if (run.Spectrum is { } rs) files.AddRange(SpectrumFiles.Render(r, rs));
         return files;
     }
 

@@ -25,6 +25,9 @@ public class RenderersReadOnlyTests
         ["PlaneLateral.Analysis.PanelAnalysis"] = ["Run"],
         ["PlaneLateral.Analysis.PlaneStressAnalysis"] = ["Run"],
         ["PlaneLateral.Analysis.PlanAnalysis"] = ["Run", "Condense"],
+        ["PlaneLateral.Analysis.PlanarSpectrum"] = ["Run"],
+        ["PlaneLateral.Analysis.PlanSeismic"] = ["Run"],
+        ["PlaneLateral.Analysis.PlanModal"] = ["Solve"],
         ["PlaneLateral.Solvers.ISparseSpdSolver"] = ["Factorize"],
     };
 
