@@ -1,3 +1,4 @@
+using PlaneLateral.Elements;
 using PlaneLateral.Model;
 
 namespace PlaneLateral.Analysis;
@@ -151,8 +152,8 @@ public sealed class PlanModal
             plan.Levels.Skip(1).Sum(l => l.Weight / SeismicPresets.Gravity * l.CentreOfMass.Y) / mt);
         var modal = new PlanModal { Plan = plan, Stiffness = (double[,])k.Clone(), Mass = mass, Modes = [], TotalMass = [], Pivot = pivot };
         var iota = Enumerable.Range(0, 3).Select(modal.Influence).ToArray();
-        var mi = iota.Select(v => Multiply(mass, v)).ToArray();
-        var total = Enumerable.Range(0, 3).Select(r => Dot(iota[r], mi[r])).ToArray();
+        var mi = iota.Select(v => SmallMatrix.Times(mass, v)).ToArray();
+        var total = Enumerable.Range(0, 3).Select(r => SmallMatrix.Dot(iota[r], mi[r])).ToArray();
 
         var modes = new List<PlanMode>();
         var cumulative = new double[3];
@@ -162,14 +163,14 @@ public sealed class PlanModal
             if (!(w2 > 0)) continue;
             var q = new double[size];
             for (int i = 0; i < size; i++) q[i] = vectors[i, m] / Math.Sqrt(d[i]);
-            var phi = Multiply(a, q);   // φᵀMφ = ψᵀψ = 1
-            double mn = Dot(phi, Multiply(mass, phi));
+            var phi = SmallMatrix.Times(a, q);   // φᵀMφ = ψᵀψ = 1
+            double mn = SmallMatrix.Dot(phi, SmallMatrix.Times(mass, phi));
             var gamma = new double[3];
             var eff = new double[3];
             var share = new double[3];
             for (int r = 0; r < 3; r++)
             {
-                double ln = Dot(phi, mi[r]);
+                double ln = SmallMatrix.Dot(phi, mi[r]);
                 gamma[r] = ln / mn;
                 eff[r] = ln * ln / mn;
                 share[r] = total[r] > 0 ? eff[r] / total[r] : 0;
@@ -187,25 +188,5 @@ public sealed class PlanModal
     {
         var condensed = plan.Lines.Select(l => PlanAnalysis.Condense(l, plan.FloorCount, options).K).ToList();
         return Solve(plan, PlanAnalysis.Assemble(plan.Lines, condensed, plan.FloorCount));
-    }
-
-    internal static double[] Multiply(double[,] a, double[] x)
-    {
-        int n = x.Length;
-        var y = new double[a.GetLength(0)];
-        for (int i = 0; i < y.Length; i++)
-        {
-            double s = 0;
-            for (int j = 0; j < n; j++) s += a[i, j] * x[j];
-            y[i] = s;
-        }
-        return y;
-    }
-
-    internal static double Dot(double[] a, double[] b)
-    {
-        double s = 0;
-        for (int i = 0; i < a.Length; i++) s += a[i] * b[i];
-        return s;
     }
 }

@@ -1,3 +1,4 @@
+using PlaneLateral.Elements;
 using MathNet.Numerics.LinearAlgebra.Double;
 using PlaneLateral.Model;
 
@@ -176,7 +177,7 @@ public static class PlanSeismic
                 double sa = spec.Sa(m.Period), g = m.Participation[d];
                 double scale = g * sa * SeismicPresets.Gravity / rie;
                 var u = m.Shape.Select(x => x * scale / (m.Omega * m.Omega)).ToArray();
-                var f = PlanModal.Multiply(modal.Mass, m.Shape.Select(x => x * scale).ToArray());
+                var f = SmallMatrix.Times(modal.Mass, m.Shape.Select(x => x * scale).ToArray());
                 perMode.Add((f, u));
                 double fx = 0, fy = 0, mz = 0;
                 for (int l = 0; l < n; l++) { fx += f[3 * l]; fy += f[3 * l + 1]; mz += f[3 * l + 2]; }
@@ -230,8 +231,8 @@ public static class PlanSeismic
             {
                 var line = plan.Lines[i];
                 var kh = condensed[i].K;
-                var perModeForces = perMode.Select(p => PlanModal.Multiply(kh, PlanAnalysis.Project(line, p.U, n))).ToList();
-                var torsForces = PlanModal.Multiply(kh, PlanAnalysis.Project(line, ut, n));
+                var perModeForces = perMode.Select(p => SmallMatrix.Times(kh, PlanAnalysis.Project(line, p.U, n))).ToList();
+                var torsForces = SmallMatrix.Times(kh, PlanAnalysis.Project(line, ut, n));
                 for (int st = 1; st <= n; st++)
                 {
                     double modalShear = ModalCombination.Combine(perModeForces.Select(p => Sum(p, st)).ToList(), rho);
@@ -269,7 +270,7 @@ public static class PlanSeismic
         for (int i = 0; i < plan.Lines.Count; i++)
         {
             var line = plan.Lines[i];
-            double p = PlanModal.Multiply(condensed[i].K, PlanAnalysis.Project(line, u, n)).Sum();
+            double p = SmallMatrix.Times(condensed[i].K, PlanAnalysis.Project(line, u, n)).Sum();
             lx += line.Cos * p; ly += line.Sin * p; lm += line.Lever * p;
         }
         double size = plan.Size;

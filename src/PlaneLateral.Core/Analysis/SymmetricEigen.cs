@@ -1,3 +1,4 @@
+using PlaneLateral.Elements;
 using MathNet.Numerics.LinearAlgebra;
 using MathNet.Numerics.LinearAlgebra.Factorization;
 
@@ -61,12 +62,12 @@ public static class SymmetricEigen
         var y = new double[q][];
         for (int iteration = 0; iteration < 500; iteration++)
         {
-            for (int j = 0; j < q; j++) y[j] = Multiply(matrix, x[j]);
+            for (int j = 0; j < q; j++) y[j] = SmallMatrix.Times(matrix, x[j]);
             // Rayleigh–Ritz on span(x): H = Xᵀ·A·X, symmetrised against rounding.
             var h = new double[q, q];
             for (int i = 0; i < q; i++)
                 for (int j = 0; j <= i; j++)
-                    h[i, j] = h[j, i] = 0.5 * (Dot(x[i], y[j]) + Dot(x[j], y[i]));
+                    h[i, j] = h[j, i] = 0.5 * (SmallMatrix.Dot(x[i], y[j]) + SmallMatrix.Dot(x[j], y[i]));
             var (theta, s) = Solve(h);
             var ritz = Combine(x, s, q);
             var image = Combine(y, s, q);
@@ -106,26 +107,6 @@ public static class SymmetricEigen
         int big = 0;
         for (int i = 1; i < v.Length; i++) if (Math.Abs(v[i]) > Math.Abs(v[big]) + 1e-12) big = i;
         if (v[big] < 0) for (int i = 0; i < v.Length; i++) v[i] = -v[i];
-    }
-
-    private static double[] Multiply(double[,] a, double[] v)
-    {
-        int n = v.Length;
-        var r = new double[n];
-        for (int i = 0; i < n; i++)
-        {
-            double s = 0;
-            for (int j = 0; j < n; j++) s += a[i, j] * v[j];
-            r[i] = s;
-        }
-        return r;
-    }
-
-    private static double Dot(double[] a, double[] b)
-    {
-        double s = 0;
-        for (int i = 0; i < a.Length; i++) s += a[i] * b[i];
-        return s;
     }
 
     /// <summary>Columns Σ_j v[j]·s[j, k] for k &lt; q.</summary>
@@ -176,14 +157,14 @@ public static class SymmetricEigen
         int next = 0;
         for (int k = 0; k < x.Length; k++)
         {
-            double before = Math.Sqrt(Dot(x[k], x[k]));
+            double before = Math.Sqrt(SmallMatrix.Dot(x[k], x[k]));
             for (int pass = 0; pass < 2; pass++)
                 for (int j = 0; j < k; j++)
                 {
-                    double d = Dot(x[j], x[k]);
+                    double d = SmallMatrix.Dot(x[j], x[k]);
                     for (int i = 0; i < n; i++) x[k][i] -= d * x[j][i];
                 }
-            double norm = Math.Sqrt(Dot(x[k], x[k]));
+            double norm = Math.Sqrt(SmallMatrix.Dot(x[k], x[k]));
             if (!(norm > 1e-10 * before) || norm == 0)
             {
                 if (next >= n) throw new InvalidOperationException("subspace larger than the matrix");

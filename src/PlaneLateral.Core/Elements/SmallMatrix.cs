@@ -1,6 +1,6 @@
 namespace PlaneLateral.Elements;
 
-/// <summary>Dense helpers for element-sized matrices (6×6 and smaller).</summary>
+/// <summary>Dense helpers for small matrices (element matrices, the floors' (Ux, Uy, Rz) systems, eigen projections).</summary>
 internal static class SmallMatrix
 {
     /// <summary>Tᵀ·K·T.</summary>
@@ -116,5 +116,13 @@ internal static class SmallMatrix
             for (int q = c + 1; q < m; q++) s -= a[c, q] * u[removed[q]];
             u[removed[c]] = s / a[c, c];
         }
+    }
+
+    /// <summary>aᵀ·b.</summary>
+    public static double Dot(double[] a, double[] b)
+    {
+        double s = 0;
+        for (int i = 0; i < a.Length; i++) s += a[i] * b[i];
+        return s;
     }
 }
