@@ -22,7 +22,7 @@ internal static class SolveReport
         if (m.Members.Count > 0)
         {
             sb.Append($"Solve     {r.Solve.Unknowns} unknowns, {r.Solve.FactorNonZeros} entries in the factor, {r.Solve.RightHandSides} right-hand sides on one factorisation; " +
-                $"{run.Factorizations} distinct matrices factorised in the run (frame, K + K_G, panels, lines alone)\n");
+                $"{run.Factorizations} distinct matrices factorised in the run, each once\n");
             if (r.Conditioning is { } cond) sb.Append($"Condition {TextTable.Sci(cond.ScaledKappa1)} (1-norm estimate of the diagonally scaled stiffness; warning above {TextTable.Sci(cond.Threshold)})\n");
         }
         foreach (var note in r.Notes) sb.Append($"Note      {note}\n");

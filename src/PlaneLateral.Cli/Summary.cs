@@ -108,9 +108,9 @@ internal static class Summary
         var soft = run.Building.Irregularity.Where(i => i.Soft).ToList();
         lines.Add(Row("Irregular", soft.Count == 0 ? (run.Building.HasStories ? "soft story (Table 12.3-2 1a/1b): none flagged" : "no stories to check")
             : $"soft story: {string.Join(", ", soft.Take(4).Select(i => $"story {i.Story.Index} in {i.CaseId} ({(i.ExtremelySoft ? "1b" : "1a")})"))}{(soft.Count > 4 ? $" and {soft.Count - 4} more" : "")}"));
-        lines.Add(Row("Warnings", m.Warnings.Count == 0 ? "none" : $"{m.Warnings.Count} about the input (listed before this summary)"));
+        lines.Add(Row("Warnings", m.Warnings.Count == 0 ? "none" : WarningsRow(m.Warnings.Count)));
         lines.Add(Row("Solver", run.Solver));
-        lines.Add(Row("", $"{run.Factorizations} matri{(run.Factorizations == 1 ? "x" : "ces")} factorised, each once (frame, K + K_G, panels, lines alone)"));
+        lines.Add(Row("", $"{run.Factorizations} matri{(run.Factorizations == 1 ? "x" : "ces")} factorised in the run, each once"));
         return Fit(lines);
     }
 
@@ -142,12 +142,16 @@ internal static class Summary
         var flagged = r.Irregularity.Where(i => i.Type != "none").ToList();
         lines.Add(Row("Irregular", flagged.Count == 0 ? "torsional (Table 12.3-1 1a/1b): none flagged"
             : $"torsional: {flagged.Count} story-case(s), worst {Worst(flagged)}"));
-        lines.Add(Row("Warnings", p.Warnings.Count == 0 ? "none" : $"{p.Warnings.Count} about the input (listed before this summary)"));
+        lines.Add(Row("Warnings", p.Warnings.Count == 0 ? "none" : WarningsRow(p.Warnings.Count)));
         var solver = r.Lines.Select(l => l.Recovered.Solve.Solver).Distinct().ToList();
         lines.Add(Row("Solver", $"lines: {string.Join("; ", solver)}"));
         lines.Add(Row("", "floors: dense Cholesky of the (Ux, Uy, Rz) stiffness of all floors"));
         return Fit(lines);
     }
+
+    /// <summary>The warnings row: a verdict above rests on the input as read, so a warning (units, a slip) is named as a reason to check it.</summary>
+    private static string WarningsRow(int count) =>
+        $"{count} about the input, listed above: check them before trusting the verdicts";
 
     public static string Compare(ComparisonReport r, string path)
     {

@@ -154,11 +154,11 @@ public static class PlanFiles
             ["levels"] = new JArray(r.Plan.Levels.Select(l => new JObject
             {
                 ["id"] = l.Id, ["elevation"] = L(l.Elevation), ["weight"] = double.IsFinite(l.Weight) ? Fo(l.Weight) : null,
-                ["massAt"] = new JArray(L(l.CentreOfMass.X), L(l.CentreOfMass.Y)),
+                ["massAt"] = new JArray((JToken)L(l.CentreOfMass.X), (JToken)L(l.CentreOfMass.Y)),
             })),
             ["lines"] = new JArray(r.Lines.Select(l => new JObject
             {
-                ["id"] = l.Line.Id, ["form"] = l.Line.Form.ToString(), ["at"] = new JArray(L(l.Line.X0), L(l.Line.Y0)),
+                ["id"] = l.Line.Id, ["form"] = l.Line.Form.ToString(), ["at"] = new JArray((JToken)L(l.Line.X0), (JToken)L(l.Line.Y0)),
                 ["direction"] = l.Line.DirectionLabel, ["condensationBackwardError"] = l.CondensationBackwardError,
                 ["flexibilitySymmetryError"] = l.SymmetryError, ["recoveryError"] = l.RecoveryError,
             })),
