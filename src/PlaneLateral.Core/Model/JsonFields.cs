@@ -44,7 +44,7 @@ internal sealed class JsonFields
     {
         foreach (var p in _obj.Properties())
             if (!_known.Contains(p.Name))
-                _sink.Add(p, $"unknown key '{p.Name}'", $"use one of: {string.Join(", ", _known.Order(StringComparer.Ordinal))}; or remove it");
+                _sink.Add(p, $"unknown key '{p.Name}'{SuggestBudget.Suggest(p.Name, _known)}", $"use one of: {string.Join(", ", _known.Order(StringComparer.Ordinal))}; or remove it");
     }
 
     public string? RequiredString(string key, string fix)

@@ -48,6 +48,7 @@ public static partial class ModelReader
     public static BuildingPlan ParsePlan(string json, string fileName)
     {
         var root = ReadTree(json, fileName);   // strict JSON, as every model (ModelReader.cs)
+        SuggestBudget.Reset();
         var sink = new DiagnosticSink(fileName);
         if (root is not JObject obj)
         {

@@ -383,29 +383,7 @@ public static partial class ModelReader
             return factor;
         }
 
-        private static string Suggest(string id, IEnumerable<string> known)
-        {
-            // Same id but for case, or a typo or two away (one for short ids); never every short id.
-            int allowed = id.Length >= 5 ? 2 : 1;
-            // Bounded work (SuggestBudget): long ids are not compared; an edit distance is at least the difference in length.
-            var candidates = known as ICollection<string> ?? known.ToList();
-            if (id.Length > SuggestBudget.MaxIdLength || !SuggestBudget.Spend(candidates.Count)) return "";
-            var near = candidates.Where(k => string.Equals(k, id, StringComparison.OrdinalIgnoreCase)).ToList();
-            if (near.Count == 0) near = candidates.Where(k => k.Length <= SuggestBudget.MaxIdLength && Math.Abs(k.Length - id.Length) <= allowed && SuggestBudget.Spend(2L * (k.Length + 1) * (id.Length + 1))
-                && Distance(k, id) <= allowed && Distance(k, id) < Math.Min(k.Length, id.Length)).Take(3).ToList();
-            return near.Count == 0 ? "" : $" (did you mean {string.Join(" or ", near.Select(n => $"\"{n}\""))}?)";
-        }
-
-        private static int Distance(string a, string b)
-        {
-            var d = new int[a.Length + 1, b.Length + 1];
-            for (int i = 0; i <= a.Length; i++) d[i, 0] = i;
-            for (int j = 0; j <= b.Length; j++) d[0, j] = j;
-            for (int i = 1; i <= a.Length; i++)
-                for (int j = 1; j <= b.Length; j++)
-                    d[i, j] = Math.Min(Math.Min(d[i - 1, j] + 1, d[i, j - 1] + 1), d[i - 1, j - 1] + (a[i - 1] == b[j - 1] ? 0 : 1));
-            return d[a.Length, b.Length];
-        }
+        private static string Suggest(string id, IEnumerable<string> known) => SuggestBudget.Suggest(id, known);
 
         private List<Member> ReadMembers(IReadOnlyList<JObject> items, List<Node> nodes)
         {

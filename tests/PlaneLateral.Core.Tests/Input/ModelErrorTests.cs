@@ -181,6 +181,11 @@ public class ModelErrorTests
         m["members"]![0]!["sectoin"] = "S";
         var d = Single(Fails(m), "unknown key 'sectoin'");
         Assert.Contains("section", d.Fix);
+        // A typo of a known key is named as such (common practice: suggestions by edit distance, as for unknown ids).
+        Assert.Contains("(did you mean \"section\"?)", d.Problem);
+        var far = Good();
+        far["members"]![0]!["colour"] = "red";
+        Assert.DoesNotContain("did you mean", Single(Fails(far), "unknown key 'colour'").Problem);
     }
 
     [Fact]
