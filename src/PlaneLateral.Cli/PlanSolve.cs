@@ -16,7 +16,7 @@ internal static class PlanSolve
         Run(DemoPath, null, stdout, stderr, detail,
             $"No model given: this is the shipped demo building in plan ({DemoPath}).\n" +
             "Use 'planelateral solve <model.json>' for your own model or building, 'planelateral solve models/demo-clinic.json' for the planar demo,\n" +
-            "'planelateral --help' for all commands.\n");
+            "'planelateral --help' for all commands (from the source tree: 'dotnet run --project src/PlaneLateral.Cli -- <command> ...').\n");
 
     public static int Run(string path, string? outDir, TextWriter stdout, TextWriter stderr, Detail detail = Detail.Normal, string? note = null)
     {
