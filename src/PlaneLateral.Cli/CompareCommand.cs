@@ -115,13 +115,13 @@ internal static class CompareReport
 
     private static string Pct(double f) => (100 * f).ToString("0.#", CultureInfo.InvariantCulture) + "%";
 
-    /// <summary>An FE model's name for the table, at most 30 characters (the full name is in the notes and the JSON).</summary>
-    private static string ShortModel(string name) => name.Length <= 30 ? name : name[..27] + "...";
+    /// <summary>An FE model's name for the table, whole (a long one moves to a lettered note when the table is fitted).</summary>
+    private static string ShortModel(string name) => name;
 
-    /// <summary>The method's name up to its first comma, for the table (the full name is in the JSON).</summary>
+    /// <summary>The method's name up to its first comma, for the table (the full name is in the JSON); never cut mid-word.</summary>
     private static string Short(string name)
     {
         int i = name.IndexOf(", ", StringComparison.Ordinal);
-        return i > 0 && i < 48 ? name[..i] : name.Length <= 48 ? name : name[..45] + "...";
+        return i > 0 ? name[..i] : name;
     }
 }
