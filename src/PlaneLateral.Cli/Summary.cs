@@ -56,7 +56,8 @@ internal static class Summary
         run.LineSplit.SelectMany(s => s.Rows.Select(r => (s.CaseId, Row: r, Ratio: r.InStructureShare / r.AloneShare)))
             .Where(x => double.IsFinite(x.Ratio) && x.Row.AloneShare > 0)
             .Select(x => ((string, LineSplitRow, double)?)x)
-            .MaxBy(x => Math.Abs(x!.Value.Item3 - 1));
+            .MaxBy(x => Math.Abs(x!.Value.Item2.InStructureShare - x.Value.Item2.AloneShare));   // largest gap in share of the story shear:
+                                                                                                  // a small share's ratio says little
 
     public static string Planar(ModelResult run, ComparisonReport? comparisons, string modelPath)
     {
@@ -101,8 +102,8 @@ internal static class Summary
         else if (WorstLineSplit(run) is { } ls)
         {
             var v = ComparisonRow.Judge(ls.Ratio, ComparisonStudy.DefaultTolerance);
-            lines.Add(Row("Hand vs FE", $"split by line stiffness alone: FE/hand share {ls.Ratio.ToString("0.000", CultureInfo.InvariantCulture)} worst, story {ls.Row.Story}, " +
-                $"line {ls.Row.Line}, case {ls.CaseId}"));
+            lines.Add(Row("Hand vs FE", $"split by line stiffness alone, largest gap: line {ls.Row.Line}, story {ls.Row.Story}, case {ls.CaseId}: " +
+                $"FE share {P(ls.Row.InStructureShare)}, hand {P(ls.Row.AloneShare)} (FE/hand {ls.Ratio.ToString("0.000", CultureInfo.InvariantCulture)})"));
             lines.Add(Row("", $"{ComparisonRow.VerdictWords(v, ComparedQuantity.Fraction)} (±{(100 * ComparisonStudy.DefaultTolerance).ToString("0", CultureInfo.InvariantCulture)} %); reference: the whole FE model"));
         }
         var soft = run.Building.Irregularity.Where(i => i.Soft).ToList();
