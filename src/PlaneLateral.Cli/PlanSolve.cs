@@ -1,6 +1,7 @@
 using PlaneLateral.Analysis;
 using PlaneLateral.Model;
 using PlaneLateral.Output;
+using PlaneLateral.Reports;
 using PlaneLateral.Studies;
 
 namespace PlaneLateral.Cli;
@@ -28,7 +29,10 @@ internal static class PlanSolve
         if (!solved) return exit;
         var (r, hand, seismic) = solution;
         string folder = outDir ?? CommandSupport.DefaultFolder(path);
-        var files = seismic is null ? PlanFiles.Render(r) : [.. PlanFiles.Render(r), .. PlanSeismicFiles.Render(r, seismic)];
+        var texts = seismic is null ? PlanFiles.Render(r) : [.. PlanFiles.Render(r), .. PlanSeismicFiles.Render(r, seismic)];
+        // One plan figure per story under the case of the largest corner drift ratio, beside the CSV files.
+        var figures = PlanPlots.Governing(r);
+        (string Name, byte[] Bytes)[] files = [.. texts.Select(f => (f.Name, System.Text.Encoding.UTF8.GetBytes(f.Text))), .. figures.Select(f => (f.FileName, f.Png))];
         if (!CommandSupport.TryWrite(() => AtomicFiles.WriteAll(folder, files), "results", stderr, out var written, out exit)) return exit;
         stderr.Write(ModelWarning.Lines(r.Plan.Warnings));   // plausibility warnings (Model/Plausibility.Plan.cs)
         var text = new System.Text.StringBuilder($"PlaneLateral {ResultFiles.Version}: building in plan, linear static analysis{(seismic is null ? "" : ", modes and seismic forces")}\n\n");
@@ -40,7 +44,7 @@ internal static class PlanSolve
             if (seismic is not null) text.Append(PlanSeismicReport.Render(r, seismic));
         }
         else text.Append($"\nCaution: {ResultFiles.Caution}\n");
-        text.Append($"\nResults written to {folder}: {written.Count} files (plan-*.csv, plan.json, line-*-*.csv)\n");
+        text.Append($"\nResults written to {folder}: {written.Count} files (plan-*.csv, plan.json, line-*-*.csv{(figures.Count > 0 ? ", plan-story*.png" : "")})\n");
         stdout.Write(ConsoleText.Fit(text.ToString()));
         return ExitCodes.Success;
     }

@@ -39,7 +39,7 @@ public class RenderersReadOnlyTests
         var core = System.Reflection.Assembly.Load("PlaneLateral.Core");
         foreach (var t in core.GetTypes().Where(t => t.Namespace == "PlaneLateral.Output" && !t.IsNested)) yield return t;
         var reports = System.Reflection.Assembly.Load("PlaneLateral.Reports");
-        foreach (var name in new[] { "ModelReport", "ModelPlots", "PanelPlots", "SeismicPlots", "ReportDocument", "FigureNames" })
+        foreach (var name in new[] { "ModelReport", "ModelPlots", "PanelPlots", "SeismicPlots", "PlanPlots", "ReportDocument", "FigureNames" })
             if (reports.GetType("PlaneLateral.Reports." + name) is { } t) yield return t;
     }
 
