@@ -40,11 +40,11 @@ public static class PlanAnalysis
         {
             var f = LoadVector(c, n);
             var fs = (double[])f.Clone();
-            for (int l = 0; l < n; l++) fs[3 * l + 2] *= size;
+            for (int l = 0; l < n; l++) fs[3 * l + 2] /= size;   // the torque over the plan size: a force, like the others
             var us = chol.Solve(DenseVector.OfArray(fs)).ToArray();
             double eta = BackwardError(scaled, us, fs);
             var u = (double[])us.Clone();
-            for (int l = 0; l < n; l++) u[3 * l + 2] *= size;
+            for (int l = 0; l < n; l++) u[3 * l + 2] /= size;    // Rz = (Rz·size) / size
             var ft = new double[2 * n];
             for (int l = 0; l < n; l++) { ft[2 * l] = f[3 * l]; ft[2 * l + 1] = f[3 * l + 1]; }
             var ut = lockedChol.Solve(DenseVector.OfArray(ft)).ToArray();
@@ -155,15 +155,19 @@ public static class PlanAnalysis
         return k;
     }
 
-    private static double[,] Scaled(double[,] k, int n, double size)
+    /// <summary>
+    /// K on (Ux, Uy, Rz·size): with D = diag(1, 1, 1/size) per floor, D·K·D has every entry in N/m (a rotational
+    /// stiffness N·m/rad over size²), so its eigenvalues compare translations and turns on one scale.
+    /// </summary>
+    internal static double[,] Scaled(double[,] k, int n, double size)
     {
         var s = (double[,])k.Clone();
         for (int i = 0; i < 3 * n; i++)
-            for (int j = 0; j < 3 * n; j++) s[i, j] *= (i % 3 == 2 ? size : 1) * (j % 3 == 2 ? size : 1);
+            for (int j = 0; j < 3 * n; j++) s[i, j] /= (i % 3 == 2 ? size : 1) * (j % 3 == 2 ? size : 1);
         return s;
     }
 
-    private static double[,] Translational(double[,] k, int n)
+    internal static double[,] Translational(double[,] k, int n)
     {
         var t = new double[2 * n, 2 * n];
         for (int i = 0; i < 2 * n; i++)
@@ -195,7 +199,7 @@ public static class PlanAnalysis
         if (mechanisms.Count > 0) throw new UnstableModelException(plan.SourcePath, mechanisms);
     }
 
-    private static double[] LoadVector(PlanLoadCase c, int n)
+    internal static double[] LoadVector(PlanLoadCase c, int n)
     {
         var f = new double[3 * n];
         foreach (var l in c.Loads) { f[3 * (l.Level - 1)] += l.Fx; f[3 * (l.Level - 1) + 1] += l.Fy; f[3 * (l.Level - 1) + 2] += l.Mz; }
