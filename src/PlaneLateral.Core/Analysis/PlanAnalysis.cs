@@ -40,11 +40,11 @@ public static class PlanAnalysis
         {
             var f = LoadVector(c, n);
             var fs = (double[])f.Clone();
-            for (int l = 0; l < n; l++) fs[3 * l + 2] *= size;
+            for (int l = 0; l < n; l++) fs[3 * l + 2] /= size;   // the torque over the plan size: a force, like the others
             var us = chol.Solve(DenseVector.OfArray(fs)).ToArray();
             double eta = BackwardError(scaled, us, fs);
             var u = (double[])us.Clone();
-            for (int l = 0; l < n; l++) u[3 * l + 2] *= size;
+            for (int l = 0; l < n; l++) u[3 * l + 2] /= size;    // Rz = (Rz·size) / size
             var ft = new double[2 * n];
             for (int l = 0; l < n; l++) { ft[2 * l] = f[3 * l]; ft[2 * l + 1] = f[3 * l + 1]; }
             var ut = lockedChol.Solve(DenseVector.OfArray(ft)).ToArray();
@@ -70,6 +70,9 @@ public static class PlanAnalysis
             var lockedMotion = Enumerable.Range(0, n).Select(l => new FloorMotion(l + 1, ul[3 * l], ul[3 * l + 1], 0)).ToList();
             var stories = StoryLoads(c, n);
             var lineStories = new List<PlanLineStory>();
+            // Each line's planar story shears once per case (every story at once), not once per story: asked per story they
+            // cost 2.4 s of a 3.8 s run on a 40-story, 24-line building (docs/benchmarks.md).
+            var planarStories = lineResults.Select(lr => StoryAnalysis.ForCase(lr.Recovered, lr.Recovered.Cases[ci]).Stories).ToList();
             for (int s = 1; s <= n; s++)
                 for (int i = 0; i < plan.Lines.Count; i++)
                 {
@@ -79,8 +82,8 @@ public static class PlanAnalysis
                     double along = line.Cos * st.Vx + line.Sin * st.Vy;
                     double scale = Math.Max(Math.Abs(st.Vx), Math.Abs(st.Vy));
                     double share = Math.Abs(along) > 1e-9 * scale && scale > 0 ? v / along : double.NaN;
-                    var planar = StoryAnalysis.ForCase(lineResults[i].Recovered, lineResults[i].Recovered.Cases[ci]);
-                    double planarShear = planar.Stories.Count >= s ? planar.Stories[s - 1].Shear : double.NaN;
+                    var planar = planarStories[i];
+                    double planarShear = planar.Count >= s ? planar[s - 1].Shear : double.NaN;
                     var ulv = Project(line, u, n);
                     double drift = ulv[s - 1] - (s >= 2 ? ulv[s - 2] : 0);
                     lineStories.Add(new PlanLineStory(s, line.Id, v, share, vd, v - vd, planarShear, drift));
@@ -155,15 +158,19 @@ public static class PlanAnalysis
         return k;
     }
 
-    private static double[,] Scaled(double[,] k, int n, double size)
+    /// <summary>
+    /// K on (Ux, Uy, Rz·size): with D = diag(1, 1, 1/size) per floor, D·K·D has every entry in N/m (a rotational
+    /// stiffness N·m/rad over size²), so its eigenvalues compare translations and turns on one scale.
+    /// </summary>
+    internal static double[,] Scaled(double[,] k, int n, double size)
     {
         var s = (double[,])k.Clone();
         for (int i = 0; i < 3 * n; i++)
-            for (int j = 0; j < 3 * n; j++) s[i, j] *= (i % 3 == 2 ? size : 1) * (j % 3 == 2 ? size : 1);
+            for (int j = 0; j < 3 * n; j++) s[i, j] /= (i % 3 == 2 ? size : 1) * (j % 3 == 2 ? size : 1);
         return s;
     }
 
-    private static double[,] Translational(double[,] k, int n)
+    internal static double[,] Translational(double[,] k, int n)
     {
         var t = new double[2 * n, 2 * n];
         for (int i = 0; i < 2 * n; i++)
@@ -195,7 +202,7 @@ public static class PlanAnalysis
         if (mechanisms.Count > 0) throw new UnstableModelException(plan.SourcePath, mechanisms);
     }
 
-    private static double[] LoadVector(PlanLoadCase c, int n)
+    internal static double[] LoadVector(PlanLoadCase c, int n)
     {
         var f = new double[3 * n];
         foreach (var l in c.Loads) { f[3 * (l.Level - 1)] += l.Fx; f[3 * (l.Level - 1) + 1] += l.Fy; f[3 * (l.Level - 1) + 2] += l.Mz; }
