@@ -243,7 +243,7 @@ public static partial class PlanDiaphragm
         var lay = Lay(plan, kinds);
         var k = Stiffness(lay, condensed);
         double size = plan.Size;
-        var scale = lay.Turns.Select(t => t ? size : 1.0).ToArray();
+        var scale = lay.Turns.Select(t => t ? 1.0 / size : 1.0).ToArray();   // Rz·size: every entry of D·K·D in N/m (as PlanAnalysis.Scaled)
         var scaled = new double[lay.N, lay.N];
         for (int i = 0; i < lay.N; i++)
             for (int j = 0; j < lay.N; j++) scaled[i, j] = k[i, j] * scale[i] * scale[j];
