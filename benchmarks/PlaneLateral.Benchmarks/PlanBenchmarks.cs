@@ -48,7 +48,7 @@ public class PlanBenchmarks
         _condensed = _plan.Lines.Select(l => PlanAnalysis.Condense(l, _n, _run)).ToList();
         var u = FloorSolve();
         _ids = _plan.Cases.Select(c => c.Id).ToList();
-        _forces = _plan.Lines.Select((line, i) => u.Select(ui => PlanAnalysis.Multiply(_condensed[i].K, PlanAnalysis.Project(line, ui, _n))).ToArray()).ToArray();
+        _forces = _plan.Lines.Select((line, i) => u.Select(ui => PlaneLateral.Elements.SmallMatrix.Times(_condensed[i].K, PlanAnalysis.Project(line, ui, _n))).ToArray()).ToArray();
         _expected = _plan.Lines.Select(line => u.Select(ui => PlanAnalysis.Project(line, ui, _n)).ToList()).ToArray();
         _recovered = _plan.Lines.Select((l, i) => PlanAnalysis.Recover(l, _condensed[i], _ids, _forces[i], _expected[i], _run)).ToList();
     }

@@ -1,3 +1,4 @@
+using PlaneLateral.Elements;
 using MathNet.Numerics.LinearAlgebra.Double;
 using PlaneLateral.Model;
 
@@ -55,8 +56,8 @@ public static class PlanAnalysis
         }
 
         // Level forces on each line, per case: p = K̂ (T u).
-        var lineForces = plan.Lines.Select((line, i) => cases.Select(c => Multiply(condensed[i].K, Project(line, c.U, n))).ToArray()).ToArray();
-        var lineForcesLocked = plan.Lines.Select((line, i) => cases.Select(c => Multiply(condensed[i].K, Project(line, c.ULocked, n))).ToArray()).ToArray();
+        var lineForces = plan.Lines.Select((line, i) => cases.Select(c => SmallMatrix.Times(condensed[i].K, Project(line, c.U, n))).ToArray()).ToArray();
+        var lineForcesLocked = plan.Lines.Select((line, i) => cases.Select(c => SmallMatrix.Times(condensed[i].K, Project(line, c.ULocked, n))).ToArray()).ToArray();
 
         var lineResults = new List<PlanLineResult>();
         for (int i = 0; i < plan.Lines.Count; i++)
@@ -215,14 +216,6 @@ public static class PlanAnalysis
         var v = new double[n];
         for (int l = 0; l < n; l++) v[l] = line.Cos * u[3 * l] + line.Sin * u[3 * l + 1] + line.Lever * u[3 * l + 2];
         return v;
-    }
-
-    internal static double[] Multiply(double[,] a, double[] x)
-    {
-        var y = new double[x.Length];
-        for (int i = 0; i < x.Length; i++)
-            for (int j = 0; j < x.Length; j++) y[i] += a[i, j] * x[j];
-        return y;
     }
 
     internal static double Above(double[] p, int story)

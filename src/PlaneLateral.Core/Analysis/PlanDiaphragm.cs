@@ -1,3 +1,4 @@
+using PlaneLateral.Elements;
 using MathNet.Numerics.LinearAlgebra.Double;
 using PlaneLateral.Model;
 
@@ -273,8 +274,8 @@ public static partial class PlanDiaphragm
         int n = plan.FloorCount;
         double[] Along(int li, double[] u) => Enumerable.Range(0, n).Select(l => lay.Rows[li][l].Sum(t => t.C * u[t.Dof])).ToArray();
         var disp = plan.Lines.Select((_, li) => cases.Select(c => Along(li, c.Item2)).ToArray()).ToArray();
-        var forces = plan.Lines.Select((_, li) => disp[li].Select(u => PlanAnalysis.Multiply(condensed[li], u)).ToArray()).ToArray();
-        var forcesLocked = plan.Lines.Select((_, li) => cases.Select(c => PlanAnalysis.Multiply(condensed[li], Along(li, c.Item3))).ToArray()).ToArray();
+        var forces = plan.Lines.Select((_, li) => disp[li].Select(u => SmallMatrix.Times(condensed[li], u)).ToArray()).ToArray();
+        var forcesLocked = plan.Lines.Select((_, li) => cases.Select(c => SmallMatrix.Times(condensed[li], Along(li, c.Item3))).ToArray()).ToArray();
         return new Solved(lay, k, cases, forces, forcesLocked, disp);
     }
 
