@@ -13,7 +13,10 @@ internal static class ModelFile
 {
     private const string PathFix = "give the path of a model file (a .json text file), not a folder, device, pipe or socket";
 
-    public static string ReadText(string path)
+    public static string ReadText(string path) => ReadText(path, out _);
+
+    /// <summary>The file's text and its provenance: the SHA-256 of the very bytes read (what <c>sha256sum</c> prints for the file).</summary>
+    public static string ReadText(string path, out InputFile input)
     {
         if (Directory.Exists(path))
             throw Refuse(path, "this is a folder, not a model file", PathFix);
@@ -27,6 +30,7 @@ internal static class ModelFile
             if (bytes is null)
                 throw Refuse(path, $"the file holds more than the {ModelLimits.MaxFileBytes} bytes (8 MiB) this version reads (counted while reading: the file grew, or its length was not reported)",
                     "check that this is the model file; split a very large model, or remove data the model does not need");
+            input = InputFile.Of(path, bytes);
             using var reader = new StreamReader(new MemoryStream(bytes), new UTF8Encoding(false), detectEncodingFromByteOrderMarks: true);
             return reader.ReadToEnd();
         }

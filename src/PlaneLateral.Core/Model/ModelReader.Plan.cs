@@ -42,7 +42,12 @@ public static partial class ModelReader
 
     /// <summary>Reads and validates a building file; its line files are read from its own folder.</summary>
     /// <exception cref="ModelInputException">Every problem found, in this file and in its line files.</exception>
-    public static BuildingPlan ReadPlanFile(string path) => ParsePlan(ModelFile.ReadText(path), path);   // regular files only, bounded
+    public static BuildingPlan ReadPlanFile(string path)
+    {
+        string text = ModelFile.ReadText(path, out var input);   // regular files only, bounded
+        var plan = ParsePlan(text, path);
+        return plan with { Inputs = [input, .. plan.Inputs] };
+    }
 
     /// <summary>Reads a building from JSON text; <paramref name="fileName"/> names it in messages and fixes the folder line files are read from.</summary>
     public static BuildingPlan ParsePlan(string json, string fileName)
@@ -59,7 +64,7 @@ public static partial class ModelReader
         var plan = builder.BuildPlan(obj);
         var all = sink.Items.Concat(builder.LineFileProblems).ToList();
         if (all.Count > 0 || plan is null) throw new ModelInputException(all);
-        return plan with { Warnings = Plausibility.CheckPlan(plan, obj, fileName, builder.LineSources) };
+        return plan with { Warnings = Plausibility.CheckPlan(plan, obj, fileName, builder.LineSources), Inputs = builder.LineInputs };
     }
 
     /// <summary>Standard gravity (m/s²), turning a seismic weight into a mass.</summary>
@@ -74,6 +79,11 @@ public static partial class ModelReader
         private readonly List<ModelDiagnostic> _lineFileProblems = [];
 
         public IReadOnlyList<ModelDiagnostic> LineFileProblems => _lineFileProblems;
+
+        /// <summary>The line files read, each once, in the order first read, with their SHA-256.</summary>
+        private readonly List<InputFile> _lineInputs = [];
+
+        public IReadOnlyList<InputFile> LineInputs => _lineInputs;
 
         /// <summary>The lines given as planar models, with their JSON and file, for the plausibility checks.</summary>
         private readonly List<Plausibility.PlanLineSource> _lineSources = [];
@@ -346,7 +356,12 @@ public static partial class ModelReader
                 return null;
             }
             JToken root;
-            try { root = ReadTree(ModelFile.ReadText(candidate), candidate); }   // as every model: regular file, bounded, strict JSON
+            try
+            {
+                string text = ModelFile.ReadText(candidate, out var input);   // as every model: regular file, bounded, strict JSON
+                if (!_lineInputs.Any(x => x.Path == input.Path)) _lineInputs.Add(input);
+                root = ReadTree(text, candidate);
+            }
             catch (ModelInputException e)
             {
                 sink.Add(at, $"cannot read the line file \"{relative}\" (its problems are listed under its own name)", "correct the line file");

@@ -19,7 +19,8 @@ public static partial class ModelReader
     public static StructureModel ReadFile(string path)
     {
         // Only a regular file, at most ModelLimits.MaxFileBytes counted while reading (ModelFile.cs).
-        return Parse(ModelFile.ReadText(path), path);
+        string text = ModelFile.ReadText(path, out var input);
+        return Parse(text, path) with { Inputs = [input] };
     }
 
     /// <summary>Reads and validates a model from JSON text; <paramref name="fileName"/> is used in messages.</summary>

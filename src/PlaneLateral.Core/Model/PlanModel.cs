@@ -97,6 +97,9 @@ public sealed record BuildingPlan
     /// <summary>Plausibility warnings on the building file and its lines' models (Model/Plausibility.Plan.cs); none changes a number.</summary>
     public IReadOnlyList<ModelWarning> Warnings { get; init; } = [];
 
+    /// <summary>The files this building was read from, with their SHA-256: the building file first, then each line file once, in the order first read (empty when parsed from text).</summary>
+    public IReadOnlyList<InputFile> Inputs { get; init; } = [];
+
     /// <summary>Floors (levels above the base).</summary>
     public int FloorCount => Levels.Count - 1;
 

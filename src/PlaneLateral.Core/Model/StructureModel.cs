@@ -31,6 +31,9 @@ public sealed record StructureModel
     public SeismicData? Seismic { get; init; }
     /// <summary>Plausibility warnings about the input (Model/Plausibility.cs); they never change the answer. Empty when none.</summary>
     public IReadOnlyList<ModelWarning> Warnings { get; init; } = [];
+
+    /// <summary>The files this model was read from, with their SHA-256 (empty when it was parsed from text).</summary>
+    public IReadOnlyList<InputFile> Inputs { get; init; } = [];
     /// <summary>Footings on soil under supported nodes, whose springs are already in <see cref="Supports"/> (docs/footings.md); none by default.</summary>
     public IReadOnlyList<Footing> Footings { get; init; } = [];
 
