@@ -10,9 +10,10 @@ namespace PlaneLateral.Solvers;
 /// factorization", SIAM J. Matrix Anal. Appl. 11(1), 1990, §3; Davis 2006, §4.1).</item>
 /// <item>Postorder: depth-first, children visited in increasing order (Liu 1990, §2); the ordering is composed with it, so the
 /// factor's columns are postordered and every supernode is a contiguous range.</item>
-/// <item>Column counts: by row subtrees — the pattern of row k of L is the subtree of the elimination tree spanned by the
-/// entries of row k of the matrix (Liu 1990, §3.2; Davis 2006, §4.2), so walking each of them up to the first node already
-/// marked for row k counts every entry of L once: O(nnz(L)) time, O(n) extra space.</item>
+/// <item>Column counts: the pattern of row k of L is the subtree of the elimination tree spanned by the entries of row k of
+/// the matrix (Liu 1990, §3.2); each column's count is the number of such row subtrees it lies in, found from the leaves of
+/// the row subtrees and least common ancestors (Gilbert, Ng and Peyton 1994; Davis 2006, §4.5): O(nnz(A)·α(n)) time, not
+/// the O(nnz(L)) of walking every row subtree.</item>
 /// <item>Fundamental supernodes: column j joins j−1 when j is j−1's parent, its only child, and count(j−1) = count(j)+1
 /// (Liu, Ng and Peyton, "On finding supernodes for sparse matrix computations", SIAM J. Matrix Anal. Appl. 14(1), 1993).</item>
 /// <item>Relaxed amalgamation: a supernode is merged with its parent when they are contiguous and the explicit zeros this adds
@@ -36,6 +37,7 @@ internal sealed class SupernodalSymbolic
     public long StoredEntries;          // Σ m·k (the rectangles held, upper part of the diagonal blocks included)
     public long FactorNonZeros;         // lower-trapezoid entries of the supernodes (amalgamation zeros included)
     public long ExactNonZeros;          // nnz(L) of the exact (unamalgamated) pattern, diagonal included
+    public int[] ColumnCount = null!;   // entries of each column of the exact L (new numbering), diagonal included
     public double Flops;                // floating-point operations of the numeric factorisation (exact pattern)
     public int MaxFront;                // largest m
     // P·K·Pᵀ's lower entries by column (LowerByColumn), built for the row patterns and handed to the numeric phase, which
@@ -147,6 +149,55 @@ internal sealed class SupernodalSymbolic
         return post;
     }
 
+    /// <summary>
+    /// Column counts of L (diagonal included) for a matrix whose elimination tree is postordered (parent[j] &gt; j, every
+    /// subtree a contiguous range), from its lower entries by column, in O(nnz(A)·α(n)) time: Gilbert, Ng and Peyton,
+    /// "An efficient algorithm to compute row and column counts for sparse Cholesky factorization", SIAM J. Matrix Anal.
+    /// Appl. 15(4), 1994; written from the description in Davis 2006, §4.5. Column j's count is the number of row subtrees
+    /// it lies in; each entry a_ij (i &gt; j) adds one at j when j is a leaf of row i's subtree, and one is taken off at the
+    /// least common ancestor of j and the previous leaf of that row, so that summing over the subtree of j counts each row
+    /// once.
+    /// </summary>
+    internal static int[] ColumnCounts(int n, int[] parent, int[] colPtr, int[] rows)
+    {
+        var delta = new int[n];        // summed over each subtree at the end: the column counts
+        var first = new int[n];        // first[j]: the smallest (first in postorder) descendant of j
+        var maxFirst = new int[n];     // per row i: the largest first[] of a leaf of its subtree seen so far
+        var prevLeaf = new int[n];     // per row i: the last leaf of its subtree found
+        var ancestor = new int[n];     // disjoint sets of the processed part of the tree, with path compression
+        Array.Fill(first, -1);
+        Array.Fill(maxFirst, -1);
+        Array.Fill(prevLeaf, -1);
+        for (int k = 0; k < n; k++)
+        {
+            delta[k] = first[k] == -1 ? 1 : 0;   // 1 for a leaf of the tree
+            for (int j = k; j != -1 && first[j] == -1; j = parent[j]) first[j] = k;
+            ancestor[k] = k;
+        }
+        for (int j = 0; j < n; j++)
+        {
+            if (parent[j] != -1) delta[parent[j]]--;
+            for (int p = colPtr[j]; p < colPtr[j + 1]; p++)
+            {
+                int i = rows[p];
+                if (i <= j || first[j] <= maxFirst[i]) continue;   // j is not a leaf of row i's subtree
+                maxFirst[i] = first[j];
+                int jPrev = prevLeaf[i];
+                prevLeaf[i] = j;
+                delta[j]++;
+                if (jPrev == -1) continue;                         // the first leaf: the subtree's root is i itself
+                int q = jPrev;
+                while (q != ancestor[q]) q = ancestor[q];          // the least common ancestor of jPrev and j
+                for (int s = jPrev; s != q;) { int up = ancestor[s]; ancestor[s] = q; s = up; }
+                delta[q]--;
+            }
+            if (parent[j] != -1) ancestor[j] = parent[j];
+        }
+        for (int j = 0; j < n; j++)
+            if (parent[j] != -1) delta[parent[j]] += delta[j];
+        return delta;
+    }
+
     public static SupernodalSymbolic Analyse(SymmetricSparseMatrix a, int[] ordering)
     {
         int n = a.Size;
@@ -157,24 +208,15 @@ internal sealed class SupernodalSymbolic
         var perm = new int[n];
         for (int k = 0; k < n; k++) perm[k] = ordering[post[k]];
         var inv = Orderings.Inverse(perm);
-        LowerByRow(a, inv, out rowPtr, out cols);
-        var parent = EliminationTree(n, rowPtr, cols);
+        // The elimination tree of the postordered matrix is the same tree relabelled: a postorder is a topological
+        // ordering of the tree, an equivalent reordering (Liu 1990, §2), so neither the tree nor the rows are built again.
+        var position = Orderings.Inverse(post);
+        var parent = new int[n];
+        for (int k = 0; k < n; k++) { int p0 = parent0[post[k]]; parent[k] = p0 < 0 ? -1 : position[p0]; }
 
-        // Column counts by row subtrees.
-        var count = new int[n];
-        var mark = new int[n];
-        Array.Fill(mark, -1);
-        for (int k = 0; k < n; k++)
-        {
-            mark[k] = k;
-            count[k]++;
-            for (int p = rowPtr[k]; p < rowPtr[k + 1]; p++)
-                for (int j = cols[p]; j != -1 && mark[j] != k; j = parent[j])
-                {
-                    mark[j] = k;
-                    count[j]++;
-                }
-        }
+        // P·K·Pᵀ's lower entries by column: for the column counts, the row patterns, and the numeric phase.
+        LowerByColumn(a, inv, out var colPtr, out var rowsByCol, out var sourceByCol);
+        var count = ColumnCounts(n, parent, colPtr, rowsByCol);
         var childCount = new int[n];
         for (int j = 0; j < n; j++) if (parent[j] >= 0) childCount[parent[j]]++;
         long exact = 0;
@@ -244,7 +286,6 @@ internal sealed class SupernodalSymbolic
             for (int j = first[t]; j < first[t + 1]; j++) superOf[j] = t;
 
         // Row patterns: A's rows below the supernode in its columns, united with the children's patterns.
-        LowerByColumn(a, inv, out var colPtr, out var rowsByCol, out var sourceByCol);
         var childHead = new int[ns];
         var childNext = new int[ns];
         Array.Fill(childHead, -1);
@@ -321,6 +362,7 @@ internal sealed class SupernodalSymbolic
             StoredEntries = stored2,
             FactorNonZeros = lnz,
             ExactNonZeros = exact,
+            ColumnCount = count,
             Flops = flops,
             MaxFront = maxFront,
             ColPtr = colPtr,

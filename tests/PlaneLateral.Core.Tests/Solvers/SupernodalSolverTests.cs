@@ -158,6 +158,22 @@ public class SupernodalSolverTests
         }
     }
 
+    [Theory]
+    [MemberData(nameof(AllOrderings))]
+    public void ColumnCounts_EqualThoseOfABooleanElimination(SupernodalOrdering ordering)
+    {
+        // Each column's count from the row-subtree leaves and least common ancestors (Gilbert, Ng and Peyton 1994)
+        // against elimination on a dense boolean matrix in the same (postordered) numbering (derived). The matrices
+        // include a forest (a block-diagonal Laplacian with several components) and a path, whose trees are chains.
+        var forest = RandomLaplacianPlusDiagonal(70, 64, 0.6);
+        foreach (var a in new[] { RandomLaplacianPlusDiagonal(90, 61, 1.5), GridStencil(9, 8, 1, scrambleSeed: 62), TwoDofQuadGrid(6, 7, 63), forest, GridStencil(40, 1, 1, scrambleSeed: 65) })
+        {
+            var solver = new SupernodalCholeskySolver(ordering);
+            var s = SupernodalSymbolic.Analyse(a, solver.ComputeOrdering(a));
+            Assert.Equal(ColumnCountsByElimination(a, s.Perm), s.ColumnCount);
+        }
+    }
+
     [Fact]
     public void SeveralRightHandSides_WithFailedPivots_BitwiseTheSingleSolves()
     {

@@ -211,7 +211,10 @@ internal static class MoreTestMatrices
     /// nnz(L) (diagonal included) of the Cholesky factor of P·K·Pᵀ by simulating the elimination on a dense boolean
     /// matrix (George and Liu 1981, §2.2: eliminating node k connects all its later neighbours). O(n³): small n only.
     /// </summary>
-    public static long SymbolicFillByElimination(SymmetricSparseMatrix a, int[] perm)
+    public static long SymbolicFillByElimination(SymmetricSparseMatrix a, int[] perm) => ColumnCountsByElimination(a, perm).Sum(c => (long)c);
+
+    /// <summary>Entries of each column of L (diagonal included) of P·A·Pᵀ, by elimination on a dense boolean matrix (derived).</summary>
+    public static int[] ColumnCountsByElimination(SymmetricSparseMatrix a, int[] perm)
     {
         int n = a.Size;
         var inv = Orderings.Inverse(perm);
@@ -222,13 +225,12 @@ internal static class MoreTestMatrices
                 int r = inv[a.RowIndices[p]], c = inv[j];
                 s[r, c] = s[c, r] = true;
             }
-        long count = 0;
+        var count = new int[n];
         for (int k = 0; k < n; k++)
         {
-            count++;
             var below = new List<int>();
             for (int i = k + 1; i < n; i++) if (s[i, k]) below.Add(i);
-            count += below.Count;
+            count[k] = 1 + below.Count;
             foreach (int i in below)
                 foreach (int j in below) s[i, j] = true;
         }
