@@ -200,10 +200,11 @@ public sealed class ReportDocument
           h1 { font-size: 17pt; }
           h2 { font-size: 13pt; margin-top: 0; break-before: page; page-break-before: always; }
           h2, h3, caption { break-after: avoid; page-break-after: avoid; }
-          table { font-size: 7.5pt; max-width: 100%; }
+          table { font-size: 7.5pt; width: 100%; max-width: 100%; }
           thead { display: table-header-group; }
           tr, th, td, li, figure, figure img, .caution { break-inside: avoid; page-break-inside: avoid; }
-          td, th { padding: 2px 4px; overflow-wrap: anywhere; }
+          td, th { padding: 2px 4px; overflow-wrap: break-word; }
+          th.n { white-space: normal; }
           figure { margin: 8px 0 12px; }
           figure img { max-width: 100%; max-height: 215mm; width: auto; height: auto; border: none; }
           nav.contents { break-inside: avoid; background: none; }
