@@ -19,13 +19,7 @@ if [ ! -f "$report" ]; then
   exit 1
 fi
 
-browser=$(command -v chromium || command -v chromium-browser || true)
-if [ -z "$browser" ]; then
-  echo "render-report: chromium not found; installing Debian's chromium package" >&2
-  apt-get update -qq
-  DEBIAN_FRONTEND=noninteractive apt-get install -y -qq chromium >/dev/null
-  browser=$(command -v chromium)
-fi
+browser=$("$(cd "$(dirname "$0")" && pwd)/find-chromium.sh")
 
 out_abs=$(realpath -m "$out")
 "$browser" --headless --no-sandbox --disable-gpu --disable-background-networking --no-first-run \

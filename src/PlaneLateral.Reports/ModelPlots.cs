@@ -68,6 +68,16 @@ public static class ModelPlots
             double d = Math.Sqrt(Math.Pow(c.Displacement(n.Index, Dof.X), 2) + Math.Pow(c.Displacement(n.Index, Dof.Y), 2));
             if (d > largest) { largest = d; worst = n.Index; }
         }
+        // Each member's deflected shape between its nodes (MemberCurves: the element's shape functions); a span load can
+        // move a point between the nodes more than any node, so the scale is set by the curves too.
+        var curves = model.Members.Select(m => MemberCurves.Shape(model, c, m)).ToList();
+        string where = model.Nodes.Count > 0 ? $"at node {model.Nodes[worst].Id}" : "";
+        for (int k = 0; k < curves.Count; k++)
+            foreach (var p in curves[k])
+            {
+                double d = Math.Sqrt(p.Dx * p.Dx + p.Dy * p.Dy);
+                if (d > largest * (1 + 1e-9)) { largest = d; where = $"between the nodes of member {model.Members[k].Id}"; }
+            }
         double scale = ScaleFactor(largest, size);
 
         var plot = PlotStyle.New($"Deflected shape, case {caseId}", $"x [{u.LengthSymbol}]", $"y [{u.LengthSymbol}]");
@@ -86,10 +96,8 @@ public static class ModelPlots
         first = true;
         foreach (var m in model.Members)
         {
-            var a = model.Nodes[m.Start]; var b = model.Nodes[m.End];
-            var line = plot.Add.Line(
-                L(a.X + scale * c.Displacement(a.Index, Dof.X)), L(a.Y + scale * c.Displacement(a.Index, Dof.Y)),
-                L(b.X + scale * c.Displacement(b.Index, Dof.X)), L(b.Y + scale * c.Displacement(b.Index, Dof.Y)));
+            var pts = curves[m.Index];
+            var line = plot.Add.ScatterLine(pts.Select(p => L(p.X0 + scale * p.Dx)).ToArray(), pts.Select(p => L(p.Y0 + scale * p.Dy)).ToArray());
             line.Color = m.Kind == MemberKind.Brace ? PlotStyle.Moss : PlotStyle.Ink;
             line.LineWidth = 2.5f;
             line.MarkerSize = 0;
@@ -121,29 +129,113 @@ public static class ModelPlots
                 firstPanel = false;
             }
         }
-        var sx = model.Supports.Select(s => L(model.Nodes[s.Node].X)).ToArray();
-        var sy = model.Supports.Select(s => L(model.Nodes[s.Node].Y)).ToArray();
-        if (sx.Length > 0)
-        {
-            var sup = plot.Add.ScatterPoints(sx, sy);
-            sup.Color = PlotStyle.Brick;
-            sup.MarkerShape = MarkerShape.FilledTriangleUp;
-            sup.MarkerSize = 12;
-            sup.LegendText = "supports";
-        }
-        string worstText = $"scale factor {F(scale, "G6")}; largest displacement {F(L(largest), "G4")} {u.LengthSymbol} at node {model.Nodes[worst].Id}";
+        DrawSupports(plot, model, 0.035 * L(size));
+        string worstText = $"scale factor {F(scale, "G6")}; largest displacement {F(L(largest), "G4")} {u.LengthSymbol} {where}";
         var note = plot.Add.Annotation(worstText, Alignment.UpperLeft);
         note.LabelFontSize = 14;
         note.LabelBackgroundColor = Colors.White.WithAlpha(0.9);
         note.LabelBorderColor = PlotStyle.Slate;
         double pad = 0.12 * L(size);
-        plot.Axes.SetLimits(L(xmin) - pad, L(xmax) + pad, L(ymin) - 0.5 * pad, L(ymax) + 1.5 * pad);
+        plot.Axes.SetLimits(L(xmin) - pad, L(xmax) + pad, L(ymin) - 0.8 * pad, L(ymax) + 1.5 * pad);
         plot.Axes.SquareUnits();
         plot.ShowLegend(Alignment.UpperRight);
         return new Figure($"shape-{Slug(caseId)}.png", $"Deflected shape, case {caseId}",
-            $"Undeformed (dashed) and deflected (solid) shape under case {caseId}, displacements drawn {F(scale, "G6")} times their size; {worstText}. Members are drawn straight between their displaced end nodes; axial-only members (braces, links) in green; supports as red triangles.{(linked.Count > 0 ? " Wall panels linked to the frame are drawn by their edges and opening edges through the mesh nodes on them, displaced with the same scale (their bases are held)." : "")}",
+            $"Undeformed (dashed) and deflected (solid) shape under case {caseId}, displacements drawn {F(scale, "G6")} times their size; {worstText}. Each member is drawn as its own deflected shape between its nodes: the exact Timoshenko shape functions of its end displacements (cubic Hermite with the shear correction; Friedman & Kosmatka 1993, eq. 19), rigid zones moving rigidly, plus the fixed-end deflection under its span loads; axial-only members (braces, links) straight, in green. Supports in red by kind: fixed (ground line, hatched), pinned (triangle), roller (triangle on rollers), spring (zigzag; a circle for a rotational spring), other held sets (square).{(linked.Count > 0 ? " Wall panels linked to the frame are drawn by their edges and opening edges through the mesh nodes on them, displaced with the same scale (their bases are held)." : "")}",
             PlotStyle.Png(plot), PlotStyle.Width, PlotStyle.Height);
     }
+
+    /// <summary>What a support is, for its symbol: the held set and the springs decide, not the file's type word.</summary>
+    public static string SupportKind(Support s) => (s.RestrainX, s.RestrainY, s.RestrainRZ) switch
+    {
+        (true, true, true) => "fixed",
+        (true, true, false) => "pinned",
+        (false, true, false) => "roller-x",
+        (true, false, false) => "roller-y",
+        (false, false, false) => "spring",
+        _ => "other",
+    };
+
+    /// <summary>Each support drawn by its kind at its node, symbols <paramref name="h"/> high (plot units); springs added to any kind.</summary>
+    private static void DrawSupports(Plot plot, StructureModel model, double h)
+    {
+        var u = model.Units;
+        double L(double si) => u.FromSI(si, Quantity.Length);
+        var legend = new HashSet<string>(StringComparer.Ordinal);
+        void Poly(double[] xs, double[] ys, string? label, float width = 2f)
+        {
+            var sl = plot.Add.ScatterLine(xs, ys);
+            sl.Color = PlotStyle.Brick;
+            sl.LineWidth = width;
+            sl.MarkerSize = 0;
+            if (label is not null && legend.Add(label)) sl.LegendText = label;
+        }
+        void Ground(double x, double y, string? label)   // a ground line at y with short hatching below it
+        {
+            Poly([x - 0.8 * h, x + 0.8 * h], [y, y], label, 2.5f);
+            for (int k = 0; k < 5; k++)
+            {
+                double x0 = x - 0.8 * h + k * 0.4 * h;
+                Poly([x0, x0 - 0.3 * h], [y, y - 0.3 * h], null, 1f);
+            }
+        }
+        foreach (var s in model.Supports)
+        {
+            double x = L(model.Nodes[s.Node].X), y = L(model.Nodes[s.Node].Y);
+            switch (SupportKind(s))
+            {
+                case "fixed":
+                    Ground(x, y, "support, fixed");
+                    break;
+                case "pinned":
+                    Poly([x, x - 0.5 * h, x + 0.5 * h, x], [y, y - h, y - h, y], "support, pinned");
+                    Ground(x, y - h, null);
+                    break;
+                case "roller-x":
+                    Poly([x, x - 0.5 * h, x + 0.5 * h, x], [y, y - 0.8 * h, y - 0.8 * h, y], "support, roller");
+                    var rx = plot.Add.ScatterPoints(new[] { x - 0.25 * h, x + 0.25 * h }, new[] { y - 0.9 * h, y - 0.9 * h });
+                    rx.Color = PlotStyle.Brick; rx.MarkerShape = MarkerShape.OpenCircle; rx.MarkerSize = 6;
+                    Ground(x, y - h, null);
+                    break;
+                case "roller-y":
+                    Poly([x, x - 0.8 * h, x - 0.8 * h, x], [y, y - 0.5 * h, y + 0.5 * h, y], "support, roller");
+                    var ry = plot.Add.ScatterPoints(new[] { x - 0.9 * h, x - 0.9 * h }, new[] { y - 0.25 * h, y + 0.25 * h });
+                    ry.Color = PlotStyle.Brick; ry.MarkerShape = MarkerShape.OpenCircle; ry.MarkerSize = 6;
+                    Poly([x - h, x - h], [y - 0.8 * h, y + 0.8 * h], null, 2.5f);
+                    break;
+                case "other":
+                    var sq = plot.Add.ScatterPoints(new[] { x }, new[] { y });
+                    sq.Color = PlotStyle.Brick; sq.MarkerShape = MarkerShape.OpenSquare; sq.MarkerSize = 14;
+                    if (legend.Add("support, other held set")) sq.LegendText = "support, other held set";
+                    break;
+            }
+            // Springs: a zigzag along the spring's direction ending on a ground line; a circle for a rotational spring.
+            if (s.SpringY > 0 && !s.RestrainY)
+            {
+                var xs = new List<double> { x }; var ys = new List<double> { y };
+                for (int k = 1; k <= 6; k++) { xs.Add(x + (k % 2 == 0 ? -0.25 : 0.25) * h); ys.Add(y - k * 0.2 * h); }
+                xs.Add(x); ys.Add(y - 1.4 * h);
+                Poly(xs.ToArray(), ys.ToArray(), "support, spring", 1.5f);
+                Ground(x, y - 1.4 * h, null);
+            }
+            if (s.SpringX > 0 && !s.RestrainX)
+            {
+                var xs = new List<double> { x }; var ys = new List<double> { y };
+                for (int k = 1; k <= 6; k++) { xs.Add(x - k * 0.2 * h); ys.Add(y + (k % 2 == 0 ? -0.25 : 0.25) * h); }
+                xs.Add(x - 1.4 * h); ys.Add(y);
+                Poly(xs.ToArray(), ys.ToArray(), "support, spring", 1.5f);
+                Poly([x - 1.4 * h, x - 1.4 * h], [y - 0.6 * h, y + 0.6 * h], null, 2.5f);
+            }
+            if (s.SpringRZ > 0 && !s.RestrainRZ)
+            {
+                var ci = plot.Add.ScatterPoints(new[] { x }, new[] { y });
+                ci.Color = PlotStyle.Brick; ci.MarkerShape = MarkerShape.OpenCircle; ci.MarkerSize = 18;
+                if (legend.Add("support, rotational spring")) ci.LegendText = "support, rotational spring";
+            }
+        }
+    }
+
+    /// <summary>An allowable drift more than this many times the largest drift is named, not drawn, so the drifts stay readable.</summary>
+    public const double OffScale = 4;
 
     /// <summary>Level displacement against elevation for every lateral case.</summary>
     public static Figure DisplacementProfile(AnalysisResult r, IReadOnlyList<CaseStories> cases)
@@ -202,16 +294,29 @@ public static class ModelPlots
         string caption;
         if (check is not null)
         {
-            var limit = plot.Add.VerticalLine(100 * check.AllowedRatio);
-            limit.Color = PlotStyle.Limit;
-            limit.LineWidth = 2;
-            limit.LinePattern = LinePattern.DenselyDashed;
-            limit.LegendText = $"allowable Δa/h = {F(100 * check.AllowedRatio)}%";
-            plot.Axes.SetLimitsX(0, 100 * check.AllowedRatio * 1.15 + 1e-12);
             var used = rows.Where(x => x.Check == check).ToArray();
             double worst = used.Length == 0 ? 0 : used.Max(x => x.Ratio);
-            plot.Axes.SetLimitsX(0, 100 * Math.Max(check.AllowedRatio, worst) * 1.15);
-            caption = $"Amplified story drift ratio δ/h with δ = C_d·δe/I_e (C_d = {F(check.Cd)}, I_e = {F(check.Ie)}; ASCE 7-16 eq. 12.8-15), drawn over each story's height, beside the allowable Δa/h = {F(100 * check.AllowedRatio)}% ({check.LimitSource}).";
+            bool drawn = !(worst > 0) || check.AllowedRatio <= OffScale * worst;
+            if (drawn)
+            {
+                var limit = plot.Add.VerticalLine(100 * check.AllowedRatio);
+                limit.Color = PlotStyle.Limit;
+                limit.LineWidth = 2;
+                limit.LinePattern = LinePattern.DenselyDashed;
+                limit.LegendText = $"allowable Δa/h = {F(100 * check.AllowedRatio)}%";
+                plot.Axes.SetLimitsX(0, 100 * Math.Max(check.AllowedRatio, worst) * 1.15);
+            }
+            else
+            {
+                plot.Axes.SetLimitsX(0, 100 * worst * 1.15);
+                var note = plot.Add.Annotation($"allowable Δa/h = {F(100 * check.AllowedRatio)}% is off the scale: {F(check.AllowedRatio / worst, "0.0")} × the largest drift ratio ({F(100 * worst, "0.000")}%)", Alignment.LowerRight);
+                note.LabelFontSize = 14;
+                note.LabelBackgroundColor = Colors.White.WithAlpha(0.9);
+                note.LabelBorderColor = PlotStyle.Limit;
+            }
+            caption = $"Amplified story drift ratio δ/h with δ = C_d·δe/I_e (C_d = {F(check.Cd)}, I_e = {F(check.Ie)}; ASCE 7-16 eq. 12.8-15), drawn over each story's height, " +
+                (drawn ? $"beside the allowable Δa/h = {F(100 * check.AllowedRatio)}% ({check.LimitSource})."
+                       : $"scaled to the drifts; the allowable Δa/h = {F(100 * check.AllowedRatio)}% ({check.LimitSource}) is {F(check.AllowedRatio / worst, "0.0")} times the largest ratio and off the scale, named on the plot.");
         }
         else
         {

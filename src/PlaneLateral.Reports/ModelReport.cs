@@ -61,6 +61,10 @@ public static partial class ModelReport
         string engine = string.Join(" and ", new[] { frame ? "exact Timoshenko beam-columns" : "", r.Panels.Count > 0 ? "plane-stress wall panels" : "" }.Where(x => x != ""));
         blocks.Add(new Paragraph($"Model file {modelFileName}. Produced by {producedBy}: linear static analysis with {engine}{(b.HasStories ? ", story results" : "")}{(sr is null ? "" : ", seismic story forces and second-order effects")}{(comparisons is null ? "" : " and hand methods beside the finite-element numbers")}."));
         blocks.Add(new CautionBox(Caution));
+        blocks.Add(new Table("Summary: the answers first (the rows the console prints)", ["item", "answer"],
+            RunSummary.Planar(run, comparisons, modelFileName).Select(x => (IReadOnlyList<string>)[x.Label, x.Text]).ToList(), []));
+        blocks.Add(Provenance(m, modelFileName, producedBy));
+        blocks.Add(new ContentsBlock());
 
         // 1. Inputs and units
         blocks.Add(new Heading(2, Section("Inputs and units")));
@@ -75,13 +79,7 @@ public static partial class ModelReport
         if (m.Sections.Count > 0)
         blocks.Add(new Table("Sections (gross values, before stiffness modifiers)", ["section", "shape", $"A [{u.Label(Quantity.Area)}]", $"I [{u.Label(Quantity.SecondMomentOfArea)}]", $"depth [{len}]"],
             m.Sections.Select(x => (IReadOnlyList<string>)[x.Id, x.Shape, F(u.FromSI(x.A, Quantity.Area)), F(u.FromSI(x.I, Quantity.SecondMomentOfArea)), double.IsFinite(x.Depth) && x.Depth > 0 ? L(x.Depth) : "-"]).ToList(), [2, 3, 4]));
-        var roles = m.Members.GroupBy(x => x.Role == "" ? "(no role)" : x.Role).OrderBy(g => g.Key, StringComparer.Ordinal)
-            .Select(g => (IReadOnlyList<string>)[g.Key, $"{g.Count()}", $"{g.Count(x => x.Kind == MemberKind.Brace)}"]).ToList();
-        if (frame)
-        blocks.Add(new Table("Members by role", ["role", "members", "of which axial-only"], roles, [1, 2]));
-        blocks.Add(new Table("Load cases and combinations", ["id", "kind", "description or factors"],
-            [.. m.LoadCases.Select(c => (IReadOnlyList<string>)[c.Id, "load case", c.Description]),
-             .. m.Combinations.Select(c => (IReadOnlyList<string>)[c.Id, "combination", string.Join(" + ", c.Factors.Select(f => $"{F(f.Factor)}·{m.LoadCases[f.Case].Id}"))])], []));
+        AddInputTables(blocks, run);
         if (m.Building.Levels.Count > 0)
             blocks.Add(new Table("Levels", ["level", "name", $"elevation [{len}]", "diaphragm", "nodes"],
                 m.Building.Levels.Select(l => (IReadOnlyList<string>)[l.Id, l.Name, L(l.Elevation), l.Rigid ? "rigid (exact tie)" : "none", $"{l.Nodes.Count}"]).ToList(), [2, 4]));
@@ -110,10 +108,19 @@ public static partial class ModelReport
         var methods = !frame ? new List<IReadOnlyList<string>>() : new List<IReadOnlyList<string>>
         {
             new[] { "Timoshenko beam-column, exact two-node element", "bending block EI/(L³(1+Φ))·[12, 6L, −12, 6L; 6L, (4+Φ)L², −6L, (2−Φ)L²; …], Φ = 12EI/(G·A_s·L²), plus EA/L axially", "Przemieniecki, Theory of Matrix Structural Analysis, 1968, §5.6" },
-            new[] { "Shear area of a rectangle", "A_s = A/f, f = 1.2 by default; or Cowper's κ = 10(1+ν)/(12+11ν)", "Gere & Timoshenko, Mechanics of Materials; Cowper, J. Appl. Mech. 33:335–340, 1966" },
-            new[] { "Story drift and drift ratio", "drift = u_top − u_bottom (mean ux of each level); ratio = drift / story height", "common practice" },
-            new[] { "Story shear by statics", "Σ over members crossing a horizontal cut of N·cos α − V·sin α (plus member loads between cut and face)", "equilibrium of the part above the cut (docs/building.md)" },
+            new[] { "Shear area of a rectangle", "A_s = A/f, f = 1.2 by default (1/f = κ = 5/6, Cowper's value at ν = 0); or Cowper's κ = 10(1+ν)/(12+11ν)", "Cowper 1966, the rectangle's coefficient; Gere & Timoshenko, shear form factor of a rectangle" },
+            new[] { "Deflected shape between the nodes (figures)", "v(ξ) = N₁·v₁ + N₂·θ₁ + N₃·v₂ + N₄·θ₂, N_i the cubic Hermite functions with the shear parameter Φ; u linear; plus the fixed-end deflection of the segment under its span load", "Friedman & Kosmatka 1993, eq. 19; the span-load part derived" },
+            new[] { "Backward error of the solve", "η = ‖K·u − f‖∞ / (‖K‖∞·‖u‖∞ + ‖f‖∞); the solve is judged good when η < 1E-10", "Higham 2002, Theorem 7.1 (normwise backward error)" },
+            new[] { "Equilibrium of the whole", "Σ reactions + Σ applied loads = 0 in x, y and moment about the origin (member loads integrated along the members, not taken from the element load vectors), relative to the largest force", "derived: equilibrium of the free body" },
+            new[] { "Story drift and drift ratio", "drift = u_top − u_bottom (mean ux of each level); ratio = drift / story height", "ASCE 7-16 §12.8.6 (story drift as the difference of the deflections at the top and bottom of the story)" },
+            new[] { "Story shear by statics", "Σ over members crossing a horizontal cut of N·cos α − V·sin α (plus member loads between cut and face)", "derived: equilibrium of the part above the cut" },
         };
+        if (frame && m.Members.Any(x => x.RigidStart > 0 || x.RigidEnd > 0))
+            methods.Add(["Rigid end zones", "v_f1 = v₁ + a·θ₁, v_f2 = v₂ − b·θ₂ (local axes): the flexible segment's ends follow the nodes as rigid bodies; K = Tᵀ·K_f·T", "McGuire, Gallagher & Ziemian 2000, §13.3 (rigid end offsets)"]);
+        if (frame && m.Members.Any(x => x.Kind == MemberKind.BeamColumn && (x.ReleaseStart || x.ReleaseEnd)))
+            methods.Add(["Moment releases", "the released rotation condensed out: K_c = K_cc − K_cr·K_rr⁻¹·K_rc, its load vector alike; M = 0 at the release", "Guyan 1965 (static condensation)"]);
+        if (m.Building.CrackedSections is not null)
+            methods.Add(["Cracked-section stiffness modifiers", "I_eff = factor × I_g by member role (walls, columns, beams) as the members tables show", "ACI 318 Table 6.6.3.1.1(a); factors from a secondary copy"]);
         if (m.Building.DriftChecks.Count > 0)
             methods.Add(["Amplified drift", "δ = C_d·δe / I_e, checked as |δ|/h_sx ≤ Δa/h_sx", "ASCE 7-16 eq. 12.8-15; allowable from Table 12.12-1 or the user"]);
         if (m.Building.Levels.Count > 2)
@@ -134,6 +141,12 @@ public static partial class ModelReport
             r.Cases.Select(c => (IReadOnlyList<string>)[c.Id, c.IsCombination ? "combination" : "load case", c.BackwardError.ToString("0.0E+0", CultureInfo.InvariantCulture),
                 c.Equilibrium.RelativeForceError.ToString("0.0E+0", CultureInfo.InvariantCulture), c.Equilibrium.RelativeMomentError.ToString("0.0E+0", CultureInfo.InvariantCulture),
                 c.BackwardError < 1e-10 && c.Equilibrium.RelativeForceError < 1e-8 ? "solved" : "check the model"]).ToList(), [2, 3, 4]));
+        }
+        if (frame || r.Panels.Count > 0)
+        {
+            blocks.Add(new Heading(2, Section(frame ? "Results: displacements, reactions and member end forces" : "Results: panel reactions")));
+            if (frame) AddResultTables(blocks, r);
+            if (r.Panels.Count > 0) AddPanelReactions(blocks, r);
         }
 
         // 5. Deflected shapes
@@ -156,6 +169,7 @@ public static partial class ModelReport
                     ["story", "levels", $"height [{len}]", $"top displacement [{len}]", $"drift [{len}]", "drift ratio", $"shear [{force}]", $"stiffness [{stiff}]"],
                     cs.Stories.Select(s => (IReadOnlyList<string>)[$"{s.Index}", $"{s.Bottom.Id}–{s.Top.Id}", L(s.Height), L(s.TopDisplacement), L(s.Drift), Pct(s.DriftRatio, "0.000"), Fo(s.Shear), K(s.Stiffness)]).ToList(),
                     [0, 2, 3, 4, 5, 6, 7]));
+            AddStoryLines(blocks, lateral, u);
             Figure(ModelPlots.DisplacementProfile(r, lateral));
             if (m.Building.DriftChecks.Count == 0) Figure(ModelPlots.DriftProfile(lateral, b.DriftChecks, null, u));
         }
@@ -187,7 +201,7 @@ public static partial class ModelReport
         {
             handSection = sec + 1;
             blocks.Add(new Heading(2, Section("Hand methods beside the finite-element model")));
-            blocks.Add(new Paragraph($"ratio = FE/hand for the row's reference FE model, named in the table with the reason it is the reference: a converged plane-stress panel where the row has one, else the first line model; the next FE model stands beside it with its own ratio. Within tolerance when |ratio − 1| ≤ the row's tolerance (default ±{Pct(comparisons.DefaultTolerance, "0.#")}). The cause column is chosen by the rules in docs/comparisons.md."));
+            blocks.Add(new Paragraph($"ratio = FE/hand for the row's reference FE model, named in the table with the reason it is the reference: a converged plane-stress panel where the row has one, else the first line model; the next FE model stands beside it with its own ratio. Within tolerance when |ratio − 1| ≤ the row's tolerance (default ±{Pct(comparisons.DefaultTolerance, "0.#")}). The cause column names the assumption the gap points to, chosen by the tool's fixed rules on the subject's proportions and model."));
             blocks.Add(new Table("Hand method beside FE", ["check", "subject", "hand method", "unit", "hand", "reference FE model", "FE", "FE/hand", "beside it", "FE/hand", "h/l", "verdict", "cause"],
                 comparisons.Rows.Select(x => (IReadOnlyList<string>)[x.CheckId, x.Subject, x.Hand.Method.Name, x.Unit, F(x.Hand.Value),
                     x.ReferenceBasis.Length > 0 ? $"{x.Reference.Model} ({x.ReferenceBasis})" : x.Reference.Model, F(x.Reference.Value), x.Ratio.ToString("0.000", CultureInfo.InvariantCulture),
@@ -235,8 +249,33 @@ public static partial class ModelReport
         cautions.AddRange(r.Notes.Select(n => $"Model note: {n}"));
         if (comparisons is not null) cautions.Add(ComparisonReport.Caution);
         blocks.Add(new BulletList(cautions));
+
+        // 11. References: every source cell cites its source by number; the list gives author, title and year.
+        var refs = new ReportReferences();
+        for (int i = 0; i < blocks.Count; i++)
+            if (blocks[i] is Table t && t.Header.Select((h, k) => (h, k)).Where(x => IsSourceColumn(x.h)).Select(x => x.k).ToList() is { Count: > 0 } cols)
+                blocks[i] = t with { Rows = t.Rows.Select(row => (IReadOnlyList<string>)row.Select((cell, k) => cols.Contains(k) ? refs.Cite(cell) : cell).ToList()).ToList() };
+        // Prose that points into the project's docs folder names the documentation in words instead (a reader of the
+        // package has no checkout); the published sources are the numbered references.
+        for (int i = 0; i < blocks.Count; i++)
+            blocks[i] = blocks[i] switch
+            {
+                Paragraph p => new Paragraph(ReportReferences.NoDocsPath(p.Text)),
+                BulletList l => new BulletList(l.Items.Select(ReportReferences.NoDocsPath).ToList()),
+                Table t => t with { Caption = ReportReferences.NoDocsPath(t.Caption), Rows = t.Rows.Select(row => (IReadOnlyList<string>)row.Select(ReportReferences.NoDocsPath).ToList()).ToList() },
+                var other => other,
+            };
+        if (refs.Used.Count > 0)
+        {
+            blocks.Add(new Heading(2, Section("References")));
+            blocks.Add(new Paragraph("The sources the methods, checks and hand methods above cite by number. A value or clause marked \"from memory\" or \"secondary\" beside its citation was not read in the source itself: check it there."));
+            blocks.Add(new BulletList(refs.List()));
+        }
         return new ReportDocument(title, blocks);
     }
+
+    /// <summary>The columns that hold sources: "source", "limit from", "expression, source or note".</summary>
+    private static bool IsSourceColumn(string header) => header.Contains("source", StringComparison.Ordinal) || header == "limit from";
 
     /// <summary>File name → bytes: report.html (self-contained), report.md and the PNG figures the Markdown shows.</summary>
     public static IReadOnlyList<(string Name, byte[] Bytes)> Render(ReportDocument doc) =>

@@ -24,13 +24,52 @@ public sealed record Table(string Caption, IReadOnlyList<string> Header, IReadOn
 /// <summary>A figure (embedded in the HTML, a file beside the Markdown).</summary>
 public sealed record FigureBlock(Figure Figure, int Number) : Block;
 
-/// <summary>An ordered list of blocks with a title; renders one self-contained HTML file and its Markdown twin.</summary>
-public sealed class ReportDocument(string title, IReadOnlyList<Block> blocks)
+/// <summary>
+/// Where the table of contents goes. Without one, a document puts its contents before its first level-2 heading; with
+/// one, there. Either way every level-2 and level-3 heading is listed, linked to its anchor.
+/// </summary>
+public sealed record ContentsBlock : Block;
+
+/// <summary>One entry of a document's table of contents: the heading's level (2 or 3), its text and its anchor.</summary>
+public sealed record ContentsEntry(int Level, string Text, string Anchor);
+
+/// <summary>
+/// An ordered list of blocks with a title; renders one self-contained HTML file and its Markdown twin, each with a table of
+/// contents (every level-2 and level-3 heading, linked) and, in the HTML, a print style: each level-2 section starts a
+/// new page, rows, figures and cautions are not split across pages where the browser can avoid it, table headers repeat
+/// on every page, figures fit the page width.
+/// </summary>
+public sealed class ReportDocument
 {
+    private readonly string title;
+    private readonly IReadOnlyList<Block> blocks;
+    private readonly Dictionary<Heading, string> anchors = new(ReferenceEqualityComparer.Instance);
+
+    public ReportDocument(string title, IReadOnlyList<Block> blocks)
+    {
+        this.title = title;
+        this.blocks = blocks;
+        int n = 0;
+        foreach (var h in blocks.OfType<Heading>())
+            if (h.Level is 2 or 3 && !anchors.ContainsKey(h)) anchors[h] = $"sec-{++n}";
+        Contents = blocks.OfType<Heading>().Where(anchors.ContainsKey).Select(h => new ContentsEntry(h.Level, h.Text, anchors[h])).ToList();
+    }
+
     public string Title => title;
     public IReadOnlyList<Block> Blocks => blocks;
     public IEnumerable<Figure> Figures => blocks.OfType<FigureBlock>().Select(b => b.Figure);
     public IEnumerable<Table> Tables => blocks.OfType<Table>();
+
+    /// <summary>The table of contents: every level-2 and level-3 heading in order, with the anchor both renderings give it.</summary>
+    public IReadOnlyList<ContentsEntry> Contents { get; }
+
+    /// <summary>The blocks with the contents placeholder where it goes (the document's own, or before the first section).</summary>
+    private IEnumerable<Block> Laid()
+    {
+        if (blocks.Any(b => b is ContentsBlock) || Contents.Count == 0) return blocks;
+        int first = blocks.ToList().FindIndex(b => b is Heading { Level: 2 });
+        return first < 0 ? blocks : [.. blocks.Take(first), new ContentsBlock(), .. blocks.Skip(first)];
+    }
 
     private static string H(string s) => WebUtility.HtmlEncode(s);
 
@@ -40,12 +79,18 @@ public sealed class ReportDocument(string title, IReadOnlyList<Block> blocks)
         var sb = new StringBuilder();
         sb.Append("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n");
         sb.Append($"<title>{H(title)}</title>\n<style>\n{Css}</style>\n</head>\n<body>\n<main>\n");
-        foreach (var b in blocks)
+        foreach (var b in Laid())
         {
             switch (b)
             {
                 case Heading h:
-                    sb.Append($"<h{h.Level}>{H(h.Text)}</h{h.Level}>\n");
+                    sb.Append(anchors.TryGetValue(h, out var id) ? $"<h{h.Level} id=\"{id}\">{H(h.Text)}</h{h.Level}>\n" : $"<h{h.Level}>{H(h.Text)}</h{h.Level}>\n");
+                    break;
+                case ContentsBlock:
+                    sb.Append("<nav class=\"contents\">\n<p class=\"contents-title\">Contents</p>\n<ul>\n");
+                    foreach (var e in Contents)
+                        sb.Append($"<li class=\"toc{e.Level}\"><a href=\"#{e.Anchor}\">{H(e.Text)}</a></li>\n");
+                    sb.Append("</ul>\n</nav>\n");
                     break;
                 case Paragraph p:
                     sb.Append($"<p>{H(p.Text)}</p>\n");
@@ -86,12 +131,19 @@ public sealed class ReportDocument(string title, IReadOnlyList<Block> blocks)
     public string Markdown()
     {
         var sb = new StringBuilder();
-        foreach (var b in blocks)
+        foreach (var b in Laid())
         {
             switch (b)
             {
                 case Heading h:
+                    if (anchors.TryGetValue(h, out var id)) sb.Append($"<a id=\"{id}\"></a>\n\n");
                     sb.Append(new string('#', h.Level)).Append(' ').Append(h.Text).Append("\n\n");
+                    break;
+                case ContentsBlock:
+                    sb.Append("**Contents**\n\n");
+                    foreach (var e in Contents)
+                        sb.Append(e.Level == 3 ? "  - " : "- ").Append($"[{Md(e.Text).Replace("[", "\\[").Replace("]", "\\]")}](#{e.Anchor})\n");
+                    sb.Append('\n');
                     break;
                 case Paragraph p:
                     sb.Append(p.Text).Append("\n\n");
@@ -135,6 +187,29 @@ public sealed class ReportDocument(string title, IReadOnlyList<Block> blocks)
         figure { margin: 16px 0 24px; }
         figure img { max-width: 100%; height: auto; border: 1px solid #e2e2e2; }
         figcaption { font-size: 13px; color: #333; margin-top: 4px; }
+        nav.contents { border: 1px solid #d5d9df; background: #f7f8fa; padding: 8px 16px; margin: 16px 0; }
+        nav.contents .contents-title { font-weight: bold; margin: 4px 0; }
+        nav.contents ul { list-style: none; padding-left: 0; margin: 4px 0; columns: 2; column-gap: 32px; }
+        nav.contents li.toc3 { padding-left: 18px; font-size: 13px; }
+        nav.contents a { color: #1F3A5F; text-decoration: none; }
+        @page { margin: 15mm 12mm 16mm 12mm; }
+        @media print {
+          * { -webkit-print-color-adjust: exact; print-color-adjust: exact; }
+          body { font-size: 9.5pt; }
+          main { max-width: none; padding: 0; font-size: 9.5pt; line-height: 1.3; }
+          h1 { font-size: 17pt; }
+          h2 { font-size: 13pt; margin-top: 0; break-before: page; page-break-before: always; }
+          h2, h3, caption { break-after: avoid; page-break-after: avoid; }
+          table { font-size: 7.5pt; width: 100%; max-width: 100%; }
+          thead { display: table-header-group; }
+          tr, th, td, li, figure, figure img, .caution { break-inside: avoid; page-break-inside: avoid; }
+          td, th { padding: 2px 4px; overflow-wrap: break-word; }
+          th.n { white-space: normal; }
+          figure { margin: 8px 0 12px; }
+          figure img { max-width: 100%; max-height: 215mm; width: auto; height: auto; border: none; }
+          nav.contents { break-inside: avoid; background: none; }
+          nav.contents a { color: inherit; }
+        }
 
         """;
 }

@@ -175,13 +175,28 @@ public sealed class FrameElement
     /// <param name="uGlobal">Global element displacements ux1, uy1, rz1, ux2, uy2, rz2.</param>
     public double[] LocalEndForces(double[] uGlobal, IReadOnlyList<MemberLoad> loads)
     {
-        var uf = SmallMatrix.Times(_offset, SmallMatrix.Times(_rotation, uGlobal));
         var ff = FlexibleLoads(loads);
-        if (_released.Length > 0) SmallMatrix.RecoverCondensed(_kFlexible, ff, _released, uf);
+        var uf = FlexibleEnds(uGlobal, ff);
         var f = SmallMatrix.Times(_kFlexible, uf);
         for (int i = 0; i < 6; i++) f[i] -= ff[i];
         foreach (int r in _released) f[r] = 0; // exactly zero at a release
         return f;
+    }
+
+    /// <summary>
+    /// Displacements of the flexible segment's two ends in local axes (u1, v1, θ1, u2, v2, θ2 at the faces of the rigid
+    /// zones): the nodes' motion carried through the rigid zones, and at a released end the segment's own rotation
+    /// recovered from the condensation (with the member's loads). With the element's shape functions these give the
+    /// member's deflected shape between its nodes.
+    /// </summary>
+    /// <param name="uGlobal">Global element displacements ux1, uy1, rz1, ux2, uy2, rz2.</param>
+    public double[] FlexibleEndDisplacements(double[] uGlobal, IReadOnlyList<MemberLoad> loads) => FlexibleEnds(uGlobal, FlexibleLoads(loads));
+
+    private double[] FlexibleEnds(double[] uGlobal, double[] flexibleLoads)
+    {
+        var uf = SmallMatrix.Times(_offset, SmallMatrix.Times(_rotation, uGlobal));
+        if (_released.Length > 0) SmallMatrix.RecoverCondensed(_kFlexible, flexibleLoads, _released, uf);
+        return uf;
     }
 
     /// <summary>
