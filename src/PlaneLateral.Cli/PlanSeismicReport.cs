@@ -100,7 +100,7 @@ internal static class PlanSeismicReport
                     var model = p.Lines.First(l => l.Id == lf.Line).Model;
                     foreach (var x in lf.DesignReactions) rt.Add(lf.Line, model.Nodes[x.Node].Id, Fo(x.Fx), Fo(x.Fy), Mo(x.Mz));
                 }
-                sb.Append($"  Design reactions of the lines along {d.Direction} (scaled + accidental torsion; member end forces in plan-spectrum-line-members.csv)\n").Append(rt.Render());
+                sb.Append($"  Design reactions of the lines along {d.Direction} (scaled + accidental torsion; member end\n  forces in plan-spectrum-line-members.csv)\n").Append(rt.Render());
             }
             sb.Append("  drift: at the worst outline corner, story drift per mode, combined, times the drift factor,\n" +
                       "  plus the static accidental torsion's (§12.9.1.5); δ = C_d·drift/I_e; Δ comb.: difference of\n" +
