@@ -61,8 +61,9 @@ internal static class PlanSeismicReport
             var rs = sp.Settings;
             sb.Append($"\nModal response spectrum (ASCE 7-16 §12.9.1): {rs.Rule.ToString().ToUpperInvariant()}, ζ = {rs.Damping}, C_d = {rs.Cd}, R = {sp.R}, I_e = {sp.Ie}\n");
             sb.Append(Wrap($"Spectrum: {sp.Spectrum.Describe()}", 100, "  "));
-            var pts = new TextTable("mode", "period [s]", "S_a [g]").Numeric(0, 1, 2);
-            foreach (var m in sp.Directions[0].Modes) pts.Add(m.Mode.ToString(CultureInfo.InvariantCulture), P(m.Period, "0.0000"), P(m.Sa, "0.0000"));
+            sb.Append(Wrap($"Accidental torsion: {sp.TorsionMethod}.", 100, "  "));
+            var pts = new TextTable("mode", "analysis", "period [s]", "S_a [g]").Numeric(0, 2, 3);
+            foreach (var m in sp.Directions[0].Modes) pts.Add(m.Mode.ToString(CultureInfo.InvariantCulture), m.Variant == "" ? "-" : "masses " + m.Variant, P(m.Period, "0.0000"), P(m.Sa, "0.0000"));
             sb.Append(pts.Render());
             foreach (var d in sp.Directions)
             {
@@ -82,15 +83,33 @@ internal static class PlanSeismicReport
                     sb.Append($"  Modal drift check, allowed δ/h {lim.AllowedRatio}: worst {P(worst.Ratio, "0.00000")} (story {worst.Story}); " +
                               $"{(over.Count == 0 ? "all within" : "EXCEEDS in stories " + string.Join(", ", over))}\n");
                 }
-                var lt = new TextTable("story", "line", $"ELF [{force}]", $"modal [{force}]", $"scaled [{force}]", $"acc. torsion [{force}]", $"design [{force}]").Numeric(0, 2, 3, 4, 5, 6);
+                var tt = new TextTable("story", $"P_x [{force}]", "θ modal", "θ ELF", "θ max").Numeric(0, 1, 2, 3, 4);
+                foreach (var st in d.Stories.OrderByDescending(x => x.Story))
+                    tt.Add(st.Story.ToString(CultureInfo.InvariantCulture), Fo(st.Px), P(st.Theta, "0.0000"), P(st.ThetaElf, "0.0000"), P(st.ThetaMax));
+                sb.Append(tt.Render());
+                string mu = u.Label(Quantity.Moment);
+                string Mo(double v) => TextTable.Num(u.FromSI(v, Quantity.Moment));
+                var lt = new TextTable("story", "line", $"ELF [{force}]", $"modal [{force}]", $"scaled [{force}]", $"acc. torsion [{force}]", $"design [{force}]", $"overturning [{mu}]")
+                    .Numeric(0, 2, 3, 4, 5, 6, 7);
                 foreach (var l in d.Lines.Where(l => Along(p, l.Line, d.Direction)).OrderByDescending(l => l.Story).ThenBy(l => l.Line, StringComparer.Ordinal))
-                    lt.Add(l.Story.ToString(CultureInfo.InvariantCulture), l.Line, Fo(l.Elf), Fo(l.Modal), Fo(l.Scaled), Fo(l.Torsion), Fo(l.Design));
+                    lt.Add(l.Story.ToString(CultureInfo.InvariantCulture), l.Line, Fo(l.Elf), Fo(l.Modal), Fo(l.Scaled), Fo(l.Torsion), Fo(l.Design), Mo(l.DesignOverturning));
                 sb.Append(lt.Render());
+                var rt = new TextTable("line", "node", $"Rx [{force}]", $"Ry [{force}]", $"Mz [{mu}]").Numeric(2, 3, 4);
+                foreach (var lf in d.LineForces.Where(x => Along(p, x.Line, d.Direction)))
+                {
+                    var model = p.Lines.First(l => l.Id == lf.Line).Model;
+                    foreach (var x in lf.DesignReactions) rt.Add(lf.Line, model.Nodes[x.Node].Id, Fo(x.Fx), Fo(x.Fy), Mo(x.Mz));
+                }
+                sb.Append($"  Design reactions of the lines along {d.Direction} (scaled + accidental torsion; member end\n  forces in plan-spectrum-line-members.csv)\n").Append(rt.Render());
             }
             sb.Append("  drift: at the worst outline corner, story drift per mode, combined, times the drift factor,\n" +
                       "  plus the static accidental torsion's (§12.9.1.5); δ = C_d·drift/I_e; Δ comb.: difference of\n" +
                       "  the combined displacements, shown only to compare (it is not the drift).\n" +
-                      "  design = scaled + |accidental torsion| per line (torques from the ELF forces).\n");
+                      "  design = scaled + |accidental torsion| per line (torques from the ELF forces; 0 with shifted\n" +
+                      "  masses, whose two analyses are enveloped). θ = P_x·Δ·I_e/(V_x·h·C_d) (eq. 12.8-16), P_x the floor\n" +
+                      "  weights above the cut, Δ the design drift at the worst corner, V_x the scaled story shear; θ ELF\n" +
+                      "  from the ELF cases' worst corner drift; θ max with β = 1. Combined values are peaks without sign,\n" +
+                      "  each combined from its per-mode values (every line's planar model solved under each mode).\n");
         }
         sb.Append($"  {SeismicPresets.Status}.\n  A computed aid for a licensed engineer, not a code check.\n");
         return sb.ToString();

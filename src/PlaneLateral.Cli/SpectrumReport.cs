@@ -8,6 +8,9 @@ namespace PlaneLateral.Cli;
 /// <summary>The planar response spectrum tables: modes with S_a, and the combined story results beside the ELF (≤ 100 columns).</summary>
 internal static class SpectrumReport
 {
+    /// <summary>Members listed on the console at most (all are in the results file).</summary>
+    private const int MaxMemberRows = 40;
+
     private static string P(double v, string f) => double.IsFinite(v) ? v.ToString(f, CultureInfo.InvariantCulture) : "-";
 
     public static string Render(AnalysisResult r, PlanarSpectrumResult? s)
@@ -37,6 +40,35 @@ internal static class SpectrumReport
         sb.Append(t.Render());
         sb.Append("  drift: story drift per mode, combined, times the drift factor; δ = C_d·drift/I_e (§12.9.1.2);\n" +
                   "  Δ comb.: difference of the combined level displacements, shown only to compare (not the drift).\n");
+
+        string mu = u.Label(Quantity.Moment);
+        string Mo(double v) => TextTable.Num(u.FromSI(v, Quantity.Moment));
+        var ot = new TextTable("story", $"overturning [{mu}]", $"scaled [{mu}]", $"P_x [{force}]", "θ modal", "θ ELF", "θ max").Numeric(0, 1, 2, 3, 4, 5, 6);
+        foreach (var st in s.Stories.OrderByDescending(x => x.Story))
+            ot.Add(st.Story.ToString(CultureInfo.InvariantCulture), Mo(st.Overturning), Mo(s.Scaling.ForceFactor * st.Overturning), Fo(st.Px), P(st.Theta, "0.0000"), P(st.ThetaElf, "0.0000"), P(st.ThetaMax, "0.000"));
+        sb.Append(ot.Render());
+        sb.Append(PlanSeismicReport.Wrap($"Overturning: at each story's base, per mode, combined. θ = P_x·Δ·I_e/(V_x·h_sx·C_d) (ASCE 7-16 eq. 12.8-16) with Δ the design drift above and V_x the scaled story shear; P_x is {s.PxSource}.", 100, "  "));
+        if (s.Reactions.Count > 0)
+        {
+            var rt = new TextTable("node", $"Rx [{force}]", $"Ry [{force}]", $"Mz [{mu}]", $"scaled Rx [{force}]", $"scaled Ry [{force}]", $"scaled Mz [{mu}]").Numeric(1, 2, 3, 4, 5, 6);
+            foreach (var x in s.Reactions)
+                rt.Add(r.Model.Nodes[x.Node].Id, Fo(x.Fx), Fo(x.Fy), Mo(x.Mz), Fo(s.Scaling.ForceFactor * x.Fx), Fo(s.Scaling.ForceFactor * x.Fy), Mo(s.Scaling.ForceFactor * x.Mz));
+            sb.Append("\n  Support reactions, combined mode by mode\n").Append(rt.Render());
+        }
+        if (s.MemberForces.Count > 0)
+        {
+            var et = new TextTable("member", $"N start [{force}]", $"V start [{force}]", $"M start [{mu}]", $"N end [{force}]", $"V end [{force}]", $"M end [{mu}]").Numeric(1, 2, 3, 4, 5, 6);
+            foreach (var x in s.MemberForces.Take(MaxMemberRows))
+            {
+                double k = s.Scaling.ForceFactor;
+                et.Add(r.Model.Members[x.Member].Id, Fo(k * x.N1), Fo(k * x.V1), Mo(k * x.M1), Fo(k * x.N2), Fo(k * x.V2), Mo(k * x.M2));
+            }
+            sb.Append("\n  Member end forces, combined mode by mode and scaled (local axes)\n").Append(et.Render());
+            if (s.MemberForces.Count > MaxMemberRows)
+                sb.Append($"  The first {MaxMemberRows} of {s.MemberForces.Count} members; all of them in response-spectrum-members.csv.\n");
+        }
+        sb.Append("  Combined values are peaks without sign, each combined from its own per-mode values (never\n" +
+                  "  the combination of a sum); they do not occur at one instant and do not balance one another.\n");
         return sb.ToString();
     }
 }

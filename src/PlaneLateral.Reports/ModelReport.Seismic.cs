@@ -37,7 +37,7 @@ public static partial class ModelReport
     }
 
     /// <summary>The seismic section: base shear, periods, story forces, second-order drifts and θ, drift check.</summary>
-    private static void AddSeismic(List<Block> blocks, Action<Figure> figure, AnalysisResult r, BuildingResult b, SeismicResult sr, string heading)
+    private static void AddSeismic(List<Block> blocks, Action<Figure> figure, AnalysisResult r, BuildingResult b, SeismicResult sr, string heading, PlanarSpectrumResult? spectrum = null)
     {
         var m = r.Model;
         var s = m.Seismic!;
@@ -137,7 +137,68 @@ public static partial class ModelReport
                 [2, 3, 4, 5, 6, 7]));
         }
         if (sr.Stability.Count > 0) figure(SeismicPlots.SecondOrderDrift(r, sr, b));
+        if (spectrum is not null) AddSpectrum(blocks, figure, r, spectrum);
     }
+
+    /// <summary>
+    /// The modal response spectrum part of the seismic section: the spectrum with the periods, the modes and their shapes,
+    /// which scaling applied and why, the combined story results unscaled and scaled beside the ELF, the drift check on
+    /// the modal drifts, θ from the modal results beside the ELF θ, and the combined reactions and member end forces.
+    /// </summary>
+    private static void AddSpectrum(List<Block> blocks, Action<Figure> figure, AnalysisResult r, PlanarSpectrumResult s)
+    {
+        var m = r.Model;
+        var u = m.Units;
+        string len = u.LengthSymbol, force = u.ForceSymbol, mom = u.Label(Quantity.Moment);
+        string L(double si) => F(u.FromSI(si, Quantity.Length));
+        string Fo(double si) => F(u.FromSI(si, Quantity.Force));
+        string Mo(double si) => F(u.FromSI(si, Quantity.Moment));
+        var rs = s.Settings;
+        double k = s.Scaling.ForceFactor;
+        blocks.Add(new Paragraph($"Modal response spectrum analysis (§12.9.1; {SeismicPresets.Status}). Spectrum: {s.Spectrum.Describe()}; modes of the lumped level masses, the fewest reaching 90 % of the mass (§12.9.1.1){(rs.Modes > 0 ? $" and at least {rs.Modes}" : "")}: {s.ModesUsed} modes, {Pct(s.CumulativeShare, "0.0")}. Per mode the forces M·φ·Γ·S_a·g/(R/I_e) with R = {F(s.R)}, I_e = {F(s.Ie)}; every response (story shear, story drift, overturning moment, member end forces, reactions) is worked out per mode and then combined by {rs.Rule.ToString().ToUpperInvariant()}{(rs.Rule == ModalRule.Cqc ? $" (Der Kiureghian 1981, ζ = {F(rs.Damping)})" : "")}. Combined values are peak magnitudes without sign; they do not occur at one instant and do not balance one another."));
+        figure(SpectrumPlots.Spectrum(s.Spectrum, s.Modes.Select(x => x.Period).ToList()));
+        blocks.Add(new Table("Modal response spectrum: modes", ["mode", "period [s]", "S_a [g]", "Γ (φᵀMφ = M)", "mass share", "cumulative", $"base shear [{force}]"],
+            s.Modes.Select(x => (IReadOnlyList<string>)[$"{x.Mode}", P4(x.Period), P4(x.Sa), P3(x.Gamma / Math.Sqrt(s.TotalMass)), Pct(x.Share, "0.0"), Pct(x.Cumulative, "0.0"), Fo(Math.Abs(x.BaseShear))]).ToList(),
+            [0, 1, 2, 3, 4, 5, 6]));
+        if (s.Shapes.Count > 0) figure(SpectrumPlots.ModeShapes(m, s));
+
+        blocks.Add(new Paragraph($"Scaling (§12.9.1.4): the combined modal base shear V_t = {Fo(s.Scaling.BaseShearModal)} {force} against the ELF base shear V = {Fo(s.Scaling.BaseShearElf)} {force}: {s.Scaling.Why}. Forces are multiplied by {P4(k)}, drifts by {P4(s.Scaling.DriftFactor)}."));
+        blocks.Add(new Table($"Modal response spectrum: story shear and overturning, combined (unscaled) and scaled × {P4(k)}, beside the ELF",
+            ["story", $"ELF V_x [{force}]", $"modal V_x [{force}]", $"scaled V_x [{force}]", "scaled / ELF", $"modal overturning [{mom}]", $"scaled overturning [{mom}]"],
+            s.Stories.OrderByDescending(x => x.Story).Select(x => (IReadOnlyList<string>)[$"{x.Story}", Fo(x.ElfShear), Fo(x.ModalShear), Fo(x.ScaledShear), P3(x.ScaledShear / x.ElfShear), Mo(x.Overturning), Mo(k * x.Overturning)]).ToList(),
+            [0, 1, 2, 3, 4, 5, 6]));
+        figure(SpectrumPlots.StoryShears(m, s));
+
+        var check = m.Building.DriftChecks.FirstOrDefault(c => c.Cases.Contains(m.Seismic!.CaseId));
+        blocks.Add(new Paragraph($"Drift from the modal results: the story drift of each mode (difference of the mode's level displacements), combined, times the drift factor {P4(s.Scaling.DriftFactor)}; δ = C_d·drift/I_e with C_d = {F(rs.Cd)} (§12.9.1.2). The difference of the combined level displacements is shown only to compare: it is not the drift. {(check is null ? "No drift check names the story-force case, so no allowable ratio is applied." : $"Allowable ratio from the drift check '{check.Id}' ({check.LimitSource}).")}"));
+        blocks.Add(new Table("Modal response spectrum: drift check on the modal drifts",
+            ["story", $"drift [{len}]", $"δ [{len}]", $"h [{len}]", "δ/h", "allowable", "result", $"Δ of combined displacements [{len}]"],
+            s.Stories.OrderByDescending(x => x.Story).Select(x => (IReadOnlyList<string>)[$"{x.Story}", L(x.Drift), L(x.DesignDrift), L(x.Height), Pct(x.Ratio, "0.000"),
+                check is null ? "-" : Pct(check.AllowedRatio, "0.##"), check is null ? "-" : x.Ratio <= check.AllowedRatio ? "within" : "exceeds", L(x.DriftFromCombinedDisplacements)]).ToList(),
+            [0, 1, 2, 3, 4, 7]));
+        blocks.Add(new Paragraph($"Stability coefficient from the modal results (ASCE 7-16 §12.8.7, eq. 12.8-16): θ = P_x·Δ·I_e/(V_x·h_sx·C_d) with Δ the combined design drift and V_x the scaled modal story shear; P_x is {s.PxSource}. Beside it the θ of the equivalent lateral forces (where the model has secondOrder)."));
+        blocks.Add(new Table("Modal response spectrum: θ beside the ELF θ",
+            ["story", $"P_x [{force}]", $"V_x scaled [{force}]", $"Δ [{len}]", "θ modal", "θ ELF", "θ_max", "status (modal)"],
+            s.Stories.OrderByDescending(x => x.Story).Select(x => (IReadOnlyList<string>)[$"{x.Story}", Fo(x.Px), Fo(x.ScaledShear), L(x.DesignDrift), Theta(x.Theta), Theta(x.ThetaElf), P3(x.ThetaMax),
+                x.Theta > x.ThetaMax ? "EXCEEDS theta max" : x.Theta > SecondOrderAnalysis.NeglectLimit ? "P-delta to be included" : "may be neglected"]).ToList(),
+            [0, 1, 2, 3, 4, 5, 6]));
+        if (s.Reactions.Count > 0)
+            blocks.Add(new Table($"Modal response spectrum: support reactions combined mode by mode (no sign), scaled × {P4(k)}",
+                ["node", $"R_x [{force}]", $"R_y [{force}]", $"M_z [{mom}]"],
+                s.Reactions.Select(x => (IReadOnlyList<string>)[m.Nodes[x.Node].Id, Fo(k * x.Fx), Fo(k * x.Fy), Mo(k * x.Mz)]).ToList(), [1, 2, 3]));
+        if (s.MemberForces.Count > 0)
+        {
+            blocks.Add(new Table($"Modal response spectrum: member end forces combined mode by mode (no sign, local axes), scaled × {P4(k)}",
+                ["member", $"N start [{force}]", $"V start [{force}]", $"M start [{mom}]", $"N end [{force}]", $"V end [{force}]", $"M end [{mom}]"],
+                s.MemberForces.Take(MaxSpectrumMemberRows).Select(x => (IReadOnlyList<string>)[m.Members[x.Member].Id, Fo(k * x.N1), Fo(k * x.V1), Mo(k * x.M1), Fo(k * x.N2), Fo(k * x.V2), Mo(k * x.M2)]).ToList(),
+                [1, 2, 3, 4, 5, 6]));
+            if (s.MemberForces.Count > MaxSpectrumMemberRows)
+                blocks.Add(new Paragraph($"The first {MaxSpectrumMemberRows} of {s.MemberForces.Count} members are listed; all are in response-spectrum-members.csv."));
+        }
+    }
+
+    /// <summary>Members listed in the report's spectrum table at most (all are in the results file).</summary>
+    private const int MaxSpectrumMemberRows = 60;
 
     /// <summary>Verdict lines of the seismic block.</summary>
     private static IEnumerable<string> SeismicVerdicts(AnalysisResult r, SeismicResult? sr)
@@ -173,7 +234,7 @@ public static partial class ModelReport
     private static IEnumerable<string> SeismicCautions(SeismicResult? sr)
     {
         if (sr is null) yield break;
-        yield return $"Seismic: the equivalent lateral force procedure is applied as described in docs/seismic.md, with clause numbers and table values as quoted there ({SeismicPresets.Status}). The governing code decides whether the procedure is permitted and which values, exceptions and footnotes apply (none of the §12.8 exceptions is applied; no accidental torsion, no modal response spectrum combination). Nothing here shows compliance.";
+        yield return $"Seismic: the equivalent lateral force procedure is applied as described in docs/seismic.md, with clause numbers and table values as quoted there ({SeismicPresets.Status}). The governing code decides whether the procedure is permitted and which values, exceptions and footnotes apply (none of the §12.8 exceptions is applied; a planar model has no accidental torsion; where the model asks for the modal response spectrum analysis, its rules and choices are stated in its part of the seismic section). Nothing here shows compliance.";
         if (sr.Stability.Count > 0)
             yield return "Second order: the axial forces of the gravity case are those of the linear solve (no iteration); K_G leaves out the shear flexibility; θ is worked out from the first-order drift and the gravity load above each story (§12.8.7, from memory); the second-order drift is shown beside it, not substituted for it.";
     }

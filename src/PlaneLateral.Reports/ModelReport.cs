@@ -192,7 +192,7 @@ public static partial class ModelReport
                     x.Label]).ToList(), [1, 2, 3, 4]));
         }
 
-        if (sr is not null) AddSeismic(blocks, Figure, r, b, sr, Section("Seismic story forces, periods and second-order effects"));
+        if (sr is not null) AddSeismic(blocks, Figure, r, b, sr, Section("Seismic story forces, periods and second-order effects"), run.Spectrum);
         if (r.Panels.Count > 0) AddPanels(blocks, Figure, r, Section("Wall panels (plane-stress continuum)"));
 
         // 8. Hand methods beside FE

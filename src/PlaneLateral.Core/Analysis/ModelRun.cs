@@ -70,7 +70,7 @@ public static class ModelRun
         };
         var split = LineAlone.SplitAll(analysis, stories, out var skipped, options);   // 5
         var seismic = SecondOrderAnalysis.Seismic(analysis, seismicStage, system);     // 6
-        var spectrum = PlanarSpectrum.Run(seismicStage.Model, seismicStage.Modal, seismicStage.Forces);   // 7 (on stage 2's modes)
+        var spectrum = PlanarSpectrum.Run(seismicStage.Model, seismicStage.Modal, seismicStage.Forces, system, seismic);   // 7 (on stage 2's modes and K's factor)
         return new ModelResult
         {
             Analysis = analysis, Building = building, LineSplit = split, LineSplitSkipped = skipped, Seismic = seismic, Spectrum = spectrum,

@@ -20,7 +20,11 @@ public sealed record PlanElfDirection(string Direction, int Mode, double ModalPe
 public sealed record PlanAmplification(string Direction, int Level, double MaxDisplacement, double AverageDisplacement, double Ax, bool Applied);
 
 /// <summary>One mode's contribution along an excitation direction: S_a (g) at its period, Γ, its base shears (reduced by R/I_e, N).</summary>
-public sealed record PlanSpectrumMode(string Direction, int Mode, double Period, double Sa, double Gamma, double BaseShearX, double BaseShearY, double BaseTorque);
+public sealed record PlanSpectrumMode(string Direction, int Mode, double Period, double Sa, double Gamma, double BaseShearX, double BaseShearY, double BaseTorque)
+{
+    /// <summary>The analysis the mode belongs to: "" with static accidental torsion, "+e" or "-e" with the floor masses shifted.</summary>
+    public string Variant { get; init; } = "";
+}
 
 /// <summary>
 /// One story for an excitation direction: the ELF story shear (the generated case at the centres of mass), the combined
@@ -30,17 +34,67 @@ public sealed record PlanSpectrumMode(string Direction, int Mode, double Period,
 /// combined displacements at the same corner, shown only to make plain that it is not the drift.
 /// </summary>
 public sealed record PlanSpectrumStory(string Direction, int Story, double ElfShear, double ModalShear, double ScaledShear, int Corner, PlanPoint At,
-    double ModalDrift, double TorsionDrift, double Drift, double DesignDrift, double Height, double Ratio, double DriftFromCombinedDisplacements);
+    double ModalDrift, double TorsionDrift, double Drift, double DesignDrift, double Height, double Ratio, double DriftFromCombinedDisplacements)
+{
+    /// <summary>P_x: the floors' seismic weights at and above the story (N).</summary>
+    public double Px { get; init; } = double.NaN;
+    /// <summary>θ = P_x·Δ·I_e/(V_x·h_sx·C_d), Δ = <see cref="DesignDrift"/>, V_x = <see cref="ScaledShear"/> (ASCE 7-16 eq. 12.8-16, from memory).</summary>
+    public double Theta { get; init; } = double.NaN;
+    /// <summary>θ of the equivalent lateral forces: the worst corner drift of the direction's ELF cases (± eccentricity) and the ELF story shear.</summary>
+    public double ThetaElf { get; init; } = double.NaN;
+    /// <summary>θ_max = 0.5/(β·C_d) ≤ 0.25 with β = 1 (no gravity analysis in plan: β = 1 is the conservative value).</summary>
+    public double ThetaMax { get; init; } = double.NaN;
+    /// <summary>With shifted masses, the shifted analysis ("+e" or "-e") whose drift governs this row; "" otherwise.</summary>
+    public string Variant { get; init; } = "";
+}
 
 /// <summary>A line's story shear for an excitation direction: combined modal (reduced), scaled, the static accidental torsion's share (its magnitude), design = scaled + torsion.</summary>
-public sealed record PlanSpectrumLine(string Direction, int Story, string Line, double Modal, double Scaled, double Torsion, double Design, double Elf);
+public sealed record PlanSpectrumLine(string Direction, int Story, string Line, double Modal, double Scaled, double Torsion, double Design, double Elf)
+{
+    /// <summary>Overturning moment of the line at the story's base, combined mode by mode (N·m, no sign), before scaling.</summary>
+    public double Overturning { get; init; } = double.NaN;
+    /// <summary>The same after the force scaling.</summary>
+    public double ScaledOverturning { get; init; } = double.NaN;
+    /// <summary>The static accidental torsion's overturning moment (magnitude; 0 with shifted masses).</summary>
+    public double TorsionOverturning { get; init; } = double.NaN;
+    /// <summary>Scaled + torsion.</summary>
+    public double DesignOverturning => ScaledOverturning + TorsionOverturning;
+}
+
+/// <summary>
+/// A line's planar model recovered under each mode's level forces (the line's share of the floor motion of the mode)
+/// and, with static accidental torsion, under the torsion's: member end forces and reactions combined mode by mode
+/// (no sign), scaled, and the torsion's magnitudes; design = scaled + torsion, component by component.
+/// </summary>
+public sealed record PlanSpectrumLineForces(string Direction, string Line, IReadOnlyList<MemberEndForces> Modal, IReadOnlyList<MemberEndForces> Scaled,
+    IReadOnlyList<MemberEndForces> Torsion, IReadOnlyList<Reaction> ModalReactions, IReadOnlyList<Reaction> ScaledReactions, IReadOnlyList<Reaction> TorsionReactions)
+{
+    public IReadOnlyList<MemberEndForces> Design => Scaled.Zip(Torsion, (a, b) => new MemberEndForces(a.Member, a.N1 + b.N1, a.V1 + b.V1, a.M1 + b.M1, a.N2 + b.N2, a.V2 + b.V2, a.M2 + b.M2)).ToList();
+    public IReadOnlyList<Reaction> DesignReactions => ScaledReactions.Zip(TorsionReactions, (a, b) => new Reaction(a.Node, a.Fx + b.Fx, a.Fy + b.Fy, a.Mz + b.Mz)).ToList();
+}
+
+/// <summary>One of the analyses a direction's results come from: with shifted masses "+e" and "-e" (the floors' centres of
+/// mass moved by <see cref="Shift"/>, m, across the direction), else one "" at the centres of mass.</summary>
+/// <param name="FloorRotation">Rz per floor combined mode by mode (rad, no sign), before scaling.</param>
+/// <param name="DominantModeRotation">Rz per floor of the mode with the largest effective mass along the direction (signed: Γ·φ·S_a·g/(ω²·R/I_e)).</param>
+public sealed record PlanSpectrumVariant(string Label, double Shift, ModalScaling Scaling, int ModesUsed, IReadOnlyList<double> FloorRotation, IReadOnlyList<double> DominantModeRotation);
 
 /// <summary>The response spectrum analysis of one excitation direction.</summary>
 public sealed record PlanSpectrumDirection(string Direction, int ModesUsed, double CumulativeShare, ModalScaling Scaling,
-    IReadOnlyList<PlanSpectrumMode> Modes, IReadOnlyList<PlanSpectrumStory> Stories, IReadOnlyList<PlanSpectrumLine> Lines, double EquilibriumError);
+    IReadOnlyList<PlanSpectrumMode> Modes, IReadOnlyList<PlanSpectrumStory> Stories, IReadOnlyList<PlanSpectrumLine> Lines, double EquilibriumError)
+{
+    /// <summary>Each line's member end forces and reactions (one entry per line).</summary>
+    public IReadOnlyList<PlanSpectrumLineForces> LineForces { get; init; } = [];
+    /// <summary>The analyses enveloped (one with static accidental torsion).</summary>
+    public IReadOnlyList<PlanSpectrumVariant> Variants { get; init; } = [];
+}
 
 /// <summary>Modal response spectrum analysis of a building in plan (docs/plan.md, docs/seismic.md).</summary>
-public sealed record PlanSpectrumResult(DesignSpectrum Spectrum, ResponseSpectrumSettings Settings, double R, double Ie, IReadOnlyList<PlanSpectrumDirection> Directions);
+public sealed record PlanSpectrumResult(DesignSpectrum Spectrum, ResponseSpectrumSettings Settings, double R, double Ie, IReadOnlyList<PlanSpectrumDirection> Directions)
+{
+    /// <summary>How the accidental torsion was applied, in words (the tool says which it used).</summary>
+    public string TorsionMethod { get; init; } = "";
+}
 
 /// <summary>Everything the seismic block of a building adds.</summary>
 public sealed record PlanSeismicResult(PlanModal Modal, IReadOnlyList<PlanElfDirection> Elf, IReadOnlyList<PlanAmplification> Amplification, PlanSpectrumResult? Spectrum);
@@ -52,7 +106,7 @@ public sealed record PlanSeismicResult(PlanModal Modal, IReadOnlyList<PlanElfDir
 /// (§12.8.4.3) where a torsional irregularity is found, and the modal response spectrum analysis (§12.9.1).
 /// Every number from memory of ASCE 7-16 (confirm the edition); the governing code decides.
 /// </summary>
-public static class PlanSeismic
+public static partial class PlanSeismic
 {
     /// <summary>Solves the building with its seismic cases (without a seismic block: <see cref="PlanAnalysis.Run"/>, and null).</summary>
     /// <exception cref="UnstableModelException">The lines cannot hold a floor.</exception>
@@ -120,7 +174,7 @@ public static class PlanSeismic
 
         PlanSpectrumResult? spectrum = null;
         if (s.ResponseSpectrum is { } rs)
-            spectrum = Spectrum(withElf, s, rs, modal, condensed, elf, result, ax);
+            spectrum = Spectrum(withElf, s, rs, modal, condensed, elf, result, ax, options);
         return (result, new PlanSeismicResult(modal, elf, amplification, spectrum));
     }
 
@@ -152,114 +206,6 @@ public static class PlanSeismic
         string id = $"{s.CaseId}-{dir}";
         return new PlanElfDirection(dir, governing.Number, t1, hft, ta, cu, t, note, cs, csNote, w, v, k, cvx.Skip(1).ToArray(), f,
             plan.EccentricityRatio > 0 ? [id, id + "+ecc", id + "-ecc"] : [id]);
-    }
-
-    private static PlanSpectrumResult Spectrum(BuildingPlan plan, PlanSeismicData s, ResponseSpectrumSettings rs, PlanModal modal,
-        IReadOnlyList<PlanAnalysis.Condensation> condensed, IReadOnlyList<PlanElfDirection> elf, PlanResult result, Dictionary<string, double[]> ax)
-    {
-        int n = plan.FloorCount;
-        var spec = rs.Table.Count > 0 ? new DesignSpectrum(rs.Table) : new DesignSpectrum(s.Spectrum.Sds, s.Spectrum.Sd1, s.Spectrum.TL);
-        double rie = s.Spectrum.R / s.Spectrum.Ie;
-        int count = Math.Max(modal.ModesFor(rs.MassShare, 0, 1), Math.Min(rs.Modes, modal.Modes.Count));
-        var modes = modal.Modes.Take(count).ToList();
-        var rho = ModalCombination.Correlation(modes.Select(m => m.Omega).ToList(), rs.Damping, rs.Rule);
-        var kchol = DenseMatrix.OfArray(modal.Stiffness).Cholesky();
-        var directions = new List<PlanSpectrumDirection>();
-        foreach (var e in elf)
-        {
-            int d = e.Direction == "x" ? 0 : 1;
-            // Per mode: reduced floor forces f = M·φ·Γ·S_a·g/(R/I_e) and displacements u = φ·Γ·S_a·g/(ω²·R/I_e).
-            var perMode = new List<(double[] F, double[] U)>();
-            var modeRows = new List<PlanSpectrumMode>();
-            double eqErr = 0;
-            foreach (var m in modes)
-            {
-                double sa = spec.Sa(m.Period), g = m.Participation[d];
-                double scale = g * sa * SeismicPresets.Gravity / rie;
-                var u = m.Shape.Select(x => x * scale / (m.Omega * m.Omega)).ToArray();
-                var f = SmallMatrix.Times(modal.Mass, m.Shape.Select(x => x * scale).ToArray());
-                perMode.Add((f, u));
-                double fx = 0, fy = 0, mz = 0;
-                for (int l = 0; l < n; l++) { fx += f[3 * l]; fy += f[3 * l + 1]; mz += f[3 * l + 2]; }
-                modeRows.Add(new PlanSpectrumMode(e.Direction, m.Number, m.Period, sa, g, fx, fy, mz));
-                eqErr = Math.Max(eqErr, Equilibrium(plan, condensed, u, fx, fy, mz));
-            }
-
-            // Static accidental torsion (§12.9.1.5): floor torques ±F_x·e·A_x from the ELF forces of this direction.
-            var torque = new double[3 * n];
-            for (int l = 0; l < n; l++)
-            {
-                var lv = plan.Levels[l + 1];
-                double dim = d == 0 ? lv.Outline.Max(q => q.Y) - lv.Outline.Min(q => q.Y) : lv.Outline.Max(q => q.X) - lv.Outline.Min(q => q.X);
-                torque[3 * l + 2] = e.LevelForces[l] * plan.EccentricityRatio * dim * (ax.TryGetValue(e.Direction, out var a) ? a[l] : 1);
-            }
-            var ut = kchol.Solve(DenseVector.OfArray(torque)).ToArray();
-
-            // Story shears along the direction, per mode; base shear V_t.
-            var storyModal = new double[n];
-            for (int st = 1; st <= n; st++)
-                storyModal[st - 1] = ModalCombination.Combine(perMode.Select(p => Above(p.F, st, d)).ToList(), rho);
-            double vt = storyModal[0];
-            var scaling = ModalScaling.Of(vt, e.BaseShear, e.Cs, e.CsNote, e.Weight);
-            var elfCase = result.Case(e.Cases[0]);
-
-            var stories = new List<PlanSpectrumStory>();
-            for (int st = 1; st <= n; st++)
-            {
-                var lv = plan.Levels[st];
-                double h = lv.Elevation - plan.Levels[st - 1].Elevation;
-                PlanSpectrumStory? worst = null;
-                for (int vi = 0; vi < lv.Outline.Count; vi++)
-                {
-                    var at = lv.Outline[vi];
-                    double Along(double[] u, int level) => level < 1 ? 0 : d == 0 ? u[3 * (level - 1)] - u[3 * (level - 1) + 2] * at.Y : u[3 * (level - 1) + 1] + u[3 * (level - 1) + 2] * at.X;
-                    double modalDrift = ModalCombination.Combine(perMode.Select(p => Along(p.U, st) - Along(p.U, st - 1)).ToList(), rho);
-                    double fromDisp = ModalCombination.Combine(perMode.Select(p => Along(p.U, st)).ToList(), rho)
-                        - ModalCombination.Combine(perMode.Select(p => Along(p.U, st - 1)).ToList(), rho);
-                    double tors = Math.Abs(Along(ut, st) - Along(ut, st - 1));
-                    double drift = scaling.DriftFactor * modalDrift + tors;
-                    double design = rs.Cd * drift / s.Spectrum.Ie;
-                    var row = new PlanSpectrumStory(e.Direction, st, Math.Abs(d == 0 ? elfCase.Stories[st - 1].Vx : elfCase.Stories[st - 1].Vy), storyModal[st - 1],
-                        scaling.ForceFactor * storyModal[st - 1], vi, at, modalDrift, tors, drift, design, h, design / h, fromDisp);
-                    if (worst is null || row.Drift > worst.Drift) worst = row;
-                }
-                stories.Add(worst!);
-            }
-
-            var lines = new List<PlanSpectrumLine>();
-            for (int i = 0; i < plan.Lines.Count; i++)
-            {
-                var line = plan.Lines[i];
-                var kh = condensed[i].K;
-                var perModeForces = perMode.Select(p => SmallMatrix.Times(kh, PlanAnalysis.Project(line, p.U, n))).ToList();
-                var torsForces = SmallMatrix.Times(kh, PlanAnalysis.Project(line, ut, n));
-                for (int st = 1; st <= n; st++)
-                {
-                    double modalShear = ModalCombination.Combine(perModeForces.Select(p => Sum(p, st)).ToList(), rho);
-                    double tors = Math.Abs(Sum(torsForces, st));
-                    double scaled = scaling.ForceFactor * modalShear;
-                    double elfShear = Math.Abs(elfCase.LineStories.First(x => x.Story == st && x.Line == line.Id).Shear);
-                    lines.Add(new PlanSpectrumLine(e.Direction, st, line.Id, modalShear, scaled, tors, scaled + tors, elfShear));
-                }
-            }
-            directions.Add(new PlanSpectrumDirection(e.Direction, count, modes[^1].Cumulative[d], scaling, modeRows, stories, lines, eqErr));
-        }
-        return new PlanSpectrumResult(spec, rs, s.Spectrum.R, s.Spectrum.Ie, directions);
-    }
-
-    /// <summary>Σ of the floor forces above the cut of a story along direction <paramref name="d"/> (0 X, 1 Y).</summary>
-    private static double Above(double[] f, int story, int d)
-    {
-        double v = 0;
-        for (int l = story - 1; 3 * l < f.Length; l++) v += f[3 * l + d];
-        return v;
-    }
-
-    private static double Sum(double[] p, int story)
-    {
-        double v = 0;
-        for (int l = story - 1; l < p.Length; l++) v += p[l];
-        return v;
     }
 
     /// <summary>Relative out-of-balance of the lines' forces against the mode's floor forces (ΣFx, ΣFy, ΣMz about the origin).</summary>

@@ -90,6 +90,15 @@ public static class ModalCombination
         return rho;
     }
 
+    /// <summary>Each component of a vector response combined mode by mode (one array per mode, all of one length; ≥ 0).</summary>
+    public static double[] CombineEach(IReadOnlyList<double[]> perMode, double[,] rho)
+    {
+        if (perMode.Count == 0) return [];
+        var v = new double[perMode[0].Length];
+        for (int c = 0; c < v.Length; c++) v[c] = Combine(perMode.Select(p => p[c]).ToList(), rho);
+        return v;
+    }
+
     /// <summary>The combined peak of one response given its value in each mode (≥ 0).</summary>
     public static double Combine(IReadOnlyList<double> perMode, double[,] rho)
     {

@@ -56,7 +56,7 @@ public static partial class ModelReader
         }
 
         /// <summary>The "responseSpectrum" block; <paramref name="availableModes"/> is how many modes the model has.</summary>
-        private ResponseSpectrumSettings? ReadResponseSpectrum(JsonFields sf, int availableModes)
+        private ResponseSpectrumSettings? ReadResponseSpectrum(JsonFields sf, int availableModes, bool inPlan = false)
         {
             if (sf.OptionalObject("responseSpectrum", "write \"responseSpectrum\": {\"Cd\": ..., \"combination\": \"CQC\"} (docs/seismic.md)") is not { } o) return null;
             var f = new JsonFields(o, sink);
@@ -98,8 +98,17 @@ public static partial class ModelReader
                     }
                 }
             }
+            var torsion = AccidentalTorsion.Static;
+            if (f.Token("accidentalTorsion") is { } at)
+            {
+                const string tfix = "give \"accidentalTorsion\": \"static\" (torques from the equivalent lateral forces, the default) or \"shifted-masses\" (the floor masses moved ±e, the modes solved again, enveloped)";
+                var text = f.OptionalString("accidentalTorsion", tfix);
+                if (!inPlan) sink.Add(at, "'accidentalTorsion' applies to a building in plan; a planar model has no accidental torsion", "remove the key, or give it under \"plan\": {\"seismic\": {\"responseSpectrum\": ...}}");
+                else if (text == "shifted-masses") torsion = AccidentalTorsion.ShiftedMasses;
+                else if (text is not null && text != "static") sink.Add(at, $"unknown accidental torsion method \"{text}\"", tfix);
+            }
             f.RejectUnknownKeys();
-            return new ResponseSpectrumSettings(rule, zeta, table, cd, modes);
+            return new ResponseSpectrumSettings(rule, zeta, table, cd, modes) { Torsion = torsion };
         }
 
         /// <summary>The "seismic" block of a building in plan.</summary>
@@ -116,7 +125,7 @@ public static partial class ModelReader
             var spectrum = so is null ? null : ReadSpectralValues(so);
             var (period, given) = ReadPeriodChoice(sf);
             int floors = levels is null ? 0 : levels.Count - 1;
-            var rs = ReadResponseSpectrum(sf, 3 * floors);
+            var rs = ReadResponseSpectrum(sf, 3 * floors, inPlan: true);
             sf.RejectUnknownKeys();
             if (levels is not null)
                 foreach (var l in levels.Skip(1).Where(l => !double.IsFinite(l.Weight)))

@@ -18,7 +18,20 @@ public enum ModalRule
 /// <param name="Cd">C_d for the design displacements and drifts, δ = C_d·δ_e/I_e.</param>
 /// <param name="Modes">At least this many modes (0: just enough for <see cref="MassShare"/>).</param>
 /// <param name="MassShare">Cumulative effective mass share to reach in each excited direction (0.9, §12.9.1.1).</param>
-public sealed record ResponseSpectrumSettings(ModalRule Rule, double Damping, IReadOnlyList<(double T, double Sa)> Table, double Cd, int Modes, double MassShare = 0.9);
+public sealed record ResponseSpectrumSettings(ModalRule Rule, double Damping, IReadOnlyList<(double T, double Sa)> Table, double Cd, int Modes, double MassShare = 0.9)
+{
+    /// <summary>How a building in plan takes the accidental torsion (key "accidentalTorsion"; planar models have none).</summary>
+    public AccidentalTorsion Torsion { get; init; } = AccidentalTorsion.Static;
+}
+
+/// <summary>Accidental torsion in the modal analysis of a building in plan (ASCE 7-16 §12.9.1.5, from memory).</summary>
+public enum AccidentalTorsion
+{
+    /// <summary>"static" (the default): floor torques ±F_x·e·A_x of the equivalent lateral forces, solved statically and added to the modal results.</summary>
+    Static,
+    /// <summary>"shifted-masses": every floor's centre of mass moved by +e and by −e across the motion, the modes solved again for each, and the two results enveloped.</summary>
+    ShiftedMasses,
+}
 
 /// <summary>
 /// The "seismic" block of a building in plan (docs/plan.md): the equivalent lateral forces along X and Y from the

@@ -30,6 +30,8 @@ public static class PlanSeismicFiles
             files.Add(("plan-spectrum-modes.csv", SpectrumModes(r, sp)));
             files.Add(("plan-spectrum-stories.csv", SpectrumStories(r, sp)));
             files.Add(("plan-spectrum-lines.csv", SpectrumLines(r, sp)));
+            files.Add(("plan-spectrum-line-members.csv", SpectrumLineMembers(r, sp)));
+            files.Add(("plan-spectrum-line-reactions.csv", SpectrumLineReactions(r, sp)));
         }
         files.Add(("plan-seismic.json", Json(r, s)));
         return files;
@@ -92,22 +94,73 @@ public static class PlanSeismicFiles
         var u = r.Plan.Units;
         string fu = u.ForceSymbol, lu = u.LengthSymbol;
         double L(double v) => u.FromSI(v, Quantity.Length);
-        var sb = new StringBuilder($"direction,story,ELF shear [{fu}],modal shear [{fu}],scaled modal shear [{fu}],corner,x [{lu}],y [{lu}],modal drift [{lu}],accidental torsion drift [{lu}],drift [{lu}],design drift Cd*drift/Ie [{lu}],height [{lu}],design drift ratio,difference of combined displacements (not the drift) [{lu}]\n");
+        var sb = new StringBuilder($"direction,story,ELF shear [{fu}],modal shear [{fu}],scaled modal shear [{fu}],corner,x [{lu}],y [{lu}],modal drift [{lu}],accidental torsion drift [{lu}],drift [{lu}],design drift Cd*drift/Ie [{lu}],height [{lu}],design drift ratio,difference of combined displacements (not the drift) [{lu}],Px [{fu}],theta (modal),theta (ELF),theta max,governing shifted analysis\n");
         foreach (var d in sp.Directions)
             foreach (var st in d.Stories)
-                sb.Append($"{d.Direction},{st.Story},{F(u.FromSI(st.ElfShear, Quantity.Force))},{F(u.FromSI(st.ModalShear, Quantity.Force))},{F(u.FromSI(st.ScaledShear, Quantity.Force))},{st.Corner + 1},{F(L(st.At.X))},{F(L(st.At.Y))},{F(L(st.ModalDrift))},{F(L(st.TorsionDrift))},{F(L(st.Drift))},{F(L(st.DesignDrift))},{F(L(st.Height))},{F(st.Ratio)},{F(L(st.DriftFromCombinedDisplacements))}\n");
+                sb.Append($"{d.Direction},{st.Story},{F(u.FromSI(st.ElfShear, Quantity.Force))},{F(u.FromSI(st.ModalShear, Quantity.Force))},{F(u.FromSI(st.ScaledShear, Quantity.Force))},{st.Corner + 1},{F(L(st.At.X))},{F(L(st.At.Y))},{F(L(st.ModalDrift))},{F(L(st.TorsionDrift))},{F(L(st.Drift))},{F(L(st.DesignDrift))},{F(L(st.Height))},{F(st.Ratio)},{F(L(st.DriftFromCombinedDisplacements))},{F(u.FromSI(st.Px, Quantity.Force))},{F(st.Theta)},{F(st.ThetaElf)},{F(st.ThetaMax)},{st.Variant}\n");
         return sb.ToString();
     }
 
     private static string SpectrumLines(PlanResult r, PlanSpectrumResult sp)
     {
         var u = r.Plan.Units;
-        string fu = u.ForceSymbol;
+        string fu = u.ForceSymbol, mu = u.Label(Quantity.Moment);
         double Fo(double v) => u.FromSI(v, Quantity.Force);
-        var sb = new StringBuilder($"direction,story,line,ELF shear [{fu}],modal shear [{fu}],scaled modal shear [{fu}],accidental torsion [{fu}],design shear [{fu}]\n");
+        double Mo(double v) => u.FromSI(v, Quantity.Moment);
+        var sb = new StringBuilder($"direction,story,line,ELF shear [{fu}],modal shear [{fu}],scaled modal shear [{fu}],accidental torsion [{fu}],design shear [{fu}],overturning (no sign) [{mu}],scaled overturning [{mu}],accidental torsion overturning [{mu}],design overturning [{mu}]\n");
         foreach (var d in sp.Directions)
             foreach (var l in d.Lines)
-                sb.Append($"{d.Direction},{l.Story},{Csv(l.Line)},{F(Fo(l.Elf))},{F(Fo(l.Modal))},{F(Fo(l.Scaled))},{F(Fo(l.Torsion))},{F(Fo(l.Design))}\n");
+                sb.Append($"{d.Direction},{l.Story},{Csv(l.Line)},{F(Fo(l.Elf))},{F(Fo(l.Modal))},{F(Fo(l.Scaled))},{F(Fo(l.Torsion))},{F(Fo(l.Design))},{F(Mo(l.Overturning))},{F(Mo(l.ScaledOverturning))},{F(Mo(l.TorsionOverturning))},{F(Mo(l.DesignOverturning))}\n");
+        return sb.ToString();
+    }
+
+    /// <summary>Each line's member end forces combined mode by mode (no sign), scaled, the static torsion's and the design sum; one row per member end.</summary>
+    private static string SpectrumLineMembers(PlanResult r, PlanSpectrumResult sp)
+    {
+        var u = r.Plan.Units;
+        string fu = u.ForceSymbol, mu = u.Label(Quantity.Moment);
+        var sb = new StringBuilder("direction,line,member,end");
+        foreach (var k in new[] { "modal", "scaled", "accidental torsion", "design" }) sb.Append($",N {k} [{fu}],V {k} [{fu}],M {k} [{mu}]");
+        sb.Append('\n');
+        foreach (var d in sp.Directions)
+            foreach (var lf in d.LineForces)
+            {
+                var model = r.Plan.Lines.First(l => l.Id == lf.Line).Model;
+                var design = lf.Design;
+                for (int m = 0; m < lf.Modal.Count; m++)
+                    foreach (var start in new[] { true, false })
+                    {
+                        sb.Append($"{d.Direction},{Csv(lf.Line)},{Csv(model.Members[lf.Modal[m].Member].Id)},{(start ? "start" : "end")}");
+                        foreach (var e in new[] { lf.Modal[m], lf.Scaled[m], lf.Torsion[m], design[m] })
+                            sb.Append(start ? $",{F(u.FromSI(e.N1, Quantity.Force))},{F(u.FromSI(e.V1, Quantity.Force))},{F(u.FromSI(e.M1, Quantity.Moment))}"
+                                            : $",{F(u.FromSI(e.N2, Quantity.Force))},{F(u.FromSI(e.V2, Quantity.Force))},{F(u.FromSI(e.M2, Quantity.Moment))}");
+                        sb.Append('\n');
+                    }
+            }
+        return sb.ToString();
+    }
+
+    /// <summary>Each line's support reactions combined mode by mode (no sign), scaled, the static torsion's and the design sum.</summary>
+    private static string SpectrumLineReactions(PlanResult r, PlanSpectrumResult sp)
+    {
+        var u = r.Plan.Units;
+        string fu = u.ForceSymbol, mu = u.Label(Quantity.Moment);
+        var sb = new StringBuilder("direction,line,node");
+        foreach (var k in new[] { "modal", "scaled", "accidental torsion", "design" }) sb.Append($",Rx {k} [{fu}],Ry {k} [{fu}],Mz {k} [{mu}]");
+        sb.Append('\n');
+        foreach (var d in sp.Directions)
+            foreach (var lf in d.LineForces)
+            {
+                var model = r.Plan.Lines.First(l => l.Id == lf.Line).Model;
+                var design = lf.DesignReactions;
+                for (int j = 0; j < lf.ModalReactions.Count; j++)
+                {
+                    sb.Append($"{d.Direction},{Csv(lf.Line)},{Csv(model.Nodes[lf.ModalReactions[j].Node].Id)}");
+                    foreach (var e in new[] { lf.ModalReactions[j], lf.ScaledReactions[j], lf.TorsionReactions[j], design[j] })
+                        sb.Append($",{F(u.FromSI(e.Fx, Quantity.Force))},{F(u.FromSI(e.Fy, Quantity.Force))},{F(u.FromSI(e.Mz, Quantity.Moment))}");
+                    sb.Append('\n');
+                }
+            }
         return sb.ToString();
     }
 
@@ -141,17 +194,24 @@ public static class PlanSeismicFiles
             {
                 ["spectrum"] = sp.Spectrum.Describe(), ["combination"] = sp.Settings.Rule.ToString().ToUpperInvariant(), ["damping"] = sp.Settings.Damping,
                 ["R"] = sp.R, ["Ie"] = sp.Ie, ["Cd"] = sp.Settings.Cd,
+                ["accidentalTorsion"] = sp.TorsionMethod, ["combinedValues"] = SpectrumFiles.CombinedNote,
                 ["directions"] = new JArray(sp.Directions.Select(d => new JObject
                 {
                     ["direction"] = d.Direction, ["modes"] = d.ModesUsed, ["massShare"] = d.CumulativeShare,
                     ["Vt"] = Fo(d.Scaling.BaseShearModal), ["V"] = Fo(d.Scaling.BaseShearElf), ["forceFactor"] = d.Scaling.ForceFactor, ["driftFactor"] = d.Scaling.DriftFactor,
                     ["scaling"] = d.Scaling.Why, ["modalEquilibriumError"] = d.EquilibriumError,
+                    ["analyses"] = new JArray(d.Variants.Select(v => new JObject
+                    {
+                        ["label"] = v.Label, ["massShift"] = L(v.Shift), ["modes"] = v.ModesUsed, ["Vt"] = Fo(v.Scaling.BaseShearModal), ["forceFactor"] = v.Scaling.ForceFactor,
+                        ["driftFactor"] = v.Scaling.DriftFactor, ["floorRotation"] = new JArray(v.FloorRotation),
+                    })),
                     ["stories"] = new JArray(d.Stories.Select(st => new JObject
                     {
                         ["story"] = st.Story, ["elfShear"] = Fo(st.ElfShear), ["modalShear"] = Fo(st.ModalShear), ["scaledShear"] = Fo(st.ScaledShear),
                         ["corner"] = st.Corner + 1, ["drift"] = L(st.Drift), ["designDrift"] = L(st.DesignDrift), ["ratio"] = st.Ratio,
                         ["allowedRatio"] = r.Plan.DriftLimit is { } lim ? lim.AllowedRatio : null,
                         ["within"] = r.Plan.DriftLimit is { } lim2 ? st.Ratio <= lim2.AllowedRatio : null,
+                        ["Px"] = Fo(st.Px), ["theta"] = st.Theta, ["thetaElf"] = st.ThetaElf, ["thetaMax"] = st.ThetaMax,
                     })),
                 })),
             };
