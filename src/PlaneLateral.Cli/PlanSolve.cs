@@ -21,13 +21,9 @@ internal static class PlanSolve
 
     public static int Run(string path, string? outDir, TextWriter stdout, TextWriter stderr, Detail detail = Detail.Normal, string? note = null)
     {
-        bool solved = CommandSupport.TrySolve(() =>
-        {
-            var (result, seismic) = PlanSeismic.Run(ModelReader.ReadPlanFile(path));
-            return (result, PlanHandSplit.Run(result), seismic);
-        }, stderr, out var solution, out int exit);
+        bool solved = CommandSupport.TrySolve(() => PlanRun.Run(ModelReader.ReadPlanFile(path)), stderr, out var run, out int exit);   // every result, once
         if (!solved) return exit;
-        var (r, hand, seismic) = solution;
+        var (r, seismic, hand) = run;
         string folder = outDir ?? CommandSupport.DefaultFolder(path);
         var texts = seismic is null ? PlanFiles.Render(r) : [.. PlanFiles.Render(r), .. PlanSeismicFiles.Render(r, seismic)];
         // One plan figure per story under the case of the largest corner drift ratio, beside the CSV files.
@@ -45,6 +41,33 @@ internal static class PlanSolve
         }
         else text.Append($"\nCaution: {ResultFiles.Caution}\n");
         text.Append($"\nResults written to {folder}: {written.Count} files (plan-*.csv, plan.json, line-*-*.csv{(figures.Count > 0 ? ", plan-story*.png" : "")})\n");
+        stdout.Write(ConsoleText.Fit(text.ToString()));
+        return ExitCodes.Success;
+    }
+
+    /// <summary>
+    /// The report of a building (docs/reports.md): the same run as <see cref="Run"/> (<see cref="PlanRun"/>), rendered by
+    /// <see cref="Reports.BuildingReport"/> to report.html, report.md and the figures; the console prints the summary of
+    /// <see cref="Run"/> and where the report went.
+    /// </summary>
+    public static int Report(string path, string? outDir, TextWriter stdout, TextWriter stderr, Detail detail)
+    {
+        bool solved = CommandSupport.TrySolve(() =>
+        {
+            var run = PlanRun.Run(ModelReader.ReadPlanFile(path));   // every result, computed once; the report only reads it
+            return (run, Reports.BuildingReport.Build(run, $"PlaneLateral {ResultFiles.Version}"));
+        }, stderr, out var built, out int exit);
+        if (!solved) return exit;
+        var (run, doc) = built;
+        string folder = outDir ?? CommandSupport.DefaultFolder(path, "report");
+        if (!CommandSupport.TryWrite(() => OutputSet.WriteAll(folder, Reports.BuildingReport.Render(doc)), "report", stderr, out var written, out exit))
+            return exit;
+        stderr.Write(ModelWarning.Lines(run.Result.Plan.Warnings));
+        var text = new System.Text.StringBuilder($"PlaneLateral {ResultFiles.Version}: report of a building in plan\n\n");
+        text.Append(Summary.Plan(run.Result, run.Hand, path));
+        if (detail != Detail.Summary) text.Append($"\n{doc.Title}\n{doc.Tables.Count()} tables, {doc.Figures.Count()} figures.\n");
+        text.Append($"\nCaution: {Reports.BuildingReport.Caution}\n");
+        text.Append($"\nReport written to {folder}: {string.Join(", ", written.Select(Path.GetFileName))}\n");
         stdout.Write(ConsoleText.Fit(text.ToString()));
         return ExitCodes.Success;
     }

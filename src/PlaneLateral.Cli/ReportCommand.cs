@@ -35,6 +35,7 @@ internal static class ReportCommand
             stderr.Write(error + "\nNothing was written.\n");
             return ExitCodes.Usage;
         }
+        if (ModelReader.IsPlanFile(modelPath)) return PlanSolve.Report(modelPath, outDir, stdout, stderr, detail);   // a building in plan (docs/reports.md)
         IReadOnlyList<ModelWarning> warnings = [];
         bool solved = CommandSupport.TrySolve(() =>
         {
