@@ -14,6 +14,17 @@ public static class CliApp
 
     public static int Run(string[] args, TextWriter stdout, TextWriter stderr)
     {
+        // Options are read and every text and file written in the invariant culture whatever the host's culture (the tool
+        // is built with invariant globalization; a host that embeds Run may not be): "0.3" is never read as 3 and a file's
+        // bytes never carry a decimal comma (Output/CsvConventionTests runs every command under a decimal-comma culture).
+        var culture = System.Globalization.CultureInfo.CurrentCulture;
+        System.Globalization.CultureInfo.CurrentCulture = System.Globalization.CultureInfo.InvariantCulture;
+        try { return RunInvariant(args, stdout, stderr); }
+        finally { System.Globalization.CultureInfo.CurrentCulture = culture; }
+    }
+
+    private static int RunInvariant(string[] args, TextWriter stdout, TextWriter stderr)
+    {
         using var inputs = CommandSupport.ProtectInputs(args);   // no output may replace a file named on the command line
         var root = BuildCommands(stdout, stderr);
         var parse = root.Parse(args);
