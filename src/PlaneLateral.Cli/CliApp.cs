@@ -14,9 +14,33 @@ public static class CliApp
 
     public static int Run(string[] args, TextWriter stdout, TextWriter stderr)
     {
+        // Options are read and every text and file written in the invariant culture whatever the host's culture (the tool
+        // is built with invariant globalization; a host that embeds Run may not be): "0.3" is never read as 3 and a file's
+        // bytes never carry a decimal comma (Output/CsvConventionTests runs every command under a decimal-comma culture).
+        var culture = System.Globalization.CultureInfo.CurrentCulture;
+        System.Globalization.CultureInfo.CurrentCulture = System.Globalization.CultureInfo.InvariantCulture;
+        try { return RunInvariant(args, stdout, stderr); }
+        finally { System.Globalization.CultureInfo.CurrentCulture = culture; }
+    }
+
+    private static int RunInvariant(string[] args, TextWriter stdout, TextWriter stderr)
+    {
         using var inputs = CommandSupport.ProtectInputs(args);   // no output may replace a file named on the command line
         var root = BuildCommands(stdout, stderr);
+        var widthOption = new Option<string?>("--width")
+        {
+            Description = $"Console width in columns the text and tables are fitted to ({TextTable.MinWidth} to {TextTable.MaxWidth}; default {TextTable.DefaultWidth}, whatever the terminal, so the same run prints the same text). The files are not affected.",
+            Recursive = true,
+        };
+        root.Options.Add(widthOption);
         var parse = root.Parse(args);
+        int? width = null;
+        if (parse.Errors.Count == 0 && !TextTable.TryWidth(parse.GetValue(widthOption), out width, out string widthError))
+        {
+            stderr.Write(widthError + "\nNothing was written.\n");
+            return ExitCodes.Usage;
+        }
+        TextTable.UseWidth(width);   // every table and line of prose of this run is fitted to it
         try
         {
             return parse.Invoke(new InvocationConfiguration { Output = stdout, Error = stderr, EnableDefaultExceptionHandler = false });

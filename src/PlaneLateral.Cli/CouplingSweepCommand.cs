@@ -70,7 +70,7 @@ internal static class CouplingSweepCommand
         }
         var files = new List<(string Name, byte[] Bytes)>();
         var figures = new List<(string Name, byte[] Bytes)>();
-        var text = new System.Text.StringBuilder();
+        var sweeps = new List<(CoupledWallLoad Load, IReadOnlyList<CoupledWallStudy.SweepPoint> Points)>();
         try
         {
             foreach (var (load, mag) in CoupledWallStudy.Loads(check))
@@ -78,15 +78,11 @@ internal static class CouplingSweepCommand
                 var pts = CoupledWallStudy.OverBeamDepth(check, depths, load, mag, model.SourcePath, u);
                 var figure = CouplingSweepFigures.Deflection(check, load, pts, u);
                 figures.Add((figure.FileName, figure.Png));
-                string csv = CoupledWallStudy.SweepCsv(check, load, pts, u);
-                // One file, both loads: the second load's header and caution lines are dropped.
-                if (text.Length == 0) text.Append(csv[..csv.LastIndexOf("\"# ", StringComparison.Ordinal)]);
-                else { var lines = csv.Split('\n'); text.Append(string.Join("\n", lines.Skip(1).Take(lines.Length - 3))).Append('\n'); }
+                sweeps.Add((load, pts));
             }
         }
         catch (UnstableModelException e) { stderr.Write(e.Message + "\nNothing was written.\n"); return ExitCodes.Unstable; }
-        text.Append("\"# ").Append(ComparisonReport.Caution).Append("\"\n");
-        files.Add(OutputSet.Text("coupling-sweep.csv", text.ToString()));
+        files.Add(OutputSet.Text("coupling-sweep.csv", CoupledWallStudy.SweepCsv(check, sweeps, u)));
         files.AddRange(figures);
         string folder = outDir ?? Path.Combine(Directory.GetCurrentDirectory(), "planelateral-results", Path.GetFileNameWithoutExtension(modelPath));
         try { OutputSet.WriteAll(folder, files); }

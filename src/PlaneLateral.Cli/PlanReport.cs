@@ -10,7 +10,7 @@ namespace PlaneLateral.Cli;
 /// <summary>The console summary of a building in plan (docs/plan.md): reads a <see cref="PlanResult"/>, prints tables of at most 100 columns.</summary>
 internal static class PlanReport
 {
-    public static string Render(PlanResult r, IReadOnlyList<PlanSplitStory> hand, string path)
+    public static string Render(PlanResult r, IReadOnlyList<PlanSplitStory> hand, string path, Detail detail = Detail.Normal)
     {
         var p = r.Plan;
         var u = p.Units;
@@ -39,7 +39,8 @@ internal static class PlanReport
                 TextTable.Sci(c.Equilibrium.RelativeError), TextTable.Sci(c.BackwardError));
         sb.Append(ct.Render());
 
-        foreach (var c in r.Cases.Where(c => c.Case.Eccentricity == 0))
+        // Normal detail: the cases without accidental eccentricity; full: every case, the shifted ones too.
+        foreach (var c in r.Cases.Where(c => c.Case.Eccentricity == 0 || detail == Detail.Full))
         {
             sb.Append($"\nStory shear per line, case {c.Case.Id}: {c.Case.Description}\n" +
                 "  direct: floors held against twist; torsional: what the twist adds\n");
@@ -51,6 +52,8 @@ internal static class PlanReport
             }
             sb.Append(t.Render());
         }
+
+        if (detail == Detail.Full) sb.Append(FloorMotion(r));
 
         var governing = r.Irregularity.Select(t => t.Case).Distinct().ToList();
         foreach (var id in governing)
@@ -116,8 +119,25 @@ internal static class PlanReport
             sb.Append(t.Render());
         }
         sb.Append(PlanFloorReport.Render(r));   // floors that bend: with a "floor" block only
-        sb.Append("\n" + Wrap($"Caution: {ResultFiles.Caution}", 100));
+        sb.Append("\n" + Wrap($"Caution: {ResultFiles.Caution}", TextTable.Width));
         return sb.ToString();
+    }
+
+    /// <summary>Full detail: each floor's motion per case (plan-floors.csv), with the motion of the floors held against twist.</summary>
+    private static string FloorMotion(PlanResult r)
+    {
+        var u = r.Plan.Units;
+        string len = u.LengthSymbol;
+        string L(double v) => TextTable.Num(u.FromSI(v, Quantity.Length));
+        var t = new TextTable("case", "level", $"Ux [{len}]", $"Uy [{len}]", "Rz [rad]", $"Ux held [{len}]", $"Uy held [{len}]").Numeric(2, 3, 4, 5, 6);
+        foreach (var c in r.Cases)
+            for (int i = 0; i < c.Motion.Count; i++)
+            {
+                var m = c.Motion[i];
+                var l = c.LockedMotion[i];
+                t.Add(c.Case.Id, r.Plan.Levels[m.Level].Id, L(m.Ux), L(m.Uy), TextTable.Num(m.Rz), L(l.Ux), L(l.Uy));
+            }
+        return "\nFloor motion per case (Ux, Uy of the plan origin; \"held\": the same loads with the floors held against twist)\n" + t.Render();
     }
 
     private static string Wrap(string text, int width)

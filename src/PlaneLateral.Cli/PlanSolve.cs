@@ -36,7 +36,7 @@ internal static class PlanSolve
         if (note is not null) text.Append('\n').Append(note);
         if (detail != Detail.Summary)
         {
-            text.Append('\n').Append(PlanReport.Render(r, hand, path));
+            text.Append('\n').Append(PlanReport.Render(r, hand, path, detail));
             if (seismic is not null) text.Append(PlanSeismicReport.Render(r, seismic));
         }
         else text.Append($"\nCaution: {ResultFiles.Caution}\n");

@@ -4,14 +4,45 @@ using System.Text;
 namespace PlaneLateral.Cli;
 
 /// <summary>
-/// A plain fixed-width text table: left-aligned text columns, right-aligned number columns, fitted to a width (100
-/// columns unless told): headers wrap onto more lines at their spaces, long texts of a text column move to lettered
+/// A plain fixed-width text table: left-aligned text columns, right-aligned number columns, fitted to a width (the run's
+/// <c>--width</c>, 100 columns unless told): headers wrap onto more lines at their spaces, long texts of a text column move to lettered
 /// notes under the table ([a], [b], ...), and a table still too wide is printed in parts, each repeating the first column.
 /// </summary>
 internal sealed class TextTable(params string[] headers)
 {
-    /// <summary>The console width every table is fitted to.</summary>
-    public const int Width = 100;
+    /// <summary>The default console width (columns) when no <c>--width</c> is given.</summary>
+    public const int DefaultWidth = 100;
+
+    /// <summary>The narrowest and widest <c>--width</c> accepted.</summary>
+    public const int MinWidth = 40, MaxWidth = 1000;
+
+    private static readonly AsyncLocal<int?> Chosen = new();
+
+    /// <summary>The console width every table and line of prose is fitted to: <c>--width</c> for this run, else 100.</summary>
+    public static int Width => Chosen.Value ?? DefaultWidth;
+
+    /// <summary>Sets <see cref="Width"/> for the rest of this run (the flow that called it); null restores the default.</summary>
+    public static void UseWidth(int? columns) => Chosen.Value = columns;
+
+    /// <summary>Reads a <c>--width</c> value: a whole number from 40 to 1000, else a message saying what to give.</summary>
+    public static bool TryWidth(string? text, out int? width, out string error)
+    {
+        width = null;
+        error = "";
+        if (text is null) return true;
+        if (!int.TryParse(text.Trim(), NumberStyles.AllowLeadingSign, CultureInfo.InvariantCulture, out int w))
+        {
+            error = $"--width \"{text}\" is not a whole number of columns. Fix: give the console width, e.g. --width 120 (from {MinWidth} to {MaxWidth}; default {DefaultWidth}).";
+            return false;
+        }
+        if (w < MinWidth || w > MaxWidth)
+        {
+            error = $"--width {w} is outside {MinWidth} to {MaxWidth} columns ({(w < MinWidth ? "too narrow for the tables" : "wider than any console")}). Fix: give the console width, e.g. --width 120 (default {DefaultWidth}).";
+            return false;
+        }
+        width = w;
+        return true;
+    }
 
     /// <summary>A text cell at most this long stays in its column when the table must shrink.</summary>
     private const int ShortText = 12;
@@ -30,8 +61,9 @@ internal sealed class TextTable(params string[] headers)
     /// <summary>Rows added so far.</summary>
     public int Count => _rows.Count;
 
-    public string Render(string indent = "  ", int width = Width)
+    public string Render(string indent = "  ", int width = 0)
     {
+        if (width <= 0) width = Width;
         int n = headers.Length;
         var rows = _rows.Select(r => (string[])r.Clone()).ToList();
         var notes = new List<string>();
@@ -134,12 +166,14 @@ internal sealed class TextTable(params string[] headers)
     public static string Sci(double v) => v.ToString("0.0E+0", CultureInfo.InvariantCulture);
 }
 
-/// <summary>Console prose fitted to <see cref="TextTable.Width"/> columns: a longer line wraps at its spaces, continuing indented.</summary>
+/// <summary>Console prose fitted to <see cref="TextTable.Width"/> columns: a longer line wraps at its spaces, continuing indented; a
+/// word longer than the width (a path) stands whole on its own line.</summary>
 internal static class ConsoleText
 {
     /// <param name="hanging">Indent of the continuation lines; by default the line's own indent plus two.</param>
-    public static string Fit(string text, int width = TextTable.Width, int? hanging = null)
+    public static string Fit(string text, int width = 0, int? hanging = null)
     {
+        if (width <= 0) width = TextTable.Width;
         var sb = new StringBuilder();
         var lines = text.Split('\n');
         for (int i = 0; i < lines.Length; i++)
@@ -155,7 +189,12 @@ internal static class ConsoleText
                 while (rest.Length > width)
                 {
                     int cut = rest.LastIndexOf(' ', width);
-                    if (cut <= (first ? lead : more.Length)) cut = width;   // one long word: cut it
+                    if (cut <= (first ? lead : more.Length))
+                    {
+                        // One word longer than the line (a long path): kept whole on its own line, never cut mid-word.
+                        cut = rest.IndexOf(' ', width);
+                        if (cut < 0) break;
+                    }
                     sb.Append(rest[..cut].TrimEnd()).Append('\n');
                     rest = more + rest[cut..].TrimStart(' ');
                     first = false;

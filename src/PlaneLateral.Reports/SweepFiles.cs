@@ -27,8 +27,6 @@ public static class SweepFiles
 
     private static string F(double v) => v.ToString("G12", CultureInfo.InvariantCulture);
 
-    private static string CsvField(string s) => PlaneLateral.Output.CsvText.Cell(s);   // the one escaper (quoting, formula neutralising)
-
     /// <summary>One line per point; hand deflections are for a unit force at the top (length per unit force).</summary>
     public static string Csv(SweepResult r, string producedBy)
     {
@@ -36,6 +34,7 @@ public static class SweepFiles
         var u = s.Units;
         string len = u.LengthSymbol, k = u.Label(Quantity.TranslationalStiffness), flex = $"{len}/{u.ForceSymbol}";
         var sb = new StringBuilder();
+        foreach (var note in Notes(r, producedBy)) sb.Append(PlaneLateral.Output.CsvText.Comment(note));   // notes lead, as comments
         sb.Append($"point,ends,h/l,height [{len}],hand flexural deflection [{flex}],hand shear deflection [{flex}],hand total deflection [{flex}],hand stiffness [{k}],hand flexural share,hand shear share");
         for (int m = 0; m < r.FeModels.Count; m++)
             sb.Append($",fe{m + 1} stiffness [{k}],fe{m + 1} FE/hand,fe{m + 1} shear share,fe{m + 1} FE/hand flexure only,fe{m + 1} estimated error");
@@ -52,23 +51,32 @@ public static class SweepFiles
             }
             sb.Append(',').Append(ComparisonRow.VerdictWords(p.Verdict, ComparedQuantity.Stiffness)).Append('\n');
         }
+        return sb.ToString();
+    }
+
+    /// <summary>The sweep's notes (the caution first, then FE models, wall, hand method, tolerance, departures): the CSV's leading comment lines.</summary>
+    public static IReadOnlyList<string> Notes(SweepResult r, string producedBy)
+    {
+        var s = r.Spec;
+        var u = s.Units;
+        string len = u.LengthSymbol;
+        var notes = new List<string> { $"caution: {Caution}" };
         for (int m = 0; m < r.FeModels.Count; m++)
-            sb.Append($"# fe{m + 1}: {r.FeModels[m]}: {r.FeDescriptions[m]}\n");
-        sb.Append($"# wall: length {F(s.Length)} {len}, thickness {F(s.Thickness)} {len}; material {s.MaterialName}: E = {F(s.E)} {u.Label(Quantity.Stress)}, G = {F(s.G)} {u.Label(Quantity.Stress)}; shear form factor f = {F(s.FormFactor)}\n");
+            notes.Add($"fe{m + 1}: {r.FeModels[m]}: {r.FeDescriptions[m]}");
+        notes.Add($"wall: length {F(s.Length)} {len}, thickness {F(s.Thickness)} {len}; material {s.MaterialName}: E = {F(s.E)} {u.Label(Quantity.Stress)}, G = {F(s.G)} {u.Label(Quantity.Stress)}; shear form factor f = {F(s.FormFactor)}");
         if (s.Footing is { } ft)
-            sb.Append($"# footing: {ft.Words(u)}; the FE wall stands on its sliding and rocking springs, the hand pier formula keeps its fixed base, so FE/hand shows what ignoring the footing costs\n");
+            notes.Add($"footing: {ft.Words(u)}; the FE wall stands on its sliding and rocking springs, the hand pier formula keeps its fixed base, so FE/hand shows what ignoring the footing costs");
         if (s.Opening is { } o)
         {
-            sb.Append($"# opening: {o.Words} at every point (width {F(o.WidthFraction)} l, height {F(o.HeightFraction)} h, sill at {F((1 - o.HeightFraction) / 2)} h, left edge at {F((1 - o.WidthFraction) / 2)} l)\n");
-            sb.Append($"# hand: PerforatedWall, solid wall minus the strip holding the window plus its two piers in parallel, each piece P h^3/(3EI) or P h^3/(12EI) plus f P h/(AG) (Taly, Design of Reinforced Masonry Structures, ch. 7); hand flexural deflection = the same method without shear deformation (G = 1e12 E), hand shear deflection = total minus that\n");
+            notes.Add($"opening: {o.Words} at every point (width {F(o.WidthFraction)} l, height {F(o.HeightFraction)} h, sill at {F((1 - o.HeightFraction) / 2)} h, left edge at {F((1 - o.WidthFraction) / 2)} l)");
+            notes.Add($"hand: PerforatedWall, solid wall minus the strip holding the window plus its two piers in parallel, each piece P h^3/(3EI) or P h^3/(12EI) plus f P h/(AG) (Taly, Design of Reinforced Masonry Structures, ch. 7); hand flexural deflection = the same method without shear deformation (G = 1e12 E), hand shear deflection = total minus that");
         }
         else
-            sb.Append($"# hand: Piers.Rectangular, cantilever P h^3/(3EI) or fixed-fixed P h^3/(12EI) plus f P h/(AG), I = t l^3/12, A = t l (elementary beam theory with Timoshenko's shear term; Gere & Timoshenko, Mechanics of Materials)\n");
-        sb.Append($"# tolerance: |FE/hand - 1| <= {F(s.Tolerance)}; {CsvField(producedBy)}\n");
+            notes.Add($"hand: Piers.Rectangular, cantilever P h^3/(3EI) or fixed-fixed P h^3/(12EI) plus f P h/(AG), I = t l^3/12, A = t l (elementary beam theory with Timoshenko's shear term; Gere & Timoshenko, Mechanics of Materials)");
+        notes.Add($"tolerance: |FE/hand - 1| <= {F(s.Tolerance)}; {producedBy}");
         foreach (var d in SweepDepartures.Find(r))
-            sb.Append($"# departure: {d.Words(s.From, s.To)}\n");
-        sb.Append($"# caution: {Caution}\n");
-        return sb.ToString();
+            notes.Add($"departure: {d.Words(s.From, s.To)}");
+        return notes;
     }
 
     /// <summary>FE/hand stiffness against h/l, one curve per end condition and FE model, the tolerance band shaded.</summary>

@@ -23,8 +23,9 @@ public static class ComparisonFiles
 
     private static string Csv(ComparisonReport r)
     {
-        var sb = new StringBuilder();
-        sb.Append("check,kind,subject,quantity,unit,hand_method,hand_value,fe_rank,fe_model,is_reference,fe_value,fe_estimated_error,ratio_fe_to_hand,hand_flexural_share,hand_shear_share,fe_flexural_share,fe_shear_share,aspect_ratio_h_to_l,tolerance,verdict,cause,reference_basis\n");
+        // The caution leads as a comment line; the hand and FE values are in the row's own unit, named in "unit".
+        var sb = new StringBuilder(PlaneLateral.Output.CsvText.Comment(ComparisonReport.Caution));
+        sb.Append("check,kind,subject,quantity,unit,hand method,hand value,FE rank,FE model,reference,FE value,FE estimated error,FE/hand,hand flexural share,hand shear share,FE flexural share,FE shear share,h/l,tolerance,verdict,cause,reference basis\n");
         foreach (var row in r.Rows)
             for (int k = 0; k < row.Fe.Count; k++)
             {
@@ -39,7 +40,6 @@ public static class ComparisonFiles
                     F(row.Tolerance), verdict, CsvCell(k == 0 ? row.Cause : "(see the reference estimate, rank 1)"), CsvCell(row.ReferenceBasis),
                 })).Append('\n');
             }
-        sb.Append(CsvCell("# " + ComparisonReport.Caution)).Append('\n');
         return sb.ToString();
     }
 

@@ -239,21 +239,27 @@ public static class CoupledWallStudy
         return list;
     }
 
-    /// <summary>The sweep as CSV in the model's units (one line per depth), ending with the caution.</summary>
-    public static string SweepCsv(CoupledWallCheck c, CoupledWallLoad load, IReadOnlyList<SweepPoint> points, UnitSystem u)
+    /// <summary>The sweep as CSV in the model's units: the caution as a leading comment line, one header, one line per depth.</summary>
+    public static string SweepCsv(CoupledWallCheck c, CoupledWallLoad load, IReadOnlyList<SweepPoint> points, UnitSystem u) =>
+        SweepCsv(c, [(load, points)], u);
+
+    /// <summary>The sweep of every load in one table (one line per load and depth), the caution leading as a comment.</summary>
+    public static string SweepCsv(CoupledWallCheck c, IReadOnlyList<(CoupledWallLoad Load, IReadOnlyList<SweepPoint> Points)> sweeps, UnitSystem u)
     {
         var ci = CultureInfo.InvariantCulture;
-        string F(double v) => double.IsNaN(v) ? "" : v.ToString("G10", ci);
+        string F(double v) => double.IsNaN(v) ? "" : v.ToString("G12", ci);
         string L(double v) => F(u.FromSI(v, Quantity.Length));
         string lu = u.LengthSymbol;
-        var sb = new StringBuilder();
-        sb.Append($"check,load,beam_depth_{lu},clear_span_to_depth,k_alpha_H,top_deflection_{lu}_continuous_medium,top_deflection_{lu}_continuous_medium_beam_shear,top_deflection_{lu}_independent_cantilevers,top_deflection_{lu}_one_solid_wall,top_deflection_{lu}_wide_column,top_deflection_{lu}_wide_column_no_shear,coupling_continuous_medium,coupling_continuous_medium_beam_shear,coupling_wide_column,coupling_wide_column_no_shear,top_deflection_{lu}_plane_stress_panel,coupling_plane_stress_panel\n");
-        string ln = load == CoupledWallLoad.Uniform ? "uniform" : "top";
-        foreach (var p in points)
-            sb.Append(string.Join(",", PlaneLateral.Output.CsvText.Cell(c.Id), ln, L(p.BeamDepth), F(p.SpanToDepth), F(p.KAlphaH),
-                L(p.ClosedForm), L(p.ClosedFormBeamShear), L(p.Cantilevers), L(p.Solid), L(p.FeShear), L(p.FeNoShear),
-                F(p.DocClosedForm), F(p.DocClosedFormBeamShear), F(p.DocFeShear), F(p.DocFeNoShear), L(p.FePanel), F(p.DocPanel))).Append('\n');
-        sb.Append(PlaneLateral.Output.CsvText.Cell("# " + ComparisonReport.Caution)).Append('\n');
+        var sb = new StringBuilder(PlaneLateral.Output.CsvText.Comment(ComparisonReport.Caution));
+        sb.Append($"check,load,beam depth [{lu}],clear span/depth,k alpha H,top deflection continuous medium [{lu}],top deflection continuous medium with beam shear [{lu}],top deflection independent cantilevers [{lu}],top deflection one solid wall [{lu}],top deflection wide column [{lu}],top deflection wide column without shear [{lu}],coupling continuous medium,coupling continuous medium with beam shear,coupling wide column,coupling wide column without shear,top deflection plane-stress panel [{lu}],coupling plane-stress panel\n");
+        foreach (var (load, points) in sweeps)
+        {
+            string ln = load == CoupledWallLoad.Uniform ? "uniform" : "top";
+            foreach (var p in points)
+                sb.Append(string.Join(",", PlaneLateral.Output.CsvText.Cell(c.Id), ln, L(p.BeamDepth), F(p.SpanToDepth), F(p.KAlphaH),
+                    L(p.ClosedForm), L(p.ClosedFormBeamShear), L(p.Cantilevers), L(p.Solid), L(p.FeShear), L(p.FeNoShear),
+                    F(p.DocClosedForm), F(p.DocClosedFormBeamShear), F(p.DocFeShear), F(p.DocFeNoShear), L(p.FePanel), F(p.DocPanel))).Append('\n');
+        }
         return sb.ToString();
     }
 }

@@ -206,7 +206,7 @@ public class CoupledWallTests
         }
         Assert.All(pts, p => Assert.True(p.Solid <= p.FeNoShear * (1 + 1e-9) && p.FeNoShear <= p.Cantilevers * (1 + 1e-9)));
         var csv = CoupledWallStudy.SweepCsv(c, CoupledWallLoad.Uniform, pts, PlaneLateral.Units.UnitSystem.KipInch);
-        Assert.Equal(14, csv.TrimEnd('\n').Split('\n').Length);   // header, 12 depths, caution
+        Assert.Equal(14, csv.TrimEnd('\n').Split('\n').Length);   // caution comment, header, 12 depths
         Assert.Throws<ArgumentException>(() => CoupledWallStudy.OverBeamDepth(c, [3.0], CoupledWallLoad.Uniform, 1, "t", PlaneLateral.Units.UnitSystem.KipInch));
     }
 

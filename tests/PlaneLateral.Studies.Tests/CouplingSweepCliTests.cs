@@ -26,12 +26,13 @@ public class CouplingSweepCliTests
         Assert.Contains("licensed engineer", output);
         string first = File.ReadAllText(Path.Combine(dir, "coupling-sweep.csv"));
         var lines = first.TrimEnd('\n').Split('\n');
-        Assert.Equal(1 + 2 * 3 + 1, lines.Length);   // header, two loads × three depths, caution
-        Assert.StartsWith("check,load,beam_depth_m", lines[0]);
-        Assert.Contains("licensed engineer", lines[^1]);
+        Assert.Equal(1 + 1 + 2 * 3, lines.Length);   // caution comment, header, two loads × three depths
+        Assert.StartsWith("# ", lines[0]);
+        Assert.Contains("licensed engineer", lines[0]);
+        Assert.StartsWith("check,load,beam depth [m]", lines[1]);
         // The plane-stress panel's two columns come last and are filled for every depth (docs/coupled-walls.md §7).
-        Assert.EndsWith("top_deflection_m_plane_stress_panel,coupling_plane_stress_panel", lines[0]);
-        Assert.All(lines[1..^1], l => Assert.False(l.EndsWith(',') || l.Split(',')[^2].Length == 0, l));
+        Assert.EndsWith("top deflection plane-stress panel [m],coupling plane-stress panel", lines[1]);
+        Assert.All(lines[2..], l => Assert.False(l.EndsWith(',') || l.Split(',')[^2].Length == 0, l));
         var pngs = new[] { "coupling-sweep-uniform.png", "coupling-sweep-top.png" }.Select(n => File.ReadAllBytes(Path.Combine(dir, n))).ToArray();
         Assert.All(pngs, b => Assert.Equal(new byte[] { 0x89, (byte)'P', (byte)'N', (byte)'G' }, b[..4]));
         Assert.Equal(0, Run("coupling-sweep", DemoPath, "--depths", "0.3,0.75,1.5", "--out", dir).Code);

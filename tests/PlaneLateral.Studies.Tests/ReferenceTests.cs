@@ -41,9 +41,10 @@ public class ReferenceTests
         Assert.Equal(ComparisonRow.PanelModelName, (string)fe[0]["model"]!);
         Assert.All(fe.Skip(1), f => Assert.False((bool)f["reference"]!));
         var csv = files.Single(f => f.Name == "comparisons.csv").Text.Split('\n');
-        var header = csv[0].Split(',');
-        int model_ = Array.IndexOf(header, "fe_model"), isRef = Array.IndexOf(header, "is_reference");
-        var refLines = csv.Skip(1).Where(l => l.StartsWith("FACADE-S,")).Select(SplitCsv).Where(c => c[isRef] == "yes").ToList();
+        Assert.StartsWith("# ", csv[0]);   // the caution leads as a comment line, then the one header row
+        var header = csv[1].Split(',');
+        int model_ = Array.IndexOf(header, "FE model"), isRef = Array.IndexOf(header, "reference");
+        var refLines = csv.Skip(2).Where(l => l.StartsWith("FACADE-S,")).Select(SplitCsv).Where(c => c[isRef] == "yes").ToList();
         Assert.Equal(ComparisonRow.PanelModelName, Assert.Single(refLines)[model_]);
     }
 

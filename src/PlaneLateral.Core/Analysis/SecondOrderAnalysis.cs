@@ -1,3 +1,4 @@
+using MathNet.Numerics.LinearAlgebra;
 using PlaneLateral.Assembly;
 using PlaneLateral.Elements;
 using PlaneLateral.Model;
@@ -205,7 +206,7 @@ public static class SecondOrderAnalysis
     /// <summary>
     /// <see cref="CriticalLoadFactor(StructureModel, string, int, AnalysisOptions)"/> on a run's system: the gravity axial
     /// forces are solved on its factor of K (linked panels condensed in). The eigenproblem needs K's Cholesky factor as a
-    /// dense matrix, so for the (small) models it is made for, K is also factorised densely here.
+    /// dense matrix, so for the (small) models it is made for, K is also factorised densely here (MathNet.Numerics).
     /// </summary>
     internal static double CriticalLoadFactor(LinearStaticAnalysis.CondensedFrame cf, LinearStaticAnalysis.FrameSystem system, string gravityCase, int maxUnknowns = 400)
     {
@@ -218,57 +219,18 @@ public static class SecondOrderAnalysis
         int n = k.GetLength(0);
         var kg = cf.Stiffness(GeometricTerms(cf, ug, gravityCase, 1.0)).ToDense();
         for (int i = 0; i < n; i++) for (int j = 0; j < n; j++) kg[i, j] -= k[i, j];   // K_G alone
-        var l = Cholesky(k);
-        // C = L⁻¹ (−K_G) L⁻ᵀ.
-        var y = new double[n, n];
-        for (int j = 0; j < n; j++)
-        {
-            var col = new double[n];
-            for (int i = 0; i < n; i++) col[i] = -kg[i, j];
-            Forward(l, col);
-            for (int i = 0; i < n; i++) y[i, j] = col[i];
-        }
-        var c = new double[n, n];
-        for (int i = 0; i < n; i++)
-        {
-            var row = new double[n];
-            for (int j = 0; j < n; j++) row[j] = y[i, j];
-            Forward(l, row);
-            for (int j = 0; j < n; j++) c[i, j] = row[j];
-        }
+        // C = L⁻¹ (−K_G) L⁻ᵀ with K = L·Lᵀ by MathNet.Numerics' dense Cholesky (which refuses a K that is not positive
+        // definite instead of taking the root of a negative pivot); the two triangular solves through one LU of L (MathNet
+        // has no public triangular solve; partial pivoting on a triangular matrix keeps the solve backward stable).
+        Matrix<double> kd;
+        try { kd = Matrix<double>.Build.DenseOfArray(k).Cholesky().Factor; }
+        catch (ArgumentException) { return double.NaN; }   // K not positive definite: no critical factor to report
+        var lu = kd.LU();
+        var y = lu.Solve(-Matrix<double>.Build.DenseOfArray(kg));   // L⁻¹ (−K_G)
+        var c = lu.Solve(y.Transpose()).ToArray();                   // L⁻¹ (L⁻¹ (−K_G))ᵀ = L⁻¹ (−K_G) L⁻ᵀ, K_G symmetric
         for (int i = 0; i < n; i++) for (int j = 0; j < i; j++) c[i, j] = c[j, i] = 0.5 * (c[i, j] + c[j, i]);
         var (mu, _) = SymmetricEigen.Solve(c);
         return mu.Length == 0 || mu[0] <= 0 ? double.PositiveInfinity : 1 / mu[0];
-    }
-
-    private static double[,] Cholesky(double[,] a)
-    {
-        int n = a.GetLength(0);
-        var l = new double[n, n];
-        for (int j = 0; j < n; j++)
-        {
-            double d = a[j, j];
-            for (int k = 0; k < j; k++) d -= l[j, k] * l[j, k];
-            l[j, j] = Math.Sqrt(d);
-            for (int i = j + 1; i < n; i++)
-            {
-                double s = a[i, j];
-                for (int k = 0; k < j; k++) s -= l[i, k] * l[j, k];
-                l[i, j] = s / l[j, j];
-            }
-        }
-        return l;
-    }
-
-    private static void Forward(double[,] l, double[] b)
-    {
-        int n = b.Length;
-        for (int i = 0; i < n; i++)
-        {
-            double s = b[i];
-            for (int k = 0; k < i; k++) s -= l[i, k] * b[k];
-            b[i] = s / l[i, i];
-        }
     }
 
     /// <summary>

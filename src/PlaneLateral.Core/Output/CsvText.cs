@@ -10,7 +10,9 @@ namespace PlaneLateral.Output;
 /// or a carriage return gets a leading apostrophe (the OWASP advice on CSV injection — common practice), unless the
 /// whole cell reads as a number (an id "-1" stays "-1": a number cannot execute);</item>
 /// <item>quoted, with inner quotes doubled, when it holds a comma, a quote, a line feed, a carriage return or any other
-/// control character (U+0000–U+001F, U+007F), so a row never breaks and a standard reader gets the text back whole.</item>
+/// control character (U+0000–U+001F, U+007F), so a row never breaks and a standard reader gets the text back whole; and
+/// when it holds a <c>#</c>, so no data line starts with the comment mark and a reader told to skip <c>#</c> comments
+/// (pandas cuts a line at an unquoted <c>#</c>) loses no cell.</item>
 /// </list>
 /// docs/hardening.md, "Text that cannot inject", states the promise.
 /// </summary>
@@ -24,8 +26,21 @@ public static class CsvText
         if (IsFormulaStart(s[0]) && !IsNumber(s)) s = "'" + s;
         bool quote = false;
         foreach (char c in s)
-            if (c == ',' || c == '"' || c < 0x20 || c == 0x7F) { quote = true; break; }
+            if (c == ',' || c == '"' || c == '#' || c < 0x20 || c == 0x7F) { quote = true; break; }
         return quote ? "\"" + s.Replace("\"", "\"\"") + "\"" : s;
+    }
+
+    /// <summary>
+    /// One leading comment line, <c># text</c>, for the lines a file opens with before its header (the caution, notes):
+    /// the only place the tool's CSV files carry anything but the table (docs/model-format.md, "CSV files"). Line breaks
+    /// and other control characters in <paramref name="text"/> become spaces, so the comment stays one line and a reader
+    /// told to skip lines starting with <c>#</c> (CsvHelper's comment prefix, pandas' <c>comment='#'</c>) skips it whole.
+    /// </summary>
+    public static string Comment(string text)
+    {
+        var sb = new System.Text.StringBuilder("# ", text.Length + 3);
+        foreach (char c in text) sb.Append(c < 0x20 || c == 0x7F ? ' ' : c);
+        return sb.Append('\n').ToString();
     }
 
     /// <summary>True when a spreadsheet treats a cell starting with <paramref name="c"/> as a formula (OWASP).</summary>

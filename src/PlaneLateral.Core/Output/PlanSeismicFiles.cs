@@ -23,6 +23,7 @@ public static class PlanSeismicFiles
         {
             ("plan-modes.csv", Modes(r, s)),
             ("plan-elf.csv", Elf(r, s)),
+            ("plan-elf-forces.csv", ElfForces(r, s)),   // one table per file: the level forces apart from the per-direction figures
         };
         if (s.Amplification.Count > 0) files.Add(("plan-amplification.csv", Amplification(r, s)));
         if (s.Spectrum is { } sp)
@@ -62,7 +63,13 @@ public static class PlanSeismicFiles
         var sb = new StringBuilder($"direction,mode,modal period [s],Ta [s],Cu,Cu*Ta [s],period used [s],period note,Cs,Cs governed by,W [{fu}],V [{fu}],k,cases\n");
         foreach (var e in s.Elf)
             sb.Append($"{e.Direction},{e.Mode},{F(e.ModalPeriod)},{F(e.Ta)},{F(e.Cu)},{F(e.Cu * e.Ta)},{F(e.PeriodUsed)},{Csv(e.PeriodNote)},{F(e.Cs)},{Csv(e.CsNote)},{F(u.FromSI(e.Weight, Quantity.Force))},{F(u.FromSI(e.BaseShear, Quantity.Force))},{F(e.Exponent)},{Csv(string.Join(" ", e.Cases))}\n");
-        sb.Append($"\ndirection,level,Cvx,Fx [{fu}]\n");
+        return sb.ToString();
+    }
+
+    private static string ElfForces(PlanResult r, PlanSeismicResult s)
+    {
+        var u = r.Plan.Units;
+        var sb = new StringBuilder($"direction,level,Cvx,Fx [{u.ForceSymbol}]\n");
         foreach (var e in s.Elf)
             for (int l = 0; l < e.LevelForces.Count; l++)
                 sb.Append($"{e.Direction},{Csv(r.Plan.Levels[l + 1].Id)},{F(e.Cvx[l])},{F(u.FromSI(e.LevelForces[l], Quantity.Force))}\n");

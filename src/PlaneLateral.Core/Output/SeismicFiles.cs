@@ -21,8 +21,11 @@ public static class SeismicFiles
         var r = run.Analysis;
         var sr = run.Seismic;
         if (sr is null) return [];
-        var files = new List<(string, string)> { ("periods.csv", Periods(r, sr)), ("story-forces.csv", StoryForcesCsv(r, sr)) };
+        // One table per file (docs/model-format.md, "CSV files"): the modes and the period estimates apart, the stability
+        // coefficients and the drift check on the second-order drift apart.
+        var files = new List<(string, string)> { ("periods.csv", Periods(r, sr)), ("period-estimates.csv", PeriodEstimates(sr)), ("story-forces.csv", StoryForcesCsv(r, sr)) };
         if (sr.Stability.Count > 0) files.Add(("second-order.csv", SecondOrder(r, sr)));
+        if (sr.SecondOrderDriftChecks.Count > 0) files.Add(("second-order-drift-checks.csv", SecondOrderDriftChecks(r, sr)));
         files.Add(("seismic.json", Json(r, sr)));
         if (run.Spectrum is { } rs) files.AddRange(SpectrumFiles.Render(r, rs));
         return files;
@@ -38,9 +41,13 @@ public static class SeismicFiles
         var sb = new StringBuilder("mode,period [s],omega [rad/s],mass share," + string.Join(",", levels.Skip(1).Select(l => Csv("shape " + l.Id))) + "\n");
         foreach (var m in sr.Forces.Modes)
             sb.Append($"{m.Number},{F(m.Period)},{F(m.Omega)},{F(m.MassShare)},{string.Join(",", m.LevelShape.Skip(1).Select(F))}\n");
-        var f = sr.Forces;
-        sb.Append($"\nestimate,period [s]\neigen mode 1,{F(f.Modes.Count > 0 ? f.Modes[0].Period : double.NaN)}\nRayleigh (story forces),{F(f.RayleighPeriod)}\nTa = Ct*hn^x,{F(f.Ta)}\nCu*Ta,{F(f.Cu * f.Ta)}\nused,{F(f.PeriodUsed)}\n");
         return sb.ToString();
+    }
+
+    private static string PeriodEstimates(SeismicResult sr)
+    {
+        var f = sr.Forces;
+        return $"estimate,period [s]\neigen mode 1,{F(f.Modes.Count > 0 ? f.Modes[0].Period : double.NaN)}\nRayleigh (story forces),{F(f.RayleighPeriod)}\nTa = Ct*hn^x,{F(f.Ta)}\nCu*Ta,{F(f.Cu * f.Ta)}\nused,{F(f.PeriodUsed)}\n";
     }
 
     private static string StoryForcesCsv(AnalysisResult r, SeismicResult sr)
@@ -64,12 +71,16 @@ public static class SeismicFiles
         var sb = new StringBuilder($"story,Px [{f}],Vx [{f}],height [{l}],first-order drift [{l}],design drift Cd*de/Ie [{l}],theta,theta max,status,second-order drift [{l}],second/first,1/(1-theta)\n");
         foreach (var x in sr.Stability)
             sb.Append($"{x.Story.Index},{F(u.FromSI(x.Px, Quantity.Force))},{F(u.FromSI(x.Vx, Quantity.Force))},{F(u.FromSI(x.Story.Height, Quantity.Length))},{F(u.FromSI(x.ElasticDrift, Quantity.Length))},{F(u.FromSI(x.DesignDrift, Quantity.Length))},{F(x.Theta)},{F(x.ThetaMax)},{Csv(x.Status)},{F(u.FromSI(x.SecondOrderDrift, Quantity.Length))},{F(x.Ratio)},{F(x.Estimate)}\n");
-        if (sr.SecondOrderDriftChecks.Count > 0)
-        {
-            sb.Append($"\ncheck,case,story,drift [{l}],amplified [{l}],ratio,allowed,result,margin\n");
-            foreach (var d in sr.SecondOrderDriftChecks)
-                sb.Append($"{Csv(d.Check.Id)},{Csv(d.CaseId)},{d.Story.Index},{F(u.FromSI(d.ElasticDrift, Quantity.Length))},{F(u.FromSI(d.AmplifiedDrift, Quantity.Length))},{F(d.Ratio)},{F(d.Allowed)},{(d.Passes ? "within" : "exceeds")},{F(d.Margin)}\n");
-        }
+        return sb.ToString();
+    }
+
+    private static string SecondOrderDriftChecks(AnalysisResult r, SeismicResult sr)
+    {
+        var u = r.Model.Units;
+        string l = u.LengthSymbol;
+        var sb = new StringBuilder($"check,case,story,drift [{l}],amplified [{l}],ratio,allowed,result,margin\n");
+        foreach (var d in sr.SecondOrderDriftChecks)
+            sb.Append($"{Csv(d.Check.Id)},{Csv(d.CaseId)},{d.Story.Index},{F(u.FromSI(d.ElasticDrift, Quantity.Length))},{F(u.FromSI(d.AmplifiedDrift, Quantity.Length))},{F(d.Ratio)},{F(d.Allowed)},{(d.Passes ? "within" : "exceeds")},{F(d.Margin)}\n");
         return sb.ToString();
     }
 

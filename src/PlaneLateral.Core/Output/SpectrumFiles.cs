@@ -1,13 +1,12 @@
 using System.Globalization;
 using System.Text;
 using Newtonsoft.Json;
-using Newtonsoft.Json.Linq;
 using PlaneLateral.Analysis;
 using PlaneLateral.Units;
 
 namespace PlaneLateral.Output;
 
-/// <summary>The planar response spectrum files: response-spectrum.csv (modes, then stories) and response-spectrum.json. Model units.</summary>
+/// <summary>The planar response spectrum files: response-spectrum-modes.csv, response-spectrum-stories.csv (one table per file) and response-spectrum.json. Model units.</summary>
 public static class SpectrumFiles
 {
     public static IReadOnlyList<(string Name, string Text)> Render(AnalysisResult r, PlanarSpectrumResult s)
@@ -22,9 +21,9 @@ public static class SpectrumFiles
         var sb = new StringBuilder($"mode,period [s],omega [rad/s],Sa [g],gamma,mass share,cumulative,base shear [{fu}]\n");
         foreach (var m in s.Modes)
             sb.Append($"{m.Mode},{F(m.Period)},{F(m.Omega)},{F(m.Sa)},{F(m.Gamma)},{F(m.Share)},{F(m.Cumulative)},{F(Fo(m.BaseShear))}\n");
-        sb.Append($"\nstory,ELF shear [{fu}],modal shear [{fu}],scaled modal shear [{fu}],drift [{lu}],design drift Cd*drift/Ie [{lu}],height [{lu}],design drift ratio,difference of combined displacements (not the drift) [{lu}],displacement of the level above [{lu}],overturning moment (no sign) [{mu}],scaled overturning moment [{mu}],Px [{fu}],theta (modal),theta (ELF),theta max\n");
+        var stories = new StringBuilder($"story,ELF shear [{fu}],modal shear [{fu}],scaled modal shear [{fu}],drift [{lu}],design drift Cd*drift/Ie [{lu}],height [{lu}],design drift ratio,difference of combined displacements (not the drift) [{lu}],displacement of the level above [{lu}],overturning moment (no sign) [{mu}],scaled overturning moment [{mu}],Px [{fu}],theta (modal),theta (ELF),theta max\n");
         foreach (var st in s.Stories)
-            sb.Append($"{st.Story},{F(Fo(st.ElfShear))},{F(Fo(st.ModalShear))},{F(Fo(st.ScaledShear))},{F(L(st.Drift))},{F(L(st.DesignDrift))},{F(L(st.Height))},{F(st.Ratio)},{F(L(st.DriftFromCombinedDisplacements))},{F(L(st.Displacement))},{F(Mo(st.Overturning))},{F(Mo(s.Scaling.ForceFactor * st.Overturning))},{F(Fo(st.Px))},{F(st.Theta)},{F(st.ThetaElf)},{F(st.ThetaMax)}\n");
+            stories.Append($"{st.Story},{F(Fo(st.ElfShear))},{F(Fo(st.ModalShear))},{F(Fo(st.ScaledShear))},{F(L(st.Drift))},{F(L(st.DesignDrift))},{F(L(st.Height))},{F(st.Ratio)},{F(L(st.DriftFromCombinedDisplacements))},{F(L(st.Displacement))},{F(Mo(st.Overturning))},{F(Mo(s.Scaling.ForceFactor * st.Overturning))},{F(Fo(st.Px))},{F(st.Theta)},{F(st.ThetaElf)},{F(st.ThetaMax)}\n");
         var json = new JObject
         {
             ["program"] = $"PlaneLateral {ResultFiles.Version}",
@@ -43,7 +42,7 @@ public static class SpectrumFiles
             ["PxFrom"] = s.PxSource,
             ["combinedValues"] = CombinedNote,
         };
-        var files = new List<(string, string)> { ("response-spectrum.csv", sb.ToString()), ("response-spectrum.json", json.ToString(Formatting.Indented) + "\n") };
+        var files = new List<(string, string)> { ("response-spectrum-modes.csv", sb.ToString()), ("response-spectrum-stories.csv", stories.ToString()), ("response-spectrum.json", json.ToString(Formatting.Indented) + "\n") };
         if (s.MemberForces.Count > 0)
         {
             var mf = new StringBuilder($"member,N start [{fu}],V start [{fu}],M start [{mu}],N end [{fu}],V end [{fu}],M end [{mu}],scaled N start [{fu}],scaled V start [{fu}],scaled M start [{mu}],scaled N end [{fu}],scaled V end [{fu}],scaled M end [{mu}]\n");

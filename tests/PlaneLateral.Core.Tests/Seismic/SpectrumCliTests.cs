@@ -47,7 +47,8 @@ public sealed class SpectrumCliTests : IDisposable
         Assert.Contains("Modal response spectrum", stdout);
         int from = stdout.IndexOf("Modal response spectrum", StringComparison.Ordinal), to = stdout.IndexOf("Periods, Cs, k and θ", from, StringComparison.Ordinal);
         Fits(stdout[from..to]);   // this section only: the planar solve's older header and status lines are wider
-        Assert.True(new FileInfo(Path.Combine(outDir, "response-spectrum.csv")).Length > 0);
+        Assert.True(new FileInfo(Path.Combine(outDir, "response-spectrum-modes.csv")).Length > 0);
+        Assert.True(new FileInfo(Path.Combine(outDir, "response-spectrum-stories.csv")).Length > 0);
         Assert.Contains("\"forceFactor\"", File.ReadAllText(Path.Combine(outDir, "response-spectrum.json")));
     }
 
