@@ -28,8 +28,9 @@ internal static class PlanReport
         sb.Append("\nLines of resistance\n");
         var lt = new TextTable("line", "form", $"x [{len}]", $"y [{len}]", "direction", "members", $"level recovery error").Numeric(2, 3, 5, 6);
         foreach (var l in r.Lines)
-            lt.Add(l.Line.Id, l.Line.Form switch { PlanLineForm.Wall => "wall", PlanLineForm.StoryStiffness => "story stiffness", PlanLineForm.File => "model file", _ => "model" },
-                L(l.Line.X0), L(l.Line.Y0), l.Line.DirectionLabel, l.Line.Model.Members.Count.ToString(), TextTable.Sci(l.RecoveryError));
+            lt.Add(l.Line.Id, l.Line.Form switch { PlanLineForm.Wall => l.Line.Panel >= 0 ? "wall (panel)" : "wall", PlanLineForm.StoryStiffness => "story stiffness", PlanLineForm.File => "model file", _ => "model" },
+                L(l.Line.X0), L(l.Line.Y0), l.Line.DirectionLabel,
+                l.Line.Panel >= 0 ? $"panel, {l.Recovered.Panels[l.Line.Panel].Mesh.Mesh.Elements.Length} el." : l.Line.Model.Members.Count.ToString(), TextTable.Sci(l.RecoveryError));
         sb.Append(lt.Render());
 
         sb.Append("\nChecks of every floor solve (line forces against floor loads)\n");

@@ -65,7 +65,11 @@ public sealed class PlanResult
 /// <param name="Recovered">The line's planar analysis, one load case per building case (the level forces), same ids.</param>
 /// <param name="RecoveryError">Largest |u_recovered − u_floor| of the line's level displacements over all cases, relative to the largest.</param>
 public sealed record PlanLineResult(PlanLine Line, MatrixView Condensed, double SymmetryError, double CondensationBackwardError,
-    AnalysisResult Recovered, double RecoveryError);
+    AnalysisResult Recovered, double RecoveryError)
+{
+    /// <summary>Worst backward error of the recovery solves: the line's frame and, for a panel line, its panel.</summary>
+    public double RecoveryBackwardError => PlanAnalysis.WorstBackwardError(Line, Recovered);
+}
 
 /// <summary>A floor's motion: Ux, Uy (m) of the plan origin and Rz (rad, counter-clockwise seen from above).</summary>
 public sealed record FloorMotion(int Level, double Ux, double Uy, double Rz)

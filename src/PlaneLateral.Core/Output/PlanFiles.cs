@@ -33,7 +33,7 @@ public static class PlanFiles
         foreach (var line in r.Lines)
         {
             var own = ResultFiles.Planar(line.Recovered).ToDictionary(f => f.Name, f => f.Text);
-            foreach (var name in new[] { "member-forces.csv", "reactions.csv", "displacements.csv" })
+            foreach (var name in new[] { "member-forces.csv", "reactions.csv", "displacements.csv", "panels.json", "panel-stresses.csv", "panel-checks.csv" })
                 if (own.TryGetValue(name, out var text)) files.Add(($"line-{Safe(line.Line.Id)}-{name}", text));
         }
         return files;
@@ -126,7 +126,7 @@ public static class PlanFiles
         }
         foreach (var l in r.Lines)
         {
-            double worst = l.Recovered.Cases.Count == 0 ? 0 : l.Recovered.Cases.Max(c => c.BackwardError);
+            double worst = l.RecoveryBackwardError;   // the line's frame and, for a panel line, its panel
             sb.Append($"condensation of line {Csv(l.Line.Id)},{F(l.CondensationBackwardError)},,,,,,,\n");
             sb.Append($"recovery of line {Csv(l.Line.Id)},{F(worst)},,,,,,,{F(l.RecoveryError)}\n");
         }
