@@ -90,7 +90,7 @@ public static class PlanAnalysis
                     lineStories.Add(new PlanLineStory(s, line.Id, v, share, vd, v - vd, planarShear, drift));
                 }
             caseResults.Add(new PlanCaseResult(c, motion, lockedMotion, eta, Equilibrium(plan, c, lineForces.Select(lf => lf[ci]).ToList(), size),
-                stories, lineStories, Vertices(plan, motion)));
+                stories, lineStories, Vertices(plan, motion)) { Points = PointMotions(plan, (l, p) => motion[l].At(p)) });
         }
 
         return new PlanResult
@@ -317,6 +317,23 @@ public static class PlanAnalysis
         return list;
     }
 
+    /// <summary>
+    /// The user's named points at every floor: displacement by <paramref name="at"/> (floor index from 0, point → ux, uy)
+    /// and drift, this floor minus the one below at the same plan point (the base does not move).
+    /// </summary>
+    internal static List<PlanPointMotion> PointMotions(BuildingPlan plan, Func<int, PlanPoint, (double Ux, double Uy)> at)
+    {
+        var list = new List<PlanPointMotion>();
+        for (int l = 1; l < plan.Levels.Count; l++)
+            foreach (var q in plan.Points)
+            {
+                var (ux, uy) = at(l - 1, q.At);
+                var (bx, by) = l >= 2 ? at(l - 2, q.At) : (0, 0);
+                list.Add(new PlanPointMotion(l, q.Id, q.At, ux, uy, ux - bx, uy - by));
+            }
+        return list;
+    }
+
     /// <summary>Recovers the line's planar model under the level forces p (one case per building case), and checks its level displacements.</summary>
     internal static PlanLineResult Recover(PlanLine line, Condensation c, IReadOnlyList<string> ids, double[][] forces, IReadOnlyList<double[]> expected, AnalysisOptions? options)
     {
@@ -430,6 +447,12 @@ public static class PlanAnalysis
                 double d = Math.Sqrt(worst.DriftX * worst.DriftX + worst.DriftY * worst.DriftY);
                 double amp = lim.Cd * d / lim.Ie;
                 list.Add(new CornerDriftCheck(c.Case.Id, s, worst.Vertex, worst.At, d, amp, h, amp / h, lim.AllowedRatio, amp / h <= lim.AllowedRatio));
+                // Every named point too, one row each, labelled by its id.
+                foreach (var q in c.Points.Where(q => q.Level == s))
+                {
+                    double dq = Math.Sqrt(q.DriftX * q.DriftX + q.DriftY * q.DriftY), aq = lim.Cd * dq / lim.Ie;
+                    list.Add(new CornerDriftCheck(c.Case.Id, s, -1, q.At, dq, aq, h, aq / h, lim.AllowedRatio, aq / h <= lim.AllowedRatio) { Point = q.Point });
+                }
             }
         return list;
     }

@@ -169,7 +169,8 @@ public static partial class PlanDiaphragm
                 }
             }
             caseResults.Add(new PlanCaseResult(c, motion, lockedMotion, eta,
-                PlanAnalysis.Equilibrium(plan, c, s.LineForces.Select(lf => lf[ci]).ToList(), size), stories, lineStories, vertices));
+                PlanAnalysis.Equilibrium(plan, c, s.LineForces.Select(lf => lf[ci]).ToList(), size), stories, lineStories, vertices)
+            { Points = PlanAnalysis.PointMotions(plan, (l, p) => At(s, ci, l, p)) });   // named points as the corners: with the floor's deformation
         }
         return new PlanResult
         {

@@ -113,6 +113,7 @@ public static partial class ModelReader
             var lines = levels is null ? [] : ReadPlanLines(pf, levels);
             var cases = levels is null ? [] : ReadPlanLoads(pf, levels, ecc);
             var floors = levels is null ? [] : ReadFloors(levels, lines);
+            var points = levels is null ? [] : ReadPlanPoints(pf, levels);
             PlanDriftLimit? drift = null;
             if (pf.OptionalObject("driftCheck", "give \"driftCheck\": {\"Cd\": ..., \"Ie\": ..., \"allowedRatio\": ...}") is { } dc)
             {
@@ -137,7 +138,7 @@ public static partial class ModelReader
             return new BuildingPlan
             {
                 Title = title, SourcePath = fileName, Units = _units, Levels = levels, Lines = lines, Cases = cases,
-                EccentricityRatio = ecc, DriftLimit = drift, Floors = floors, Seismic = seismic,
+                EccentricityRatio = ecc, DriftLimit = drift, Floors = floors, Seismic = seismic, Points = points,
             };
         }
 
@@ -281,6 +282,30 @@ public static partial class ModelReader
                         Panel = panelIndex,
                         PlanLength = form != PlanLineForm.Wall ? double.NaN : panelIndex >= 0 ? model.Panels[panelIndex].Length : model.Sections[0].Depth,
                     });
+            }
+            return list;
+        }
+
+        /// <summary>"points": plan points the user names, each on every floor, reported beside the outline corners.</summary>
+        private List<PlanNamedPoint> ReadPlanPoints(JsonFields pf, List<PlanLevel> levels)
+        {
+            var list = new List<PlanNamedPoint>();
+            var seen = new HashSet<string>(StringComparer.Ordinal);
+            double tol = 1e-6 * Math.Max(1, levels.Skip(1).Max(l => Extent(l.Outline)));
+            foreach (var o in pf.Objects("points", false, $"write \"points\": [{{\"id\": \"stair core NE\", \"at\": [x, y]}}] in {_units.LengthSymbol}"))
+            {
+                var f = new JsonFields(o, sink);
+                var id = ReadId(f, seen, "point");
+                var at = f.Token("at") is { } t ? ReadPoint(t, "'at'") : null;
+                if (!f.Has("at")) sink.Add(o, "missing required key 'at'", $"give the point's plan position as \"at\": [x, y] in {_units.LengthSymbol}");
+                f.RejectUnknownKeys();
+                if (id is null || at is null) continue;
+                if (levels.Skip(1).FirstOrDefault(l => !PlanOutline.Contains(l.Outline, at.Value, tol)) is { } off)
+                {
+                    sink.Add(f.Token("at"), $"point \"{id}\" lies outside the outline of level \"{off.Id}\"", "give a point on every floor (inside or on each level's outline)");
+                    continue;
+                }
+                list.Add(new PlanNamedPoint(id, at.Value));
             }
             return list;
         }
