@@ -1,6 +1,7 @@
 using Newtonsoft.Json.Linq;
 using PlaneLateral.Analysis;
 using PlaneLateral.Model;
+using PlaneLateral.Tests.Input;
 using static PlaneLateral.Tests.Plan.PlanJson;
 
 namespace PlaneLateral.Tests.Plan;
@@ -230,5 +231,27 @@ public class PlanPanelLineTests
         var frame = PlanarWall("A", 0, 12, [0, 12]);
         frame["panels"] = Panel(12, [])["panels"];
         Assert.Equal("$.plan.lines[0]", Refused(OneLine(new { id = "A", at = new[] { 10.0, 20 }, direction = "y", model = frame }), "has no links to the line's frame").JsonPath);
+    }
+
+    [Fact]
+    public async Task ShippedOfficeWithPerforatedWallsBalancesInPlan()
+    {
+        // models/plan/walls-with-openings.json (invented): two panel walls with doors and windows, two member walls, a
+        // named point. Common practice (the invariants of every shipped building): ΣFx, ΣFy, ΣMz of the line forces
+        // against the floor loads, each line's story shear by its own statics equal to the floors', Σ story shear of the
+        // lines along a direction = the loads above the cut, and the named point in the drift check.
+        var r = await Task.Run(() => PlanAnalysis.Run(ModelReader.ReadPlanFile(RepositoryFiles.ModelPath("plan/walls-with-openings.json")))).WaitAsync(TimeSpan.FromSeconds(60));
+        AssertChecks(r);
+        Assert.Equal(2, r.Lines.Count(l => l.Line.Panel >= 0));
+        Assert.Equal(2 + 3, r.Lines.Single(l => l.Line.Id == "south").Recovered.Panels[0].Panel.Openings.Count);   // the entrance, two windows in each of two stories
+        foreach (var c in r.Cases)
+            foreach (var st in c.Stories)
+            {
+                var along = c.LineStories.Where(s => s.Story == st.Story);
+                double vx = along.Where(s => r.Plan.Lines.First(l => l.Id == s.Line).Sin == 0).Sum(s => s.Shear);
+                double vy = along.Where(s => r.Plan.Lines.First(l => l.Id == s.Line).Cos == 0).Sum(s => s.Shear);
+                Assert.True(Math.Abs(vx - st.Vx) <= 1e-9 * 100 * KipN && Math.Abs(vy - st.Vy) <= 1e-9 * 100 * KipN, $"{c.Case.Id} story {st.Story}");
+            }
+        Assert.Contains(r.DriftChecks, d => d.Point == "stair core");
     }
 }
