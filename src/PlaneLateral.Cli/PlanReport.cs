@@ -28,8 +28,9 @@ internal static class PlanReport
         sb.Append("\nLines of resistance\n");
         var lt = new TextTable("line", "form", $"x [{len}]", $"y [{len}]", "direction", "members", $"level recovery error").Numeric(2, 3, 5, 6);
         foreach (var l in r.Lines)
-            lt.Add(l.Line.Id, l.Line.Form switch { PlanLineForm.Wall => "wall", PlanLineForm.StoryStiffness => "story stiffness", PlanLineForm.File => "model file", _ => "model" },
-                L(l.Line.X0), L(l.Line.Y0), l.Line.DirectionLabel, l.Line.Model.Members.Count.ToString(), TextTable.Sci(l.RecoveryError));
+            lt.Add(l.Line.Id, l.Line.Form switch { PlanLineForm.Wall => l.Line.Panel >= 0 ? "wall (panel)" : "wall", PlanLineForm.StoryStiffness => "story stiffness", PlanLineForm.File => "model file", _ => "model" },
+                L(l.Line.X0), L(l.Line.Y0), l.Line.DirectionLabel,
+                l.Line.Panel >= 0 ? $"panel, {l.Recovered.Panels[l.Line.Panel].Mesh.Mesh.Elements.Length} el." : l.Line.Model.Members.Count.ToString(), TextTable.Sci(l.RecoveryError));
         sb.Append(lt.Render());
 
         sb.Append("\nChecks of every floor solve (line forces against floor loads)\n");
@@ -108,15 +109,36 @@ internal static class PlanReport
             }
         sb.Append(dt.Render());
 
+        if (p.Points.Count > 0)
+        {
+            sb.Append("\nNamed points (\"points\"): displacement and story drift at each floor (all cases in plan-points.csv)\n");
+            var qt = new TextTable("case", "level", "point", $"ux [{len}]", $"uy [{len}]", $"drift x [{len}]", $"drift y [{len}]", "drift / height").Numeric(3, 4, 5, 6, 7);
+            foreach (var c in r.Cases.Where(c => governing.Contains(c.Case.Id)))
+                foreach (var q in c.Points.OrderByDescending(q => q.Level))
+                {
+                    double h = p.Levels[q.Level].Elevation - p.Levels[q.Level - 1].Elevation;
+                    qt.Add(c.Case.Id, p.Levels[q.Level].Id, q.Point, L(q.Ux), L(q.Uy), L(q.DriftX), L(q.DriftY), TextTable.Sci(Math.Sqrt(q.DriftX * q.DriftX + q.DriftY * q.DriftY) / h));
+                }
+            sb.Append(qt.Render());
+        }
+
         if (r.DriftChecks.Count > 0)
         {
             var lim = p.DriftLimit!;
             sb.Append($"\nCorner drift check, the governing case of each story over every case solved (A_x cases included; all in\n" +
                       $"plan-drift-checks.csv): δ = C_d·δ_e/I_e (ASCE 7-16 eq. 12.8-15), C_d = {lim.Cd}, I_e = {lim.Ie}, allowed {lim.AllowedRatio}\n");
             var t = new TextTable("case", "story", "corner", $"δ [{len}]", "ratio", "allowed", "result").Numeric(1, 2, 3, 4, 5);
-            foreach (var d in r.DriftChecks.GroupBy(d => d.Story).OrderBy(g => g.Key).Select(g => g.MaxBy(d => d.Ratio / d.Allowed)!))
+            foreach (var d in r.DriftChecks.Where(d => d.Point is null).GroupBy(d => d.Story).OrderBy(g => g.Key).Select(g => g.MaxBy(d => d.Ratio / d.Allowed)!))
                 t.Add(d.Case, d.Story.ToString(), (d.Vertex + 1).ToString(), L(d.Amplified), TextTable.Num(d.Ratio), d.Allowed.ToString("0.000"), d.Within ? "within" : "exceeds");
             sb.Append(t.Render());
+            if (p.Points.Count > 0)
+            {
+                sb.Append("Named points, the governing case of each story and point:\n");
+                var pt = new TextTable("point", "case", "story", $"δ [{len}]", "ratio", "allowed", "result").Numeric(2, 3, 4, 5);
+                foreach (var d in r.DriftChecks.Where(d => d.Point is not null).GroupBy(d => (d.Story, d.Point)).OrderBy(g => g.Key.Story).ThenBy(g => g.Key.Point, StringComparer.Ordinal).Select(g => g.MaxBy(d => d.Ratio / d.Allowed)!))
+                    pt.Add(d.Point!, d.Case, d.Story.ToString(), L(d.Amplified), TextTable.Num(d.Ratio), d.Allowed.ToString("0.000"), d.Within ? "within" : "exceeds");
+                sb.Append(pt.Render());
+            }
         }
         sb.Append(PlanFloorReport.Render(r));   // floors that bend: with a "floor" block only
         sb.Append("\n" + Wrap($"Caution: {ResultFiles.Caution}", TextTable.Width));

@@ -39,9 +39,9 @@ public static class PlanPlots
         {
             double c = Math.Cos(l.Angle), s = Math.Sin(l.Angle);
             PlanPoint At(double t) => new(l.X0 + t * c, l.Y0 + t * s);
-            if (l.Form == PlanLineForm.Wall && l.Model.Sections.Count > 0 && double.IsFinite(l.Model.Sections[0].Depth) && l.Model.Sections[0].Depth > 0)
+            if (l.Form == PlanLineForm.Wall && l.PlanLength > 0)   // a compact wall, as members or as a panel: its own plan length
             {
-                double h = l.Model.Sections[0].Depth / 2;
+                double h = l.PlanLength / 2;
                 list.Add(new PlanSegment(l.Id, At(-h), At(h), true));
                 continue;
             }

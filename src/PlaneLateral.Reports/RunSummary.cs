@@ -104,8 +104,8 @@ public static class RunSummary
         lines.Add(Row("Checks", $"{(ok ? "passed" : "LOOK")}: worst imbalance {Sci(r.WorstEquilibriumError)}, worst backward error {Sci(r.WorstBackwardError)}, " +
             $"line recovery {Sci(recovery)}"));
         if (r.DriftChecks.MaxBy(d => d.Ratio / d.Allowed) is { } d)
-            lines.Add(Row("Drift", $"{(d.Within ? "within" : "EXCEEDS")}: corner drift {P(d.Ratio)} of {P(d.Allowed)} allowed, story {d.Story}, case {d.Case}, " +
-                $"corner {d.Vertex + 1}"));
+            lines.Add(Row("Drift", $"{(d.Within ? "within" : "EXCEEDS")}: {(d.Point is null ? "corner" : "point")} drift {P(d.Ratio)} of {P(d.Allowed)} allowed, story {d.Story}, case {d.Case}, " +
+                d.Where));
         else lines.Add(Row("Drift", "no drift check declared (\"driftCheck\" in the building file)"));
         // Lines along the loading (those with a direct share): a line across it carries only a small torsional shear, whose
         // relative gap says little about the split (the detail table lists every line).

@@ -73,7 +73,7 @@ public static class PlanAnalysis
             var lineStories = new List<PlanLineStory>();
             // Each line's planar story shears once per case (every story at once), not once per story: asked per story they
             // cost 2.4 s of a 3.8 s run on a 40-story, 24-line building (docs/benchmarks.md).
-            var planarStories = lineResults.Select(lr => StoryAnalysis.ForCase(lr.Recovered, lr.Recovered.Cases[ci]).Stories).ToList();
+            var planarStories = lineResults.Select(lr => PlanarStoryShears(lr, ci)).ToList();
             for (int s = 1; s <= n; s++)
                 for (int i = 0; i < plan.Lines.Count; i++)
                 {
@@ -84,13 +84,13 @@ public static class PlanAnalysis
                     double scale = Math.Max(Math.Abs(st.Vx), Math.Abs(st.Vy));
                     double share = Math.Abs(along) > 1e-9 * scale && scale > 0 ? v / along : double.NaN;
                     var planar = planarStories[i];
-                    double planarShear = planar.Count >= s ? planar[s - 1].Shear : double.NaN;
+                    double planarShear = planar.Count >= s ? planar[s - 1] : double.NaN;
                     var ulv = Project(line, u, n);
                     double drift = ulv[s - 1] - (s >= 2 ? ulv[s - 2] : 0);
                     lineStories.Add(new PlanLineStory(s, line.Id, v, share, vd, v - vd, planarShear, drift));
                 }
             caseResults.Add(new PlanCaseResult(c, motion, lockedMotion, eta, Equilibrium(plan, c, lineForces.Select(lf => lf[ci]).ToList(), size),
-                stories, lineStories, Vertices(plan, motion)));
+                stories, lineStories, Vertices(plan, motion)) { Points = PointMotions(plan, (l, p) => motion[l].At(p)) });
         }
 
         return new PlanResult
@@ -116,11 +116,11 @@ public static class PlanAnalysis
     /// </summary>
     public static Condensation Condense(PlanLine line, int floors, AnalysisOptions? options = null)
     {
-        var cases = Enumerable.Range(0, floors).Select(j => new LoadCase($"unit {j + 1}", "unit force at a level", [new NodalLoad(line.LevelNodes[j], 1.0, 0, 0)], [])).ToList();
-        var r = LinearStaticAnalysis.Run(ForLoads(line.Model, cases), options);
+        var units = Enumerable.Range(0, floors).Select(j => Enumerable.Range(0, floors).Select(i => i == j ? 1.0 : 0.0).ToArray()).ToList();
+        var r = LinearStaticAnalysis.Run(Loaded(line, units.Select((_, j) => $"unit {j + 1}").ToList(), units, "unit force at a level"), options);
         var flex = new double[floors, floors];
         for (int j = 0; j < floors; j++)
-            for (int i = 0; i < floors; i++) flex[i, j] = r.Cases[j].Displacement(line.LevelNodes[i], Dof.X);
+            for (int i = 0; i < floors; i++) flex[i, j] = LevelDisplacement(line, r, j, i);
         double biggest = 0, asym = 0;
         for (int i = 0; i < floors; i++)
             for (int j = 0; j < floors; j++) { biggest = Math.Max(biggest, Math.Abs(flex[i, j])); asym = Math.Max(asym, Math.Abs(flex[i, j] - flex[j, i])); }
@@ -129,18 +129,54 @@ public static class PlanAnalysis
         var kk = DenseMatrix.OfArray(flex).Inverse().ToArray();
         for (int i = 0; i < floors; i++)
             for (int j = 0; j < i; j++) kk[i, j] = kk[j, i] = 0.5 * (kk[i, j] + kk[j, i]);
-        return new Condensation(kk, biggest == 0 ? 0 : asym / biggest, r.Cases.Count == 0 ? 0 : r.Cases.Max(c => c.BackwardError));
+        return new Condensation(kk, biggest == 0 ? 0 : asym / biggest, WorstBackwardError(line, r));
     }
 
-    /// <summary>The line's model with the given load cases only (its own cases, checks and seismic block set aside).</summary>
-    private static StructureModel ForLoads(StructureModel m, IReadOnlyList<LoadCase> cases)
+    /// <summary>
+    /// The line's model loaded by level forces only, one case per entry of <paramref name="forces"/> (N, lowest level
+    /// first): on its level nodes (a line of members), or on its panel's floor ties (a panel line). Its own cases,
+    /// combinations, checks, seismic block and its panels' own story forces (which refer to its own cases) are set aside.
+    /// </summary>
+    private static StructureModel Loaded(PlanLine line, IReadOnlyList<string> ids, IReadOnlyList<double[]> forces, string description)
     {
+        var m = line.Model;
         var b = m.Building;
+        var cases = ids.Select((id, ci) => new LoadCase(id, description,
+            line.Panel >= 0 ? [] : forces[ci].Select((p, l) => new NodalLoad(line.LevelNodes[l], p, 0, 0)).ToList(), [])).ToList();
+        var panels = m.Panels.Select((p, i) => i != line.Panel ? (p.Loads.Count == 0 ? p : p with { Loads = [] }) : p with
+        {
+            Loads = Enumerable.Range(0, ids.Count).SelectMany(ci => forces[ci].Select((f, l) => (f, l)).Where(x => x.f != 0)
+                .Select(x => new PanelLoad(ci, p.Levels[line.LevelNodes[x.l]], x.f, 0, PanelLoadPath.Tie))).ToList(),
+        }).ToList();
         return m with
         {
-            LoadCases = cases, Combinations = [], StiffnessPoints = [], Comparisons = [], Seismic = null,
+            LoadCases = cases, Combinations = [], StiffnessPoints = [], Comparisons = [], Seismic = null, Panels = panels,
             Building = new BuildingData { Levels = b.Levels, MemberLines = b.MemberLines, Lines = b.Lines, Modifiers = b.Modifiers, CrackedSections = b.CrackedSections },
         };
+    }
+
+    /// <summary>The line's displacement (m) along it at its level <paramref name="level"/> (0 = the lowest floor) in case <paramref name="ci"/>: its level node's ux, or its panel's floor tie.</summary>
+    internal static double LevelDisplacement(PlanLine line, AnalysisResult r, int ci, int level) =>
+        line.Panel >= 0 ? r.Panels[line.Panel].LevelDisplacements[ci][line.LevelNodes[level]] : r.Cases[ci].Displacement(line.LevelNodes[level], Dof.X);
+
+    /// <summary>Worst backward error of a line's solves: its frame's cases and, for a panel line, its panel's.</summary>
+    internal static double WorstBackwardError(PlanLine line, AnalysisResult r) =>
+        r.Cases.Select(c => c.BackwardError).Concat(line.Panel >= 0 ? r.Panels[line.Panel].Analysis.Cases.Select(c => c.BackwardError) : []).DefaultIfEmpty(0).Max();
+
+    /// <summary>
+    /// The recovered line's story shears (N, story 1 first) in case <paramref name="ci"/> by statics of its own model,
+    /// beside the floors' numbers: a line of members by its members' forces across each story's cut
+    /// (<see cref="StoryAnalysis"/>); a panel line by its base reactions and the tie forces below the cut
+    /// (<see cref="StoryPanels"/>: V(y_c) = −(Σ base Rx + Σ tie forces below y_c)).
+    /// </summary>
+    internal static IReadOnlyList<double> PlanarStoryShears(PlanLineResult lr, int ci)
+    {
+        var r = lr.Recovered;
+        if (lr.Line.Panel < 0) return StoryAnalysis.ForCase(r, r.Cases[ci]).Stories.Select(s => s.Shear).ToList();
+        var p = r.Model.Panels[lr.Line.Panel];
+        var actions = StoryPanels.HorizontalActions(r, lr.Line.Panel, ci);
+        var lv = p.Levels.Prepend(0.0).ToList();
+        return Enumerable.Range(1, lv.Count - 1).Select(s => StoryPanels.ShearAcrossCut(actions, p.Y0 + 0.5 * (lv[s - 1] + lv[s]))).ToList();
     }
 
     /// <summary>K = Σ Tᵀ K̂ T on (Ux, Uy, Rz) per floor, T's row i = (cos α, sin α, r) at floor i.</summary>
@@ -281,17 +317,32 @@ public static class PlanAnalysis
         return list;
     }
 
+    /// <summary>
+    /// The user's named points at every floor: displacement by <paramref name="at"/> (floor index from 0, point → ux, uy)
+    /// and drift, this floor minus the one below at the same plan point (the base does not move).
+    /// </summary>
+    internal static List<PlanPointMotion> PointMotions(BuildingPlan plan, Func<int, PlanPoint, (double Ux, double Uy)> at)
+    {
+        var list = new List<PlanPointMotion>();
+        for (int l = 1; l < plan.Levels.Count; l++)
+            foreach (var q in plan.Points)
+            {
+                var (ux, uy) = at(l - 1, q.At);
+                var (bx, by) = l >= 2 ? at(l - 2, q.At) : (0, 0);
+                list.Add(new PlanPointMotion(l, q.Id, q.At, ux, uy, ux - bx, uy - by));
+            }
+        return list;
+    }
+
     /// <summary>Recovers the line's planar model under the level forces p (one case per building case), and checks its level displacements.</summary>
     internal static PlanLineResult Recover(PlanLine line, Condensation c, IReadOnlyList<string> ids, double[][] forces, IReadOnlyList<double[]> expected, AnalysisOptions? options)
     {
-        var cases = ids.Select((id, ci) => new LoadCase(id, "level forces from the floors",
-            forces[ci].Select((p, l) => new NodalLoad(line.LevelNodes[l], p, 0, 0)).ToList(), [])).ToList();
-        var r = LinearStaticAnalysis.Run(ForLoads(line.Model, cases), options);
+        var r = LinearStaticAnalysis.Run(Loaded(line, ids, forces, "level forces from the floors"), options);
         double err = 0, scale = 0;
         for (int ci = 0; ci < ids.Count; ci++)
             for (int l = 0; l < line.LevelNodes.Count; l++)
             {
-                err = Math.Max(err, Math.Abs(r.Cases[ci].Displacement(line.LevelNodes[l], Dof.X) - expected[ci][l]));
+                err = Math.Max(err, Math.Abs(LevelDisplacement(line, r, ci, l) - expected[ci][l]));
                 scale = Math.Max(scale, Math.Abs(expected[ci][l]));
             }
         return new PlanLineResult(line, new MatrixView(c.K), c.SymmetryError, c.BackwardError, r, scale == 0 ? err : err / scale);
@@ -396,6 +447,12 @@ public static class PlanAnalysis
                 double d = Math.Sqrt(worst.DriftX * worst.DriftX + worst.DriftY * worst.DriftY);
                 double amp = lim.Cd * d / lim.Ie;
                 list.Add(new CornerDriftCheck(c.Case.Id, s, worst.Vertex, worst.At, d, amp, h, amp / h, lim.AllowedRatio, amp / h <= lim.AllowedRatio));
+                // Every named point too, one row each, labelled by its id.
+                foreach (var q in c.Points.Where(q => q.Level == s))
+                {
+                    double dq = Math.Sqrt(q.DriftX * q.DriftX + q.DriftY * q.DriftY), aq = lim.Cd * dq / lim.Ie;
+                    list.Add(new CornerDriftCheck(c.Case.Id, s, -1, q.At, dq, aq, h, aq / h, lim.AllowedRatio, aq / h <= lim.AllowedRatio) { Point = q.Point });
+                }
             }
         return list;
     }

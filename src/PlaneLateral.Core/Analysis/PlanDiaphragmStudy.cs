@@ -141,7 +141,7 @@ public static partial class PlanDiaphragm
             var stories = PlanAnalysis.StoryLoads(c, n);
             var lineStories = new List<PlanLineStory>();
             // Each line's planar story shears once per case, not once per story (as PlanAnalysis.Run does; docs/benchmarks.md).
-            var planarStories = lineResults.Select(lr => StoryAnalysis.ForCase(lr.Recovered, lr.Recovered.Cases[ci]).Stories).ToList();
+            var planarStories = lineResults.Select(lr => PlanAnalysis.PlanarStoryShears(lr, ci)).ToList();
             for (int st = 1; st <= n; st++)
                 for (int i = 0; i < plan.Lines.Count; i++)
                 {
@@ -152,7 +152,7 @@ public static partial class PlanDiaphragm
                     double scale = Math.Max(Math.Abs(sl.Vx), Math.Abs(sl.Vy));
                     double share = Math.Abs(along) > 1e-9 * scale && scale > 0 ? v / along : double.NaN;
                     var planar = planarStories[i];
-                    double planarShear = planar.Count >= st ? planar[st - 1].Shear : double.NaN;
+                    double planarShear = planar.Count >= st ? planar[st - 1] : double.NaN;
                     var ulv = s.LineDisplacements[i][ci];
                     double drift = ulv[st - 1] - (st >= 2 ? ulv[st - 2] : 0);
                     lineStories.Add(new PlanLineStory(st, line.Id, v, share, vd, v - vd, planarShear, drift));
@@ -169,7 +169,8 @@ public static partial class PlanDiaphragm
                 }
             }
             caseResults.Add(new PlanCaseResult(c, motion, lockedMotion, eta,
-                PlanAnalysis.Equilibrium(plan, c, s.LineForces.Select(lf => lf[ci]).ToList(), size), stories, lineStories, vertices));
+                PlanAnalysis.Equilibrium(plan, c, s.LineForces.Select(lf => lf[ci]).ToList(), size), stories, lineStories, vertices)
+            { Points = PlanAnalysis.PointMotions(plan, (l, p) => At(s, ci, l, p)) });   // named points as the corners: with the floor's deformation
         }
         return new PlanResult
         {

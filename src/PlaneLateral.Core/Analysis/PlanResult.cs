@@ -65,7 +65,11 @@ public sealed class PlanResult
 /// <param name="Recovered">The line's planar analysis, one load case per building case (the level forces), same ids.</param>
 /// <param name="RecoveryError">Largest |u_recovered − u_floor| of the line's level displacements over all cases, relative to the largest.</param>
 public sealed record PlanLineResult(PlanLine Line, MatrixView Condensed, double SymmetryError, double CondensationBackwardError,
-    AnalysisResult Recovered, double RecoveryError);
+    AnalysisResult Recovered, double RecoveryError)
+{
+    /// <summary>Worst backward error of the recovery solves: the line's frame and, for a panel line, its panel.</summary>
+    public double RecoveryBackwardError => PlanAnalysis.WorstBackwardError(Line, Recovered);
+}
 
 /// <summary>A floor's motion: Ux, Uy (m) of the plan origin and Rz (rad, counter-clockwise seen from above).</summary>
 public sealed record FloorMotion(int Level, double Ux, double Uy, double Rz)
@@ -94,11 +98,22 @@ public sealed record PlanLineStory(int Story, string Line, double Shear, double 
 /// <summary>A vertex of a floor outline: its displacement and its drift (this level minus the level below at the same plan point), m.</summary>
 public sealed record PlanVertexMotion(int Level, int Vertex, PlanPoint At, double Ux, double Uy, double DriftX, double DriftY);
 
+/// <summary>
+/// A plan point the user named ("points"): its displacement at a level and its drift (this level minus the level below
+/// at the same plan point; story 1: minus the base, which does not move), m. On a rigid floor from the floor's rigid
+/// motion, ux = Ux − Rz·y, uy = Uy + Rz·x; on a floor that bends, as at the outline corners, with the floor's deformation.
+/// </summary>
+public sealed record PlanPointMotion(int Level, string Point, PlanPoint At, double Ux, double Uy, double DriftX, double DriftY);
+
 /// <summary>Results of one load case.</summary>
 /// <param name="BackwardError">‖K·u − f‖∞ / (‖K‖∞‖u‖∞ + ‖f‖∞) of the floor solve, on the system scaled so that Rz is multiplied by the plan size.</param>
 public sealed record PlanCaseResult(PlanLoadCase Case, IReadOnlyList<FloorMotion> Motion, IReadOnlyList<FloorMotion> LockedMotion,
     double BackwardError, PlanEquilibrium Equilibrium, IReadOnlyList<PlanStoryLoad> Stories, IReadOnlyList<PlanLineStory> LineStories,
-    IReadOnlyList<PlanVertexMotion> Vertices);
+    IReadOnlyList<PlanVertexMotion> Vertices)
+{
+    /// <summary>Displacements and drifts at the user's named points (<see cref="BuildingPlan.Points"/>), per level; empty without points.</summary>
+    public IReadOnlyList<PlanPointMotion> Points { get; init; } = [];
+}
 
 /// <summary>A line's story stiffness alone (N/m): story shear over story drift of the line by itself under the direction's floor-force pattern.</summary>
 public sealed record PlanLineStiffness(string Line, double X0, double Y0, double Angle, double Stiffness);
@@ -122,4 +137,12 @@ public sealed record TorsionalIrregularity(string Direction, int Story, string C
     double MaxDisplacement, double AverageDisplacement, double Ax);
 
 /// <summary>Amplified drift δ = C_d·δ_e / I_e at an outline corner (vector drift in plan) against the allowable ratio.</summary>
-public sealed record CornerDriftCheck(string Case, int Story, int Vertex, PlanPoint At, double Drift, double Amplified, double Height, double Ratio, double Allowed, bool Within);
+/// <remarks>A row for a named point has <see cref="Point"/> set (its id) and <see cref="Vertex"/> −1.</remarks>
+public sealed record CornerDriftCheck(string Case, int Story, int Vertex, PlanPoint At, double Drift, double Amplified, double Height, double Ratio, double Allowed, bool Within)
+{
+    /// <summary>The named point's id for a row of a user's point; null for an outline corner.</summary>
+    public string? Point { get; init; }
+
+    /// <summary>"corner 3" or "point \"stair core NE\"", for tables.</summary>
+    public string Where => Point is null ? $"corner {Vertex + 1}" : $"point {Point}";
+}

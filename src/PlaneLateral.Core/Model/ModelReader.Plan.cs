@@ -113,6 +113,7 @@ public static partial class ModelReader
             var lines = levels is null ? [] : ReadPlanLines(pf, levels);
             var cases = levels is null ? [] : ReadPlanLoads(pf, levels, ecc);
             var floors = levels is null ? [] : ReadFloors(levels, lines);
+            var points = levels is null ? [] : ReadPlanPoints(pf, levels);
             PlanDriftLimit? drift = null;
             if (pf.OptionalObject("driftCheck", "give \"driftCheck\": {\"Cd\": ..., \"Ie\": ..., \"allowedRatio\": ...}") is { } dc)
             {
@@ -137,7 +138,7 @@ public static partial class ModelReader
             return new BuildingPlan
             {
                 Title = title, SourcePath = fileName, Units = _units, Levels = levels, Lines = lines, Cases = cases,
-                EccentricityRatio = ecc, DriftLimit = drift, Floors = floors, Seismic = seismic,
+                EccentricityRatio = ecc, DriftLimit = drift, Floors = floors, Seismic = seismic, Points = points,
             };
         }
 
@@ -268,11 +269,43 @@ public static partial class ModelReader
                         break;
                 }
                 f.RejectUnknownKeys();
-                var levelNodes = model is null ? null : MatchLineLevels(model, levels, f.Object, lid, 1e-6 * Math.Max(height, 1));
+                int panelIndex = -1;
+                double tolLevels = 1e-6 * Math.Max(height, 1);
+                var levelNodes = model is null ? null : model.Members.Count == 0 && model.Panels.Count > 0
+                    ? MatchPanelLevels(model, levels, f.Object, lid, tolLevels, out panelIndex)
+                    : MatchLineLevels(model, levels, f.Object, lid, tolLevels);
                 if (!levels.Skip(1).All(l => PlanOutline.Contains(l.Outline, at.Value, 1e-6 * Math.Max(size, 1))))
                     sink.Add(f.Token("at"), $"line \"{lid}\" stands outside the plan outline", "check 'at' against the outline's corners (a line stands on the floor it resists)");
                 if (model is not null && levelNodes is not null)
-                    list.Add(new PlanLine(lid, form, source, at.Value.X, at.Value.Y, angle, model, levelNodes, loc));
+                    list.Add(new PlanLine(lid, form, source, at.Value.X, at.Value.Y, angle, model, levelNodes, loc)
+                    {
+                        Panel = panelIndex,
+                        PlanLength = form != PlanLineForm.Wall ? double.NaN : panelIndex >= 0 ? model.Panels[panelIndex].Length : model.Sections[0].Depth,
+                    });
+            }
+            return list;
+        }
+
+        /// <summary>"points": plan points the user names, each on every floor, reported beside the outline corners.</summary>
+        private List<PlanNamedPoint> ReadPlanPoints(JsonFields pf, List<PlanLevel> levels)
+        {
+            var list = new List<PlanNamedPoint>();
+            var seen = new HashSet<string>(StringComparer.Ordinal);
+            double tol = 1e-6 * Math.Max(1, levels.Skip(1).Max(l => Extent(l.Outline)));
+            foreach (var o in pf.Objects("points", false, $"write \"points\": [{{\"id\": \"stair core NE\", \"at\": [x, y]}}] in {_units.LengthSymbol}"))
+            {
+                var f = new JsonFields(o, sink);
+                var id = ReadId(f, seen, "point");
+                var at = f.Token("at") is { } t ? ReadPoint(t, "'at'") : null;
+                if (!f.Has("at")) sink.Add(o, "missing required key 'at'", $"give the point's plan position as \"at\": [x, y] in {_units.LengthSymbol}");
+                f.RejectUnknownKeys();
+                if (id is null || at is null) continue;
+                if (levels.Skip(1).FirstOrDefault(l => !PlanOutline.Contains(l.Outline, at.Value, tol)) is { } off)
+                {
+                    sink.Add(f.Token("at"), $"point \"{id}\" lies outside the outline of level \"{off.Id}\"", "give a point on every floor (inside or on each level's outline)");
+                    continue;
+                }
+                list.Add(new PlanNamedPoint(id, at.Value));
             }
             return list;
         }
@@ -300,13 +333,27 @@ public static partial class ModelReader
             double length = Positive(f, "length", Quantity.Length, "wall length", $"give the wall's length in plan in {_units.LengthSymbol}");
             double thickness = Positive(f, "thickness", Quantity.Length, "wall thickness", $"give the wall's thickness in {_units.LengthSymbol}");
             var mat = f.RequiredString("material", "give the id of a material listed under \"materials\"");
+            // "as": how the wall is modelled. Members by default for a solid wall; a wall with openings needs the panel.
+            var asWord = f.OptionalString("as", "give \"as\": \"members\" (one Timoshenko member per story) or \"panel\" (a plane-stress panel)")
+                ?? (f.Has("openings") ? "panel" : "members");
+            bool panel = asWord == "panel";
+            if (asWord is not ("members" or "panel"))
+                sink.Add(f.Token("as"), $"unknown wall model \"{asWord}\"", "give \"members\" (one Timoshenko member per story) or \"panel\" (a plane-stress panel with floor ties)");
             double shear = f.OptionalNumber("shearFactor", 1.2, "give the shear form factor, 1.2 for a rectangle");
             if (double.IsFinite(shear) && !(shear >= 1 && shear <= 2)) sink.Add(f.Token("shearFactor"), $"'shearFactor' {shear} is outside [1, 2]", "give 1.2 for a solid rectangle");
+            if (panel && f.Has("shearFactor"))
+                sink.Add(f.Token("shearFactor"), "'shearFactor' belongs to the member form, but the wall is a panel", "remove \"shearFactor\" (the panel's shear stiffness comes from the continuum), or write \"as\": \"members\"");
+            if (!panel && f.Has("openings") && asWord == "members")
+                sink.Add(f.Token("openings"), "a wall with openings cannot be one member per story", "write \"as\": \"panel\" (a plane-stress panel with its openings), or remove \"openings\"");
+            if (!panel && f.Has("mesh") && asWord == "members")
+                sink.Add(f.Token("mesh"), "'mesh' belongs to the panel form, but the wall is members", "write \"as\": \"panel\", or remove \"mesh\"");
+            List<(PanelOpening Opening, JToken At)>? openings = panel ? ReadWallOpenings(f, elevations, length) : [];
+            var mesh = panel ? ReadPanelMesh(f.OptionalObject("mesh", "write \"mesh\": {\"element\": \"quad9\", \"elementsAcrossNarrowest\": 2}")) : null;
             f.RejectUnknownKeys();
             Material? material = null;
             if (mat is not null && !_materials.TryGetValue(mat, out material))
                 sink.Add(f.Token("material"), $"unknown material \"{mat}\"", $"use one of: {string.Join(", ", _materials.Keys)}; or add it under \"materials\"");
-            if (material is null || !double.IsFinite(length) || !double.IsFinite(thickness) || !double.IsFinite(shear)) return null;
+            if (material is null || !double.IsFinite(length) || !double.IsFinite(thickness) || !double.IsFinite(shear) || asWord is not ("members" or "panel")) return null;
             double tol = 1e-6 * Math.Max(1, levels.Skip(1).Max(l => Extent(l.Outline)));
             foreach (int end in new[] { -1, 1 })
             {
@@ -314,7 +361,92 @@ public static partial class ModelReader
                 if (!levels.Skip(1).All(l => PlanOutline.Contains(l.Outline, p, tol)))
                     sink.Add(f.Token("length"), $"an end of wall \"{id}\" stands outside the plan outline", "shorten the wall or move its centre 'at' (the wall is centred on 'at')");
             }
-            return PlanLineModels.Wall(id, fileName, elevations, length, thickness, material, shear, _units);
+            if (!panel) return PlanLineModels.Wall(id, fileName, elevations, length, thickness, material, shear, _units);
+            if (openings is null || mesh is null || !(length > 0 && thickness > 0)) return null;
+            var model = PlanLineModels.WallPanel(id, fileName, elevations, length, thickness, material, openings.Select(x => x.Opening).ToList(), mesh, _units);
+            // The panel's own layout checks (openings overlapping, strips narrower than an element, mesh too big...), each
+            // at the compact wall's key that causes it: an opening's problem at that opening, a mesh problem at "mesh".
+            foreach (var q in PanelLayout.Check(model.Panels[0]))
+            {
+                JToken where = o;
+                if (q.Key.StartsWith("openings[", StringComparison.Ordinal) && int.TryParse(q.Key[9..q.Key.IndexOf(']')], out int k) && k < openings.Count) where = openings[k].At;
+                else if (q.Key.StartsWith("mesh", StringComparison.Ordinal)) where = f.Token("mesh") ?? o;
+                sink.Add(where, $"wall \"{id}\" as a panel: {q.Problem}", q.Fix);
+            }
+            return model;
+        }
+
+        /// <summary>
+        /// The openings of a compact wall: "left" from the wall's start end (the end first along the line's direction),
+        /// "bottom" above the wall's base, or above the floor of each story listed in "stories". Checked here, in the
+        /// file's units, at the opening's keys: inside the wall's length with solid wall at both ends, below the top,
+        /// within its story (not crossing a floor level). Null when one could not be read.
+        /// </summary>
+        private List<(PanelOpening Opening, JToken At)>? ReadWallOpenings(JsonFields f, double[] elevations, double length)
+        {
+            string lu = _units.LengthSymbol;
+            string L(double si) => _units.FromSI(si, Quantity.Length).ToString("0.###", System.Globalization.CultureInfo.InvariantCulture) + " " + lu;
+            var list = new List<(PanelOpening, JToken)>();
+            bool ok = true;
+            var ids = new HashSet<string>(StringComparer.Ordinal);
+            int n = elevations.Length - 1;
+            double b0 = elevations[0], top = elevations[^1] - b0, tol = 1e-9 * Math.Max(top, length);
+            var items = f.Objects("openings", false, "write \"openings\": [ {\"id\": \"door\", \"left\": ..., \"bottom\": 0, \"width\": ..., \"height\": ..., \"stories\": [1]} ]");
+            for (int k = 0; k < items.Count; k++)
+            {
+                var oo = items[k];
+                var g = new JsonFields(oo, sink);
+                string oid = g.Has("id") ? g.RequiredString("id", "give the opening an id string") ?? "" : $"opening {k + 1}";
+                if (oid != "" && !ids.Add(oid)) sink.Add(g.Token("id"), $"duplicate opening id \"{oid}\"", "give each opening its own id");
+                double left = SI(g.RequiredNumber("left", $"give the distance from the wall's start end (the end first along the line's direction) to the opening, in {lu}"), Quantity.Length);
+                double bottom = SI(g.OptionalNumber("bottom", 0, $"give the opening's bottom above the floor of its story (with \"stories\") or above the base, in {lu}; 0 for a door"), Quantity.Length);
+                double w = Positive(g, "width", Quantity.Length, "opening", $"give the opening's width in {lu}");
+                double h = Positive(g, "height", Quantity.Length, "opening", $"give the opening's height in {lu}");
+                var stories = new List<int>();
+                if (g.Token("stories") is { } st)
+                {
+                    if (st is JArray sa && sa.Count > 0)
+                        foreach (var v in sa)
+                        {
+                            if (v.Type == JTokenType.Integer && (long)v >= 1 && (long)v <= n) stories.Add((int)(long)v);
+                            else { ok = false; sink.Add(v, $"story {v.ToString(Formatting.None)} is not a story of the building (1 to {n})", $"list story numbers from 1 (the lowest) to {n}"); }
+                        }
+                    else if (st.Type == JTokenType.String && (string)st! == "all") stories.AddRange(Enumerable.Range(1, n));
+                    else { ok = false; sink.Add(st, $"'stories' must be a list of story numbers or \"all\", found {JsonFields.Describe(st)}", $"write \"stories\": [1, 2] (1 = the lowest) or \"all\""); }
+                }
+                g.RejectUnknownKeys();
+                if (!(double.IsFinite(left) && double.IsFinite(bottom) && w > 0 && h > 0)) { ok = false; continue; }
+                if (left <= tol || left + w >= length - tol)
+                {
+                    ok = false;
+                    sink.Add(g.Token("left") ?? oo, $"opening \"{oid}\" runs from {L(left)} to {L(left + w)} along the {L(length)} wall: it reaches or passes an end of the wall",
+                        "keep solid wall at both ends (0 < left and left + width < length); a wall with a full-height gap is two walls: give two lines");
+                    continue;
+                }
+                if (bottom < -tol) { ok = false; sink.Add(g.Token("bottom"), $"opening \"{oid}\" starts {L(-bottom)} below {(stories.Count > 0 ? "the floor of its story" : "the base")}", "give \"bottom\" ≥ 0 (0 for a door)"); continue; }
+                foreach (var s in stories.Count > 0 ? stories : [0])
+                {
+                    double lo = (s == 0 ? 0 : elevations[s - 1] - b0) + bottom, hi = lo + h;
+                    string where = s == 0 ? "" : $" in story {s}";
+                    if (hi >= top - tol)
+                    {
+                        ok = false;
+                        sink.Add(g.Token("height") ?? oo, $"opening \"{oid}\"{where} reaches {L(hi)} above the base, at or above the wall's top ({L(top)})",
+                            "lower the opening or its height: solid wall must remain above every opening, under the roof");
+                        continue;
+                    }
+                    if (Enumerable.Range(1, n - 1).Select(i => elevations[i] - b0).FirstOrDefault(e => e > lo + tol && e < hi - tol, double.NaN) is var crossed && double.IsFinite(crossed))
+                    {
+                        ok = false;
+                        sink.Add(g.Token("height") ?? oo, $"opening \"{oid}\"{where} runs from {L(lo)} to {L(hi)} above the base and crosses the floor level at {L(crossed)}",
+                            s == 0 ? "a floor meets the wall in solid wall: keep the opening within one story, or give \"stories\" and the bottom above that story's floor"
+                                   : "keep bottom + height within the story's height, so the floor meets the wall in solid wall");
+                        continue;
+                    }
+                    list.Add((new PanelOpening(s == 0 || stories.Count == 1 ? oid : $"{oid} (story {s})", left, lo, w, h), oo));
+                }
+            }
+            return ok ? list : null;
         }
 
         private StructureModel? ReadStoryStiffness(JToken t, string id, double[] elevations)
@@ -377,9 +509,51 @@ public static partial class ModelReader
             return m;
         }
 
+        /// <summary>
+        /// A line whose model is one plane-stress panel and nothing else: the panel's floor ties are where the floors
+        /// hold it, so its base must stand at the building's base and its floor levels and top at the building's levels.
+        /// The tie index at each building level above the base, or null (with a diagnostic).
+        /// </summary>
+        private int[]? MatchPanelLevels(StructureModel m, List<PlanLevel> levels, JObject at, string id, double tol, out int panel)
+        {
+            panel = -1;
+            string want = string.Join(", ", levels.Skip(1).Select(l => _units.FromSI(l.Elevation - levels[0].Elevation, Quantity.Length).ToString("0.###", System.Globalization.CultureInfo.InvariantCulture)));
+            if (m.Panels.Count != 1 || m.Nodes.Count > 0)
+            {
+                sink.Add(at, $"line \"{id}\" is given by {m.Panels.Count} panel(s){(m.Nodes.Count > 0 ? " and nodes without members" : "")}: a line of panels alone holds one panel",
+                    "give each wall panel its own line, or link the panels to a frame of the line (\"links\", docs/panels.md)");
+                return null;
+            }
+            var p = m.Panels[0];
+            if (p.Links.Count > 0 || !p.FloorTies)
+            {
+                sink.Add(at, $"the panel of line \"{id}\" has {(p.Links.Count > 0 ? "links" : "\"floorTies\": false")}, so the floors cannot hold it by its floor ties",
+                    "give the panel \"floorTies\": true (the default) and no links: the floors hold a panel line at its floor levels and top");
+                return null;
+            }
+            var own = p.Levels.Select(l => p.Y0 + l).Prepend(p.Y0).ToList();
+            if (own.Count != levels.Count || own.Zip(levels).Any(q => Math.Abs(q.First - q.Second.Elevation) > tol))
+            {
+                string got = string.Join(", ", p.Levels.Select(l => _units.FromSI(l, Quantity.Length).ToString("0.###", System.Globalization.CultureInfo.InvariantCulture)));
+                sink.Add(at, $"the panel of line \"{id}\" stands at y = {_units.FromSI(p.Y0, Quantity.Length).ToString("0.###", System.Globalization.CultureInfo.InvariantCulture)} with floor levels and top at {got} above its base, not at the building's levels",
+                    $"give the panel \"y\" at the base's elevation ({_units.FromSI(levels[0].Elevation, Quantity.Length).ToString("0.###", System.Globalization.CultureInfo.InvariantCulture)} {_units.LengthSymbol}), \"floorLevels\" and \"height\" so that its levels are the building's: {want} {_units.LengthSymbol} above the base");
+                return null;
+            }
+            panel = 0;
+            return Enumerable.Range(0, levels.Count - 1).ToArray();
+        }
+
         /// <summary>The line's node at each building level above the base, or null (with a diagnostic) when its levels do not match.</summary>
         private int[]? MatchLineLevels(StructureModel m, List<PlanLevel> levels, JObject at, string id, double tol)
         {
+            // A panel without links stands beside the line's frame as a structure of its own (docs/panels.md): the floors
+            // could not reach it through the frame's levels, and its stiffness would be silently left out.
+            if (m.Panels.FirstOrDefault(p => p.Links.Count == 0) is { } loose)
+            {
+                sink.Add(at, $"panel \"{loose.Id}\" of line \"{id}\" has no links to the line's frame, so it would stand beside the line without being part of it",
+                    "link the panel to the frame's nodes (\"links\", docs/panels.md), or give it as a line of its own (a planar model of that panel alone)");
+                return null;
+            }
             var own = m.Building.Levels;
             string want = string.Join(", ", levels.Select(l => _units.FromSI(l.Elevation, Quantity.Length).ToString("0.###", System.Globalization.CultureInfo.InvariantCulture)));
             string fix = $"give the line's model \"levels\" at the building's elevations ({want} {_units.LengthSymbol}), the base first";

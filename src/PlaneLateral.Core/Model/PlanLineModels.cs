@@ -31,6 +31,30 @@ public static class PlanLineModels
     }
 
     /// <summary>
+    /// A compact wall as a plane-stress panel (docs/panels.md): <paramref name="length"/> long, centred on the line's
+    /// point (x from −length/2 to +length/2 in the line's plane), from the base to the top level, with a floor level at
+    /// every building level between and a floor tie at each level and the top (the floors hold the line there), the
+    /// base held, the top free. <paramref name="openings"/> are measured from the wall's start end (x = −length/2) and
+    /// from the base (m). The model holds the panel alone: no nodes, members or supports.
+    /// </summary>
+    public static StructureModel WallPanel(string lineId, string source, IReadOnlyList<double> elevations, double length, double thickness,
+        Material material, IReadOnlyList<PanelOpening> openings, PanelMeshSettings mesh, UnitSystem units)
+    {
+        double b = elevations[0];
+        var panel = new WallPanel
+        {
+            Id = lineId, X0 = -length / 2, Y0 = b, Length = length, Height = elevations[^1] - b, Thickness = thickness,
+            MaterialId = material.Id, E = material.E, Nu = material.Nu, Openings = openings,
+            FloorLevels = elevations.Skip(1).SkipLast(1).Select(e => e - b).ToList(), FloorTies = true, Mesh = mesh,
+        };
+        return new StructureModel
+        {
+            Title = lineId, SourcePath = source, Units = units, Materials = [material], Sections = [], Nodes = [], Members = [],
+            Supports = [], LoadCases = [], Combinations = [], StiffnessPoints = [], Panels = [panel],
+        };
+    }
+
+    /// <summary>
     /// A line known by its story stiffnesses <paramref name="stiffness"/> (N/m, story 1 first): story s is an axial-only
     /// member from the node at level s − 1 to the node at level s, offset sideways by one story height so that it slopes
     /// at 45°, with E·A = k·L/cos²θ; every level node is held vertically and against rotation. Its horizontal stiffness is

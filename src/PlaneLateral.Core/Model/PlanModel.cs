@@ -23,7 +23,7 @@ public enum PlanLineForm
     Inline,
     /// <summary>A planar model in a file beside the building file.</summary>
     File,
-    /// <summary>The compact wall form, turned into Timoshenko members per story.</summary>
+    /// <summary>The compact wall form, turned into Timoshenko members per story or into a plane-stress panel (<see cref="PlanLine.Panel"/>).</summary>
     Wall,
     /// <summary>Story stiffnesses given directly (a shear-type line), turned into exact horizontal story springs.</summary>
     StoryStiffness,
@@ -33,11 +33,23 @@ public enum PlanLineForm
 /// A line of resistance placed in plan: its planar model's X axis runs along the direction <see cref="Angle"/> (rad,
 /// from plan X towards plan Y) through the point (<see cref="X0"/>, <see cref="Y0"/>) (m). The planar model's level
 /// <c>l</c> is tied to the floor at building level <c>l</c>: its lateral DOF is the equation of node
-/// <see cref="LevelNodes"/>[l − 1] in X (the master of the line's own rigid diaphragm at that level).
+/// <see cref="LevelNodes"/>[l − 1] in X (the master of the line's own rigid diaphragm at that level). A line whose
+/// model is one plane-stress panel (<see cref="Panel"/> ≥ 0) is held by the panel's floor ties instead:
+/// <see cref="LevelNodes"/>[l − 1] is then the index of the tie (the panel's level, its top last) at building level <c>l</c>.
 /// </summary>
 public sealed record PlanLine(string Id, PlanLineForm Form, string Source, double X0, double Y0, double Angle,
     StructureModel Model, IReadOnlyList<int> LevelNodes, CheckLocation At)
 {
+    /// <summary>
+    /// Index in <see cref="StructureModel.Panels"/> of the panel that is the whole line (a compact wall given
+    /// <c>"as": "panel"</c>, or a planar model of one panel and nothing else), whose floor ties the floors hold; −1 for
+    /// a line of members (and panels linked to them).
+    /// </summary>
+    public int Panel { get; init; } = -1;
+
+    /// <summary>The line's plan length when the tool knows it (a compact wall), m; NaN otherwise.</summary>
+    public double PlanLength { get; init; } = double.NaN;
+
     public double Cos => Math.Abs(Math.Cos(Angle)) < 1e-15 ? 0 : Math.Cos(Angle);
     public double Sin => Math.Abs(Math.Sin(Angle)) < 1e-15 ? 0 : Math.Sin(Angle);
 
@@ -58,6 +70,9 @@ public sealed record PlanFloorLoad(int Level, double Fx, double Fy, double Mz);
 /// eccentricity; <see cref="Family"/> is the id of the case as the user named it.
 /// </summary>
 public sealed record PlanLoadCase(string Id, string Family, string Description, string Direction, int Eccentricity, IReadOnlyList<PlanFloorLoad> Loads);
+
+/// <summary>A plan point the user names (docs/plan.md, "points"): its displacements and story drifts are reported at every floor (m).</summary>
+public sealed record PlanNamedPoint(string Id, PlanPoint At);
 
 /// <summary>Corner drift check: δ = C_d·δ_e / I_e (ASCE 7-16 eq. 12.8-15) at every outline vertex against an allowable ratio.</summary>
 public sealed record PlanDriftLimit(double Cd, double Ie, double AllowedRatio);
@@ -81,6 +96,9 @@ public sealed record BuildingPlan
     public double EccentricityRatio { get; init; } = 0.05;
 
     public PlanDriftLimit? DriftLimit { get; init; }
+
+    /// <summary>Plan points named by the user ("points"), reported at every floor beside the outline corners; none by default.</summary>
+    public IReadOnlyList<PlanNamedPoint> Points { get; init; } = [];
 
     /// <summary>The floors' in-plane models that the file gives (docs/plan.md, "Floors that bend"); a floor not listed is rigid.</summary>
     public IReadOnlyList<PlanFloor> Floors { get; init; } = [];

@@ -28,12 +28,13 @@ public static class PlanFiles
             ("plan-torsional-irregularity.csv", Irregularity(r)),
             ("plan-checks.csv", Checks(r)),
         };
+        if (r.Plan.Points.Count > 0) files.Add(("plan-points.csv", Points(r)));
         if (r.DriftChecks.Count > 0) files.Add(("plan-drift-checks.csv", Drifts(r)));
         files.AddRange(PlanDiaphragmFiles.Render(r));   // floors that bend: with a "floor" block only
         foreach (var line in r.Lines)
         {
             var own = ResultFiles.Planar(line.Recovered).ToDictionary(f => f.Name, f => f.Text);
-            foreach (var name in new[] { "member-forces.csv", "reactions.csv", "displacements.csv" })
+            foreach (var name in new[] { "member-forces.csv", "reactions.csv", "displacements.csv", "panels.json", "panel-stresses.csv", "panel-checks.csv" })
                 if (own.TryGetValue(name, out var text)) files.Add(($"line-{Safe(line.Line.Id)}-{name}", text));
         }
         return files;
@@ -67,6 +68,18 @@ public static class PlanFiles
         foreach (var c in r.Cases)
             foreach (var v in c.Vertices)
                 sb.Append($"{Csv(c.Case.Id)},{Csv(r.Plan.Levels[v.Level].Id)},{v.Vertex + 1},{F(u.FromSI(v.At.X, Quantity.Length))},{F(u.FromSI(v.At.Y, Quantity.Length))},{F(u.FromSI(v.Ux, Quantity.Length))},{F(u.FromSI(v.Uy, Quantity.Length))},{F(u.FromSI(v.DriftX, Quantity.Length))},{F(u.FromSI(v.DriftY, Quantity.Length))}\n");
+        return sb.ToString();
+    }
+
+    /// <summary>The user's named points: displacement and drift per case and level (with "points" only).</summary>
+    private static string Points(PlanResult r)
+    {
+        var u = r.Plan.Units;
+        string len = u.LengthSymbol;
+        var sb = new StringBuilder($"case,level,point,x [{len}],y [{len}],ux [{len}],uy [{len}],drift x [{len}],drift y [{len}]\n");
+        foreach (var c in r.Cases)
+            foreach (var q in c.Points)
+                sb.Append($"{Csv(c.Case.Id)},{Csv(r.Plan.Levels[q.Level].Id)},{Csv(q.Point)},{F(u.FromSI(q.At.X, Quantity.Length))},{F(u.FromSI(q.At.Y, Quantity.Length))},{F(u.FromSI(q.Ux, Quantity.Length))},{F(u.FromSI(q.Uy, Quantity.Length))},{F(u.FromSI(q.DriftX, Quantity.Length))},{F(u.FromSI(q.DriftY, Quantity.Length))}\n");
         return sb.ToString();
     }
 
@@ -108,9 +121,10 @@ public static class PlanFiles
     {
         var u = r.Plan.Units;
         string len = u.LengthSymbol;
-        var sb = new StringBuilder($"case,story,corner,x [{len}],y [{len}],elastic drift [{len}],amplified drift [{len}],height [{len}],ratio,allowed,result\n");
+        bool points = r.Plan.Points.Count > 0;   // a last column "point" (the named point's id) only when the building names points
+        var sb = new StringBuilder($"case,story,corner,x [{len}],y [{len}],elastic drift [{len}],amplified drift [{len}],height [{len}],ratio,allowed,result{(points ? ",point" : "")}\n");
         foreach (var d in r.DriftChecks)
-            sb.Append($"{Csv(d.Case)},{d.Story},{d.Vertex + 1},{F(u.FromSI(d.At.X, Quantity.Length))},{F(u.FromSI(d.At.Y, Quantity.Length))},{F(u.FromSI(d.Drift, Quantity.Length))},{F(u.FromSI(d.Amplified, Quantity.Length))},{F(u.FromSI(d.Height, Quantity.Length))},{F(d.Ratio)},{F(d.Allowed)},{(d.Within ? "within" : "exceeds")}\n");
+            sb.Append($"{Csv(d.Case)},{d.Story},{(d.Point is null ? (d.Vertex + 1).ToString(CultureInfo.InvariantCulture) : "")},{F(u.FromSI(d.At.X, Quantity.Length))},{F(u.FromSI(d.At.Y, Quantity.Length))},{F(u.FromSI(d.Drift, Quantity.Length))},{F(u.FromSI(d.Amplified, Quantity.Length))},{F(u.FromSI(d.Height, Quantity.Length))},{F(d.Ratio)},{F(d.Allowed)},{(d.Within ? "within" : "exceeds")}{(points ? "," + Csv(d.Point ?? "") : "")}\n");
         return sb.ToString();
     }
 
@@ -126,7 +140,7 @@ public static class PlanFiles
         }
         foreach (var l in r.Lines)
         {
-            double worst = l.Recovered.Cases.Count == 0 ? 0 : l.Recovered.Cases.Max(c => c.BackwardError);
+            double worst = l.RecoveryBackwardError;   // the line's frame and, for a panel line, its panel
             sb.Append($"condensation of line {Csv(l.Line.Id)},{F(l.CondensationBackwardError)},,,,,,,\n");
             sb.Append($"recovery of line {Csv(l.Line.Id)},{F(worst)},,,,,,,{F(l.RecoveryError)}\n");
         }
@@ -181,6 +195,19 @@ public static class PlanFiles
             })),
         };
         if (PlanDiaphragmFiles.Json(r) is { } floors) root["floors"] = floors;
+        if (r.Plan.Points.Count > 0)   // the user's named points: per case and level, displacement and drift
+            root["points"] = new JArray(r.Plan.Points.Select(q => new JObject
+            {
+                ["id"] = q.Id, ["at"] = new JArray((JToken)L(q.At.X), (JToken)L(q.At.Y)),
+                ["cases"] = new JArray(r.Cases.Select(c => new JObject
+                {
+                    ["case"] = c.Case.Id,
+                    ["levels"] = new JArray(c.Points.Where(m => m.Point == q.Id).Select(m => new JObject
+                    {
+                        ["level"] = r.Plan.Levels[m.Level].Id, ["ux"] = L(m.Ux), ["uy"] = L(m.Uy), ["driftX"] = L(m.DriftX), ["driftY"] = L(m.DriftY),
+                    })),
+                })),
+            }));
         return root.ToString(Formatting.Indented) + "\n";
     }
 }
