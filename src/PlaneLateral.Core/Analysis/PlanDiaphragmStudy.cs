@@ -160,24 +160,7 @@ public static partial class PlanDiaphragm
             var motion = Enumerable.Range(0, n).Select(l => Motion(s, ci, l, u)).ToList();
             var lockedMotion = Enumerable.Range(0, n).Select(l => Motion(s, ci, l, ul) with { Rz = 0 }).ToList();
             var stories = PlanAnalysis.StoryLoads(c, n);
-            var lineStories = new List<PlanLineStory>();
-            // Each line's planar story shears once per case, not once per story (as PlanAnalysis.Run does; docs/benchmarks.md).
-            var planarStories = lineResults.Select(lr => StoryAnalysis.ForCase(lr.Recovered, lr.Recovered.Cases[ci]).Stories).ToList();
-            for (int st = 1; st <= n; st++)
-                for (int i = 0; i < plan.Lines.Count; i++)
-                {
-                    var line = plan.Lines[i];
-                    double v = PlanAnalysis.Above(s.LineForces[i][ci], st), vd = PlanAnalysis.Above(s.LineForcesLocked[i][ci], st);
-                    var sl = stories[st - 1];
-                    double along = line.Cos * sl.Vx + line.Sin * sl.Vy;
-                    double scale = Math.Max(Math.Abs(sl.Vx), Math.Abs(sl.Vy));
-                    double share = Math.Abs(along) > 1e-9 * scale && scale > 0 ? v / along : double.NaN;
-                    var planar = planarStories[i];
-                    double planarShear = planar.Count >= st ? planar[st - 1].Shear : double.NaN;
-                    var ulv = s.LineDisplacements[i][ci];
-                    double drift = ulv[st - 1] - (st >= 2 ? ulv[st - 2] : 0);
-                    lineStories.Add(new PlanLineStory(st, line.Id, v, share, vd, v - vd, planarShear, drift));
-                }
+            var lineStories = PlanAnalysis.LineStories(plan, ci, stories, lineResults, i => s.LineForces[i][ci], i => s.LineForcesLocked[i][ci], i => s.LineDisplacements[i][ci]);
             var vertices = new List<PlanVertexMotion>();
             for (int l = 1; l <= n; l++)
             {
