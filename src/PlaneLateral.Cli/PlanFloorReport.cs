@@ -1,6 +1,7 @@
 using System.Text;
 using PlaneLateral.Analysis;
 using PlaneLateral.Model;
+using PlaneLateral.Studies;
 using PlaneLateral.Units;
 
 namespace PlaneLateral.Cli;
@@ -63,6 +64,37 @@ internal static class PlanFloorReport
         sb.Append("  Rigid: every floor rigid; semi-rigid: floors with a section as deep beams, the others rigid;\n" +
                   "  flexible: every floor as simple spans between the lines (tributary). Design for the envelope\n" +
                   "  unless the governing code fixes the idealisation; it decides, not this table.\n");
+        sb.Append(Tributary(r, PlanTributarySplit.Run(r)));
+        return sb.ToString();
+    }
+
+    /// <summary>The hand tributary split beside the FE flexible floor, per load at the centres of mass, with the gap and its cause.</summary>
+    private static string Tributary(PlanResult r, IReadOnlyList<TributaryShear> hand)
+    {
+        if (hand.Count == 0 || r.Diaphragms is not { } d || !d.Variants.Contains("flexible")) return "";
+        var p = r.Plan;
+        var u = p.Units;
+        string force = u.ForceSymbol;
+        string Fo(double v) => double.IsFinite(v) ? TextTable.Num(u.FromSI(v, Quantity.Force)) : "-";
+        var sb = new StringBuilder();
+        foreach (var c in p.Cases.Where(c => c.Direction is "x" or "y" && c.Eccentricity == 0))
+        {
+            sb.Append($"\nHand tributary split beside the FE flexible floor, case {c.Id}\n");
+            var t = new TextTable("story", "line", $"flexible [{force}]", $"hand [{force}]", "FE/hand-1", "gap from").Numeric(0, 2, 3, 4);
+            foreach (var h in hand.Where(h => h.Case == c.Id).OrderByDescending(h => h.Story))
+            {
+                var line = p.Lines.First(l => l.Id == h.Line);
+                if ((c.Direction == "x" ? line.Cos : line.Sin) == 0) continue;
+                t.Add(h.Story.ToString(), h.Line, Fo(h.Flexible), Fo(h.Hand), double.IsFinite(h.Gap) ? h.Gap.ToString("0.000") : "-", h.Cause == "" ? "-" : h.Cause);
+            }
+            sb.Append(t.Render());
+        }
+        if (sb.Length == 0) return "";
+        sb.Append("  Hand: each floor as simple spans between its lines under a uniform load over its extent, an\n" +
+                  "  overhang to its end line, no torque, lines at one position by stiffness (Wight & MacGregor).\n" +
+                  "  Gap from: torque (the FE spreads the floor's torque over it), overhang (the FE takes it by the\n" +
+                  "  end span's statics), one position (the FE shares equally), net area (openings or an outline\n" +
+                  "  that is not a rectangle: the FE load follows the net area).\n");
         return sb.ToString();
     }
 }

@@ -25,9 +25,11 @@ internal static class PlanSolve
         if (!solved) return exit;
         var (r, seismic, hand) = run;
         string folder = outDir ?? CommandSupport.DefaultFolder(path);
-        var texts = seismic is null ? PlanFiles.Render(r) : [.. PlanFiles.Render(r), .. PlanSeismicFiles.Render(r, seismic)];
-        // One plan figure per story under the case of the largest corner drift ratio, beside the CSV files.
-        var figures = PlanPlots.Governing(r);
+        var tributary = PlanTributarySplit.Run(r);   // floors that bend: the hand tributary split beside the FE flexible floor
+        var texts = seismic is null ? PlanFiles.Render(r, tributary) : [.. PlanFiles.Render(r, tributary), .. PlanSeismicFiles.Render(r, seismic)];
+        // One plan figure per story under the case of the largest corner drift ratio, beside the CSV files; with a floor
+        // block, each bending floor's deflected shape and the line shares under the idealisations.
+        IReadOnlyList<Figure> figures = [.. PlanPlots.Governing(r), .. PlanFloorPlots.All(r, tributary)];
         (string Name, byte[] Bytes)[] files = [.. texts.Select(f => (f.Name, System.Text.Encoding.UTF8.GetBytes(f.Text))), .. figures.Select(f => (f.FileName, f.Png))];
         if (!CommandSupport.TryWrite(() => AtomicFiles.WriteAll(folder, files), "results", stderr, out var written, out exit)) return exit;
         stderr.Write(ModelWarning.Lines(r.Plan.Warnings));   // plausibility warnings (Model/Plausibility.Plan.cs)
@@ -40,7 +42,7 @@ internal static class PlanSolve
             if (seismic is not null) text.Append(PlanSeismicReport.Render(r, seismic));
         }
         else text.Append($"\nCaution: {ResultFiles.Caution}\n");
-        text.Append($"\nResults written to {folder}: {written.Count} files (plan-*.csv, plan.json, line-*-*.csv{(figures.Count > 0 ? ", plan-story*.png" : "")})\n");
+        text.Append($"\nResults written to {folder}: {written.Count} files (plan-*.csv, plan.json, line-*-*.csv{(figures.Count > 0 ? ", plan-story*.png" : "")}{(r.Diaphragms is null ? "" : ", plan-floor-*.png")})\n");
         stdout.Write(ConsoleText.Fit(text.ToString()));
         return ExitCodes.Success;
     }

@@ -30,13 +30,13 @@ BASE = {
     "loadCases": [{"id": "wind", "nodalLoads": [{"node": "B", "fx": 10.0}]}],
 }
 
-cases = []  # (name, category, fragment, path, exit, text)
+cases = []  # (name, category, fragment, path, exit, text, commands: None for every command the exit code allows)
 
 
-def add(name, category, fragment, path, model=None, text=None, exit=2):
+def add(name, category, fragment, path, model=None, text=None, exit=2, commands=None):
     if text is None:
         text = json.dumps(model, indent=2) + "\n"
-    cases.append((name, category, fragment, path, exit, text))
+    cases.append((name, category, fragment, path, exit, text, commands))
 
 
 def m(change):
@@ -231,16 +231,47 @@ add("limit-too-many-cases", "size limit", "the model has 150 load cases and 51 c
                           "combinations": [{"id": "c%d" % i, "factors": {"w%d" % i: 1.5}} for i in range(51)]})))
 add("limit-too-many-openings", "size limit", "101 openings in one wall, more than the 100", "$.comparisons[0].openings",
     m(lambda d: d.update({"comparisons": [dict(WALL, openings=[{"x": 0.01 * i, "y": 0, "width": 0.005, "height": 1} for i in range(101)])]})))
+# --- buildings in plan: floors that bend (docs/plan.md); `compare` reads planar models only, so solve and validate ---
+BUILDING = {
+    "formatVersion": 1,
+    "title": "corpus building: one story, four spring lines, a semi-rigid roof (invented)",
+    "units": {"force": "kip", "length": "ft"},
+    "materials": [{"id": "C", "E": 519119.0, "nu": 0.2}],
+    "plan": {
+        "outline": [[0, 0], [120, 0], [120, 40], [0, 40]],
+        "levels": [{"id": "base", "elevation": 0},
+                   {"id": "roof", "elevation": 12, "floor": {"kind": "semi-rigid", "thickness": 0.5, "material": "C"}}],
+        "lines": [{"id": "A", "at": [0, 20], "direction": "y", "storyStiffness": [50]},
+                  {"id": "B", "at": [120, 20], "direction": "y", "storyStiffness": [50]},
+                  {"id": "S", "at": [60, 0], "direction": "x", "storyStiffness": [50]},
+                  {"id": "N", "at": [60, 40], "direction": "x", "storyStiffness": [50]}],
+        "loads": [{"id": "EY", "direction": "y", "forces": [100]}],
+    },
+}
+
+
+def b(change):
+    d = copy.deepcopy(BUILDING)
+    change(d)
+    return d
+
+
+add("floor-no-line-along-x", "floors", "has 0 lines along x (by position); it spans between at least two", "$.plan.levels[1].floor",
+    b(lambda d: d["plan"].update({"lines": d["plan"]["lines"][:2]})), commands=["solve", "validate"])
+add("floor-opening-cuts-in-two", "floors", "the openings cut the floor of level \"roof\" in two along x = 65 ft", "$.plan.levels[1].floor.openings",
+    b(lambda d: d["plan"]["levels"][1]["floor"].update({"openings": [{"from": [60, 0], "to": [70, 40]}]})), commands=["solve", "validate"])
 
 
 def main():
     os.makedirs(OUT, exist_ok=True)
     manifest = []
-    for name, category, fragment, path, exit, text in cases:
+    for name, category, fragment, path, exit, text, commands in cases:
         with open(os.path.join(OUT, name + ".json"), "w", encoding="utf-8", newline="\n") as f:
             f.write(text)
         manifest.append({"file": name + ".json", "category": category, "expect": fragment, "path": path,
                          "pathIsPrefix": category == "syntax", "exit": exit})
+        if commands is not None:
+            manifest[-1]["commands"] = commands
     with open(os.path.join(OUT, "manifest.json"), "w", encoding="utf-8", newline="\n") as f:
         json.dump({"about": "bad models: expected message fragment, JSON path (prefix for syntax errors) and exit code; see docs/hardening.md",
                    "cases": manifest}, f, indent=1)

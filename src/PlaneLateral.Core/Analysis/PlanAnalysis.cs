@@ -70,25 +70,7 @@ public static class PlanAnalysis
             var motion = Enumerable.Range(0, n).Select(l => new FloorMotion(l + 1, u[3 * l], u[3 * l + 1], u[3 * l + 2])).ToList();
             var lockedMotion = Enumerable.Range(0, n).Select(l => new FloorMotion(l + 1, ul[3 * l], ul[3 * l + 1], 0)).ToList();
             var stories = StoryLoads(c, n);
-            var lineStories = new List<PlanLineStory>();
-            // Each line's planar story shears once per case (every story at once), not once per story: asked per story they
-            // cost 2.4 s of a 3.8 s run on a 40-story, 24-line building (docs/benchmarks.md).
-            var planarStories = lineResults.Select(lr => PlanarStoryShears(lr, ci)).ToList();
-            for (int s = 1; s <= n; s++)
-                for (int i = 0; i < plan.Lines.Count; i++)
-                {
-                    var line = plan.Lines[i];
-                    double v = Above(lineForces[i][ci], s), vd = Above(lineForcesLocked[i][ci], s);
-                    var st = stories[s - 1];
-                    double along = line.Cos * st.Vx + line.Sin * st.Vy;
-                    double scale = Math.Max(Math.Abs(st.Vx), Math.Abs(st.Vy));
-                    double share = Math.Abs(along) > 1e-9 * scale && scale > 0 ? v / along : double.NaN;
-                    var planar = planarStories[i];
-                    double planarShear = planar.Count >= s ? planar[s - 1] : double.NaN;
-                    var ulv = Project(line, u, n);
-                    double drift = ulv[s - 1] - (s >= 2 ? ulv[s - 2] : 0);
-                    lineStories.Add(new PlanLineStory(s, line.Id, v, share, vd, v - vd, planarShear, drift));
-                }
+            var lineStories = LineStories(plan, ci, stories, lineResults, i => lineForces[i][ci], i => lineForcesLocked[i][ci], i => Project(plan.Lines[i], u, n));
             caseResults.Add(new PlanCaseResult(c, motion, lockedMotion, eta, Equilibrium(plan, c, lineForces.Select(lf => lf[ci]).ToList(), size),
                 stories, lineStories, Vertices(plan, motion)) { Points = PointMotions(plan, (l, p) => motion[l].At(p)) });
         }
@@ -104,6 +86,39 @@ public static class PlanAnalysis
             DriftChecks = plan.DriftLimit is { } lim ? DriftChecks(plan, caseResults, lim) : [],
             Diaphragms = PlanDiaphragm.Study(plan, condensed.Select(c => c.K).ToList()),
         };
+    }
+
+    /// <summary>
+    /// Each line's story shear (the sum of its level forces above the cut), share of the story shear along its direction,
+    /// direct and torsional parts, planar story shear by member statics and story drift, every story of case
+    /// <paramref name="ci"/>, from its level forces, level forces with rotation held and level displacements (per line).
+    /// </summary>
+    internal static List<PlanLineStory> LineStories(BuildingPlan plan, int ci, IReadOnlyList<PlanStoryLoad> stories, IReadOnlyList<PlanLineResult> lineResults,
+        Func<int, double[]> forces, Func<int, double[]> forcesLocked, Func<int, double[]> displacements)
+    {
+        int n = plan.FloorCount;
+        var lineStories = new List<PlanLineStory>();
+        // Each line's planar story shears once per case (every story at once), not once per story: asked per story they
+        // cost 2.4 s of a 3.8 s run on a 40-story, 24-line building (docs/benchmarks.md).
+        var planarStories = lineResults.Select(lr => StoryAnalysis.ForCase(lr.Recovered, lr.Recovered.Cases[ci]).Stories).ToList();
+        var p = Enumerable.Range(0, plan.Lines.Count).Select(forces).ToList();
+        var pl = Enumerable.Range(0, plan.Lines.Count).Select(forcesLocked).ToList();
+        var ul = Enumerable.Range(0, plan.Lines.Count).Select(displacements).ToList();
+        for (int s = 1; s <= n; s++)
+            for (int i = 0; i < plan.Lines.Count; i++)
+            {
+                var line = plan.Lines[i];
+                double v = Above(p[i], s), vd = Above(pl[i], s);
+                var st = stories[s - 1];
+                double along = line.Cos * st.Vx + line.Sin * st.Vy;
+                double scale = Math.Max(Math.Abs(st.Vx), Math.Abs(st.Vy));
+                double share = Math.Abs(along) > 1e-9 * scale && scale > 0 ? v / along : double.NaN;
+                var planar = planarStories[i];
+                double planarShear = planar.Count >= s ? planar[s - 1].Shear : double.NaN;
+                double drift = ul[i][s - 1] - (s >= 2 ? ul[i][s - 2] : 0);
+                lineStories.Add(new PlanLineStory(s, line.Id, v, share, vd, v - vd, planarShear, drift));
+            }
+        return lineStories;
     }
 
     /// <summary>A line condensed on its levels: K̂ (N/m) and the checks of the condensation.</summary>

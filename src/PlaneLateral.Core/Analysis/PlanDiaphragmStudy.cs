@@ -20,10 +20,31 @@ public sealed record FloorFlexibilityTest(int Level, string Direction, string Ca
 /// </summary>
 public sealed record LineShearEnvelope(string Case, int Story, string Line, double Rigid, double SemiRigid, double Flexible, double Envelope, string Governing);
 
+/// <summary>
+/// A line's story shear (N, along the line) by the hand tributary split (PlaneLateral.Hand.TributarySplit, made by
+/// PlaneLateral.Studies.PlanTributarySplit) beside the FE flexible floor's (<see cref="LineShearEnvelope.Flexible"/>):
+/// <see cref="Gap"/> = FE / hand − 1 (NaN where the hand shear is nil), <see cref="Cause"/> the features of the floors
+/// above the cut that the two treat differently and that touch this line ("" where they agree).
+/// </summary>
+public sealed record TributaryShear(string Case, int Story, string Line, double Hand, double Flexible, double Gap, string Cause);
+
+/// <summary>A point of a floor in plan and the floor's in-plane displacement there (m).</summary>
+public sealed record FloorPoint(PlanPoint At, double Ux, double Uy);
+
+/// <summary>
+/// The in-plane deflected shape of a floor that bends (as given: semi-rigid or flexible) under one direction's case at
+/// the centres of mass: <see cref="Outline"/> the floor's outline sampled at the floor model's nodes (in order around it),
+/// <see cref="Lines"/> the floor's displacement at each line's plan point (in the order of the plan's lines).
+/// </summary>
+public sealed record FloorDeflection(int Level, string Direction, string Case, IReadOnlyList<FloorPoint> Outline, IReadOnlyList<FloorPoint> Lines);
+
 /// <summary>Floors that bend: the kinds as given, which idealisations were made (and why not), the flexibility tests and the envelope.</summary>
 public sealed record DiaphragmStudy(IReadOnlyList<FloorKind> Kinds, IReadOnlyList<string> Variants, IReadOnlyList<string> Notes,
     IReadOnlyList<FloorFlexibilityTest> Flexibility, IReadOnlyList<LineShearEnvelope> Envelope)
 {
+    /// <summary>The deflected shape of every floor that bends (as given), per direction; empty when every floor is rigid.</summary>
+    public IReadOnlyList<FloorDeflection> Shapes { get; init; } = [];
+
     public const string Caution = "MDD/ADVE > 2 allows the flexible idealisation by ASCE 7-16 §12.3.1.3 (eq. 12.3-1); §12.3.1.1 and §12.3.1.2 " +
         "classify some floors by condition. The governing code decides which idealisation applies; the envelope is a design aid for " +
         "verification by a licensed engineer.";
@@ -139,24 +160,7 @@ public static partial class PlanDiaphragm
             var motion = Enumerable.Range(0, n).Select(l => Motion(s, ci, l, u)).ToList();
             var lockedMotion = Enumerable.Range(0, n).Select(l => Motion(s, ci, l, ul) with { Rz = 0 }).ToList();
             var stories = PlanAnalysis.StoryLoads(c, n);
-            var lineStories = new List<PlanLineStory>();
-            // Each line's planar story shears once per case, not once per story (as PlanAnalysis.Run does; docs/benchmarks.md).
-            var planarStories = lineResults.Select(lr => PlanAnalysis.PlanarStoryShears(lr, ci)).ToList();
-            for (int st = 1; st <= n; st++)
-                for (int i = 0; i < plan.Lines.Count; i++)
-                {
-                    var line = plan.Lines[i];
-                    double v = PlanAnalysis.Above(s.LineForces[i][ci], st), vd = PlanAnalysis.Above(s.LineForcesLocked[i][ci], st);
-                    var sl = stories[st - 1];
-                    double along = line.Cos * sl.Vx + line.Sin * sl.Vy;
-                    double scale = Math.Max(Math.Abs(sl.Vx), Math.Abs(sl.Vy));
-                    double share = Math.Abs(along) > 1e-9 * scale && scale > 0 ? v / along : double.NaN;
-                    var planar = planarStories[i];
-                    double planarShear = planar.Count >= st ? planar[st - 1] : double.NaN;
-                    var ulv = s.LineDisplacements[i][ci];
-                    double drift = ulv[st - 1] - (st >= 2 ? ulv[st - 2] : 0);
-                    lineStories.Add(new PlanLineStory(st, line.Id, v, share, vd, v - vd, planarShear, drift));
-                }
+            var lineStories = PlanAnalysis.LineStories(plan, ci, stories, lineResults, i => s.LineForces[i][ci], i => s.LineForcesLocked[i][ci], i => s.LineDisplacements[i][ci]);
             var vertices = new List<PlanVertexMotion>();
             for (int l = 1; l <= n; l++)
             {
@@ -182,8 +186,47 @@ public static partial class PlanDiaphragm
             // Torsional irregularity applies to rigid and semi-rigid floors only (ASCE 7-16 Table 12.3-1).
             Irregularity = PlanAnalysis.Irregularity(plan, caseResults).Where(t => kinds[t.Story - 1] != FloorKind.Flexible).ToList(),
             DriftChecks = plan.DriftLimit is { } lim ? PlanAnalysis.DriftChecks(plan, caseResults, lim) : [],
-            Diaphragms = Study(plan, kk),
+            Diaphragms = Study(plan, kk) is { } study ? study with { Shapes = Shapes(s) } : null,
         };
+    }
+
+    /// <summary>
+    /// The deflected shape of each floor that bends under each direction's case at the centres of mass (the first case
+    /// along X, along Y without eccentricity): the outline sampled where it crosses the floor beams' nodes, and the
+    /// floor's displacement at every line's point, from the same field as the corner drifts (<see cref="At"/>).
+    /// </summary>
+    internal static List<FloorDeflection> Shapes(Solved s)
+    {
+        var lay = s.Layout;
+        var plan = lay.Plan;
+        var list = new List<FloorDeflection>();
+        for (int l = 0; l < plan.FloorCount; l++)
+        {
+            if (lay.Kinds[l] == FloorKind.Rigid) continue;
+            var outline = plan.Levels[l + 1].Outline;
+            var xs = lay.BeamY[l]!.S;   // the beam along X: its nodes' x
+            var ys = lay.BeamX[l]!.S;   // the beam along Y: its nodes' y
+            var ring = new List<PlanPoint>();
+            for (int v = 0; v < outline.Count; v++)
+            {
+                var a = outline[v]; var b = outline[(v + 1) % outline.Count];
+                var ts = new List<double> { 0 };
+                foreach (var x in xs) if (b.X != a.X && (x - a.X) / (b.X - a.X) is var t and > 0 and < 1) ts.Add(t);
+                foreach (var y in ys) if (b.Y != a.Y && (y - a.Y) / (b.Y - a.Y) is var t and > 0 and < 1) ts.Add(t);
+                ts.Sort();
+                foreach (var t in ts.Distinct()) ring.Add(new PlanPoint(a.X + t * (b.X - a.X), a.Y + t * (b.Y - a.Y)));
+            }
+            foreach (var dir in new[] { "x", "y" })
+            {
+                int ci = -1;
+                for (int i = 0; i < s.Cases.Count; i++) if (s.Cases[i].Case.Direction == dir && s.Cases[i].Case.Eccentricity == 0) { ci = i; break; }
+                if (ci < 0) continue;
+                FloorPoint Point(PlanPoint p) { var (ux, uy) = At(s, ci, l, p); return new FloorPoint(p, ux, uy); }
+                list.Add(new FloorDeflection(l + 1, dir, s.Cases[ci].Case.Id, ring.Select(Point).ToList(),
+                    plan.Lines.Select(line => Point(new PlanPoint(line.X0, line.Y0))).ToList()));
+            }
+        }
+        return list;
     }
 
     /// <summary>

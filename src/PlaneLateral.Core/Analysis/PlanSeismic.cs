@@ -195,6 +195,8 @@ public static partial class PlanSeismic
             PeriodUse.Computed => (t1, $"period of mode {governing.Number}"),
             _ => t1 <= cu * ta ? (t1, $"period of mode {governing.Number} (below Cu·Ta)") : (cu * ta, $"upper limit Cu·Ta (mode {governing.Number} is longer)"),
         };
+        // Floors that bend: the modes are of the rigid-floor model (its periods are the shortest, so C_s is not taken low).
+        if (plan.Floors.Any(f => f.Kind != FloorKind.Rigid) && s.Period is not (PeriodUse.Given or PeriodUse.Approximate)) note += "; modes of the rigid-floor model";
         var (cs, csNote) = SeismicAnalysis.ResponseCoefficient(s.Spectrum, t);
         var weights = levels.Select((l, i) => i == 0 ? 0 : l.Weight).ToArray();
         double w = weights.Sum();

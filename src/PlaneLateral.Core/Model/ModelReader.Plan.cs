@@ -128,11 +128,13 @@ public static partial class ModelReader
                 drift = new PlanDriftLimit(cd, ie, ratio);
             }
             var seismic = ReadPlanSeismic(pf, levels);
-            // The modes, the equivalent lateral forces and the spectrum are solved on the rigid-floor system (three DOFs per
-            // floor, the floor's mass at its centre): beside a floor that bends they would be silently wrong, so refused.
-            if (seismic is not null && floors.FirstOrDefault(fl => fl.Kind != FloorKind.Rigid) is { } bent)
-                sink.Add(pf.Token("seismic"), $"the seismic block cannot yet be used with the {(bent.Kind == FloorKind.Flexible ? "flexible" : "semi-rigid")} floor of level \"{levels![bent.Level].Id}\": its modes and equivalent lateral forces assume rigid floors",
-                    "remove the level's \"floor\" block for the seismic run (rigid floors), or give the story forces as \"loads\" without the seismic block");
+            // The modes are solved on the rigid-floor system (three DOFs per floor, the floor's mass at its centre). The
+            // equivalent lateral forces take their period from it (docs/plan.md, "Floors that bend": the shortest period,
+            // so C_s is not underestimated) and are solved with the floors as given; the response spectrum needs the modes
+            // of the floors as they bend, so it is refused beside a floor that bends.
+            if (seismic?.ResponseSpectrum is not null && floors.FirstOrDefault(fl => fl.Kind != FloorKind.Rigid) is { } bent)
+                sink.Add(pf.Token("seismic")?["responseSpectrum"] ?? pf.Token("seismic"), $"the response spectrum analysis cannot yet be used with the {(bent.Kind == FloorKind.Flexible ? "flexible" : "semi-rigid")} floor of level \"{levels![bent.Level].Id}\": its modes are those of rigid floors",
+                    "remove \"responseSpectrum\" from the seismic block (the equivalent lateral forces are solved with the floors as given), or remove the level's \"floor\" block (rigid floors)");
             pf.RejectUnknownKeys();
             if (sink.Any || _lineFileProblems.Count > 0 || levels is null) return null;
             return new BuildingPlan

@@ -16,11 +16,12 @@ namespace PlaneLateral.Output;
 /// </summary>
 public static class PlanFiles
 {
-    public static IReadOnlyList<(string Name, string Text)> Render(PlanResult r)
+    /// <param name="tributary">Floors that bend: the hand tributary split beside the FE flexible floor (PlaneLateral.Studies.PlanTributarySplit), or null.</param>
+    public static IReadOnlyList<(string Name, string Text)> Render(PlanResult r, IReadOnlyList<TributaryShear>? tributary = null)
     {
         var files = new List<(string, string)>
         {
-            ("plan.json", Json(r)),
+            ("plan.json", Json(r, tributary)),
             ("plan-floors.csv", Floors(r)),
             ("plan-corners.csv", Corners(r)),
             ("plan-line-stories.csv", LineStories(r)),
@@ -30,7 +31,7 @@ public static class PlanFiles
         };
         if (r.Plan.Points.Count > 0) files.Add(("plan-points.csv", Points(r)));
         if (r.DriftChecks.Count > 0) files.Add(("plan-drift-checks.csv", Drifts(r)));
-        files.AddRange(PlanDiaphragmFiles.Render(r));   // floors that bend: with a "floor" block only
+        files.AddRange(PlanDiaphragmFiles.Render(r, tributary));   // floors that bend: with a "floor" block only
         foreach (var line in r.Lines)
         {
             var own = ResultFiles.Planar(line.Recovered).ToDictionary(f => f.Name, f => f.Text);
@@ -147,7 +148,7 @@ public static class PlanFiles
         return sb.ToString();
     }
 
-    private static string Json(PlanResult r)
+    private static string Json(PlanResult r, IReadOnlyList<TributaryShear>? tributary = null)
     {
         var u = r.Plan.Units;
         double? L(double v) => double.IsFinite(v) ? u.FromSI(v, Quantity.Length) : null;   // null where undefined, never "NaN"
@@ -194,7 +195,7 @@ public static class PlanFiles
                 ["Ax"] = double.IsFinite(t.Ax) ? t.Ax : null, ["withAccidentalTorsion"] = t.WithAccidental,
             })),
         };
-        if (PlanDiaphragmFiles.Json(r) is { } floors) root["floors"] = floors;
+        if (PlanDiaphragmFiles.Json(r, tributary) is { } floors) root["floors"] = floors;
         if (r.Plan.Points.Count > 0)   // the user's named points: per case and level, displacement and drift
             root["points"] = new JArray(r.Plan.Points.Select(q => new JObject
             {

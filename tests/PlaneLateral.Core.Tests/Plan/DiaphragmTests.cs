@@ -259,6 +259,28 @@ public sealed class DiaphragmTests
             foreach (var v in new[] { e.Rigid, e.SemiRigid, e.Flexible }) Assert.True(Math.Abs(v) <= e.Envelope * (1 + 1e-12) + 1e-9);
     }
 
+    [Fact]
+    public void TheHandTributarySplitMissesTheOverhangStaticsByWaSquaredOverTwoL()
+    {
+        // Derived: floor 0..120 under w = 100/120 on lines at 10, 60, 110 (overhangs a = 10, spans L = 50). The hand
+        // tributary split gives the end lines w(a + L/2) = 35w and the middle one wL = 50w; the FE flexible floor takes
+        // each overhang by its end span's statics: ends w(a + L/2 + a²/2L) = 36w, middle w(L − a²/L) = 48w.
+        object[] lines = [Springs("A", 10, 20, "y", 50), Springs("B", 60, 20, "y", 50), Springs("C", 110, 20, "y", 50), Springs("S", 60, 0, "x", 1000), Springs("N", 60, 40, "x", 1000)];
+        var r = PlanAnalysis.Run(Read(Building(new { kind = "flexible" }, lines)));
+        var hand = PlaneLateral.Studies.PlanTributarySplit.Run(r);
+        double w = 100.0 / 120 * 4448.2216152605;   // kip → N (exact by definition of the pound-force)
+        var a = hand.Single(h => h.Case == "EY" && h.Line == "A");
+        var b = hand.Single(h => h.Case == "EY" && h.Line == "B");
+        Assert.Equal(35 * w, a.Hand, 6);
+        Assert.Equal(50 * w, b.Hand, 6);
+        Assert.Equal(36 * w, a.Flexible, 6);
+        Assert.Equal(48 * w, b.Flexible, 6);
+        Assert.Equal(36.0 / 35 - 1, a.Gap, 9);
+        Assert.Equal("overhang", a.Cause);
+        Assert.Equal("overhang", b.Cause);
+        Assert.Equal("", hand.Single(h => h.Case == "EY" && h.Line == "S").Cause);   // across the loading: both nil
+    }
+
     private static ModelDiagnostic Refused(object building, string problem)
     {
         var e = Assert.Throws<ModelInputException>(() => Read(building));
@@ -280,6 +302,8 @@ public sealed class DiaphragmTests
         object[] oneAlongY = [Springs("A", 0, 20, "y", 50), Springs("S", 60, 0, "x", 50), Springs("N", 60, 40, "x", 50)];
         Assert.Equal("$.plan.levels[1].floor", Refused(Building(new { kind = "semi-rigid", thickness = 1.0, material = "C" }, oneAlongY), "has 1 line along y").JsonPath);
         Refused(Building(new { kind = "flexible" }, oneAlongY), "has 1 line along y");
+        object[] noneAlongX = [Springs("A", 0, 20, "y", 50), Springs("B", 120, 20, "y", 50)];
+        Assert.Equal("$.plan.levels[1].floor", Refused(Building(new { kind = "semi-rigid", thickness = 1.0, material = "C" }, noneAlongX), "has 0 lines along x").JsonPath);
         object[] twoAtOnePlace = [Springs("A", 0, 10, "y", 50), Springs("B", 0, 30, "y", 50), Springs("S", 60, 0, "x", 50), Springs("N", 60, 40, "x", 50)];
         Refused(Building(new { kind = "flexible" }, twoAtOnePlace), "has 1 line along y (by position)");
         object[] slanted = [.. ThreeLines(50), Springs("D", 60, 20, 30.0, 50)];

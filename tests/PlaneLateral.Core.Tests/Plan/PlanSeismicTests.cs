@@ -288,14 +288,17 @@ public class PlanSeismicTests
     [Theory]
     [InlineData("flexible")]
     [InlineData("semi-rigid")]
-    public void ASeismicBlockBesideAFloorThatBendsIsRefusedNotSolvedAsRigid(string kind)
+    public void TheResponseSpectrumBesideAFloorThatBendsIsRefusedNotSolvedAsRigid(string kind)
     {
-        // The modes and ELF cases are solved on rigid floors (three DOFs per floor); beside a bending floor they would be
-        // silently wrong (common practice: a semi-rigid floor changes the periods and the split), so the reader refuses them.
+        // The modes are solved on rigid floors (three DOFs per floor); a response spectrum on them beside a bending floor
+        // would be silently wrong (common practice: a floor that bends changes the periods and the split), so the reader
+        // refuses it. The equivalent lateral forces stay (their period from the rigid-floor model, docs/plan.md).
         var d = JObject.Parse(File.ReadAllText(Input.RepositoryFiles.ModelPath("demo-building.json")));
         d["plan"]!["levels"]![3]!["floor"] = kind == "flexible" ? new JObject { ["kind"] = "flexible" }
             : new JObject { ["kind"] = "semi-rigid", ["thickness"] = 0.5, ["material"] = "CONCRETE" };
         var e = Assert.Throws<ModelInputException>(() => ModelReader.ParsePlan(d.ToString(), Input.RepositoryFiles.ModelPath("demo-building.json")));
-        Assert.Contains(e.Diagnostics, x => x.JsonPath == "$.plan.seismic" && x.Problem.Contains("assume rigid floors") && x.Problem.Contains("\"L3\""));
+        Assert.Contains(e.Diagnostics, x => x.JsonPath == "$.plan.seismic.responseSpectrum" && x.Problem.Contains("its modes are those of rigid floors") && x.Problem.Contains("\"L3\""));
+        ((JObject)d["plan"]!["seismic"]!).Remove("responseSpectrum");
+        Assert.NotNull(ModelReader.ParsePlan(d.ToString(), Input.RepositoryFiles.ModelPath("demo-building.json")).Seismic);
     }
 }
