@@ -56,6 +56,8 @@ public static partial class BuildingReport
             $"Spectrum: {sp.Spectrum.Describe()}. One excitation direction at a time; modes enough for {Pct(rs.MassShare, "0")} of the mass along it (ASCE 7-16 §12.9.1.1); " +
             "forces ÷ R/I_e; the story drift taken per mode at each outline corner, then combined, times the drift factor, plus the drift of the static accidental torsion " +
             "(§12.9.1.5); δ = C_d·drift/I_e. The combined displacements' difference is shown beside it only to make plain that it is not the drift.");
+        var modes = sp.Directions[0].Modes;
+        d.Figure(SpectrumPlots.Spectrum(sp.Spectrum, modes.Select(m => m.Period).ToList(), modes.Select(m => $"T{m.Mode}").ToList(), "plan-spectrum.png"));
         d.Table("Spectral accelerations at the modal periods", ["mode", "period [s]", "S_a [g]"],
             sp.Directions[0].Modes.Select(m => (IReadOnlyList<string>)[I(m.Mode), Ratio(m.Period, "0.0000"), Ratio(m.Sa, "0.0000")]), 0, 1, 2);
         foreach (var dir in sp.Directions)

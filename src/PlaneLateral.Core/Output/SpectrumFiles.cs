@@ -1,3 +1,4 @@
+using Newtonsoft.Json.Linq;
 using System.Globalization;
 using System.Text;
 using Newtonsoft.Json;
