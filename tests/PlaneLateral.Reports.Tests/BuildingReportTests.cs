@@ -75,7 +75,10 @@ public class BuildingReportTests
                 ValidPng(await File.ReadAllBytesAsync(Path.Combine(dir, f.FileName)).WaitAsync(Guard), f.Width, f.Height, f.FileName);
                 Assert.Contains($"]({f.FileName})", md);
             }
-            Assert.Equal(figures.Count, Regex.Matches(html, "data:image/png;base64,").Count);
+            // Every figure embedded: the plan figures, the floors that bend (with a floor block) and the spectrum (with a response spectrum).
+            int floorFigures = PlanFloorPlots.All(run.Result, PlanTributarySplit.Run(run.Result)).Count;
+            int spectrumFigures = run.Seismic?.Spectrum is null ? 0 : 1;
+            Assert.Equal(figures.Count + floorFigures + spectrumFigures, Regex.Matches(html, "data:image/png;base64,").Count);
 
             // Σ line story shears = story shear (and torque) in every story of every case: read back from the report's own table,
             // and recomputed here from the result it renders (equilibrium of the part above the cut — derived).

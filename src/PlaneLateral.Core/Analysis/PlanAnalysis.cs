@@ -100,7 +100,7 @@ public static class PlanAnalysis
         var lineStories = new List<PlanLineStory>();
         // Each line's planar story shears once per case (every story at once), not once per story: asked per story they
         // cost 2.4 s of a 3.8 s run on a 40-story, 24-line building (docs/benchmarks.md).
-        var planarStories = lineResults.Select(lr => StoryAnalysis.ForCase(lr.Recovered, lr.Recovered.Cases[ci]).Stories).ToList();
+        var planarStories = lineResults.Select(lr => PlanarStoryShears(lr, ci)).ToList();   // panel lines by statics too
         var p = Enumerable.Range(0, plan.Lines.Count).Select(forces).ToList();
         var pl = Enumerable.Range(0, plan.Lines.Count).Select(forcesLocked).ToList();
         var ul = Enumerable.Range(0, plan.Lines.Count).Select(displacements).ToList();
@@ -114,7 +114,7 @@ public static class PlanAnalysis
                 double scale = Math.Max(Math.Abs(st.Vx), Math.Abs(st.Vy));
                 double share = Math.Abs(along) > 1e-9 * scale && scale > 0 ? v / along : double.NaN;
                 var planar = planarStories[i];
-                double planarShear = planar.Count >= s ? planar[s - 1].Shear : double.NaN;
+                double planarShear = planar.Count >= s ? planar[s - 1] : double.NaN;
                 double drift = ul[i][s - 1] - (s >= 2 ? ul[i][s - 2] : 0);
                 lineStories.Add(new PlanLineStory(s, line.Id, v, share, vd, v - vd, planarShear, drift));
             }
