@@ -44,6 +44,8 @@ public static class SpectrumPlots
         curve.LegendText = spectrum.FromTable ? "S_a(T), the given points, linear between" : "S_a(T), ASCE 7-16 §11.4.6";
         double top = ys.Max();
         var marked = periods.Select((t, i) => (t, i)).OrderByDescending(x => x.t).Take(MaxMarkedPeriods).ToList();
+        var labelled = new List<double>();   // periods whose label is drawn: a label closer than 4 % of the axis to one would overprint it
+        int unlabelled = 0;
         foreach (var (t, i) in marked)
         {
             double sa = spectrum.Sa(t);
@@ -55,6 +57,8 @@ public static class SpectrumPlots
             dot.Color = PlotStyle.Brick;
             dot.MarkerShape = MarkerShape.FilledCircle;
             dot.MarkerSize = 9;
+            if (labelled.Any(x => Math.Abs(x - t) < 0.04 * tEnd)) { unlabelled++; continue; }
+            labelled.Add(t);
             var label = plot.Add.Text($"{labels[i]}: {F(t, "0.000")} s", t, sa);
             label.LabelFontSize = 12;
             label.LabelFontColor = PlotStyle.Brick;
@@ -67,7 +71,8 @@ public static class SpectrumPlots
         legendDot.Color = PlotStyle.Brick; legendDot.MarkerShape = MarkerShape.FilledCircle; legendDot.MarkerSize = 9; legendDot.LegendText = "modal periods";
         plot.Axes.SetLimits(0, tEnd, 0, 1.3 * top);
         plot.ShowLegend(Alignment.UpperRight);
-        string rest = periods.Count > marked.Count ? $" The {periods.Count - marked.Count} shortest of the {periods.Count} periods are not marked." : "";
+        string rest = (periods.Count > marked.Count ? $" The {periods.Count - marked.Count} shortest of the {periods.Count} periods are not marked." : "") +
+            (unlabelled > 0 ? $" {unlabelled} marked period(s) too close to a longer one to label legibly are dotted without a label (the modal table lists every period)." : "");
         return new Figure(fileName, "Design spectrum with the modal periods",
             $"{spectrum.Describe()}; S_a for 5 % damping as given. Each mode's period is marked on the curve (label: mode, period).{rest}",
             PlotStyle.Png(plot), PlotStyle.Width, PlotStyle.Height);
