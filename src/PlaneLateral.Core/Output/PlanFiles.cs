@@ -61,26 +61,22 @@ public static class PlanFiles
         return sb.ToString();
     }
 
-    private static string Corners(PlanResult r)
-    {
-        var u = r.Plan.Units;
-        string len = u.LengthSymbol;
-        var sb = new StringBuilder($"case,level,corner,x [{len}],y [{len}],ux [{len}],uy [{len}],drift x [{len}],drift y [{len}]\n");
-        foreach (var c in r.Cases)
-            foreach (var v in c.Vertices)
-                sb.Append($"{Csv(c.Case.Id)},{Csv(r.Plan.Levels[v.Level].Id)},{v.Vertex + 1},{F(u.FromSI(v.At.X, Quantity.Length))},{F(u.FromSI(v.At.Y, Quantity.Length))},{F(u.FromSI(v.Ux, Quantity.Length))},{F(u.FromSI(v.Uy, Quantity.Length))},{F(u.FromSI(v.DriftX, Quantity.Length))},{F(u.FromSI(v.DriftY, Quantity.Length))}\n");
-        return sb.ToString();
-    }
+    private static string Corners(PlanResult r) =>
+        Motions(r, "corner", r.Cases.SelectMany(c => c.Vertices.Select(v => (c.Case.Id, v.Level, $"{v.Vertex + 1}", v.At, v.Ux, v.Uy, v.DriftX, v.DriftY))));
 
     /// <summary>The user's named points: displacement and drift per case and level (with "points" only).</summary>
-    private static string Points(PlanResult r)
+    private static string Points(PlanResult r) =>
+        Motions(r, "point", r.Cases.SelectMany(c => c.Points.Select(q => (c.Case.Id, q.Level, Csv(q.Point), q.At, q.Ux, q.Uy, q.DriftX, q.DriftY))));
+
+    /// <summary>One row per case, level and plan place (an outline corner or a named point): where it is, its displacement and its story drift.</summary>
+    private static string Motions(PlanResult r, string place, IEnumerable<(string Case, int Level, string Name, PlanPoint At, double Ux, double Uy, double DriftX, double DriftY)> rows)
     {
         var u = r.Plan.Units;
         string len = u.LengthSymbol;
-        var sb = new StringBuilder($"case,level,point,x [{len}],y [{len}],ux [{len}],uy [{len}],drift x [{len}],drift y [{len}]\n");
-        foreach (var c in r.Cases)
-            foreach (var q in c.Points)
-                sb.Append($"{Csv(c.Case.Id)},{Csv(r.Plan.Levels[q.Level].Id)},{Csv(q.Point)},{F(u.FromSI(q.At.X, Quantity.Length))},{F(u.FromSI(q.At.Y, Quantity.Length))},{F(u.FromSI(q.Ux, Quantity.Length))},{F(u.FromSI(q.Uy, Quantity.Length))},{F(u.FromSI(q.DriftX, Quantity.Length))},{F(u.FromSI(q.DriftY, Quantity.Length))}\n");
+        string L(double si) => F(u.FromSI(si, Quantity.Length));
+        var sb = new StringBuilder($"case,level,{place},x [{len}],y [{len}],ux [{len}],uy [{len}],drift x [{len}],drift y [{len}]\n");
+        foreach (var m in rows)
+            sb.Append($"{Csv(m.Case)},{Csv(r.Plan.Levels[m.Level].Id)},{m.Name},{L(m.At.X)},{L(m.At.Y)},{L(m.Ux)},{L(m.Uy)},{L(m.DriftX)},{L(m.DriftY)}\n");
         return sb.ToString();
     }
 
