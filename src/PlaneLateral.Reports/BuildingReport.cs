@@ -136,7 +136,10 @@ public static partial class BuildingReport
         if (figures.Count == 0) return;
         d.Heading("Stories in plan");
         var g = PlanPlots.GoverningDriftCase(d.R)!.Value;
-        d.Text($"One figure per story under case {g.Case.Case.Id}, the case of the largest corner drift ratio ({Sci(g.Ratio)} at story {g.Story}), " +
+        int n = d.R.Plan.FloorCount;
+        string which = figures.Count == n ? "One figure per story" :
+            $"One figure for each of the {figures.Count} stories (of {n}) with the largest corner drift ratio";
+        d.Text($"{which} under case {g.Case.Case.Id}, the case of the largest corner drift ratio ({Sci(g.Ratio)} at story {g.Story}), " +
             "all drawn to one displacement scale so that they compare. The same figures are written by the solve command.");
         foreach (var f in figures) d.Figure(f);
         var floors = PlanFloorPlots.All(d.R, PlanTributarySplit.Run(d.R));

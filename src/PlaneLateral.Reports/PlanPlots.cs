@@ -75,7 +75,38 @@ public static class PlanPlots
     /// <summary>File name of the plan figure of story <paramref name="story"/> under case <paramref name="caseId"/>.</summary>
     public static string FileName(int story, string caseId) => $"plan-story{story}-{FigureNames.Slug(caseId)}.png";
 
-    /// <summary>The plan figures of every story under the governing drift case (<see cref="GoverningDriftCase"/>); none without cases.</summary>
+    /// <summary>
+    /// At most this many story figures per run: every story of a building of up to this many stories, otherwise the
+    /// stories of the largest corner drift ratio in the governing case. A figure per story of a 200-story building
+    /// took most of its run (about 40 ms each) and 200 files that nobody reads one by one.
+    /// </summary>
+    public const int MaxStoryFigures = 12;
+
+    /// <summary>
+    /// The stories drawn (1 = lowest, in story order): every story when there are at most <see cref="MaxStoryFigures"/>,
+    /// else the <see cref="MaxStoryFigures"/> with the largest corner drift ratio under the governing drift case (ties:
+    /// the lower story).
+    /// </summary>
+    public static IReadOnlyList<int> StoriesDrawn(PlanResult r)
+    {
+        int n = r.Plan.FloorCount;
+        if (n <= MaxStoryFigures) return Enumerable.Range(1, n).ToList();
+        if (GoverningDriftCase(r) is not { } g) return [];
+        var levels = r.Plan.Levels;
+        var worst = new double[n + 1];
+        foreach (var v in g.Case.Vertices)
+        {
+            if (v.Level < 1 || v.Level > n) continue;
+            double h = levels[v.Level].Elevation - levels[v.Level - 1].Elevation;
+            if (h > 0) worst[v.Level] = Math.Max(worst[v.Level], Math.Sqrt(v.DriftX * v.DriftX + v.DriftY * v.DriftY) / h);
+        }
+        return Enumerable.Range(1, n).OrderByDescending(s => worst[s]).ThenBy(s => s).Take(MaxStoryFigures).Order().ToList();
+    }
+
+    /// <summary>
+    /// The plan figures of the stories <see cref="StoriesDrawn"/> picks, under the governing drift case
+    /// (<see cref="GoverningDriftCase"/>); none without cases.
+    /// </summary>
     public static IReadOnlyList<Figure> Governing(PlanResult r)
     {
         if (GoverningDriftCase(r) is not { } g) return [];
@@ -83,7 +114,7 @@ public static class PlanPlots
         // One displacement scale for every story, so that the figures compare.
         double largest = g.Case.Vertices.Select(v => Math.Sqrt(v.Ux * v.Ux + v.Uy * v.Uy)).DefaultIfEmpty(0).Max();
         double scale = ModelPlots.ScaleFactor(largest, r.Plan.Size);
-        return Enumerable.Range(1, r.Plan.FloorCount)
+        return StoriesDrawn(r)
             .Select(s => FigureNames.Unique(Story(r, s, g.Case.Case.Id, "the case of the largest corner drift ratio", scale), used)).ToList();
     }
 

@@ -261,6 +261,38 @@ add("floor-no-line-along-x", "floors", "has 0 lines along x (by position); it sp
 add("floor-opening-cuts-in-two", "floors", "the openings cut the floor of level \"roof\" in two along x = 65 ft", "$.plan.levels[1].floor.openings",
     b(lambda d: d["plan"]["levels"][1]["floor"].update({"openings": [{"from": [60, 0], "to": [70, 40]}]})), commands=["solve", "validate"])
 
+# --- buildings in plan: size and work limits (ModelLimits.CheckPlanCounts, CheckPlanWork) ---
+
+
+def floors(d, n, line_stiffness=True):
+    d["plan"]["levels"] = [{"id": "base", "elevation": 0}] + [{"id": "F%d" % i, "elevation": 12 * i} for i in range(1, n + 1)]
+    d["plan"]["loads"] = [{"id": "EY", "direction": "y", "forces": [1] * n}]
+    if line_stiffness:
+        for line in d["plan"]["lines"]:
+            line["storyStiffness"] = [50] * n
+
+
+add("limit-building-too-many-floors", "size limit", "the building has 302 levels (the base and the floors), more than the 301", "$.plan.levels",
+    text=json.dumps(b(lambda d: floors(d, 301)), separators=(",", ":")) + "\n", commands=["solve", "validate"])
+add("limit-building-too-many-lines", "size limit", "the building has 501 lines of resistance, more than the 500", "$.plan.lines",
+    text=json.dumps(b(lambda d: d["plan"].update({"lines": [{"id": "L%d" % i, "at": [i * 0.2, 20], "direction": "y", "storyStiffness": [50]} for i in range(501)]})),
+                    separators=(",", ":")) + "\n", commands=["solve", "validate"])
+add("limit-building-too-many-points", "size limit", "the building has 201 named points, more than the 200", "$.plan.points",
+    b(lambda d: d["plan"].update({"points": [{"id": "P%d" % i, "at": [0.5 * i, 10]} for i in range(201)]})), commands=["solve", "validate"])
+
+
+def heavy_lines(d):
+    # 120 compact walls of 300 floors: each line's model has 301 nodes and 300 members, solved 303 times (300 floors, one
+    # case and its two eccentric twins): 120 × 601 × 303 = 21.9 million line result entries, over the limit of 20 million.
+    floors(d, 300, line_stiffness=False)
+    d["plan"]["levels"][1].pop("floor", None)
+    d["plan"]["lines"] = [{"id": "W%d" % i, "at": [10 + 0.8 * i, 20], "direction": "y" if i % 2 else "x",
+                           "wall": {"length": 10, "thickness": 1, "material": "C"}} for i in range(120)]
+
+
+add("limit-building-line-work", "size limit", "result entries (Σ of each line's nodes, members and panel mesh nodes × 303 solves", "$.plan.lines",
+    text=json.dumps(b(heavy_lines), separators=(",", ":")) + "\n", commands=["solve", "validate"])
+
 
 def main():
     os.makedirs(OUT, exist_ok=True)

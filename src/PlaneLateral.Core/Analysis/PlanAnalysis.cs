@@ -32,7 +32,7 @@ public static class PlanAnalysis
         CheckStable(plan, k, size);
 
         var scaled = Scaled(k, n, size);
-        var chol = DenseMatrix.OfArray(scaled).Cholesky();
+        var chol = Factor(plan, scaled);
         var locked = Translational(k, n);
         var lockedChol = DenseMatrix.OfArray(locked).Cholesky();
 
@@ -231,27 +231,65 @@ public static class PlanAnalysis
     }
 
     /// <summary>
-    /// Refuses a floor system with a free motion: eigenvalues of the scaled K (Rz times the plan size) below
-    /// <see cref="MechanismTolerance"/> of the largest. Each free motion is named by its largest floor DOF (rotation
-    /// first when the floor turns: all lines through one point).
+    /// Refuses floors that can move without resistance, naming the floor DOFs. Each line's K̂ is positive definite (the
+    /// inverse of the flexibility of a planar model that factorised without a failed pivot), so uᵀKu = Σ (T u)ᵀ K̂ (T u)
+    /// vanishes exactly when every line's row t = (cos α, sin α, r) is orthogonal to some floor's (Ux, Uy, Rz): the
+    /// floors are held if and only if the lines' rows span all three directions (derived; the same rows act at every
+    /// floor, since every line reaches every level). The test is on the 3 × 3 matrix Σ t·tᵀ with r over the plan size,
+    /// so it does not depend on the lines' stiffnesses or on the number of floors. It replaced an eigenvalue test of K
+    /// itself, whose spread grows with the floors (about n⁴ for a tall cantilever): it called a 400-story slender wall a
+    /// mechanism, and cost a dense eigen decomposition of 3·floors rows on every run.
     /// </summary>
     internal static void CheckStable(BuildingPlan plan, double[,] k, double size)
     {
+        var g = new double[3, 3];
+        foreach (var line in plan.Lines)
+        {
+            var t = new[] { line.Cos, line.Sin, line.Lever / size };
+            for (int a = 0; a < 3; a++)
+                for (int b = 0; b < 3; b++) g[a, b] += t[a] * t[b];
+        }
+        var (values, vectors) = SymmetricEigen.Solve(g);
+        double top = Math.Max(values[0], 0);
+        var free = Enumerable.Range(0, 3).Where(m => !(top > 0 && values[m] > MechanismTolerance * top)).ToList();
+        if (free.Count == 0) return;
+        var mechanisms = new List<Mechanism>();
+        for (int f = 1; f <= plan.FloorCount; f++)
+            foreach (int m in free)
+            {
+                double big = Enumerable.Range(0, 3).Max(i => Math.Abs(vectors[i, m]));
+                NamedDof Name(int i) => new($"floor {plan.Levels[f].Id}", (Dof)i);
+                var moving = Enumerable.Range(0, 3).Where(i => Math.Abs(vectors[i, m]) > 1e-6 * big)   // the turn first when the floor turns
+                    .OrderByDescending(i => i == 2 && Math.Abs(vectors[i, m]) > 0.1 * big ? 1 : 0).ThenByDescending(i => Math.Abs(vectors[i, m])).ThenBy(i => i).ToList();
+                mechanisms.Add(new Mechanism(Name(moving[0]), moving.Select(Name).ToList()));
+            }
+        throw new UnstableModelException(plan.SourcePath, mechanisms);
+    }
+
+    /// <summary>
+    /// The Cholesky factor of the floor stiffness <paramref name="a"/> (scaled, <see cref="Scaled"/>). The lines' rows
+    /// span all three directions (<see cref="CheckStable"/>), so K is positive definite in exact arithmetic; should
+    /// round-off still defeat the factorisation, the free motion is named by the eigenvectors of the smallest
+    /// eigenvalues instead of a bare failure.
+    /// </summary>
+    internal static MathNet.Numerics.LinearAlgebra.Factorization.Cholesky<double> Factor(BuildingPlan plan, double[,] a)
+    {
+        try { return DenseMatrix.OfArray(a).Cholesky(); }
+        catch (ArgumentException) { }
         int n = plan.FloorCount;
-        var (values, vectors) = SymmetricEigen.Solve(Scaled(k, n, size));
+        var (values, vectors) = SymmetricEigen.Solve(a);
         double top = Math.Max(values[0], 0);
         var mechanisms = new List<Mechanism>();
-        for (int m = 0; m < values.Length; m++)
+        for (int m = values.Length - 1; m >= 0 && (mechanisms.Count == 0 || !(top > 0 && values[m] > MechanismTolerance * top)); m--)
         {
-            if (top > 0 && values[m] > MechanismTolerance * top) continue;
             double big = 0;
             for (int i = 0; i < 3 * n; i++) big = Math.Max(big, Math.Abs(vectors[i, m]));
             NamedDof Name(int i) => new($"floor {plan.Levels[i / 3 + 1].Id}", (Dof)(i % 3));
             var moving = Enumerable.Range(0, 3 * n).Where(i => Math.Abs(vectors[i, m]) > 1e-6 * big)
-                .OrderByDescending(i => i % 3 == 2 && Math.Abs(vectors[i, m]) > 0.1 * big ? 1 : 0).ThenByDescending(i => Math.Abs(vectors[i, m])).ThenBy(i => i).ToList();
+                .OrderByDescending(i => Math.Abs(vectors[i, m])).ThenBy(i => i).ToList();
             mechanisms.Add(new Mechanism(Name(moving[0]), moving.Select(Name).ToList()));
         }
-        if (mechanisms.Count > 0) throw new UnstableModelException(plan.SourcePath, mechanisms);
+        throw new UnstableModelException(plan.SourcePath, mechanisms);
     }
 
     internal static double[] LoadVector(PlanLoadCase c, int n)

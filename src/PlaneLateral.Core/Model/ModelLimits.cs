@@ -44,6 +44,21 @@ public static class ModelLimits
     /// mesh is this size too).</summary>
     public const int MaxPanelMeshNodes = 40_000;
 
+    /// <summary>Most floors (levels above the base) of a building in plan: the floor system is dense on 3 DOFs per floor,
+    /// and its modes are a dense eigen decomposition of that size (docs/hardening.md gives the measured cost).</summary>
+    public const int MaxFloors = 300;
+
+    /// <summary>Most lines of resistance in a building in plan.</summary>
+    public const int MaxPlanLines = 500;
+
+    /// <summary>Most named points in a building in plan.</summary>
+    public const int MaxPlanPoints = 200;
+
+    /// <summary>Most line result entries of a building in plan: Σ over its lines of (nodes + members + panel mesh nodes)
+    /// × (floors + cases + modes): each line's model is solved once per floor for its condensation and once per case and
+    /// mode for its recovery, every solve recovered over the whole line (docs/hardening.md gives the measured cost).</summary>
+    public const long MaxPlanLineEntries = 20_000_000;
+
     /// <summary>The problem when a file of <paramref name="bytes"/> exceeds <see cref="MaxFileBytes"/>, or null.</summary>
     internal static ModelDiagnostic? CheckFileSize(string file, long bytes) => bytes <= MaxFileBytes ? null :
         new ModelDiagnostic(file, 0, 0, "", $"the file is {bytes} bytes, more than the {MaxFileBytes} bytes (8 MiB) this version reads",
@@ -101,6 +116,41 @@ public static class ModelLimits
             foreach (var c in checks)
                 if (c is JObject co) Limit(co["openings"], MaxOpeningsPerWall, "openings in one wall");
         return over;
+    }
+
+    /// <summary>Counts the arrays of a building's <c>plan</c> against the limits before any line is read; reports each excess.</summary>
+    /// <returns>True when a limit is exceeded.</returns>
+    internal static bool CheckPlanCounts(JObject plan, DiagnosticSink sink)
+    {
+        bool over = false;
+        void Limit(JToken? t, int max, string what, string fix)
+        {
+            if (t is JArray a && a.Count > max)
+            {
+                sink.Add(a, $"the building has {a.Count} {what}, more than the {max} this version accepts", fix);
+                over = true;
+            }
+        }
+        Limit(plan["levels"], MaxFloors + 1, "levels (the base and the floors)", $"keep to at most {MaxFloors} floors above the base; a building in plan of more floors is beyond this version");
+        Limit(plan["lines"], MaxPlanLines, "lines of resistance", $"keep to at most {MaxPlanLines} lines; merge parallel lines of one wall or frame into one line");
+        Limit(plan["loads"], MaxCasesAndCombinations, "load cases", $"keep to at most {MaxCasesAndCombinations} load cases; split them into several building files");
+        Limit(plan["points"], MaxPlanPoints, "named points", $"keep to at most {MaxPlanPoints} named points");
+        return over;
+    }
+
+    /// <summary>
+    /// The line result entries of a building (<see cref="MaxPlanLineEntries"/>) against the limit, once its lines are
+    /// read and before any is condensed: reported at the plan's <c>lines</c> with the heaviest line named.
+    /// </summary>
+    /// <param name="solves">Solves per line: floors (condensation) + plan cases (recovery) + modes (spectrum), the generated cases counted.</param>
+    internal static void CheckPlanWork(IReadOnlyList<PlanLine> lines, int solves, JToken? at, DiagnosticSink sink)
+    {
+        static long Size(PlanLine l) => l.Model.Nodes.Count + l.Model.Members.Count + l.Model.Panels.Sum(p => (long)p.Mesh.MaxNodes);
+        long entries = lines.Sum(l => Size(l) * solves);
+        if (entries <= MaxPlanLineEntries || lines.Count == 0) return;
+        var heaviest = lines.MaxBy(Size)!;
+        sink.Add(at, $"the building's lines hold {entries} result entries (Σ of each line's nodes, members and panel mesh nodes × {solves} solves: floors, cases and modes), more than the {MaxPlanLineEntries} this version accepts; the largest line is \"{heaviest.Id}\" ({Size(heaviest)} nodes, members and mesh nodes)",
+            "model the large lines more simply (a compact wall, or story stiffnesses), give fewer load cases or modes, or split the building into parts");
     }
 }
 

@@ -72,6 +72,21 @@ public static partial class ModelReader
 
     private sealed partial class Builder
     {
+        /// <summary>
+        /// Solves of each line's model in a run: one per floor (its condensation), one per plan case and generated
+        /// seismic case (2 directions × the case and its two eccentric twins, and the A_x cases: 10 at most) for its
+        /// recovery, and with a response spectrum one per mode and direction (the modes asked for; when left to 90 % of the
+        /// mass, an allowance of 30 per direction), three times with shifted masses.
+        /// </summary>
+        private static int PlanSolves(int floors, int cases, PlanSeismicData? seismic)
+        {
+            if (seismic is null) return floors + cases;
+            int solves = floors + cases + 10;
+            if (seismic.ResponseSpectrum is { } rs)
+                solves += 2 * Math.Min(3 * floors, rs.Modes > 0 ? rs.Modes : 30) * (rs.Torsion == AccidentalTorsion.ShiftedMasses ? 3 : 1);
+            return solves;
+        }
+
         /// <summary>True while reading a line of a building: its own load cases are not needed (the building loads it).</summary>
         private bool _partOfBuilding;
 
@@ -102,7 +117,7 @@ public static partial class ModelReader
             ReadMaterials(f.Objects("materials", true, "add \"materials\": [ {\"id\": \"...\", \"E\": ..., \"nu\": ...} ] (an empty array when no wall uses one)"));
             var p = f.OptionalObject(PlanKey, "give \"plan\" as an object with \"levels\", \"lines\" and \"loads\" (docs/plan.md)");
             f.RejectUnknownKeys();
-            if (p is null) return null;
+            if (p is null || ModelLimits.CheckPlanCounts(p, sink)) return null;
 
             var pf = new JsonFields(p, sink);
             var defaultOutline = pf.Has("outline") ? ReadOutline(pf.Token("outline")!) : null;
@@ -136,6 +151,8 @@ public static partial class ModelReader
                 sink.Add(pf.Token("seismic")?["responseSpectrum"] ?? pf.Token("seismic"), $"the response spectrum analysis cannot yet be used with the {(bent.Kind == FloorKind.Flexible ? "flexible" : "semi-rigid")} floor of level \"{levels![bent.Level].Id}\": its modes are those of rigid floors",
                     "remove \"responseSpectrum\" from the seismic block (the equivalent lateral forces are solved with the floors as given), or remove the level's \"floor\" block (rigid floors)");
             pf.RejectUnknownKeys();
+            if (levels is not null && !sink.Any && _lineFileProblems.Count == 0)
+                ModelLimits.CheckPlanWork(lines, PlanSolves(levels.Count - 1, cases.Count, seismic), pf.Token("lines"), sink);
             if (sink.Any || _lineFileProblems.Count > 0 || levels is null) return null;
             return new BuildingPlan
             {
