@@ -18,7 +18,7 @@ if (args.Length > 0 && args[0] == "fill")
     }
     return;
 }
-// "supernodal NX [NY] [DIR|-] [THREADS]": one measured pass of the supernodal solver on a plane-stress grid (writes DIR/wallNXxNY.mtx
+// "supernodal NX [NY] [DIR|-] [THREADS] [PASSES]": measured passes (2 by default) of the supernodal solver on a plane-stress grid (writes DIR/wallNXxNY.mtx
 // and its right-hand side for the CHOLMOD harness when DIR is given).
 if (args.Length > 1 && args[0] == "supernodal")
 {

@@ -23,7 +23,7 @@ public static partial class MachineFree
     [GeneratedRegex(@", [0-9]+ threads?")]
     private static partial Regex ThreadCount();
 
-    [GeneratedRegex(@"managed, (256-bit vector kernels|scalar kernels)")]
+    [GeneratedRegex(@"managed, ([0-9]+-bit vector kernels|scalar kernels)")]
     private static partial Regex VectorWidth();
 
     [GeneratedRegex(@"\(native dense kernels: [^;]*;")]

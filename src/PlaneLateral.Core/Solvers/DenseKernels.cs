@@ -10,9 +10,9 @@ namespace PlaneLateral.Solvers;
 /// <remarks>
 /// Reproducibility: <see cref="Dot"/> always sums in the same fixed order — eight interleaved partial sums
 /// (element k goes to partial sum k mod 8), combined as ((s0+s4)+(s1+s5)) + ((s2+s6)+(s3+s7)), then the tail in order —
-/// whether it runs on 256-bit vectors or on the scalar fallback, so a result does not depend on the CPU's vector width.
-/// No fused multiply-add is used (the JIT does not contract a*b+c on its own). <see cref="SubtractScaled"/> is element-wise
-/// and so is the same on every path.
+/// whether it runs on 256-bit vectors, on 128-bit vectors or on the scalar fallback, so a result does not depend on the
+/// CPU's vector width. No fused multiply-add is used (the JIT does not contract a*b+c on its own). <see cref="SubtractScaled"/>
+/// is element-wise and so is the same on every path. <see cref="VectorBits"/> says which path runs.
 /// </remarks>
 internal static class DenseKernels
 {
@@ -21,9 +21,19 @@ internal static class DenseKernels
     /// <summary>Name of the AppContext switch that forces the scalar kernels (for measuring what the vector ones gain).</summary>
     public const string ScalarKernelsSwitch = "PlaneLateral.Solvers.ScalarKernels";
 
-    /// <summary>Vector kernels are used when the CPU runs 256-bit vectors and the switch above is not set. Read once.</summary>
-    internal static readonly bool UseVectors =
-        Vector256.IsHardwareAccelerated && !(AppContext.TryGetSwitch(ScalarKernelsSwitch, out bool scalar) && scalar);
+    /// <summary>
+    /// The vector width the dense kernels (these and <see cref="FrontKernels"/>) run at: 256 when the CPU runs 256-bit
+    /// vectors, else 128 when it runs 128-bit ones, else 0 (scalar); 0 also when the switch above is set. Every width gives
+    /// the same bits, so tests may change it in process to compare the paths (it is read once per kernel call).
+    /// </summary>
+    internal static int VectorBits = DetectVectorBits();
+
+    internal static int DetectVectorBits()
+    {
+        if (AppContext.TryGetSwitch(ScalarKernelsSwitch, out bool scalar) && scalar) return 0;
+        if (Vector256.IsHardwareAccelerated) return 256;
+        return Vector128.IsHardwareAccelerated ? 128 : 0;
+    }
 
     /// <summary>Σ a[k]·b[k] over the common length (spans must have equal length).</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
@@ -31,7 +41,12 @@ internal static class DenseKernels
     {
         int n = a.Length;
         if (n < Block) return DotShort(a, b);
-        return UseVectors ? DotVector(a, b) : DotScalar8(a, b);
+        return VectorBits switch
+        {
+            256 => DotVector(a, b),
+            128 => DotVector128(a, b),
+            _ => DotScalar8(a, b),
+        };
     }
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
@@ -43,6 +58,7 @@ internal static class DenseKernels
         return s;
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static double DotVector(ReadOnlySpan<double> a, ReadOnlySpan<double> b)
     {
         int n = a.Length;
@@ -64,7 +80,36 @@ internal static class DenseKernels
         return s;
     }
 
+    /// <summary>128-bit path with the summation order of <see cref="DotVector"/> (partial sums k mod 8 in four vectors).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static double DotVector128(ReadOnlySpan<double> a, ReadOnlySpan<double> b)
+    {
+        int n = a.Length;
+        if (b.Length < n) throw new ArgumentException("Spans differ in length.");
+        ref double ra = ref MemoryMarshal.GetReference(a);
+        ref double rb = ref MemoryMarshal.GetReference(b);
+        var acc0 = Vector128<double>.Zero; // s0, s1
+        var acc1 = Vector128<double>.Zero; // s2, s3
+        var acc2 = Vector128<double>.Zero; // s4, s5
+        var acc3 = Vector128<double>.Zero; // s6, s7
+        int k = 0;
+        int limit = n - Block;
+        for (; k <= limit; k += Block)
+        {
+            nuint u = (nuint)k;
+            acc0 += Vector128.LoadUnsafe(ref ra, u) * Vector128.LoadUnsafe(ref rb, u);
+            acc1 += Vector128.LoadUnsafe(ref ra, u + 2) * Vector128.LoadUnsafe(ref rb, u + 2);
+            acc2 += Vector128.LoadUnsafe(ref ra, u + 4) * Vector128.LoadUnsafe(ref rb, u + 4);
+            acc3 += Vector128.LoadUnsafe(ref ra, u + 6) * Vector128.LoadUnsafe(ref rb, u + 6);
+        }
+        double s = ((acc0.GetElement(0) + acc2.GetElement(0)) + (acc0.GetElement(1) + acc2.GetElement(1)))
+                 + ((acc1.GetElement(0) + acc3.GetElement(0)) + (acc1.GetElement(1) + acc3.GetElement(1)));
+        for (; k < n; k++) s += Unsafe.Add(ref ra, k) * Unsafe.Add(ref rb, k);
+        return s;
+    }
+
     /// <summary>Scalar path with exactly the summation order of <see cref="DotVector"/>.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static double DotScalar8(ReadOnlySpan<double> a, ReadOnlySpan<double> b)
     {
         int n = a.Length;
@@ -94,15 +139,28 @@ internal static class DenseKernels
         int n = y.Length;
         if (x.Length < n) throw new ArgumentException("Spans differ in length.");
         int k = 0;
-        if (UseVectors && n >= 4)
+        int bits = VectorBits;
+        if (bits != 0 && n >= 4)
         {
             ref double ry = ref MemoryMarshal.GetReference(y);
             ref double rx = ref MemoryMarshal.GetReference(x);
-            var va = Vector256.Create(alpha);
-            for (; k <= n - 4; k += 4)
+            if (bits == 256)
             {
-                var v = Vector256.LoadUnsafe(ref ry, (nuint)k) - va * Vector256.LoadUnsafe(ref rx, (nuint)k);
-                v.StoreUnsafe(ref ry, (nuint)k);
+                var va = Vector256.Create(alpha);
+                for (; k <= n - 4; k += 4)
+                {
+                    var v = Vector256.LoadUnsafe(ref ry, (nuint)k) - va * Vector256.LoadUnsafe(ref rx, (nuint)k);
+                    v.StoreUnsafe(ref ry, (nuint)k);
+                }
+            }
+            else
+            {
+                var va = Vector128.Create(alpha);
+                for (; k <= n - 2; k += 2)
+                {
+                    var v = Vector128.LoadUnsafe(ref ry, (nuint)k) - va * Vector128.LoadUnsafe(ref rx, (nuint)k);
+                    v.StoreUnsafe(ref ry, (nuint)k);
+                }
             }
         }
         for (; k < n; k++) y[k] -= alpha * x[k];

@@ -78,7 +78,7 @@ public sealed class SupernodalCholeskySolver : ISparseSpdSolver
 
     private string KernelDescription => Kernels == DenseKernelBackend.OpenBlas
         ? $" (native dense kernels: {NativeBlas.Status}; fronts below {SupernodalFactor.NativeMinFront} rows managed)"
-        : $" (managed, {(FrontKernelsInfo.Vectorised ? "256-bit vector kernels" : "scalar kernels")}, {MaxThreads} thread{(MaxThreads == 1 ? "" : "s")}"
+        : $" (managed, {FrontKernelsInfo.Width}, {MaxThreads} thread{(MaxThreads == 1 ? "" : "s")}"
           + (RequestedKernels == DenseKernelBackend.OpenBlas ? $"; OpenBLAS asked for but not used: {NativeBlas.Status}" : "") + ")";
 
     /// <summary>The fill-reducing permutation this solver would use for <paramref name="matrix"/> (<c>perm[new] = old</c>).</summary>
@@ -125,7 +125,8 @@ public readonly record struct SupernodalAnalysis(long ExactNonZeros, long Stored
 
 internal static class FrontKernelsInfo
 {
-    public static bool Vectorised => System.Runtime.Intrinsics.Vector256.IsHardwareAccelerated;
+    /// <summary>The kernels' vector width in words for the description ("256-bit vector kernels", "scalar kernels").</summary>
+    public static string Width => DenseKernels.VectorBits == 0 ? "scalar kernels" : $"{DenseKernels.VectorBits}-bit vector kernels";
 }
 
 /// <summary>The supernodal factor P·K·Pᵀ = L·Lᵀ. Immutable; safe to use from several threads at once.</summary>
@@ -185,6 +186,9 @@ public sealed class SupernodalFactor : ISparseSpdFactor
     /// column. An upper bound of the phase's peak memory (the symbolic analysis and the matrix itself come on top).</summary>
     public long NumericBytes { get; private init; }
 
+    /// <summary>The factor's stored values (supernode blocks, column-major), for the tests that compare kernels bit for bit.</summary>
+    internal ReadOnlySpan<double> Values => _l;
+
     /// <summary>Bytes of the factor's values (<c>8 × Σ m·k</c>).</summary>
     public long FactorBytes => _l.LongLength * sizeof(double);
 
@@ -205,17 +209,19 @@ public sealed class SupernodalFactor : ISparseSpdFactor
         public readonly List<int> StackSuper = new();
         public readonly List<long> StackOffset = new();
         public readonly List<(int Position, PivotFailure Failure)> Failures = new();
+        public readonly List<(int Column, double Pivot)> FrontFailures = new();
         public double[] Save = Array.Empty<double>();
         public int NativeFronts;
 
         public void Reserve(in Needs need, int n)
         {
             if (Map.Length < n) Map = new int[n];
-            if (Upd.LongLength < (long)need.MaxUpdate * need.MaxUpdate) Upd = new double[(long)need.MaxUpdate * need.MaxUpdate];
+            // Written before read (the update block's triangle is cleared per front): uninitialised, large ones on huge pages.
+            if (Upd.LongLength < (long)need.MaxUpdate * need.MaxUpdate) Upd = FactorMemory.Allocate((long)need.MaxUpdate * need.MaxUpdate);
             int packLen = ((need.MaxFront + 7) / 8 + 1) * 8 * FrontKernels.PanelWidth;
             if (Pack.Length < packLen) Pack = new double[packLen];
             if (Rel.Length < need.MaxFront) Rel = new int[need.MaxFront];
-            if (Stack.LongLength < need.Stack) Stack = new double[need.Stack];
+            if (Stack.LongLength < need.Stack) Stack = FactorMemory.Allocate(need.Stack);
             if (need.Native && Save.LongLength < (long)need.MaxPivots * need.MaxPivots) Save = new double[(long)need.MaxPivots * need.MaxPivots];
             Top = 0;
             StackSuper.Clear();
@@ -305,13 +311,14 @@ public sealed class SupernodalFactor : ISparseSpdFactor
     /// threads each call itself; subtrees are then factorised one after the other, so that two threads of ours never
     /// call the library at once, and results are no longer bitwise independent of the library's thread count.</para>
     /// </remarks>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static SupernodalFactor Create(SymmetricSparseMatrix a, int[] ordering, double tol, int threads, bool native = false)
     {
         var s = SupernodalSymbolic.Analyse(a, ordering);
         int n = s.N, ns = s.SupernodeCount;
         if (s.StoredEntries > Array.MaxLength)
             throw new InvalidOperationException($"The factor needs {s.StoredEntries} entries, more than the largest array holds.");
-        var job = new NumericJob { S = s, L = new double[s.StoredEntries], Failed = new bool[n], Tol = tol, Values = a.Values, Native = native };
+        var job = new NumericJob { S = s, L = FactorMemory.Allocate(s.StoredEntries), Failed = new bool[n], Tol = tol, Values = a.Values, Native = native };
         // The matrix by column in the new numbering, as the symbolic phase grouped it (not kept by the factor).
         (job.ColPtr, job.Rows, job.Source) = (s.ColPtr!, s.RowsByCol!, s.SourceByCol!);
         (s.ColPtr, s.RowsByCol, s.SourceByCol) = (null, null, null);
@@ -456,7 +463,9 @@ public sealed class SupernodalFactor : ISparseSpdFactor
         int off = (int)s.FactorOffset[t];
         for (int c = 0; c < k; c++) map[f0 + c] = c;
         for (int q = 0; q < nb; q++) map[s.PatternRows[ps + q]] = k + q;
-        // The factor's block is still zero (fresh); the update block's lower triangle is cleared.
+        // The factor's block (allocated uninitialised: cleared here, just before use, while it goes into the cache) and the
+        // update block's lower triangle are cleared.
+        Array.Clear(l, off, k * m);
         for (int c = 0; c < nb; c++) Array.Clear(upd, c * nb + c, nb - c);
 
         // The matrix columns of the supernode.
@@ -492,12 +501,18 @@ public sealed class SupernodalFactor : ISparseSpdFactor
             done = NativeBlas.TryPartialCholesky(l, off, m, k, upd, job.Diag.AsSpan(f0, k), job.Tol, ws.Save);
             if (done) ws.NativeFronts++;
         }
-        if (!done) FrontKernels.PartialCholesky(l, off, m, k, upd, job.Diag.AsSpan(f0, k), job.Tol, ws.Pack, threads, (c, piv) =>
+        if (!done)
         {
-            int j = f0 + c;
-            ws.Failures.Add((j, new PivotFailure(s.Perm[j], piv, job.Diag[j])));
-            job.Failed[j] = true;
-        });
+            var local = ws.FrontFailures;
+            local.Clear();
+            FrontKernels.PartialCholesky(l, off, m, k, upd, job.Diag.AsSpan(f0, k), job.Tol, ws.Pack, threads, local);
+            foreach (var (c, piv) in local)
+            {
+                int j = f0 + c;
+                ws.Failures.Add((j, new PivotFailure(s.Perm[j], piv, job.Diag[j])));
+                job.Failed[j] = true;
+            }
+        }
 
         if (nb == 0 || s.Parent[t] < 0) return;
         double[] dst;
