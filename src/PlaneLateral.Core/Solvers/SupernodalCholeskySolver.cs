@@ -89,11 +89,17 @@ public sealed class SupernodalCholeskySolver : ISparseSpdSolver
         _ => MinimumDegreeOrdering.Compute(matrix),
     };
 
+    private int[] ComputeOrdering(SymmetricSparseMatrix matrix, StrictLowerRows lower) =>
+        Ordering == SupernodalOrdering.ApproximateMinimumDegree ? MinimumDegreeOrdering.Compute(matrix, lower) : ComputeOrdering(matrix);
+
     /// <inheritdoc />
+    /// <remarks>The matrix's rows are built once and read by both the ordering and the symbolic analysis.</remarks>
     public ISparseSpdFactor Factorize(SymmetricSparseMatrix matrix, double relativePivotTolerance = 1e-10)
     {
         ArgumentNullException.ThrowIfNull(matrix);
-        return SupernodalFactor.Create(matrix, ComputeOrdering(matrix), relativePivotTolerance, MaxThreads, Kernels == DenseKernelBackend.OpenBlas);
+        var lower = StrictLowerRows.Of(matrix);
+        return SupernodalFactor.Create(matrix, ComputeOrdering(matrix, lower), relativePivotTolerance, MaxThreads,
+            Kernels == DenseKernelBackend.OpenBlas, lower);
     }
 
     /// <summary>Factorises under a permutation supplied by the caller (<c>perm[new] = old</c>; it is postordered, which
@@ -305,9 +311,10 @@ public sealed class SupernodalFactor : ISparseSpdFactor
     /// threads each call itself; subtrees are then factorised one after the other, so that two threads of ours never
     /// call the library at once, and results are no longer bitwise independent of the library's thread count.</para>
     /// </remarks>
-    internal static SupernodalFactor Create(SymmetricSparseMatrix a, int[] ordering, double tol, int threads, bool native = false)
+    internal static SupernodalFactor Create(SymmetricSparseMatrix a, int[] ordering, double tol, int threads, bool native = false,
+        StrictLowerRows? lower = null)
     {
-        var s = SupernodalSymbolic.Analyse(a, ordering);
+        var s = SupernodalSymbolic.Analyse(a, ordering, lower ?? StrictLowerRows.Of(a));
         int n = s.N, ns = s.SupernodeCount;
         if (s.StoredEntries > Array.MaxLength)
             throw new InvalidOperationException($"The factor needs {s.StoredEntries} entries, more than the largest array holds.");
