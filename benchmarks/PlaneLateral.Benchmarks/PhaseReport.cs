@@ -24,6 +24,7 @@ public static class PhaseReport
         var wall = names.Select(_ => new List<double>()).ToArray();
         var cpu = names.Select(_ => new List<double>()).ToArray();
         var sums = new ulong[2, 2];
+        var allocated = new long[6];
         long lnz = 0;
         for (int rep = 0; rep < reps; rep++)
         {
@@ -31,11 +32,15 @@ public static class PhaseReport
             {
                 bool now = (rep + k) % 2 == 1;
                 int v = now ? 1 : 0;
+                long b0 = GC.GetAllocatedBytesForCurrentThread();
                 var (w0, c0) = Clocks();
                 var perm = now ? MinimumDegreeOrdering.Compute(a) : PreviousPhases.Order(a);
                 var (w1, c1) = Clocks();
+                long b1 = GC.GetAllocatedBytesForCurrentThread();
                 var s = now ? SupernodalSymbolic.Analyse(a, perm) : PreviousPhases.Analyse(a, perm);
                 var (w2, c2) = Clocks();
+                long b2 = GC.GetAllocatedBytesForCurrentThread();
+                (allocated[v], allocated[2 + v], allocated[4 + v]) = (b1 - b0, b2 - b1, b2 - b0);
                 wall[v].Add(w1 - w0); cpu[v].Add(c1 - c0);
                 wall[2 + v].Add(w2 - w1); cpu[2 + v].Add(c2 - c1);
                 wall[4 + v].Add(w2 - w0); cpu[4 + v].Add(c2 - c0);
@@ -50,10 +55,10 @@ public static class PhaseReport
         double load = File.Exists("/proc/loadavg") ? double.Parse(File.ReadAllText("/proc/loadavg").Split(' ')[0], CultureInfo.InvariantCulture) : double.NaN;
         Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
             $"grid {nx}x{ny}: n = {a.Size}, nnz(L) exact {lnz}, {reps} interleaved passes, load average {load} at the end"));
-        Console.WriteLine("  phase                       wall: first   warm min   median | thread CPU: first  warm min   median (s)");
+        Console.WriteLine("  phase                       wall: first   warm min   median | thread CPU: first  warm min   median (s) | allocated (MB)");
         for (int i = 0; i < names.Length; i++)
             Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
-                $"  {names[i],-26} {wall[i][0],10:F4} {Min(wall[i]),10:F4} {Median(wall[i]),8:F4} | {cpu[i][0],10:F4} {Min(cpu[i]),10:F4} {Median(cpu[i]),8:F4}"));
+                $"  {names[i],-26} {wall[i][0],10:F4} {Min(wall[i]),10:F4} {Median(wall[i]),8:F4} | {cpu[i][0],10:F4} {Min(cpu[i]),10:F4} {Median(cpu[i]),8:F4} | {allocated[i] / 1e6,8:F1}"));
         Console.WriteLine($"  checksums before: permutation {sums[0, 0]:X16}, symbolic {sums[0, 1]:X16}");
         Console.WriteLine($"  checksums now:    permutation {sums[1, 0]:X16}, symbolic {sums[1, 1]:X16}" +
             (sums[0, 0] == sums[1, 0] && sums[0, 1] == sums[1, 1] ? " (equal)" : " (DIFFERENT)"));

@@ -28,54 +28,51 @@ public static class MinimumDegreeOrdering
     private const byte Variable = 0, Element = 1, Dead = 2;
 
     /// <summary>Approximate minimum degree order of the symmetric pattern of <paramref name="a"/> (<c>perm[new] = old</c>).</summary>
-    public static int[] Compute(SymmetricSparseMatrix a)
-    {
-        ArgumentNullException.ThrowIfNull(a);
-        return Compute(a, StrictLowerRows.Of(a));
-    }
-
-    /// <summary>The same order from the matrix and its rows (shared with the symbolic analysis).</summary>
     /// <remarks>
     /// Written for speed without changing a single choice: one method with the quotient graph in locals (no closures, so
     /// the arrays stay in registers), fully optimised from the first call (tiered compilation would leave this long
     /// loop in on-stack-replaced code), supervariable candidates grouped in hash buckets instead of sorted, and the
-    /// adjacency lists gathered in the order the former scatter produced them. Every list, tie and merge comes out as
-    /// before, so the permutation is the same to the index (<c>OrderingPinTests</c>).
+    /// quotient graph compacted in place. Every list, tie and merge comes out as before, so the permutation is the same
+    /// to the index (<c>OrderingPinTests</c>).
     /// </remarks>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    internal static int[] Compute(SymmetricSparseMatrix a, StrictLowerRows rows)
+    public static int[] Compute(SymmetricSparseMatrix a)
     {
+        ArgumentNullException.ThrowIfNull(a);
         int n = a.Size;
         var cp = a.ColumnPointers;
         var ri = a.RowIndices;
-        var rp = rows.RowPtr;
-        var rc = rows.Cols;
-        // Full adjacency (both triangles, no diagonal); list i: its row's columns j < i ascending, then its column's rows
-        // i' > i ascending (the matrix holds no repeated entry: SymmetricMatrixBuilder sums them).
+        // Full adjacency (both triangles, no diagonal). List i: the columns j < i of its row in increasing order, then
+        // the rows of its column in increasing order (the matrix holds no repeated entry: SymmetricMatrixBuilder sums them).
         var pe = new int[n];
         var len = new int[n];
         var elen = new int[n];
-        long nnz = 0;
-        for (int i = 0; i < n; i++)
+        for (int j = 0; j < n; j++)
         {
-            int d = rows.Degree(a, i);
-            len[i] = d;
-            nnz += d;
+            int p0 = cp[j], p1 = cp[j + 1];
+            if (p0 < p1 && ri[p0] == j) p0++; // the diagonal is first when stored
+            len[j] += p1 - p0;
+            for (int p = p0; p < p1; p++) len[ri[p]]++;
         }
+        long nnz = 0;
+        for (int i = 0; i < n; i++) nnz += len[i];
         long cap = nnz + nnz / 5 + 2L * n + 16;
         if (cap > Array.MaxLength) cap = Array.MaxLength;
         var iw = GC.AllocateUninitializedArray<int>((int)cap);
         int pfree = 0;
-        for (int i = 0; i < n; i++)
+        for (int i = 0; i < n; i++) { pe[i] = pfree; pfree += len[i]; len[i] = 0; }
+        for (int j = 0; j < n; j++)
         {
-            pe[i] = pfree;
-            int r0 = rp[i], r1 = rp[i + 1];
-            rc.AsSpan(r0, r1 - r0).CopyTo(iw.AsSpan(pfree));
-            pfree += r1 - r0;
-            int p0 = cp[i], p1 = cp[i + 1];
-            if (p0 < p1 && ri[p0] == i) p0++;
-            ri.AsSpan(p0, p1 - p0).CopyTo(iw.AsSpan(pfree));
-            pfree += p1 - p0;
+            int p0 = cp[j], p1 = cp[j + 1];
+            if (p0 < p1 && ri[p0] == j) p0++;
+            int pj = pe[j] + len[j];
+            for (int p = p0; p < p1; p++)
+            {
+                int i = ri[p];
+                iw[pe[i] + len[i]++] = j;
+                iw[pj++] = i;
+            }
+            len[j] = pj - pe[j];
         }
 
         var nv = new int[n];          // supervariable size (0: not principal / absorbed)

@@ -89,17 +89,18 @@ public sealed class SupernodalCholeskySolver : ISparseSpdSolver
         _ => MinimumDegreeOrdering.Compute(matrix),
     };
 
-    private int[] ComputeOrdering(SymmetricSparseMatrix matrix, StrictLowerRows lower) =>
-        Ordering == SupernodalOrdering.ApproximateMinimumDegree ? MinimumDegreeOrdering.Compute(matrix, lower) : ComputeOrdering(matrix);
-
     /// <inheritdoc />
-    /// <remarks>The matrix's rows are built once and read by both the ordering and the symbolic analysis.</remarks>
+    /// <remarks>With two threads or more and a large matrix, the matrix's rows (<see cref="StrictLowerRows"/>), which the
+    /// symbolic analysis reads, are built on a second thread while the ordering runs; nothing either computes depends on
+    /// the other, so the result is the same.</remarks>
     public ISparseSpdFactor Factorize(SymmetricSparseMatrix matrix, double relativePivotTolerance = 1e-10)
     {
         ArgumentNullException.ThrowIfNull(matrix);
-        var lower = StrictLowerRows.Of(matrix);
-        return SupernodalFactor.Create(matrix, ComputeOrdering(matrix, lower), relativePivotTolerance, MaxThreads,
-            Kernels == DenseKernelBackend.OpenBlas, lower);
+        bool parallel = MaxThreads > 1 && SupernodalSymbolic.WorthASecondThread(matrix);
+        var rows = parallel ? Task.Run(() => StrictLowerRows.Of(matrix)) : null;
+        var ordering = ComputeOrdering(matrix);
+        var lower = rows is null ? StrictLowerRows.Of(matrix) : rows.GetAwaiter().GetResult();
+        return SupernodalFactor.Create(matrix, ordering, relativePivotTolerance, MaxThreads, Kernels == DenseKernelBackend.OpenBlas, lower);
     }
 
     /// <summary>Factorises under a permutation supplied by the caller (<c>perm[new] = old</c>; it is postordered, which
@@ -314,7 +315,7 @@ public sealed class SupernodalFactor : ISparseSpdFactor
     internal static SupernodalFactor Create(SymmetricSparseMatrix a, int[] ordering, double tol, int threads, bool native = false,
         StrictLowerRows? lower = null)
     {
-        var s = SupernodalSymbolic.Analyse(a, ordering, lower ?? StrictLowerRows.Of(a));
+        var s = SupernodalSymbolic.Analyse(a, ordering, lower ?? StrictLowerRows.Of(a), threads > 1);
         int n = s.N, ns = s.SupernodeCount;
         if (s.StoredEntries > Array.MaxLength)
             throw new InvalidOperationException($"The factor needs {s.StoredEntries} entries, more than the largest array holds.");

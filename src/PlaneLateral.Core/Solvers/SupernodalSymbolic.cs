@@ -178,49 +178,108 @@ internal sealed class SupernodalSymbolic
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static int[] ColumnCounts(int n, int[] parent, int[] colPtr, int[] rows)
     {
-        var delta = new int[n];        // summed over each subtree at the end: the column counts
-        var first = new int[n];        // first[j]: the smallest (first in postorder) descendant of j
-        var maxFirst = new int[n];     // per row i: the largest first[] of a leaf of its subtree seen so far
-        var prevLeaf = new int[n];     // per row i: the last leaf of its subtree found
-        var ancestor = new int[n];     // disjoint sets of the processed part of the tree, with path compression
-        Array.Fill(first, -1);
-        Array.Fill(maxFirst, -1);
-        Array.Fill(prevLeaf, -1);
-        for (int k = 0; k < n; k++)
-        {
-            delta[k] = first[k] == -1 ? 1 : 0;   // 1 for a leaf of the tree
-            for (int j = k; j != -1 && first[j] == -1; j = parent[j]) first[j] = k;
-            ancestor[k] = k;
-        }
+        var w = new CountWork(n, parent);
         for (int j = 0; j < n; j++)
         {
-            if (parent[j] != -1) delta[parent[j]]--;
-            for (int p = colPtr[j]; p < colPtr[j + 1]; p++)
-            {
-                int i = rows[p];
-                if (i <= j || first[j] <= maxFirst[i]) continue;   // j is not a leaf of row i's subtree
-                maxFirst[i] = first[j];
-                int jPrev = prevLeaf[i];
-                prevLeaf[i] = j;
-                delta[j]++;
-                if (jPrev == -1) continue;                         // the first leaf: the subtree's root is i itself
-                int q = jPrev;
-                while (q != ancestor[q]) q = ancestor[q];          // the least common ancestor of jPrev and j
-                for (int s = jPrev; s != q;) { int up = ancestor[s]; ancestor[s] = q; s = up; }
-                delta[q]--;
-            }
-            if (parent[j] != -1) ancestor[j] = parent[j];
+            if (parent[j] != -1) w.Delta[parent[j]]--;
+            for (int p = colPtr[j]; p < colPtr[j + 1]; p++) w.Entry(rows[p], j);
+            if (parent[j] != -1) w.Ancestor[j] = parent[j];
         }
-        for (int j = 0; j < n; j++)
-            if (parent[j] != -1) delta[parent[j]] += delta[j];
-        return delta;
+        return w.Finish(parent);
     }
 
-    public static SupernodalSymbolic Analyse(SymmetricSparseMatrix a, int[] ordering) => Analyse(a, ordering, StrictLowerRows.Of(a));
-
-    /// <summary>The analysis from the matrix and its rows (shared with the ordering).</summary>
+    /// <summary>The same column counts, each column's entries gathered from the matrix and its rows (their order within a
+    /// column does not change the counts), so that they need not wait for the columns of P·K·Pᵀ.</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    internal static SupernodalSymbolic Analyse(SymmetricSparseMatrix a, int[] ordering, StrictLowerRows lower)
+    private static int[] ColumnCounts(int[] parent, SymmetricSparseMatrix a, StrictLowerRows lower, int[] perm, int[] inv)
+    {
+        int n = a.Size;
+        var cp = a.ColumnPointers;
+        var ri = a.RowIndices;
+        var rp = lower.RowPtr;
+        var rc = lower.Cols;
+        var w = new CountWork(n, parent);
+        for (int j = 0; j < n; j++)
+        {
+            if (parent[j] != -1) w.Delta[parent[j]]--;
+            int o = perm[j];
+            for (int t = rp[o], t1 = rp[o + 1]; t < t1; t++) w.Entry(inv[rc[t]], j);
+            for (int p = cp[o], p1 = cp[o + 1]; p < p1; p++) w.Entry(inv[ri[p]], j);
+            if (parent[j] != -1) w.Ancestor[j] = parent[j];
+        }
+        return w.Finish(parent);
+    }
+
+    /// <summary>State of the column count (see <see cref="ColumnCounts(int, int[], int[], int[])"/>).</summary>
+    private readonly struct CountWork
+    {
+        public readonly int[] Delta;      // summed over each subtree at the end: the column counts
+        private readonly int[] _first;    // first[j]: the smallest (first in postorder) descendant of j
+        private readonly int[] _maxFirst; // per row i: the largest first[] of a leaf of its subtree seen so far
+        private readonly int[] _prevLeaf; // per row i: the last leaf of its subtree found
+        public readonly int[] Ancestor;   // disjoint sets of the processed part of the tree, with path compression
+
+        public CountWork(int n, int[] parent)
+        {
+            Delta = new int[n];
+            _first = new int[n];
+            _maxFirst = new int[n];
+            _prevLeaf = new int[n];
+            Ancestor = new int[n];
+            Array.Fill(_first, -1);
+            Array.Fill(_maxFirst, -1);
+            Array.Fill(_prevLeaf, -1);
+            for (int k = 0; k < n; k++)
+            {
+                Delta[k] = _first[k] == -1 ? 1 : 0;   // 1 for a leaf of the tree
+                for (int j = k; j != -1 && _first[j] == -1; j = parent[j]) _first[j] = k;
+                Ancestor[k] = k;
+            }
+        }
+
+        /// <summary>Entry a_ij of column j (entries with i ≤ j are ignored).</summary>
+        [MethodImpl(MethodImplOptions.AggressiveInlining)]
+        public void Entry(int i, int j)
+        {
+            if (i <= j || _first[j] <= _maxFirst[i]) return;   // j is not a leaf of row i's subtree
+            _maxFirst[i] = _first[j];
+            int jPrev = _prevLeaf[i];
+            _prevLeaf[i] = j;
+            Delta[j]++;
+            if (jPrev == -1) return;                             // the first leaf: the subtree's root is i itself
+            int q = jPrev;
+            while (q != Ancestor[q]) q = Ancestor[q];            // the least common ancestor of jPrev and j
+            for (int s = jPrev; s != q;) { int up = Ancestor[s]; Ancestor[s] = q; s = up; }
+            Delta[q]--;
+        }
+
+        public int[] Finish(int[] parent)
+        {
+            for (int j = 0; j < parent.Length; j++)
+                if (parent[j] != -1) Delta[parent[j]] += Delta[j];
+            return Delta;
+        }
+    }
+
+    /// <summary>Whether the analysis of <paramref name="a"/> is large enough to pay for a second thread.</summary>
+    internal static bool WorthASecondThread(SymmetricSparseMatrix a) => a.NonZerosLower >= 200_000;
+
+    private static Task<(int[] ColPtr, int[] Rows, int[] Source)> StartLowerByColumn(SymmetricSparseMatrix a, StrictLowerRows lower,
+        int[] perm, int[] inv) => Task.Run(() =>
+        {
+            LowerByColumn(a, lower, perm, inv, out var colPtr, out var rows, out var source);
+            return (colPtr, rows, source);
+        });
+
+    public static SupernodalSymbolic Analyse(SymmetricSparseMatrix a, int[] ordering) =>
+        Analyse(a, ordering, StrictLowerRows.Of(a), Environment.ProcessorCount > 1);
+
+    /// <summary>The analysis from the matrix and its rows. With <paramref name="twoThreads"/> (and a large matrix) the
+    /// columns of P·K·Pᵀ, which only the numeric phase needs, are gathered on a second thread while this one counts the
+    /// columns of L (from the same entries, gathered again) and finds the supernodes and their patterns: the two write
+    /// separate arrays, so the result does not depend on it.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    internal static SupernodalSymbolic Analyse(SymmetricSparseMatrix a, int[] ordering, StrictLowerRows lower, bool twoThreads)
     {
         int n = a.Size;
         var inv0 = Orderings.Inverse(ordering);
@@ -237,8 +296,15 @@ internal sealed class SupernodalSymbolic
         for (int k = 0; k < n; k++) { int p0 = parent0[post[k]]; parent[k] = p0 < 0 ? -1 : position[p0]; }
 
         // P·K·Pᵀ's lower entries by column: for the column counts and the numeric phase.
-        LowerByColumn(a, lower, perm, inv, out var colPtr, out var rowsByCol, out var sourceByCol);
-        var count = ColumnCounts(n, parent, colPtr, rowsByCol);
+        int[]? colPtr = null, rowsByCol = null, sourceByCol = null;
+        int[] count;
+        var columns = twoThreads && WorthASecondThread(a) ? StartLowerByColumn(a, lower, perm, inv) : null;
+        if (columns is null)
+        {
+            LowerByColumn(a, lower, perm, inv, out colPtr, out rowsByCol, out sourceByCol);
+            count = ColumnCounts(n, parent, colPtr, rowsByCol);
+        }
+        else count = ColumnCounts(parent, a, lower, perm, inv);
         var childCount = parent0; // reused: the first tree is no longer needed
         Array.Clear(childCount);
         for (int j = 0; j < n; j++) if (parent[j] >= 0) childCount[parent[j]]++;
@@ -357,6 +423,8 @@ internal sealed class SupernodalSymbolic
         for (int t = 0; t < ns; t++)
             if (fill[t] != patStart[t + 1])
                 throw new InvalidOperationException($"Symbolic analysis: supernode {t} has {fill[t] - patStart[t]} rows below it, its last column {patStart[t + 1] - patStart[t]}.");
+
+        if (columns is not null) (colPtr, rowsByCol, sourceByCol) = columns.GetAwaiter().GetResult();
 
         var offset = new long[ns + 1];
         long stored2 = 0, lnz = 0;

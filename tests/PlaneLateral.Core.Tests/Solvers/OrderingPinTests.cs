@@ -45,6 +45,21 @@ public class OrderingPinTests
         Assert.Equal((orderingHash, symbolicHash), (Hash(perm), hs));
     }
 
+    [Fact]
+    public void SymbolicAnalysis_IsTheSameOnOneThreadAndOnTwo()
+    {
+        // Large enough for the second thread (the columns of P·K·Pᵀ gathered beside the column counts and patterns).
+        var a = TwoDofQuadGrid(170, 160, 2);
+        Assert.True(SupernodalSymbolic.WorthASecondThread(a));
+        var perm = MinimumDegreeOrdering.Compute(a);
+        var lower = StrictLowerRows.Of(a);
+        var one = SupernodalSymbolic.Analyse(a, perm, lower, twoThreads: false);
+        var two = SupernodalSymbolic.Analyse(a, perm, lower, twoThreads: true);
+        Assert.Equal(Hash(one.Perm, one.First, one.PatternStart, one.PatternRows, one.Parent, one.ColumnCount, one.ColPtr!, one.RowsByCol!, one.SourceByCol!),
+            Hash(two.Perm, two.First, two.PatternStart, two.PatternRows, two.Parent, two.ColumnCount, two.ColPtr!, two.RowsByCol!, two.SourceByCol!));
+        Assert.Equal((one.ExactNonZeros, one.StoredEntries, one.Flops), (two.ExactNonZeros, two.StoredEntries, two.Flops));
+    }
+
     private static ulong Hash(params int[][] arrays)
     {
         ulong h = 14695981039346656037UL;
