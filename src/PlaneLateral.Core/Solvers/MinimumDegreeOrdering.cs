@@ -30,12 +30,11 @@ public static class MinimumDegreeOrdering
     /// <summary>Approximate minimum degree order of the symmetric pattern of <paramref name="a"/> (<c>perm[new] = old</c>).</summary>
     /// <remarks>
     /// Written for speed without changing a single choice: one method with the quotient graph in locals (no closures, so
-    /// the arrays stay in registers), fully optimised from the first call (tiered compilation would leave this long
-    /// loop in on-stack-replaced code), supervariable candidates grouped in hash buckets instead of sorted, and the
-    /// quotient graph compacted in place. Every list, tie and merge comes out as before, so the permutation is the same
+    /// the arrays stay in registers), supervariable candidates grouped in hash buckets instead of sorted, and the quotient
+    /// graph compacted in place. (Not marked for aggressive optimisation: that would keep it out of the ReadyToRun image
+    /// and cost a JIT compilation at the start of every run that factorises a large system.) Every list, tie and merge comes out as before, so the permutation is the same
     /// to the index (<c>OrderingPinTests</c>).
     /// </remarks>
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static int[] Compute(SymmetricSparseMatrix a)
     {
         ArgumentNullException.ThrowIfNull(a);

@@ -1,14 +1,13 @@
-using System.Runtime.CompilerServices;
-
 namespace PlaneLateral.Solvers;
 
 /// <summary>
 /// The strictly lower triangle of a <see cref="SymmetricSparseMatrix"/> by rows, in the matrix's own numbering: row i lists
 /// the columns j &lt; i of its entries in ascending order, each with the index of the entry in the matrix's arrays. With
-/// the matrix's columns (rows ≥ j) it gives every node's neighbours without a permuted transpose, so the ordering and the
-/// symbolic analysis read the pattern by gathering (node by node, in any order) instead of scattering it again and again.
-/// Built once per factorisation (one count and one scatter in the matrix's numbering, which for a finite-element numbering
-/// is nearly local) and shared by both phases.
+/// the matrix's columns (rows ≥ j) it gives every node's neighbours without a permuted transpose, so the symbolic analysis
+/// reads the pattern by gathering (node by node, in any order: elimination tree, column counts, row patterns, the columns
+/// of P·K·Pᵀ) instead of scattering it again for each numbering. Built once per factorisation (one count and one scatter
+/// in the matrix's numbering, which for a finite-element numbering is nearly local), on a second thread while the
+/// ordering runs.
 /// </summary>
 internal sealed class StrictLowerRows
 {
@@ -23,17 +22,6 @@ internal sealed class StrictLowerRows
         Source = source;
     }
 
-    /// <summary>Number of off-diagonal neighbours of node i (both triangles).</summary>
-    [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    public int Degree(SymmetricSparseMatrix a, int i)
-    {
-        var cp = a.ColumnPointers;
-        int p0 = cp[i], p1 = cp[i + 1];
-        if (p0 < p1 && a.RowIndices[p0] == i) p0++;
-        return RowPtr[i + 1] - RowPtr[i] + p1 - p0;
-    }
-
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static StrictLowerRows Of(SymmetricSparseMatrix a)
     {
         ArgumentNullException.ThrowIfNull(a);

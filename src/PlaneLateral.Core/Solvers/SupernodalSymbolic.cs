@@ -60,7 +60,6 @@ internal sealed class SupernodalSymbolic
     /// after c (in increasing old column), then, from the old column perm[c], those whose row does not come before it (in
     /// storage order) — the order a scatter of the matrix column by column gives, without a counting pass.
     /// </summary>
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static void LowerByColumn(SymmetricSparseMatrix a, StrictLowerRows lower, int[] perm, int[] inv,
         out int[] colPtr, out int[] rows, out int[] source)
     {
@@ -100,7 +99,6 @@ internal sealed class SupernodalSymbolic
     /// compression, each row's entries left of the diagonal gathered from the matrix and its rows (the tree does not depend
     /// on the order they are taken in).
     /// </summary>
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static int[] EliminationTree(SymmetricSparseMatrix a, StrictLowerRows lower, int[] order, int[] inv)
     {
         int n = a.Size;
@@ -134,7 +132,6 @@ internal sealed class SupernodalSymbolic
         return parent;
     }
 
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static int[] Postorder(int n, int[] parent)
     {
         var head = new int[n];
@@ -175,7 +172,6 @@ internal sealed class SupernodalSymbolic
     /// least common ancestor of j and the previous leaf of that row, so that summing over the subtree of j counts each row
     /// once.
     /// </summary>
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static int[] ColumnCounts(int n, int[] parent, int[] colPtr, int[] rows)
     {
         var w = new CountWork(n, parent);
@@ -190,7 +186,6 @@ internal sealed class SupernodalSymbolic
 
     /// <summary>The same column counts, each column's entries gathered from the matrix and its rows (their order within a
     /// column does not change the counts), so that they need not wait for the columns of P·K·Pᵀ.</summary>
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static int[] ColumnCounts(int[] parent, SymmetricSparseMatrix a, StrictLowerRows lower, int[] perm, int[] inv)
     {
         int n = a.Size;
@@ -278,7 +273,6 @@ internal sealed class SupernodalSymbolic
     /// columns of P·K·Pᵀ, which only the numeric phase needs, are gathered on a second thread while this one counts the
     /// columns of L (from the same entries, gathered again) and finds the supernodes and their patterns: the two write
     /// separate arrays, so the result does not depend on it.</summary>
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static SupernodalSymbolic Analyse(SymmetricSparseMatrix a, int[] ordering, StrictLowerRows lower, bool twoThreads)
     {
         int n = a.Size;
