@@ -18,6 +18,12 @@ if (args.Length > 0 && args[0] == "fill")
     }
     return;
 }
+// "phases NX [NY] [REPS]": the ordering and the symbolic analysis alone, repeated, with checksums (PhaseReport).
+if (args.Length > 1 && args[0] == "phases")
+{
+    PhaseReport.Run(args);
+    return;
+}
 // "supernodal NX [NY] [DIR|-] [THREADS] [PASSES]": measured passes (2 by default) of the supernodal solver on a plane-stress grid (writes DIR/wallNXxNY.mtx
 // and its right-hand side for the CHOLMOD harness when DIR is given).
 if (args.Length > 1 && args[0] == "supernodal")

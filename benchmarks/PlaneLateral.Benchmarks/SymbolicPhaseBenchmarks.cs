@@ -7,7 +7,8 @@ namespace PlaneLateral.Benchmarks;
 /// <summary>
 /// The symbolic phase's column counts, before and after (issue 19, item 3), on the same postordered plane-stress walls in
 /// one run: the row-subtree walk the phase used (O(nnz(L)), kept here as the baseline) against the leaf and least-common-
-/// ancestor count it uses now (Gilbert, Ng and Peyton 1994: O(nnz(A)·α)); and the whole analysis. Compare the ratios.
+/// ancestor count it uses now (Gilbert, Ng and Peyton 1994: O(nnz(A)·α)); and the whole analysis and the ordering, now and as
+/// they were before session 6's speed work (<see cref="PreviousPhases"/>). Compare the ratios.
 /// </summary>
 [MemoryDiagnoser]
 [SimpleJob(RunStrategy.Monitoring, launchCount: 1, warmupCount: 2, iterationCount: 9)]
@@ -81,4 +82,16 @@ public class SymbolicPhaseBenchmarks
 
     [Benchmark]
     public long WholeAnalysis() => SupernodalSymbolic.Analyse(_a, _perm).StoredEntries;
+
+    /// <summary>The whole analysis as it was before session 6 (<see cref="PreviousPhases"/>).</summary>
+    [Benchmark]
+    public long WholeAnalysisBefore() => PreviousPhases.Analyse(_a, _perm).StoredEntries;
+
+    /// <summary>The approximate minimum degree ordering now.</summary>
+    [Benchmark]
+    public int[] Ordering() => MinimumDegreeOrdering.Compute(_a);
+
+    /// <summary>The ordering as it was before session 6 (<see cref="PreviousPhases"/>).</summary>
+    [Benchmark]
+    public int[] OrderingBefore() => PreviousPhases.Order(_a);
 }

@@ -90,10 +90,17 @@ public sealed class SupernodalCholeskySolver : ISparseSpdSolver
     };
 
     /// <inheritdoc />
+    /// <remarks>With two threads or more and a large matrix, the matrix's rows (<see cref="StrictLowerRows"/>), which the
+    /// symbolic analysis reads, are built on a second thread while the ordering runs; nothing either computes depends on
+    /// the other, so the result is the same.</remarks>
     public ISparseSpdFactor Factorize(SymmetricSparseMatrix matrix, double relativePivotTolerance = 1e-10)
     {
         ArgumentNullException.ThrowIfNull(matrix);
-        return SupernodalFactor.Create(matrix, ComputeOrdering(matrix), relativePivotTolerance, MaxThreads, Kernels == DenseKernelBackend.OpenBlas);
+        bool parallel = MaxThreads > 1 && SupernodalSymbolic.WorthASecondThread(matrix);
+        var rows = parallel ? Task.Run(() => StrictLowerRows.Of(matrix)) : null;
+        var ordering = ComputeOrdering(matrix);
+        var lower = rows is null ? StrictLowerRows.Of(matrix) : rows.GetAwaiter().GetResult();
+        return SupernodalFactor.Create(matrix, ordering, relativePivotTolerance, MaxThreads, Kernels == DenseKernelBackend.OpenBlas, lower);
     }
 
     /// <summary>Factorises under a permutation supplied by the caller (<c>perm[new] = old</c>; it is postordered, which
@@ -312,9 +319,10 @@ public sealed class SupernodalFactor : ISparseSpdFactor
     /// call the library at once, and results are no longer bitwise independent of the library's thread count.</para>
     /// </remarks>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    internal static SupernodalFactor Create(SymmetricSparseMatrix a, int[] ordering, double tol, int threads, bool native = false)
+    internal static SupernodalFactor Create(SymmetricSparseMatrix a, int[] ordering, double tol, int threads, bool native = false,
+        StrictLowerRows? lower = null)
     {
-        var s = SupernodalSymbolic.Analyse(a, ordering);
+        var s = SupernodalSymbolic.Analyse(a, ordering, lower ?? StrictLowerRows.Of(a), threads > 1);
         int n = s.N, ns = s.SupernodeCount;
         if (s.StoredEntries > Array.MaxLength)
             throw new InvalidOperationException($"The factor needs {s.StoredEntries} entries, more than the largest array holds.");

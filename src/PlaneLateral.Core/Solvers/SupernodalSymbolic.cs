@@ -1,3 +1,5 @@
+using System.Runtime.CompilerServices;
+
 namespace PlaneLateral.Solvers;
 
 /// <summary>
@@ -47,70 +49,82 @@ internal sealed class SupernodalSymbolic
     /// <summary>Entries of P·K·Pᵀ grouped by column (lower triangle: row ≥ column), with the source index of each.</summary>
     internal static void LowerByColumn(SymmetricSparseMatrix a, int[] inv, out int[] colPtr, out int[] rows, out int[] source)
     {
+        var perm = new int[inv.Length];
+        for (int i = 0; i < inv.Length; i++) perm[inv[i]] = i;
+        LowerByColumn(a, StrictLowerRows.Of(a), perm, inv, out colPtr, out rows, out source);
+    }
+
+    /// <summary>
+    /// Entries of P·K·Pᵀ grouped by column (lower triangle: row ≥ column), with the source index of each, gathered column by
+    /// column from the matrix and its rows: new column c takes, from the old row perm[c], the entries whose column comes
+    /// after c (in increasing old column), then, from the old column perm[c], those whose row does not come before it (in
+    /// storage order) — the order a scatter of the matrix column by column gives, without a counting pass.
+    /// </summary>
+    internal static void LowerByColumn(SymmetricSparseMatrix a, StrictLowerRows lower, int[] perm, int[] inv,
+        out int[] colPtr, out int[] rows, out int[] source)
+    {
         int n = a.Size;
         var cp = a.ColumnPointers;
         var ri = a.RowIndices;
+        var rp = lower.RowPtr;
+        var rc = lower.Cols;
+        var rs = lower.Source;
         colPtr = new int[n + 1];
-        for (int j = 0; j < n; j++)
-            for (int p = cp[j]; p < cp[j + 1]; p++) colPtr[Math.Min(inv[ri[p]], inv[j]) + 1]++;
-        for (int j = 0; j < n; j++) colPtr[j + 1] += colPtr[j];
-        var next = (int[])colPtr.Clone();
-        int nz = colPtr[n];
-        rows = new int[nz];
-        source = new int[nz];
-        for (int j = 0; j < n; j++)
-            for (int p = cp[j]; p < cp[j + 1]; p++)
+        int nz = cp[n];
+        var rowsOut = GC.AllocateUninitializedArray<int>(nz);
+        var sourceOut = GC.AllocateUninitializedArray<int>(nz);
+        int q = 0;
+        for (int c = 0; c < n; c++)
+        {
+            colPtr[c] = q;
+            int o = perm[c];
+            for (int t = rp[o], t1 = rp[o + 1]; t < t1; t++)
             {
-                int r = inv[ri[p]], c = inv[j];
-                if (r < c) (r, c) = (c, r);
-                int q = next[c]++;
-                rows[q] = r;
-                source[q] = p;
+                int r = inv[rc[t]];
+                if (r > c) { rowsOut[q] = r; sourceOut[q] = rs[t]; q++; }
             }
+            for (int p = cp[o], p1 = cp[o + 1]; p < p1; p++)
+            {
+                int r = inv[ri[p]];
+                if (r >= c) { rowsOut[q] = r; sourceOut[q] = p; q++; }
+            }
+        }
+        colPtr[n] = q;
+        rows = rowsOut;
+        source = sourceOut;
     }
 
-    /// <summary>Strictly lower entries of P·K·Pᵀ grouped by row: row r lists the columns c &lt; r.</summary>
-    private static void LowerByRow(SymmetricSparseMatrix a, int[] inv, out int[] rowPtr, out int[] cols)
+    /// <summary>
+    /// Elimination tree of P·K·Pᵀ (<paramref name="order"/>: <c>perm[new] = old</c>) by Liu's algorithm with path
+    /// compression, each row's entries left of the diagonal gathered from the matrix and its rows (the tree does not depend
+    /// on the order they are taken in).
+    /// </summary>
+    private static int[] EliminationTree(SymmetricSparseMatrix a, StrictLowerRows lower, int[] order, int[] inv)
     {
         int n = a.Size;
         var cp = a.ColumnPointers;
         var ri = a.RowIndices;
-        rowPtr = new int[n + 1];
-        for (int j = 0; j < n; j++)
-            for (int p = cp[j]; p < cp[j + 1]; p++)
-            {
-                int r = inv[ri[p]], c = inv[j];
-                if (r != c) rowPtr[Math.Max(r, c) + 1]++;
-            }
-        for (int j = 0; j < n; j++) rowPtr[j + 1] += rowPtr[j];
-        var next = (int[])rowPtr.Clone();
-        cols = new int[rowPtr[n]];
-        for (int j = 0; j < n; j++)
-            for (int p = cp[j]; p < cp[j + 1]; p++)
-            {
-                int r = inv[ri[p]], c = inv[j];
-                if (r == c) continue;
-                if (r < c) (r, c) = (c, r);
-                cols[next[r]++] = c;
-            }
-    }
-
-    private static int[] EliminationTree(int n, int[] rowPtr, int[] cols)
-    {
+        var rp = lower.RowPtr;
+        var rc = lower.Cols;
         var parent = new int[n];
         var ancestor = new int[n];
         for (int k = 0; k < n; k++)
         {
             parent[k] = -1;
             ancestor[k] = -1;
-            for (int p = rowPtr[k]; p < rowPtr[k + 1]; p++)
+            int o = order[k];
+            int t0 = rp[o], t1 = rp[o + 1], p0 = cp[o], p1 = cp[o + 1];
+            for (int q = t0, q1 = t1 + (p1 - p0); q < q1; q++)
             {
-                int r = cols[p];
-                while (r != -1 && r != k)
+                // The row's entries, then the column's; those right of the diagonal (and the diagonal) are skipped.
+                int r = q < t1 ? inv[rc[q]] : inv[ri[p0 + (q - t1)]];
+                if (r >= k) continue;
+                while (true)
                 {
                     int t = ancestor[r];
                     ancestor[r] = k;
                     if (t == -1) { parent[r] = k; break; }
+                    if (t == k) break;
                     r = t;
                 }
             }
@@ -160,64 +174,133 @@ internal sealed class SupernodalSymbolic
     /// </summary>
     internal static int[] ColumnCounts(int n, int[] parent, int[] colPtr, int[] rows)
     {
-        var delta = new int[n];        // summed over each subtree at the end: the column counts
-        var first = new int[n];        // first[j]: the smallest (first in postorder) descendant of j
-        var maxFirst = new int[n];     // per row i: the largest first[] of a leaf of its subtree seen so far
-        var prevLeaf = new int[n];     // per row i: the last leaf of its subtree found
-        var ancestor = new int[n];     // disjoint sets of the processed part of the tree, with path compression
-        Array.Fill(first, -1);
-        Array.Fill(maxFirst, -1);
-        Array.Fill(prevLeaf, -1);
-        for (int k = 0; k < n; k++)
-        {
-            delta[k] = first[k] == -1 ? 1 : 0;   // 1 for a leaf of the tree
-            for (int j = k; j != -1 && first[j] == -1; j = parent[j]) first[j] = k;
-            ancestor[k] = k;
-        }
+        var w = new CountWork(n, parent);
         for (int j = 0; j < n; j++)
         {
-            if (parent[j] != -1) delta[parent[j]]--;
-            for (int p = colPtr[j]; p < colPtr[j + 1]; p++)
-            {
-                int i = rows[p];
-                if (i <= j || first[j] <= maxFirst[i]) continue;   // j is not a leaf of row i's subtree
-                maxFirst[i] = first[j];
-                int jPrev = prevLeaf[i];
-                prevLeaf[i] = j;
-                delta[j]++;
-                if (jPrev == -1) continue;                         // the first leaf: the subtree's root is i itself
-                int q = jPrev;
-                while (q != ancestor[q]) q = ancestor[q];          // the least common ancestor of jPrev and j
-                for (int s = jPrev; s != q;) { int up = ancestor[s]; ancestor[s] = q; s = up; }
-                delta[q]--;
-            }
-            if (parent[j] != -1) ancestor[j] = parent[j];
+            if (parent[j] != -1) w.Delta[parent[j]]--;
+            for (int p = colPtr[j]; p < colPtr[j + 1]; p++) w.Entry(rows[p], j);
+            if (parent[j] != -1) w.Ancestor[j] = parent[j];
         }
-        for (int j = 0; j < n; j++)
-            if (parent[j] != -1) delta[parent[j]] += delta[j];
-        return delta;
+        return w.Finish(parent);
     }
 
-    public static SupernodalSymbolic Analyse(SymmetricSparseMatrix a, int[] ordering)
+    /// <summary>The same column counts, each column's entries gathered from the matrix and its rows (their order within a
+    /// column does not change the counts), so that they need not wait for the columns of P·K·Pᵀ.</summary>
+    private static int[] ColumnCounts(int[] parent, SymmetricSparseMatrix a, StrictLowerRows lower, int[] perm, int[] inv)
+    {
+        int n = a.Size;
+        var cp = a.ColumnPointers;
+        var ri = a.RowIndices;
+        var rp = lower.RowPtr;
+        var rc = lower.Cols;
+        var w = new CountWork(n, parent);
+        for (int j = 0; j < n; j++)
+        {
+            if (parent[j] != -1) w.Delta[parent[j]]--;
+            int o = perm[j];
+            for (int t = rp[o], t1 = rp[o + 1]; t < t1; t++) w.Entry(inv[rc[t]], j);
+            for (int p = cp[o], p1 = cp[o + 1]; p < p1; p++) w.Entry(inv[ri[p]], j);
+            if (parent[j] != -1) w.Ancestor[j] = parent[j];
+        }
+        return w.Finish(parent);
+    }
+
+    /// <summary>State of the column count (see <see cref="ColumnCounts(int, int[], int[], int[])"/>).</summary>
+    private readonly struct CountWork
+    {
+        public readonly int[] Delta;      // summed over each subtree at the end: the column counts
+        private readonly int[] _first;    // first[j]: the smallest (first in postorder) descendant of j
+        private readonly int[] _maxFirst; // per row i: the largest first[] of a leaf of its subtree seen so far
+        private readonly int[] _prevLeaf; // per row i: the last leaf of its subtree found
+        public readonly int[] Ancestor;   // disjoint sets of the processed part of the tree, with path compression
+
+        public CountWork(int n, int[] parent)
+        {
+            Delta = new int[n];
+            _first = new int[n];
+            _maxFirst = new int[n];
+            _prevLeaf = new int[n];
+            Ancestor = new int[n];
+            Array.Fill(_first, -1);
+            Array.Fill(_maxFirst, -1);
+            Array.Fill(_prevLeaf, -1);
+            for (int k = 0; k < n; k++)
+            {
+                Delta[k] = _first[k] == -1 ? 1 : 0;   // 1 for a leaf of the tree
+                for (int j = k; j != -1 && _first[j] == -1; j = parent[j]) _first[j] = k;
+                Ancestor[k] = k;
+            }
+        }
+
+        /// <summary>Entry a_ij of column j (entries with i ≤ j are ignored).</summary>
+        [MethodImpl(MethodImplOptions.AggressiveInlining)]
+        public void Entry(int i, int j)
+        {
+            if (i <= j || _first[j] <= _maxFirst[i]) return;   // j is not a leaf of row i's subtree
+            _maxFirst[i] = _first[j];
+            int jPrev = _prevLeaf[i];
+            _prevLeaf[i] = j;
+            Delta[j]++;
+            if (jPrev == -1) return;                             // the first leaf: the subtree's root is i itself
+            int q = jPrev;
+            while (q != Ancestor[q]) q = Ancestor[q];            // the least common ancestor of jPrev and j
+            for (int s = jPrev; s != q;) { int up = Ancestor[s]; Ancestor[s] = q; s = up; }
+            Delta[q]--;
+        }
+
+        public int[] Finish(int[] parent)
+        {
+            for (int j = 0; j < parent.Length; j++)
+                if (parent[j] != -1) Delta[parent[j]] += Delta[j];
+            return Delta;
+        }
+    }
+
+    /// <summary>Whether the analysis of <paramref name="a"/> is large enough to pay for a second thread.</summary>
+    internal static bool WorthASecondThread(SymmetricSparseMatrix a) => a.NonZerosLower >= 200_000;
+
+    private static Task<(int[] ColPtr, int[] Rows, int[] Source)> StartLowerByColumn(SymmetricSparseMatrix a, StrictLowerRows lower,
+        int[] perm, int[] inv) => Task.Run(() =>
+        {
+            LowerByColumn(a, lower, perm, inv, out var colPtr, out var rows, out var source);
+            return (colPtr, rows, source);
+        });
+
+    public static SupernodalSymbolic Analyse(SymmetricSparseMatrix a, int[] ordering) =>
+        Analyse(a, ordering, StrictLowerRows.Of(a), Environment.ProcessorCount > 1);
+
+    /// <summary>The analysis from the matrix and its rows. With <paramref name="twoThreads"/> (and a large matrix) the
+    /// columns of P·K·Pᵀ, which only the numeric phase needs, are gathered on a second thread while this one counts the
+    /// columns of L (from the same entries, gathered again) and finds the supernodes and their patterns: the two write
+    /// separate arrays, so the result does not depend on it.</summary>
+    internal static SupernodalSymbolic Analyse(SymmetricSparseMatrix a, int[] ordering, StrictLowerRows lower, bool twoThreads)
     {
         int n = a.Size;
         var inv0 = Orderings.Inverse(ordering);
-        LowerByRow(a, inv0, out var rowPtr, out var cols);
-        var parent0 = EliminationTree(n, rowPtr, cols);
+        var parent0 = EliminationTree(a, lower, ordering, inv0);
         var post = Postorder(n, parent0);
         var perm = new int[n];
         for (int k = 0; k < n; k++) perm[k] = ordering[post[k]];
         var inv = Orderings.Inverse(perm);
         // The elimination tree of the postordered matrix is the same tree relabelled: a postorder is a topological
         // ordering of the tree, an equivalent reordering (Liu 1990, §2), so neither the tree nor the rows are built again.
-        var position = Orderings.Inverse(post);
+        var position = inv0; // reused: position[k] = where column k of the first order went in the postorder
+        for (int k = 0; k < n; k++) position[post[k]] = k;
         var parent = new int[n];
         for (int k = 0; k < n; k++) { int p0 = parent0[post[k]]; parent[k] = p0 < 0 ? -1 : position[p0]; }
 
-        // P·K·Pᵀ's lower entries by column: for the column counts, the row patterns, and the numeric phase.
-        LowerByColumn(a, inv, out var colPtr, out var rowsByCol, out var sourceByCol);
-        var count = ColumnCounts(n, parent, colPtr, rowsByCol);
-        var childCount = new int[n];
+        // P·K·Pᵀ's lower entries by column: for the column counts and the numeric phase.
+        int[]? colPtr = null, rowsByCol = null, sourceByCol = null;
+        int[] count;
+        var columns = twoThreads && WorthASecondThread(a) ? StartLowerByColumn(a, lower, perm, inv) : null;
+        if (columns is null)
+        {
+            LowerByColumn(a, lower, perm, inv, out colPtr, out rowsByCol, out sourceByCol);
+            count = ColumnCounts(n, parent, colPtr, rowsByCol);
+        }
+        else count = ColumnCounts(parent, a, lower, perm, inv);
+        var childCount = parent0; // reused: the first tree is no longer needed
+        Array.Clear(childCount);
         for (int j = 0; j < n; j++) if (parent[j] >= 0) childCount[parent[j]]++;
         long exact = 0;
         double flops = 0;
@@ -229,25 +312,26 @@ internal sealed class SupernodalSymbolic
         }
 
         // Fundamental supernodes.
-        var firsts = new List<int>();
+        var sFirst = new int[n];
+        int ns0 = 0;
         for (int j = 0; j < n; j++)
         {
             bool joins = j > 0 && parent[j - 1] == j && childCount[j] == 1 && count[j - 1] == count[j] + 1;
-            if (!joins) firsts.Add(j);
+            if (!joins) sFirst[ns0++] = j;
         }
-        int ns0 = firsts.Count;
         // Supernode data for amalgamation: columns, rows below (of the last column), true non-zeros, parent.
-        var sFirst = firsts.ToArray();
         var sCols = new int[ns0];
         var sBelow = new int[ns0];
         var sTrue = new long[ns0];
-        var colToSuper = new int[n];
+        var colToSuper = post; // reused: the postorder is no longer needed
         for (int s = 0; s < ns0; s++)
         {
             int f = sFirst[s], l = s + 1 < ns0 ? sFirst[s + 1] : n;
             sCols[s] = l - f;
             sBelow[s] = count[l - 1] - 1;
-            for (int j = f; j < l; j++) { colToSuper[j] = s; sTrue[s] += count[j]; }
+            long t = 0;
+            for (int j = f; j < l; j++) { colToSuper[j] = s; t += count[j]; }
+            sTrue[s] = t;
         }
         var sParent = new int[ns0];
         for (int s = 0; s < ns0; s++)
@@ -275,64 +359,66 @@ internal sealed class SupernodalSymbolic
             sCols[p] = nc;
             sTrue[p] += sTrue[s]; // true non-zeros of the union; zeros are recomputed from it at the next merge
         }
-        var keep = new List<int>();
-        for (int s = 0; s < ns0; s++) if (alive[s]) keep.Add(s);
-        int ns = keep.Count;
+        int ns = 0;
+        for (int s = 0; s < ns0; s++) if (alive[s]) ns++;
         var first = new int[ns + 1];
-        for (int t = 0; t < ns; t++) first[t] = sFirst[keep[t]];
+        for (int s = 0, t = 0; s < ns0; s++) if (alive[s]) first[t++] = sFirst[s];
         first[ns] = n;
-        var superOf = new int[n];
+        var superOf = colToSuper; // reused: supernode of every column, now of the relaxed supernodes
         for (int t = 0; t < ns; t++)
             for (int j = first[t]; j < first[t + 1]; j++) superOf[j] = t;
 
-        // Row patterns: A's rows below the supernode in its columns, united with the children's patterns.
-        var childHead = new int[ns];
-        var childNext = new int[ns];
-        Array.Fill(childHead, -1);
+        // Row patterns. A supernode's columns form a chain of the elimination tree (each column's parent is the next one:
+        // fundamental supernodes by construction, and a merge joins a supernode's last column to its parent's first), so the
+        // rows below it are those of its last column l, count(l) − 1 of them, and its parent is the supernode holding
+        // parent(l). Row i of L lies in the columns of the row subtree of i (Liu 1990, §3.2): walking up the supernodal tree
+        // from each entry a_ij (j < i) to the supernode of i, marking, reaches every supernode whose pattern holds i, so
+        // taking the rows in increasing order fills each pattern already sorted, at its final size, in O(nnz(A) + Σ
+        // pattern) — no merging of the children's patterns and no sort (the supernodal form of the row-subtree traversal).
         var sp = new int[ns];
         var patStart = new int[ns + 1];
-        var patList = new List<int[]>(ns);
-        var marker = new int[n];
-        Array.Fill(marker, -1);
-        var buf = new List<int>();
         long patTotal = 0;
         for (int t = 0; t < ns; t++)
         {
-            int f = first[t], l = first[t + 1] - 1;
-            buf.Clear();
-            for (int j = f; j <= l; j++)
-                for (int p = colPtr[j]; p < colPtr[j + 1]; p++)
-                {
-                    int r = rowsByCol[p];
-                    if (r > l && marker[r] != t) { marker[r] = t; buf.Add(r); }
-                }
-            for (int c = childHead[t]; c != -1; c = childNext[c])
-                foreach (int r in patList[c])
-                    if (r > l && marker[r] != t) { marker[r] = t; buf.Add(r); }
-            buf.Sort();
-            var pat = buf.ToArray();
-            patList.Add(pat);
-            patTotal += pat.Length;
-            int par = pat.Length > 0 ? superOf[pat[0]] : -1;
-            sp[t] = par;
-            if (par >= 0)
+            int l = first[t + 1] - 1;
+            sp[t] = parent[l] < 0 ? -1 : superOf[parent[l]];
+            patStart[t] = (int)patTotal;
+            patTotal += count[l] - 1;
+            if (patTotal > int.MaxValue) throw new InvalidOperationException("Supernode patterns exceed 2³¹ entries.");
+        }
+        patStart[ns] = (int)patTotal;
+        var patRows = GC.AllocateUninitializedArray<int>((int)patTotal);
+        var fill = new int[ns];
+        Array.Copy(patStart, fill, ns);
+        var marker = sParent.Length >= ns ? sParent : new int[ns]; // reused: ns ≤ ns0
+        Array.Fill(marker, -1, 0, ns);
+        {
+            var cp = a.ColumnPointers;
+            var ri = a.RowIndices;
+            var rp = lower.RowPtr;
+            var rc = lower.Cols;
+            for (int i = 0; i < n; i++)
             {
-                // children kept in increasing order: prepend, then the list is descending; order does not matter for the union
-                childNext[t] = childHead[par];
-                childHead[par] = t;
+                int top = superOf[i], o = perm[i];
+                for (int t = rp[o], t1 = rp[o + 1]; t < t1; t++)
+                {
+                    int j = inv[rc[t]];
+                    if (j >= i) continue;
+                    for (int s = superOf[j]; s != top && marker[s] != i; s = sp[s]) { marker[s] = i; patRows[fill[s]++] = i; }
+                }
+                for (int p = cp[o], p1 = cp[o + 1]; p < p1; p++)
+                {
+                    int j = inv[ri[p]];
+                    if (j >= i) continue;
+                    for (int s = superOf[j]; s != top && marker[s] != i; s = sp[s]) { marker[s] = i; patRows[fill[s]++] = i; }
+                }
             }
         }
-        // Drop children's pattern arrays only after all are built (they are small relative to L).
-        var patRows = new int[patTotal];
-        long q = 0;
         for (int t = 0; t < ns; t++)
-        {
-            patStart[t] = (int)q;
-            patList[t].CopyTo(patRows, q);
-            q += patList[t].Length;
-        }
-        if (patTotal > int.MaxValue) throw new InvalidOperationException("Supernode patterns exceed 2³¹ entries.");
-        patStart[ns] = (int)q;
+            if (fill[t] != patStart[t + 1])
+                throw new InvalidOperationException($"Symbolic analysis: supernode {t} has {fill[t] - patStart[t]} rows below it, its last column {patStart[t + 1] - patStart[t]}.");
+
+        if (columns is not null) (colPtr, rowsByCol, sourceByCol) = columns.GetAwaiter().GetResult();
 
         var offset = new long[ns + 1];
         long stored2 = 0, lnz = 0;
