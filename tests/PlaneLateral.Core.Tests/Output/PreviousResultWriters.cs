@@ -1,0 +1,224 @@
+using System.Globalization;
+using System.Text;
+using Newtonsoft.Json;
+using PlaneLateral.Analysis;
+using PlaneLateral.Model;
+using PlaneLateral.Output;
+using PlaneLateral.Units;
+
+namespace PlaneLateral.Tests.Output;
+
+/// <summary>
+/// The results writers as they were before the files were streamed (results.json property by property into one string,
+/// the CSV tables as one string each), kept in the tests only as the reference the streamed files must equal byte for
+/// byte (<see cref="StreamedResultFilesTests"/>).
+/// </summary>
+internal static class PreviousResultWriters
+{
+    private static string F(double v) => v.ToString("G12", CultureInfo.InvariantCulture);
+
+    private static string Csv(string s) => CsvText.Cell(s);
+
+    public static string Displacements(AnalysisResult r)
+    {
+        var u = r.Model.Units;
+        var sb = new StringBuilder($"case,node,ux [{u.LengthSymbol}],uy [{u.LengthSymbol}],rz [rad]\n");
+        foreach (var c in r.Cases)
+            foreach (var n in r.Model.Nodes)
+                sb.Append($"{Csv(c.Id)},{Csv(n.Id)},{F(u.FromSI(c.Displacement(n.Index, Dof.X), Quantity.Length))},{F(u.FromSI(c.Displacement(n.Index, Dof.Y), Quantity.Length))},{F(c.Displacement(n.Index, Dof.RZ))}\n");
+        return sb.ToString();
+    }
+
+    public static string Reactions(AnalysisResult r)
+    {
+        var u = r.Model.Units;
+        var sb = new StringBuilder($"case,node,Fx [{u.ForceSymbol}],Fy [{u.ForceSymbol}],Mz [{u.Label(Quantity.Moment)}]\n");
+        for (int ci = 0; ci < r.Cases.Count; ci++)
+        {
+            var c = r.Cases[ci];
+            foreach (var re in c.Reactions)
+                sb.Append($"{Csv(c.Id)},{Csv(r.Model.Nodes[re.Node].Id)},{F(u.FromSI(re.Fx, Quantity.Force))},{F(u.FromSI(re.Fy, Quantity.Force))},{F(u.FromSI(re.Mz, Quantity.Moment))}\n");
+            // Each wall panel's held base: the resultant of its base reactions, Mz about the middle of its base (docs/panels.md).
+            foreach (var (_, name, fx, fy, mz) in PanelBases(r, ci))
+                sb.Append($"{Csv(c.Id)},{Csv(name)},{F(u.FromSI(fx, Quantity.Force))},{F(u.FromSI(fy, Quantity.Force))},{F(u.FromSI(mz, Quantity.Moment))}\n");
+        }
+        return sb.ToString();
+    }
+
+    /// <summary>The label and base-reaction resultant (N, N, N·m about the middle of the base) of every wall panel in a case.</summary>
+    private static IEnumerable<(WallPanel Panel, string Name, double Fx, double Fy, double Mz)> PanelBases(AnalysisResult r, int caseIndex)
+    {
+        for (int p = 0; p < r.Panels.Count && p < r.Model.Panels.Count; p++)
+        {
+            if (caseIndex >= r.Panels[p].Analysis.Cases.Count) continue;
+            var (fx, fy, mz) = StoryPanels.BaseReaction(r, p, caseIndex);
+            yield return (r.Model.Panels[p], ResultFiles.PanelBaseLabel(r.Model.Panels[p]), fx, fy, mz);
+        }
+    }
+
+    public static string MemberForces(AnalysisResult r)
+    {
+        var u = r.Model.Units;
+        string fu = u.ForceSymbol, mu = u.Label(Quantity.Moment);
+        var sb = new StringBuilder($"case,member,N1 [{fu}],V1 [{fu}],M1 [{mu}],N2 [{fu}],V2 [{fu}],M2 [{mu}]\n");
+        foreach (var c in r.Cases)
+            foreach (var m in c.MemberForces)
+                sb.Append($"{Csv(c.Id)},{Csv(r.Model.Members[m.Member].Id)},{F(u.FromSI(m.N1, Quantity.Force))},{F(u.FromSI(m.V1, Quantity.Force))},{F(u.FromSI(m.M1, Quantity.Moment))},{F(u.FromSI(m.N2, Quantity.Force))},{F(u.FromSI(m.V2, Quantity.Force))},{F(u.FromSI(m.M2, Quantity.Moment))}\n");
+        return sb.ToString();
+    }
+
+    public static string Json(AnalysisResult r)
+    {
+        var u = r.Model.Units;
+        var sw = new StringWriter(CultureInfo.InvariantCulture) { NewLine = "\n" };
+        using (var w = new JsonTextWriter(sw) { Formatting = Formatting.Indented, Indentation = 2, FloatFormatHandling = FloatFormatHandling.String })
+        {
+            w.WriteStartObject();
+            w.WritePropertyName("producedBy"); w.WriteValue($"PlaneLateral {ResultFiles.Version}");
+            w.WritePropertyName("caution"); w.WriteValue(ResultFiles.Caution);
+            w.WritePropertyName("model");
+            w.WriteStartObject();
+            w.WritePropertyName("title"); w.WriteValue(r.Model.Title);
+            w.WritePropertyName("file"); w.WriteValue(Path.GetFileName(r.Model.SourcePath));
+            w.WritePropertyName("nodes"); w.WriteValue(r.Model.Nodes.Count);
+            w.WritePropertyName("members"); w.WriteValue(r.Model.Members.Count);
+            w.WriteEndObject();
+            w.WritePropertyName("units");
+            w.WriteStartObject();
+            w.WritePropertyName("length"); w.WriteValue(u.LengthSymbol);
+            w.WritePropertyName("force"); w.WriteValue(u.ForceSymbol);
+            w.WritePropertyName("moment"); w.WriteValue(u.Label(Quantity.Moment));
+            w.WritePropertyName("rotation"); w.WriteValue("rad");
+            w.WritePropertyName("stiffness"); w.WriteValue(u.Label(Quantity.TranslationalStiffness));
+            w.WriteEndObject();
+            w.WritePropertyName("solver");
+            w.WriteStartObject();
+            w.WritePropertyName("method"); w.WriteValue(MachineFree.Solver(r.Solve.Solver));
+            w.WritePropertyName("unknowns"); w.WriteValue(r.Solve.Unknowns);
+            w.WritePropertyName("matrixNonZerosLower"); w.WriteValue(r.Solve.MatrixNonZerosLower);
+            w.WritePropertyName("factorNonZeros"); w.WriteValue(r.Solve.FactorNonZeros);
+            w.WritePropertyName("rightHandSides"); w.WriteValue(r.Solve.RightHandSides);
+            w.WriteEndObject();
+            if (r.Conditioning is { } cond)
+            {
+                w.WritePropertyName("conditioning");
+                w.WriteStartObject();
+                w.WritePropertyName("method"); w.WriteValue("1-norm condition estimate from solves with the factor (Hager; Higham 2002, Alg. 15.4); a lower bound, usually within a factor 3");
+                w.WritePropertyName("kappa1"); w.WriteValue(cond.Kappa1);
+                w.WritePropertyName("kappa1Scaled"); w.WriteValue(cond.ScaledKappa1);
+                w.WritePropertyName("scaling"); w.WriteValue("kappa1 is of K in SI units (N, m, rad); kappa1Scaled of D^-1/2 K D^-1/2 with D = diag K, free of units");
+                w.WritePropertyName("warningThreshold"); w.WriteValue(cond.Threshold);
+                w.WritePropertyName("illConditioned"); w.WriteValue(cond.IllConditioned);
+                w.WritePropertyName("likelyCause"); w.WriteValue(cond.LikelyCause);
+                w.WriteEndObject();
+            }
+            w.WritePropertyName("notes");
+            w.WriteStartArray(); foreach (var n in r.Notes) w.WriteValue(n); w.WriteEndArray();
+            w.WritePropertyName("warnings");   // plausibility of the input (Model/Plausibility.cs); they do not change any number
+            w.WriteStartArray();
+            foreach (var x in r.Model.Warnings)
+            {
+                w.WriteStartObject();
+                w.WritePropertyName("line"); w.WriteValue(x.Line); w.WritePropertyName("column"); w.WriteValue(x.Column);
+                w.WritePropertyName("path"); w.WriteValue(x.JsonPath); w.WritePropertyName("problem"); w.WriteValue(x.Problem); w.WritePropertyName("fix"); w.WriteValue(x.Fix);
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
+            w.WritePropertyName("signConvention"); w.WriteValue("Global X right, Y up, rotations counter-clockwise. Member end forces act on the member's flexible segment at its end faces, in local axes (x from start to end node, y 90° counter-clockwise): N, V positive along local x, y; M counter-clockwise. Axial force, tension positive, is N2.");
+
+            w.WritePropertyName("stiffness");
+            w.WriteStartArray();
+            foreach (var s in r.Stiffness)
+            {
+                w.WriteStartObject();
+                w.WritePropertyName("label"); w.WriteValue(s.Point.Label);
+                w.WritePropertyName("node"); w.WriteValue(r.Model.Nodes[s.Point.Node].Id);
+                w.WritePropertyName("direction"); w.WriteValue(DofNames.Name(s.Point.Direction)[1..]);
+                w.WritePropertyName("stiffness"); w.WriteValue(u.FromSI(s.Stiffness, Quantity.TranslationalStiffness));
+                w.WritePropertyName("definition"); w.WriteValue("force per unit displacement at this node and direction when a single force acts there and every other load is absent");
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
+
+            w.WritePropertyName("cases");
+            w.WriteStartArray();
+            foreach (var c in r.Cases)
+            {
+                w.WriteStartObject();
+                w.WritePropertyName("id"); w.WriteValue(c.Id);
+                w.WritePropertyName("kind"); w.WriteValue(c.IsCombination ? "combination" : "load case");
+                w.WritePropertyName("description"); w.WriteValue(c.Description);
+                w.WritePropertyName("checks");
+                w.WriteStartObject();
+                w.WritePropertyName("relativeResidual"); w.WriteValue(c.RelativeResidual);
+                w.WritePropertyName("backwardError"); w.WriteValue(c.BackwardError);
+                w.WritePropertyName("relativeForceImbalance"); w.WriteValue(c.Equilibrium.RelativeForceError);
+                w.WritePropertyName("relativeMomentImbalance"); w.WriteValue(c.Equilibrium.RelativeMomentError);
+                w.WritePropertyName("appliedFx"); w.WriteValue(u.FromSI(c.Equilibrium.AppliedFx, Quantity.Force));
+                w.WritePropertyName("appliedFy"); w.WriteValue(u.FromSI(c.Equilibrium.AppliedFy, Quantity.Force));
+                w.WritePropertyName("reactionFx"); w.WriteValue(u.FromSI(c.Equilibrium.ReactionFx, Quantity.Force));
+                w.WritePropertyName("reactionFy"); w.WriteValue(u.FromSI(c.Equilibrium.ReactionFy, Quantity.Force));
+                w.WriteEndObject();
+                w.WritePropertyName("displacements");
+                w.WriteStartArray();
+                foreach (var n in r.Model.Nodes)
+                {
+                    w.WriteStartObject();
+                    w.WritePropertyName("node"); w.WriteValue(n.Id);
+                    w.WritePropertyName("ux"); w.WriteValue(u.FromSI(c.Displacement(n.Index, Dof.X), Quantity.Length));
+                    w.WritePropertyName("uy"); w.WriteValue(u.FromSI(c.Displacement(n.Index, Dof.Y), Quantity.Length));
+                    w.WritePropertyName("rz"); w.WriteValue(c.Displacement(n.Index, Dof.RZ));
+                    w.WriteEndObject();
+                }
+                w.WriteEndArray();
+                w.WritePropertyName("reactions");
+                w.WriteStartArray();
+                foreach (var re in c.Reactions)
+                {
+                    w.WriteStartObject();
+                    w.WritePropertyName("node"); w.WriteValue(r.Model.Nodes[re.Node].Id);
+                    w.WritePropertyName("Fx"); w.WriteValue(u.FromSI(re.Fx, Quantity.Force));
+                    w.WritePropertyName("Fy"); w.WriteValue(u.FromSI(re.Fy, Quantity.Force));
+                    w.WritePropertyName("Mz"); w.WriteValue(u.FromSI(re.Mz, Quantity.Moment));
+                    w.WriteEndObject();
+                }
+                w.WriteEndArray();
+                if (r.Panels.Count > 0)
+                {
+                    // Each wall panel's held base: the resultant of its base reactions, Mz about the middle of its base.
+                    w.WritePropertyName("panelBaseReactions");
+                    w.WriteStartArray();
+                    foreach (var (p, _, fx, fy, mz) in PanelBases(r, r.Cases.ToList().IndexOf(c)))
+                    {
+                        w.WriteStartObject();
+                        w.WritePropertyName("panel"); w.WriteValue(p.Id);
+                        w.WritePropertyName("Fx"); w.WriteValue(u.FromSI(fx, Quantity.Force));
+                        w.WritePropertyName("Fy"); w.WriteValue(u.FromSI(fy, Quantity.Force));
+                        w.WritePropertyName("Mz"); w.WriteValue(u.FromSI(mz, Quantity.Moment));
+                        w.WritePropertyName("momentAboutX"); w.WriteValue(u.FromSI(p.X0 + 0.5 * p.Length, Quantity.Length));
+                        w.WritePropertyName("momentAboutY"); w.WriteValue(u.FromSI(p.Y0, Quantity.Length));
+                        w.WriteEndObject();
+                    }
+                    w.WriteEndArray();
+                }
+                w.WritePropertyName("memberForces");
+                w.WriteStartArray();
+                foreach (var m in c.MemberForces)
+                {
+                    w.WriteStartObject();
+                    w.WritePropertyName("member"); w.WriteValue(r.Model.Members[m.Member].Id);
+                    foreach (var (name, v, q) in new[] { ("N1", m.N1, Quantity.Force), ("V1", m.V1, Quantity.Force), ("M1", m.M1, Quantity.Moment), ("N2", m.N2, Quantity.Force), ("V2", m.V2, Quantity.Force), ("M2", m.M2, Quantity.Moment) })
+                    {
+                        w.WritePropertyName(name); w.WriteValue(u.FromSI(v, q));
+                    }
+                    w.WriteEndObject();
+                }
+                w.WriteEndArray();
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
+            w.WriteEndObject();
+        }
+        return sw.ToString() + "\n";
+    }
+}
