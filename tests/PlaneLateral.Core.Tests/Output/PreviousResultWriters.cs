@@ -221,4 +221,174 @@ internal static class PreviousResultWriters
         }
         return sw.ToString() + "\n";
     }
+
+    public static string StoriesJson(AnalysisResult r, BuildingResult br)
+    {
+        var m = r.Model;
+        var u = m.Units;
+        double L(double v) => u.FromSI(v, Quantity.Length);
+        var sw = new StringWriter(CultureInfo.InvariantCulture) { NewLine = "\n" };
+        using (var w = new JsonTextWriter(sw) { Formatting = Formatting.Indented, Indentation = 2, FloatFormatHandling = FloatFormatHandling.Symbol })
+        {
+            void P(string name, object? v) { w.WritePropertyName(name); if (v is double d && !double.IsFinite(d)) w.WriteNull(); else w.WriteValue(v); }
+            w.WriteStartObject();
+            P("producedBy", $"PlaneLateral {ResultFiles.Version}");
+            P("caution", ResultFiles.Caution);
+            P("units", $"length {u.LengthSymbol}, force {u.ForceSymbol}, stiffness {u.Label(Quantity.TranslationalStiffness)}");
+            P("definitions", "Story i runs from its bottom level to its top level. Level displacement: mean ux of the level's nodes. Drift: top minus bottom. Story shear: horizontal force carried across a horizontal cut in the story by the members crossing it (from their end forces and loads), positive in +x. Story stiffness: shear / drift, null where the story carries no shear or does not drift.");
+            w.WritePropertyName("levels");
+            w.WriteStartArray();
+            foreach (var l in m.Building.Levels)
+            {
+                w.WriteStartObject();
+                P("id", l.Id); P("name", l.Name); P("elevation", L(l.Elevation)); P("diaphragm", l.Rigid ? "rigid" : "none");
+                P("nodesChosen", l.Selection);
+                w.WritePropertyName("nodes"); w.WriteStartArray(); foreach (int n in l.Nodes) w.WriteValue(m.Nodes[n].Id); w.WriteEndArray();
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
+            w.WritePropertyName("cases");
+            w.WriteStartArray();
+            foreach (var c in br.Cases)
+            {
+                w.WriteStartObject();
+                P("id", c.CaseId); P("kind", c.IsCombination ? "combination" : "load case"); P("lateral", c.Lateral);
+                w.WritePropertyName("levels");
+                w.WriteStartArray();
+                foreach (var ld in c.Levels) { w.WriteStartObject(); P("level", ld.Level.Id); P("ux", L(ld.Ux)); P("spread", L(ld.Spread)); w.WriteEndObject(); }
+                w.WriteEndArray();
+                w.WritePropertyName("stories");
+                w.WriteStartArray();
+                foreach (var s in c.Stories)
+                {
+                    w.WriteStartObject();
+                    P("story", s.Index); P("bottom", s.Bottom.Id); P("top", s.Top.Id); P("height", L(s.Height));
+                    P("topDisplacement", L(s.TopDisplacement)); P("drift", L(s.Drift)); P("driftRatio", s.DriftRatio);
+                    P("cutAt", L(s.CutElevation)); P("shear", u.FromSI(s.Shear, Quantity.Force)); P("stiffness", u.FromSI(s.Stiffness, Quantity.TranslationalStiffness));
+                    w.WritePropertyName("lines");
+                    w.WriteStartArray();
+                    foreach (var l in s.Lines)
+                    {
+                        w.WriteStartObject();
+                        P("line", l.Line.Length == 0 ? "(no line)" : l.Line); P("shear", u.FromSI(l.Shear, Quantity.Force)); P("share", l.Share);
+                        P("drift", L(l.Drift)); P("stiffnessInStructure", u.FromSI(l.Stiffness, Quantity.TranslationalStiffness));
+                        w.WriteEndObject();
+                    }
+                    w.WriteEndArray();
+                    w.WriteEndObject();
+                }
+                w.WriteEndArray();
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
+            w.WritePropertyName("driftChecks");
+            w.WriteStartArray();
+            foreach (var d in br.DriftChecks)
+            {
+                w.WriteStartObject();
+                P("check", d.Check.Id); P("case", d.CaseId); P("story", d.Story.Index); P("Cd", d.Check.Cd); P("Ie", d.Check.Ie);
+                P("elasticDrift", L(d.ElasticDrift)); P("amplifiedDrift", L(d.AmplifiedDrift)); P("ratio", d.Ratio); P("allowedRatio", d.Allowed);
+                P("result", d.Passes ? "within" : "exceeds"); P("margin", d.Margin); P("limitSource", d.Check.LimitSource);
+                P("method", "amplified drift = Cd·elastic drift / Ie (ASCE 7-16 eq. 12.8-15)");
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
+            w.WritePropertyName("stiffnessIrregularity");
+            w.WriteStartArray();
+            foreach (var i in br.Irregularity)
+            {
+                w.WriteStartObject();
+                P("case", i.CaseId); P("story", i.Story.Index); P("stiffness", u.FromSI(i.Stiffness, Quantity.TranslationalStiffness));
+                P("ratioToAbove", i.RatioToAbove); P("ratioToMeanOfThreeAbove", i.RatioToAverageAbove);
+                P("type1aSoft", i.Soft); P("type1bExtremelySoft", i.ExtremelySoft); P("windCaseRatiosOnly", i.WindCase);
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
+            P("irregularitySource", "ASCE 7-16 Table 12.3-2, Types 1a (below 70 % of the story above or 80 % of the mean of the three above) and 1b (60 % and 70 %); the governing code decides");
+            w.WritePropertyName("memberStiffness");
+            w.WriteStartArray();
+            for (int i = 0; i < m.Members.Count && i < m.Building.Modifiers.Count; i++)
+            {
+                var a = m.Building.Modifiers[i];
+                w.WriteStartObject();
+                P("member", m.Members[i].Id); P("I", a.Modifiers.I); P("A", a.Modifiers.A); P("shearArea", a.Modifiers.ShearArea); P("source", a.Source);
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
+            w.WriteEndObject();
+        }
+        return sw.ToString() + "\n";
+    }
+
+    public static string SeismicJson(AnalysisResult r, SeismicResult sr)
+    {
+        var m = r.Model;
+        var s = m.Seismic!;
+        var u = m.Units;
+        var fo = sr.Forces;
+        double L(double v) => u.FromSI(v, Quantity.Length);
+        double Fc(double v) => u.FromSI(v, Quantity.Force);
+        var sw = new StringWriter(CultureInfo.InvariantCulture) { NewLine = "\n" };
+        using (var w = new JsonTextWriter(sw) { Formatting = Formatting.Indented, Indentation = 2 })
+        {
+            void P(string name, object? v) { w.WritePropertyName(name); if (v is double d && !double.IsFinite(d)) w.WriteNull(); else w.WriteValue(v); }
+            w.WriteStartObject();
+            P("producedBy", $"PlaneLateral {ResultFiles.Version}");
+            P("caution", ResultFiles.Caution);
+            P("source", SeismicFiles.Source);
+            P("units", $"length {u.LengthSymbol}, force {u.ForceSymbol}, period s");
+            P("loadCase", s.CaseId);
+            w.WritePropertyName("modes");
+            w.WriteStartArray();
+            foreach (var md in fo.Modes)
+            {
+                w.WriteStartObject();
+                P("mode", md.Number); P("period", md.Period); P("omega", md.Omega); P("massShare", md.MassShare);
+                w.WritePropertyName("levelShape"); w.WriteStartArray(); foreach (var v in md.LevelShape) w.WriteValue(v); w.WriteEndArray();
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
+            P("rayleighPeriod", fo.RayleighPeriod);
+            P("approximatePeriod", fo.Ta); P("Ct", fo.Ct); P("x", fo.X); P("structureRow", fo.TypeRow); P("hnFeet", fo.HeightFeet);
+            P("Cu", fo.Cu); P("periodUsed", fo.PeriodUsed); P("periodNote", fo.PeriodNote);
+            P("Cs", fo.Cs); P("CsGovernedBy", fo.CsNote); P("totalWeight", Fc(fo.TotalWeight)); P("baseShear", Fc(fo.BaseShear)); P("k", fo.Exponent);
+            w.WritePropertyName("storyForces");
+            w.WriteStartArray();
+            for (int i = 1; i < m.Building.Levels.Count; i++)
+            {
+                w.WriteStartObject();
+                P("level", m.Building.Levels[i].Id); P("Cvx", fo.Cvx[i]); P("Fx", Fc(fo.LevelForces[i])); P("storyShearBelow", Fc(sr.Stories.Stories[i - 1].Shear));
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
+            if (s.SecondOrder is { } so)
+            {
+                P("gravity", so.GravityCase); P("Cd", so.Cd); P("Ie", so.Ie); P("beta", so.Beta);
+                P("gravityFactorToBuckling", sr.CriticalLoadFactor);
+                w.WritePropertyName("stability");
+                w.WriteStartArray();
+                foreach (var x in sr.Stability)
+                {
+                    w.WriteStartObject();
+                    P("story", x.Story.Index); P("Px", Fc(x.Px)); P("Vx", Fc(x.Vx)); P("firstOrderDrift", L(x.ElasticDrift)); P("designDrift", L(x.DesignDrift));
+                    P("theta", x.Theta); P("thetaMax", x.ThetaMax); P("status", x.Status); P("secondOrderDrift", L(x.SecondOrderDrift));
+                    P("secondOverFirst", x.Ratio); P("oneOverOneMinusTheta", x.Estimate);
+                    w.WriteEndObject();
+                }
+                w.WriteEndArray();
+                w.WritePropertyName("secondOrderDriftChecks");
+                w.WriteStartArray();
+                foreach (var d in sr.SecondOrderDriftChecks)
+                {
+                    w.WriteStartObject();
+                    P("check", d.Check.Id); P("story", d.Story.Index); P("drift", L(d.ElasticDrift)); P("amplifiedDrift", L(d.AmplifiedDrift));
+                    P("ratio", d.Ratio); P("allowedRatio", d.Allowed); P("result", d.Passes ? "within" : "exceeds"); P("margin", d.Margin);
+                    w.WriteEndObject();
+                }
+                w.WriteEndArray();
+            }
+            w.WriteEndObject();
+        }
+        return sw.ToString() + "\n";
+    }
 }

@@ -23,9 +23,11 @@ public sealed class StreamedResultFilesTests : IDisposable
     public static TheoryData<string> SmallModels() =>
     [
         "demo-clinic.json",                              // a building: levels, combinations, a seismic case
+        "verification/uniform-five-story-shear-frame.json", // stories and drift checks
         "panels/two-story-wall.json",                    // wall panels: each case's panel base reactions
         "verification/cantilever-wall-kip-in.json",      // kip and inch units, a stiffness point
         "footings/wall-on-footing.json",                 // spring supports
+        "panels/masonry-wall-and-frame.json",            // panels beside a frame, a seismic block without the second-order step
     ];
 
     [Theory]
@@ -42,6 +44,10 @@ public sealed class StreamedResultFilesTests : IDisposable
         Assert.Equal(utf8.GetBytes(PreviousResultWriters.Displacements(r)), Written("displacements.csv"));
         Assert.Equal(utf8.GetBytes(PreviousResultWriters.Reactions(r)), Written("reactions.csv"));
         Assert.Equal(utf8.GetBytes(PreviousResultWriters.MemberForces(r)), Written("member-forces.csv"));
+        if (files.Any(f => f.Name == "stories.json"))
+            Assert.Equal(PreviousResultWriters.StoriesJson(r, run.Building), files.Single(f => f.Name == "stories.json").ToText());
+        if (run.Seismic is { } seismic)
+            Assert.Equal(PreviousResultWriters.SeismicJson(r, seismic), files.Single(f => f.Name == "seismic.json").ToText());
         // The in-memory form the tests read is the same bytes as the file, every file of the set.
         foreach (var f in files) Assert.Equal(f.ToBytes(), Written(f.Name));
     }).WaitAsync(Guard);
