@@ -391,4 +391,99 @@ internal static class PreviousResultWriters
         }
         return sw.ToString() + "\n";
     }
+
+    public static string PanelsJson(AnalysisResult r)
+    {
+        var u = r.Model.Units;
+        double Len(double v) => u.FromSI(v, Quantity.Length);
+        double Stiff(double v) => u.FromSI(v, Quantity.TranslationalStiffness);
+        var sw = new StringWriter(CultureInfo.InvariantCulture) { NewLine = "\n" };
+        using (var w = new JsonTextWriter(sw) { Formatting = Formatting.Indented, Indentation = 2, FloatFormatHandling = FloatFormatHandling.String })
+        {
+            // A number that could not be determined (e.g. no observed order from a non-monotone mesh sequence) is written
+            // as null, never as "NaN"; the note beside it says why.
+            void P(string name, object? v) { w.WritePropertyName(name); w.WriteValue(v is double d && !double.IsFinite(d) ? null : v); }
+            w.WriteStartObject();
+            P("producedBy", $"PlaneLateral {ResultFiles.Version}");
+            P("caution", ResultFiles.Caution);
+            P("method", "Plane-stress continuum (see docs/panels.md): base held in x and y (a panel on a footing: its base nodes follow the rigid footing on its springs, docs/footings.md); with floor ties every node of a level shares one horizontal displacement (exact constraint). Top stiffness = 1 / top displacement under a unit horizontal force through the top tie (without ties: spread along the top edge, mean top displacement).");
+            w.WritePropertyName("units");
+            w.WriteStartObject();
+            P("length", u.LengthSymbol); P("force", u.ForceSymbol); P("stress", u.Label(Quantity.Stress)); P("stiffness", u.Label(Quantity.TranslationalStiffness));
+            w.WriteEndObject();
+            w.WritePropertyName("panels");
+            w.WriteStartArray();
+            foreach (var p in r.Panels)
+            {
+                w.WriteStartObject();
+                P("id", p.Panel.Id);
+                P("element", p.Mesh.Mesh.Element.Name);
+                w.WritePropertyName("mesh");
+                w.WriteStartObject();
+                P("elements", p.Mesh.Mesh.Elements.Length); P("nodes", p.Mesh.Mesh.NodeCount); P("unknowns", p.Analysis.Solve.Unknowns);
+                P("elementSize", Len(p.Mesh.ElementSize)); P("narrowestStrip", Len(p.Mesh.NarrowestStrip)); P("largestAspect", p.Mesh.LargestAspect);
+                P("solver", MachineFree.Solver(p.Analysis.Solve.Solver));
+                w.WriteEndObject();
+                P("floorTies", p.Panel.FloorTies);
+                if (p.Panel.Top == Model.PanelTop.Guided) P("top", "guided: the top edge translates without rotating (fixed-guided stiffness)");
+                var (kRep, kErr) = p.ReportedStiffness;
+                P("topStiffness", Stiff(kRep));
+                P("topStiffnessEstimatedError", kErr);
+                P("topStiffnessOn", p.Convergence is null ? "the panel's one mesh (no error estimate)"
+                    : double.IsFinite(kErr) ? "Richardson extrapolation over the convergence meshes (estimated relative error beside it)"
+                    : "the finest convergence mesh, not extrapolated (no error estimate)");
+                P("topStiffnessBaseMesh", Stiff(p.TopStiffness));
+                if (p.Convergence is not null)
+                    P("nodalResults", "the nodal displacements and stresses in panel-stresses.csv and the checks in panel-checks.csv are on the base (coarsest) mesh of the study and carry no error estimate; the level displacements here are extrapolated like the stiffness, each with its own estimated relative error");
+                if (p.Convergence is { } cv)
+                {
+                    w.WritePropertyName("convergence");
+                    w.WriteStartObject();
+                    w.WritePropertyName("meshes");
+                    w.WriteStartArray();
+                    for (int i = 0; i < cv.Stiffness.Length; i++)
+                    {
+                        w.WriteStartObject();
+                        P("elementSize", Len(cv.ElementSizes[i])); P("unknowns", cv.Unknowns[i]); P("topStiffness", Stiff(cv.Stiffness[i]));
+                        w.WriteEndObject();
+                    }
+                    w.WriteEndArray();
+                    P("observedOrder", cv.ObservedOrder);
+                    P("extrapolatedStiffness", Stiff(cv.Extrapolated));
+                    P("estimatedRelativeError", cv.EstimatedError);
+                    P("note", cv.Note);
+                    w.WriteEndObject();
+                }
+                w.WritePropertyName("cases");
+                w.WriteStartArray();
+                for (int c = 0; c < p.Analysis.Cases.Count; c++)
+                {
+                    var cr = p.Analysis.Cases[c];
+                    w.WriteStartObject();
+                    P("id", cr.Id);
+                    P("topDisplacement", Len(p.TopDisplacement(c)));
+                    if (p.LevelDisplacementErrors is { } te) P("topDisplacementEstimatedError", te[c][^1]);
+                    w.WritePropertyName("levels");
+                    w.WriteStartArray();
+                    for (int l = 0; l < p.Mesh.Levels.Length; l++)
+                    {
+                        w.WriteStartObject();
+                        P("height", Len(p.Mesh.Levels[l])); P("ux", Len(p.LevelDisplacements[c][l]));
+                        if (p.LevelDisplacementErrors is { } le) P("uxEstimatedError", le[c][l]);
+                        w.WriteEndObject();
+                    }
+                    w.WriteEndArray();
+                    P("backwardError", cr.BackwardError);
+                    P("relativeForceImbalance", cr.Equilibrium.RelativeForceError);
+                    P("relativeMomentImbalance", cr.Equilibrium.RelativeMomentError);
+                    w.WriteEndObject();
+                }
+                w.WriteEndArray();
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
+            w.WriteEndObject();
+        }
+        return sw.ToString() + "\n";
+    }
 }

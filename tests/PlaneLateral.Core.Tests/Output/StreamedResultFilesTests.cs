@@ -48,6 +48,8 @@ public sealed class StreamedResultFilesTests : IDisposable
             Assert.Equal(PreviousResultWriters.StoriesJson(r, run.Building), files.Single(f => f.Name == "stories.json").ToText());
         if (run.Seismic is { } seismic)
             Assert.Equal(PreviousResultWriters.SeismicJson(r, seismic), files.Single(f => f.Name == "seismic.json").ToText());
+        if (r.Panels.Count > 0)
+            Assert.Equal(PreviousResultWriters.PanelsJson(r), files.Single(f => f.Name == "panels.json").ToText());
         // The in-memory form the tests read is the same bytes as the file, every file of the set.
         foreach (var f in files) Assert.Equal(f.ToBytes(), Written(f.Name));
     }).WaitAsync(Guard);
