@@ -486,4 +486,114 @@ internal static class PreviousResultWriters
         }
         return sw.ToString() + "\n";
     }
+
+    public static string SpectrumJson(AnalysisResult r, PlanarSpectrumResult s)
+    {
+        var u = r.Model.Units;
+        double L(double v) => u.FromSI(v, Quantity.Length);
+        double Fo(double v) => u.FromSI(v, Quantity.Force);
+        double Mo(double v) => u.FromSI(v, Quantity.Moment);
+        static Newtonsoft.Json.Linq.JToken Num(double v) => double.IsFinite(v) ? new Newtonsoft.Json.Linq.JValue(v) : Newtonsoft.Json.Linq.JValue.CreateNull();
+        var json = new Newtonsoft.Json.Linq.JObject
+        {
+            ["program"] = $"PlaneLateral {ResultFiles.Version}",
+            ["caution"] = ResultFiles.Caution,
+            ["source"] = PlanSeismicFiles.Source,
+            ["spectrum"] = s.Spectrum.Describe(), ["combination"] = s.Settings.Rule.ToString().ToUpperInvariant(), ["damping"] = s.Settings.Damping,
+            ["R"] = s.R, ["Ie"] = s.Ie, ["Cd"] = s.Settings.Cd, ["modes"] = s.ModesUsed, ["massShare"] = s.CumulativeShare,
+            ["Vt"] = Fo(s.Scaling.BaseShearModal), ["V"] = Fo(s.Scaling.BaseShearElf), ["forceFactor"] = s.Scaling.ForceFactor, ["driftFactor"] = s.Scaling.DriftFactor,
+            ["scaling"] = s.Scaling.Why,
+            ["stories"] = new Newtonsoft.Json.Linq.JArray(s.Stories.Select(st => new Newtonsoft.Json.Linq.JObject
+            {
+                ["story"] = st.Story, ["elfShear"] = Fo(st.ElfShear), ["modalShear"] = Fo(st.ModalShear), ["scaledShear"] = Fo(st.ScaledShear),
+                ["drift"] = L(st.Drift), ["designDrift"] = L(st.DesignDrift), ["ratio"] = st.Ratio,
+                ["overturning"] = Mo(st.Overturning), ["Px"] = Fo(st.Px), ["theta"] = Num(st.Theta), ["thetaElf"] = Num(st.ThetaElf), ["thetaMax"] = Num(st.ThetaMax),
+            })),
+            ["PxFrom"] = s.PxSource,
+            ["combinedValues"] = SpectrumFiles.CombinedNote,
+        };
+        return json.ToString(Formatting.Indented) + "\n";
+    }
+
+    public static string ComparisonsJson(PlaneLateral.Studies.ComparisonReport r, string producedBy)
+    {
+        var sw = new StringWriter(CultureInfo.InvariantCulture) { NewLine = "\n" };
+        using (var w = new JsonTextWriter(sw) { Formatting = Formatting.Indented, Indentation = 2, FloatFormatHandling = FloatFormatHandling.String })
+        {
+            w.WriteStartObject();
+            w.WritePropertyName("producedBy"); w.WriteValue(producedBy);
+            w.WritePropertyName("caution"); w.WriteValue(PlaneLateral.Studies.ComparisonReport.Caution);
+            w.WritePropertyName("model");
+            w.WriteStartObject();
+            w.WritePropertyName("title"); w.WriteValue(r.ModelTitle);
+            w.WritePropertyName("file"); w.WriteValue(r.ModelFile);
+            w.WriteEndObject();
+            w.WritePropertyName("units");
+            w.WriteStartObject();
+            w.WritePropertyName("force"); w.WriteValue(r.ForceUnit);
+            w.WritePropertyName("length"); w.WriteValue(r.LengthUnit);
+            w.WriteEndObject();
+            w.WritePropertyName("defaultTolerance"); w.WriteValue(r.DefaultTolerance);
+            w.WritePropertyName("verdicts"); w.WriteValue("ratio = FE/hand for the row's reference FE estimate (named in \"reference\", the first in \"fe\", with the reason in \"referenceBasis\": a converged plane-stress panel where the row has one, else the first line model); within tolerance when |ratio − 1| ≤ tolerance; below: the hand value is higher (hand stiffer), above: lower (hand softer)");
+            w.WritePropertyName("rows");
+            w.WriteStartArray();
+            foreach (var row in r.Rows)
+            {
+                w.WriteStartObject();
+                w.WritePropertyName("check"); w.WriteValue(row.CheckId);
+                w.WritePropertyName("kind"); w.WriteValue(row.Kind);
+                w.WritePropertyName("subject"); w.WriteValue(row.Subject);
+                w.WritePropertyName("quantity"); w.WriteValue(ComparedQuantityWords(row.Quantity));
+                w.WritePropertyName("unit"); w.WriteValue(row.Unit);
+                w.WritePropertyName("hand");
+                w.WriteStartObject();
+                w.WritePropertyName("value"); w.WriteValue(row.Hand.Value);
+                w.WritePropertyName("method"); w.WriteValue(row.Hand.Method.Name);
+                w.WritePropertyName("source"); w.WriteValue(row.Hand.Method.Source);
+                w.WritePropertyName("assumptions");
+                w.WriteStartArray(); foreach (var a in row.Hand.Method.Assumptions) w.WriteValue(a); w.WriteEndArray();
+                if (row.Hand.FlexuralShare is double hf) { w.WritePropertyName("flexuralShare"); w.WriteValue(hf); }
+                if (row.Hand.ShearShare is double hs) { w.WritePropertyName("shearShare"); w.WriteValue(hs); }
+                if (row.Hand.Detail.Length > 0)
+                {
+                    w.WritePropertyName("detail");
+                    w.WriteStartArray(); foreach (var line in row.Hand.Detail.Split('\n')) w.WriteValue(line); w.WriteEndArray();
+                }
+                w.WriteEndObject();
+                w.WritePropertyName("fe");
+                w.WriteStartArray();
+                foreach (var fe in row.Fe)
+                {
+                    w.WriteStartObject();
+                    w.WritePropertyName("model"); w.WriteValue(fe.Model);
+                    w.WritePropertyName("value"); w.WriteValue(fe.Value);
+                    w.WritePropertyName("reference"); w.WriteValue(ReferenceEquals(fe, row.Reference));
+                    w.WritePropertyName("ratioToHand"); w.WriteValue(fe.Value / row.Hand.Value);
+                    if (fe.EstimatedError is double ee) { w.WritePropertyName("estimatedError"); w.WriteValue(ee); }
+                    w.WritePropertyName("description"); w.WriteValue(fe.Description);
+                    if (fe.FlexuralShare is double ff) { w.WritePropertyName("flexuralShare"); w.WriteValue(ff); }
+                    if (fe.ShearShare is double fs) { w.WritePropertyName("shearShare"); w.WriteValue(fs); }
+                    w.WriteEndObject();
+                }
+                w.WriteEndArray();
+                w.WritePropertyName("reference"); w.WriteValue(row.Reference.Model);
+                w.WritePropertyName("referenceBasis"); w.WriteValue(row.ReferenceBasis);
+                w.WritePropertyName("ratio"); w.WriteValue(row.Ratio);
+                if (row.AspectRatio is double ar) { w.WritePropertyName("aspectRatio"); w.WriteValue(ar); }
+                w.WritePropertyName("tolerance"); w.WriteValue(row.Tolerance);
+                w.WritePropertyName("verdict"); w.WriteValue(row.VerdictText);
+                w.WritePropertyName("cause"); w.WriteValue(row.Cause);
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
+            w.WriteEndObject();
+        }
+        return sw.ToString() + "\n";
+    }
+
+    private static string ComparedQuantityWords(PlaneLateral.Studies.ComparedQuantity q) => q switch
+    {
+        PlaneLateral.Studies.ComparedQuantity.Stiffness => "lateral stiffness", PlaneLateral.Studies.ComparedQuantity.Fraction => "fraction",
+        PlaneLateral.Studies.ComparedQuantity.Force => "force", _ => "story shear",
+    };
 }

@@ -50,8 +50,22 @@ public sealed class StreamedResultFilesTests : IDisposable
             Assert.Equal(PreviousResultWriters.SeismicJson(r, seismic), files.Single(f => f.Name == "seismic.json").ToText());
         if (r.Panels.Count > 0)
             Assert.Equal(PreviousResultWriters.PanelsJson(r), files.Single(f => f.Name == "panels.json").ToText());
+        if (run.Spectrum is { } spectrum)
+            Assert.Equal(PreviousResultWriters.SpectrumJson(r, spectrum), files.Single(f => f.Name == "response-spectrum.json").ToText());
         // The in-memory form the tests read is the same bytes as the file, every file of the set.
         foreach (var f in files) Assert.Equal(f.ToBytes(), Written(f.Name));
+    }).WaitAsync(Guard);
+
+    [Theory]
+    [InlineData("demo-clinic.json")]             // wall lines, perforated walls, frames, shear split: shares and details
+    [InlineData("footings/wall-on-footing.json")] // a wall on a footing
+    public async Task ComparisonsJsonHasTheBytesOfThePropertyWriter(string model) => await Task.Run(() =>
+    {
+        var m = ModelReader.ReadFile(RepositoryFiles.ModelPath(model));
+        var report = PlaneLateral.Studies.ComparisonStudy.Run(m, PlaneLateral.Studies.ComparisonStudy.DefaultTolerance, ModelRun.Run(m).Analysis);
+        Assert.NotEmpty(report.Rows);
+        Assert.Equal(PreviousResultWriters.ComparisonsJson(report, "PlaneLateral test"),
+            PlaneLateral.Studies.ComparisonFiles.Render(report, "PlaneLateral test").Single(f => f.Name == "comparisons.json").Text);
     }).WaitAsync(Guard);
 
     [Fact]
