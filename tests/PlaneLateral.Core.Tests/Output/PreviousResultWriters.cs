@@ -596,4 +596,68 @@ internal static class PreviousResultWriters
         PlaneLateral.Studies.ComparedQuantity.Stiffness => "lateral stiffness", PlaneLateral.Studies.ComparedQuantity.Fraction => "fraction",
         PlaneLateral.Studies.ComparedQuantity.Force => "force", _ => "story shear",
     };
+
+    public static string PlanJson(PlanResult r, IReadOnlyList<TributaryShear>? tributary = null)
+    {
+        var u = r.Plan.Units;
+        double? L(double v) => double.IsFinite(v) ? u.FromSI(v, Quantity.Length) : null;   // null where undefined, never "NaN"
+        double? Fo(double v) => double.IsFinite(v) ? u.FromSI(v, Quantity.Force) : null;
+        var root = new Newtonsoft.Json.Linq.JObject
+        {
+            ["program"] = $"PlaneLateral {ResultFiles.Version}",
+            ["caution"] = ResultFiles.Caution,
+            ["title"] = r.Plan.Title,
+            ["units"] = new Newtonsoft.Json.Linq.JObject { ["force"] = u.ForceSymbol, ["length"] = u.LengthSymbol },
+            ["method"] = "each line condensed exactly on its level lateral DOFs (one factorisation per line), mapped to the floors' (Ux, Uy, Rz) and assembled; lines recovered under the level forces",
+            ["accidentalEccentricity"] = r.Plan.EccentricityRatio,
+            // Plausibility of the input (Model/Plausibility.Plan.cs); they do not change any number.
+            ["warnings"] = new Newtonsoft.Json.Linq.JArray(r.Plan.Warnings.Select(x => new Newtonsoft.Json.Linq.JObject
+            {
+                ["file"] = Path.GetFileName(x.File), ["line"] = x.Line, ["column"] = x.Column, ["path"] = x.JsonPath, ["problem"] = x.Problem, ["fix"] = x.Fix,
+            })),
+            ["levels"] = new Newtonsoft.Json.Linq.JArray(r.Plan.Levels.Select(l => new Newtonsoft.Json.Linq.JObject
+            {
+                ["id"] = l.Id, ["elevation"] = L(l.Elevation), ["weight"] = double.IsFinite(l.Weight) ? Fo(l.Weight) : null,
+                ["massAt"] = new Newtonsoft.Json.Linq.JArray((Newtonsoft.Json.Linq.JToken)L(l.CentreOfMass.X), (Newtonsoft.Json.Linq.JToken)L(l.CentreOfMass.Y)),
+            })),
+            ["lines"] = new Newtonsoft.Json.Linq.JArray(r.Lines.Select(l => new Newtonsoft.Json.Linq.JObject
+            {
+                ["id"] = l.Line.Id, ["form"] = l.Line.Form.ToString(), ["at"] = new Newtonsoft.Json.Linq.JArray((Newtonsoft.Json.Linq.JToken)L(l.Line.X0), (Newtonsoft.Json.Linq.JToken)L(l.Line.Y0)),
+                ["direction"] = l.Line.DirectionLabel, ["condensationBackwardError"] = l.CondensationBackwardError,
+                ["flexibilitySymmetryError"] = l.SymmetryError, ["recoveryError"] = l.RecoveryError,
+            })),
+            ["cases"] = new Newtonsoft.Json.Linq.JArray(r.Cases.Select(c => new Newtonsoft.Json.Linq.JObject
+            {
+                ["id"] = c.Case.Id, ["description"] = c.Case.Description, ["backwardError"] = c.BackwardError,
+                ["equilibriumError"] = c.Equilibrium.RelativeError,
+                ["floors"] = new Newtonsoft.Json.Linq.JArray(c.Motion.Select(m => new Newtonsoft.Json.Linq.JObject { ["level"] = r.Plan.Levels[m.Level].Id, ["Ux"] = L(m.Ux), ["Uy"] = L(m.Uy), ["Rz"] = m.Rz })),
+                ["lineStories"] = new Newtonsoft.Json.Linq.JArray(c.LineStories.Select(s => new Newtonsoft.Json.Linq.JObject
+                {
+                    ["story"] = s.Story, ["line"] = s.Line, ["shear"] = Fo(s.Shear), ["share"] = double.IsFinite(s.Share) ? s.Share : null,
+                    ["direct"] = Fo(s.Direct), ["torsional"] = Fo(s.Torsional),
+                })),
+            })),
+            ["rigidity"] = new Newtonsoft.Json.Linq.JArray(r.Rigidity.Select(g => new Newtonsoft.Json.Linq.JObject { ["loading"] = g.Direction, ["story"] = g.Story, ["xR"] = L(g.XR), ["yR"] = L(g.YR) })),
+            ["torsionalIrregularity"] = new Newtonsoft.Json.Linq.JArray(r.Irregularity.Select(t => new Newtonsoft.Json.Linq.JObject
+            {
+                ["loading"] = t.Direction, ["story"] = t.Story, ["case"] = t.Case, ["ratio"] = double.IsFinite(t.Ratio) ? t.Ratio : null, ["type"] = t.Type,
+                ["Ax"] = double.IsFinite(t.Ax) ? t.Ax : null, ["withAccidentalTorsion"] = t.WithAccidental,
+            })),
+        };
+        if (PlanDiaphragmFiles.Json(r, tributary) is { } floors) root["floors"] = floors;
+        if (r.Plan.Points.Count > 0)   // the user's named points: per case and level, displacement and drift
+            root["points"] = new Newtonsoft.Json.Linq.JArray(r.Plan.Points.Select(q => new Newtonsoft.Json.Linq.JObject
+            {
+                ["id"] = q.Id, ["at"] = new Newtonsoft.Json.Linq.JArray((Newtonsoft.Json.Linq.JToken)L(q.At.X), (Newtonsoft.Json.Linq.JToken)L(q.At.Y)),
+                ["cases"] = new Newtonsoft.Json.Linq.JArray(r.Cases.Select(c => new Newtonsoft.Json.Linq.JObject
+                {
+                    ["case"] = c.Case.Id,
+                    ["levels"] = new Newtonsoft.Json.Linq.JArray(c.Points.Where(m => m.Point == q.Id).Select(m => new Newtonsoft.Json.Linq.JObject
+                    {
+                        ["level"] = r.Plan.Levels[m.Level].Id, ["ux"] = L(m.Ux), ["uy"] = L(m.Uy), ["driftX"] = L(m.DriftX), ["driftY"] = L(m.DriftY),
+                    })),
+                })),
+            }));
+        return root.ToString(Formatting.Indented) + "\n";
+    }
 }

@@ -68,6 +68,17 @@ public sealed class StreamedResultFilesTests : IDisposable
             PlaneLateral.Studies.ComparisonFiles.Render(report, "PlaneLateral test").Single(f => f.Name == "comparisons.json").Text);
     }).WaitAsync(Guard);
 
+    [Theory]
+    [InlineData("demo-building.json")]               // a building in plan with a seismic block
+    [InlineData("plan/long-warehouse.json")]         // floors that bend: the floors block
+    [InlineData("plan/walls-with-openings.json")]    // panel lines and named points
+    public async Task PlanJsonHasTheBytesOfTheTreeWriter(string model) => await Task.Run(() =>
+    {
+        var (r, _, _) = PlaneLateral.Studies.PlanRun.Run(ModelReader.ReadPlanFile(RepositoryFiles.ModelPath(model)));
+        var tributary = PlaneLateral.Studies.PlanTributarySplit.Run(r);
+        Assert.Equal(PreviousResultWriters.PlanJson(r, tributary), PlanFiles.Render(r, tributary).Single(f => f.Name == "plan.json").Text);
+    }).WaitAsync(Guard);
+
     [Fact]
     public async Task AWriterThatFailsPartWayReplacesNothingAndLeavesNoTemporaryFile() => await Task.Run(() =>
     {
