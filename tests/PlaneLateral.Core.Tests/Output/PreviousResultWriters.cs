@@ -660,4 +660,58 @@ internal static class PreviousResultWriters
             }));
         return root.ToString(Formatting.Indented) + "\n";
     }
+
+    public static string PlanSeismicJson(PlanResult r, PlanSeismicResult s)
+    {
+        var u = r.Plan.Units;
+        double L(double v) => u.FromSI(v, Quantity.Length);
+        double Fo(double v) => u.FromSI(v, Quantity.Force);
+        var root = new Newtonsoft.Json.Linq.JObject
+        {
+            ["program"] = $"PlaneLateral {ResultFiles.Version}",
+            ["caution"] = ResultFiles.Caution,
+            ["source"] = PlanSeismicFiles.Source,
+            ["units"] = new Newtonsoft.Json.Linq.JObject { ["force"] = u.ForceSymbol, ["length"] = u.LengthSymbol },
+            ["modes"] = new Newtonsoft.Json.Linq.JArray(s.Modal.Modes.Select(m => new Newtonsoft.Json.Linq.JObject
+            {
+                ["mode"] = m.Number, ["period"] = m.Period, ["dominant"] = m.Dominant,
+                ["share"] = new Newtonsoft.Json.Linq.JArray(m.Share), ["cumulative"] = new Newtonsoft.Json.Linq.JArray(m.Cumulative), ["gamma"] = new Newtonsoft.Json.Linq.JArray(m.Participation[0], m.Participation[1]),
+            })),
+            ["rotationPivot"] = new Newtonsoft.Json.Linq.JArray(L(s.Modal.Pivot.X), L(s.Modal.Pivot.Y)),
+            ["equivalentLateralForces"] = new Newtonsoft.Json.Linq.JArray(s.Elf.Select(e => new Newtonsoft.Json.Linq.JObject
+            {
+                ["direction"] = e.Direction, ["mode"] = e.Mode, ["modalPeriod"] = e.ModalPeriod, ["Ta"] = e.Ta, ["Cu"] = e.Cu, ["periodUsed"] = e.PeriodUsed,
+                ["periodNote"] = e.PeriodNote, ["Cs"] = e.Cs, ["CsGovernedBy"] = e.CsNote, ["W"] = Fo(e.Weight), ["V"] = Fo(e.BaseShear), ["k"] = e.Exponent,
+                ["forces"] = new Newtonsoft.Json.Linq.JArray(e.LevelForces.Select(Fo)), ["cases"] = new Newtonsoft.Json.Linq.JArray(e.Cases),
+            })),
+            ["amplification"] = new Newtonsoft.Json.Linq.JArray(s.Amplification.Select(a => new Newtonsoft.Json.Linq.JObject { ["direction"] = a.Direction, ["level"] = r.Plan.Levels[a.Level].Id, ["Ax"] = a.Ax, ["applied"] = a.Applied })),
+        };
+        if (s.Spectrum is { } sp)
+            root["responseSpectrum"] = new Newtonsoft.Json.Linq.JObject
+            {
+                ["spectrum"] = sp.Spectrum.Describe(), ["combination"] = sp.Settings.Rule.ToString().ToUpperInvariant(), ["damping"] = sp.Settings.Damping,
+                ["R"] = sp.R, ["Ie"] = sp.Ie, ["Cd"] = sp.Settings.Cd,
+                ["accidentalTorsion"] = sp.TorsionMethod, ["combinedValues"] = SpectrumFiles.CombinedNote,
+                ["directions"] = new Newtonsoft.Json.Linq.JArray(sp.Directions.Select(d => new Newtonsoft.Json.Linq.JObject
+                {
+                    ["direction"] = d.Direction, ["modes"] = d.ModesUsed, ["massShare"] = d.CumulativeShare,
+                    ["Vt"] = Fo(d.Scaling.BaseShearModal), ["V"] = Fo(d.Scaling.BaseShearElf), ["forceFactor"] = d.Scaling.ForceFactor, ["driftFactor"] = d.Scaling.DriftFactor,
+                    ["scaling"] = d.Scaling.Why, ["modalEquilibriumError"] = d.EquilibriumError,
+                    ["analyses"] = new Newtonsoft.Json.Linq.JArray(d.Variants.Select(v => new Newtonsoft.Json.Linq.JObject
+                    {
+                        ["label"] = v.Label, ["massShift"] = L(v.Shift), ["modes"] = v.ModesUsed, ["Vt"] = Fo(v.Scaling.BaseShearModal), ["forceFactor"] = v.Scaling.ForceFactor,
+                        ["driftFactor"] = v.Scaling.DriftFactor, ["floorRotation"] = new Newtonsoft.Json.Linq.JArray(v.FloorRotation),
+                    })),
+                    ["stories"] = new Newtonsoft.Json.Linq.JArray(d.Stories.Select(st => new Newtonsoft.Json.Linq.JObject
+                    {
+                        ["story"] = st.Story, ["elfShear"] = Fo(st.ElfShear), ["modalShear"] = Fo(st.ModalShear), ["scaledShear"] = Fo(st.ScaledShear),
+                        ["corner"] = st.Corner + 1, ["drift"] = L(st.Drift), ["designDrift"] = L(st.DesignDrift), ["ratio"] = st.Ratio,
+                        ["allowedRatio"] = r.Plan.DriftLimit is { } lim ? lim.AllowedRatio : null,
+                        ["within"] = r.Plan.DriftLimit is { } lim2 ? st.Ratio <= lim2.AllowedRatio : null,
+                        ["Px"] = Fo(st.Px), ["theta"] = st.Theta, ["thetaElf"] = st.ThetaElf, ["thetaMax"] = st.ThetaMax,
+                    })),
+                })),
+            };
+        return root.ToString(Formatting.Indented) + "\n";
+    }
 }

@@ -72,11 +72,13 @@ public sealed class StreamedResultFilesTests : IDisposable
     [InlineData("demo-building.json")]               // a building in plan with a seismic block
     [InlineData("plan/long-warehouse.json")]         // floors that bend: the floors block
     [InlineData("plan/walls-with-openings.json")]    // panel lines and named points
-    public async Task PlanJsonHasTheBytesOfTheTreeWriter(string model) => await Task.Run(() =>
+    public async Task PlanJsonFilesHaveTheBytesOfTheTreeWriters(string model) => await Task.Run(() =>
     {
-        var (r, _, _) = PlaneLateral.Studies.PlanRun.Run(ModelReader.ReadPlanFile(RepositoryFiles.ModelPath(model)));
+        var (r, seismic, _) = PlaneLateral.Studies.PlanRun.Run(ModelReader.ReadPlanFile(RepositoryFiles.ModelPath(model)));
         var tributary = PlaneLateral.Studies.PlanTributarySplit.Run(r);
         Assert.Equal(PreviousResultWriters.PlanJson(r, tributary), PlanFiles.Render(r, tributary).Single(f => f.Name == "plan.json").Text);
+        if (seismic is not null)
+            Assert.Equal(PreviousResultWriters.PlanSeismicJson(r, seismic), PlanSeismicFiles.Render(r, seismic).Single(f => f.Name == "plan-seismic.json").Text);
     }).WaitAsync(Guard);
 
     [Fact]
