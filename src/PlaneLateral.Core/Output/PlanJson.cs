@@ -1,5 +1,4 @@
 using Newtonsoft.Json;
-using Newtonsoft.Json.Linq;
 
 namespace PlaneLateral.Output;
 
@@ -21,8 +20,8 @@ public sealed record PlanDocument(
     [property: JsonProperty("cases")] IEnumerable<PlanJsonCase> Cases,
     [property: JsonProperty("rigidity")] IEnumerable<PlanJsonRigidity> Rigidity,
     [property: JsonProperty("torsionalIrregularity")] IEnumerable<PlanJsonTorsion> TorsionalIrregularity,
-    // The floors that bend (docs/plan.md, "Floors that bend"): the block PlanDiaphragmFiles builds, present only with them.
-    [property: JsonProperty("floors", NullValueHandling = NullValueHandling.Ignore)] JToken? Floors,
+    // The floors that bend (docs/plan.md, "Floors that bend"): present only with them.
+    [property: JsonProperty("floors", NullValueHandling = NullValueHandling.Ignore)] PlanFloorsBlock? Floors,
     [property: JsonProperty("points", NullValueHandling = NullValueHandling.Ignore)] IEnumerable<PlanJsonPoint>? Points);
 
 /// <summary>The building's force and length units.</summary>
@@ -116,3 +115,56 @@ public sealed record PlanJsonPointLevel(
     [property: JsonProperty("uy")] double? Uy,
     [property: JsonProperty("driftX")] double? DriftX,
     [property: JsonProperty("driftY")] double? DriftY);
+
+/// <summary>plan.json's "floors" block (floors that bend, docs/plan.md): each floor's kind, the flexibility test and the
+/// line-shear envelope over the idealisations, with the hand tributary split beside it where there is one.</summary>
+public sealed record PlanFloorsBlock(
+    [property: JsonProperty("caution")] string Caution,
+    [property: JsonProperty("kinds")] IEnumerable<PlanFloorKind> Kinds,
+    [property: JsonProperty("idealisations")] IEnumerable<string> Idealisations,
+    [property: JsonProperty("notes")] IEnumerable<string> Notes,
+    [property: JsonProperty("flexibility")] IEnumerable<PlanFloorFlexibility> Flexibility,
+    [property: JsonProperty("envelope")] IEnumerable<PlanFloorEnvelope> Envelope);
+
+/// <summary>A floor's kind as modelled.</summary>
+public sealed record PlanFloorKind(
+    [property: JsonProperty("level")] string Level,
+    [property: JsonProperty("kind")] string Kind);
+
+/// <summary>The flexibility test of a floor (maximum diaphragm deflection against the average drift of the story below).</summary>
+public sealed record PlanFloorFlexibility(
+    [property: JsonProperty("level")] string Level,
+    [property: JsonProperty("loading")] string Loading,
+    [property: JsonProperty("case")] string Case,
+    [property: JsonProperty("from")] string From,
+    [property: JsonProperty("to")] string To,
+    [property: JsonProperty("span")] IEnumerable<double> Span,
+    [property: JsonProperty("MDD")] double Mdd,
+    [property: JsonProperty("ADVE")] double Adve,
+    [property: JsonProperty("ratio")] double? Ratio,
+    [property: JsonProperty("flexible")] bool Flexible);
+
+/// <summary>A line's story shear under each idealisation of the floors, and the hand tributary split beside it.</summary>
+public sealed record PlanFloorEnvelope(
+    [property: JsonProperty("case")] string Case,
+    [property: JsonProperty("story")] int Story,
+    [property: JsonProperty("line")] string Line,
+    [property: JsonProperty("rigid")] double? Rigid,
+    [property: JsonProperty("semiRigid")] double? SemiRigid,
+    [property: JsonProperty("flexible")] double? Flexible,
+    [property: JsonProperty("envelope")] double? Envelope,
+    [property: JsonProperty("governing")] string Governing,
+    [property: JsonProperty("handTributary")] double? HandTributary = null,
+    [property: JsonProperty("flexibleOverHandMinusOne")] double? FlexibleOverHandMinusOne = null,
+    [property: JsonProperty("gapCause")] string? GapCause = null)
+{
+    /// <summary>True when the row has a hand tributary value: its three properties are written (a null among them
+    /// meaning a number that is undefined), otherwise left out.</summary>
+    [JsonIgnore]
+    public bool HasHand { get; init; }
+
+    // Json.NET's ShouldSerialize convention.
+    public bool ShouldSerializeHandTributary() => HasHand;
+    public bool ShouldSerializeFlexibleOverHandMinusOne() => HasHand;
+    public bool ShouldSerializeGapCause() => HasHand;
+}

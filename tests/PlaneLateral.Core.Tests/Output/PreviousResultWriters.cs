@@ -644,7 +644,7 @@ internal static class PreviousResultWriters
                 ["Ax"] = double.IsFinite(t.Ax) ? t.Ax : null, ["withAccidentalTorsion"] = t.WithAccidental,
             })),
         };
-        if (PlanDiaphragmFiles.Json(r, tributary) is { } floors) root["floors"] = floors;
+        if (PlanFloorsJson(r, tributary) is { } floors) root["floors"] = floors;
         if (r.Plan.Points.Count > 0)   // the user's named points: per case and level, displacement and drift
             root["points"] = new Newtonsoft.Json.Linq.JArray(r.Plan.Points.Select(q => new Newtonsoft.Json.Linq.JObject
             {
@@ -713,5 +713,42 @@ internal static class PreviousResultWriters
                 })),
             };
         return root.ToString(Formatting.Indented) + "\n";
+    }
+
+    public static Newtonsoft.Json.Linq.JObject? PlanFloorsJson(PlanResult r, IReadOnlyList<TributaryShear>? tributary = null)
+    {
+        if (r.Diaphragms is not { } d) return null;
+        var hand = (tributary ?? []).GroupBy(t => (t.Case, t.Story, t.Line)).ToDictionary(g => g.Key, g => g.First());
+        var u = r.Plan.Units;
+        double L(double v) => u.FromSI(v, Quantity.Length);
+        Newtonsoft.Json.Linq.JToken N(double v) => double.IsFinite(v) ? v : Newtonsoft.Json.Linq.JValue.CreateNull();
+        return new Newtonsoft.Json.Linq.JObject
+        {
+            ["caution"] = DiaphragmStudy.Caution,
+            ["kinds"] = new Newtonsoft.Json.Linq.JArray(d.Kinds.Select((k, i) => new Newtonsoft.Json.Linq.JObject { ["level"] = r.Plan.Levels[i + 1].Id, ["kind"] = PlanFloor.Word(k) })),
+            ["idealisations"] = new Newtonsoft.Json.Linq.JArray(d.Variants),
+            ["notes"] = new Newtonsoft.Json.Linq.JArray(d.Notes),
+            ["flexibility"] = new Newtonsoft.Json.Linq.JArray(d.Flexibility.Select(t => new Newtonsoft.Json.Linq.JObject
+            {
+                ["level"] = r.Plan.Levels[t.Level].Id, ["loading"] = t.Direction, ["case"] = t.Case, ["from"] = t.From, ["to"] = t.To,
+                ["span"] = new Newtonsoft.Json.Linq.JArray(L(t.SpanFrom), L(t.SpanTo)), ["MDD"] = L(t.Mdd), ["ADVE"] = L(t.Adve), ["ratio"] = N(t.Ratio), ["flexible"] = t.Flexible,
+            })),
+            ["envelope"] = new Newtonsoft.Json.Linq.JArray(d.Envelope.Select(e =>
+            {
+                var o = new Newtonsoft.Json.Linq.JObject
+                {
+                    ["case"] = e.Case, ["story"] = e.Story, ["line"] = e.Line, ["rigid"] = N(u.FromSI(e.Rigid, Quantity.Force)),
+                    ["semiRigid"] = N(u.FromSI(e.SemiRigid, Quantity.Force)), ["flexible"] = N(u.FromSI(e.Flexible, Quantity.Force)),
+                    ["envelope"] = N(u.FromSI(e.Envelope, Quantity.Force)), ["governing"] = e.Governing,
+                };
+                if (hand.TryGetValue((e.Case, e.Story, e.Line), out var h))
+                {
+                    o["handTributary"] = N(u.FromSI(h.Hand, Quantity.Force));
+                    o["flexibleOverHandMinusOne"] = N(h.Gap);
+                    o["gapCause"] = h.Cause;
+                }
+                return o;
+            })),
+        };
     }
 }
