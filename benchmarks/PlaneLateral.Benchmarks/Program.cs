@@ -31,4 +31,11 @@ if (args.Length > 1 && args[0] == "supernodal")
     SupernodalReport.Run(args);
     return;
 }
+// "result-edge DIR [CASES]": the count limits' edge (10 000 nodes, 20 000 members, 200 cases) analysed and its results
+// files streamed to DIR/out, with wall times, peak working set and file sizes (docs/hardening.md, "Size limits").
+if (args.Length > 1 && args[0] == "result-edge")
+{
+    ResultEdgeReport.Run(args);
+    return;
+}
 BenchmarkSwitcher.FromAssembly(typeof(EnvelopeSolverBenchmarks).Assembly).Run(args);

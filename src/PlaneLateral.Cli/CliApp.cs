@@ -109,8 +109,8 @@ public static class CliApp
         string folder = outDir ?? CommandSupport.DefaultFolder(modelPath);
         bool wrote = CommandSupport.TryWrite(() =>
         {
-            var files = ResultFiles.Render(result).ToList();
-            if (comparisons is not null) files.AddRange(ComparisonFiles.Render(comparisons, $"PlaneLateral {ResultFiles.Version}"));
+            var files = ResultFiles.Files(result).ToList();
+            if (comparisons is not null) files.AddRange(ComparisonFiles.Render(comparisons, $"PlaneLateral {ResultFiles.Version}").Select(f => OutputFile.Text(f.Name, f.Text)));
             return AtomicFiles.WriteAll(folder, files);
         }, "results", stderr, out var written, out exit);
         if (!wrote) return exit;

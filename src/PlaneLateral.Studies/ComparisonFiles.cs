@@ -1,6 +1,5 @@
 using System.Globalization;
 using System.Text;
-using Newtonsoft.Json;
 
 namespace PlaneLateral.Studies;
 
@@ -13,7 +12,7 @@ public static class ComparisonFiles
 {
     public static IReadOnlyList<(string Name, string Text)> Render(ComparisonReport report, string producedBy) =>
     [
-        ("comparisons.json", Json(report, producedBy)),
+        ("comparisons.json", PlaneLateral.Output.TypedJson.Write(Document(report, producedBy))),
         ("comparisons.csv", Csv(report)),
     ];
 
@@ -48,79 +47,19 @@ public static class ComparisonFiles
         ComparedQuantity.Stiffness => "lateral stiffness", ComparedQuantity.Fraction => "fraction", ComparedQuantity.Force => "force", _ => "story shear",
     };
 
-    private static string Json(ComparisonReport r, string producedBy)
-    {
-        var sw = new StringWriter(CultureInfo.InvariantCulture) { NewLine = "\n" };
-        using (var w = new JsonTextWriter(sw) { Formatting = Formatting.Indented, Indentation = 2, FloatFormatHandling = FloatFormatHandling.String })
-        {
-            w.WriteStartObject();
-            w.WritePropertyName("producedBy"); w.WriteValue(producedBy);
-            w.WritePropertyName("caution"); w.WriteValue(ComparisonReport.Caution);
-            w.WritePropertyName("model");
-            w.WriteStartObject();
-            w.WritePropertyName("title"); w.WriteValue(r.ModelTitle);
-            w.WritePropertyName("file"); w.WriteValue(r.ModelFile);
-            w.WriteEndObject();
-            w.WritePropertyName("units");
-            w.WriteStartObject();
-            w.WritePropertyName("force"); w.WriteValue(r.ForceUnit);
-            w.WritePropertyName("length"); w.WriteValue(r.LengthUnit);
-            w.WriteEndObject();
-            w.WritePropertyName("defaultTolerance"); w.WriteValue(r.DefaultTolerance);
-            w.WritePropertyName("verdicts"); w.WriteValue("ratio = FE/hand for the row's reference FE estimate (named in \"reference\", the first in \"fe\", with the reason in \"referenceBasis\": a converged plane-stress panel where the row has one, else the first line model); within tolerance when |ratio − 1| ≤ tolerance; below: the hand value is higher (hand stiffer), above: lower (hand softer)");
-            w.WritePropertyName("rows");
-            w.WriteStartArray();
-            foreach (var row in r.Rows)
-            {
-                w.WriteStartObject();
-                w.WritePropertyName("check"); w.WriteValue(row.CheckId);
-                w.WritePropertyName("kind"); w.WriteValue(row.Kind);
-                w.WritePropertyName("subject"); w.WriteValue(row.Subject);
-                w.WritePropertyName("quantity"); w.WriteValue(Quantity(row.Quantity));
-                w.WritePropertyName("unit"); w.WriteValue(row.Unit);
-                w.WritePropertyName("hand");
-                w.WriteStartObject();
-                w.WritePropertyName("value"); w.WriteValue(row.Hand.Value);
-                w.WritePropertyName("method"); w.WriteValue(row.Hand.Method.Name);
-                w.WritePropertyName("source"); w.WriteValue(row.Hand.Method.Source);
-                w.WritePropertyName("assumptions");
-                w.WriteStartArray(); foreach (var a in row.Hand.Method.Assumptions) w.WriteValue(a); w.WriteEndArray();
-                if (row.Hand.FlexuralShare is double hf) { w.WritePropertyName("flexuralShare"); w.WriteValue(hf); }
-                if (row.Hand.ShearShare is double hs) { w.WritePropertyName("shearShare"); w.WriteValue(hs); }
-                if (row.Hand.Detail.Length > 0)
-                {
-                    w.WritePropertyName("detail");
-                    w.WriteStartArray(); foreach (var line in row.Hand.Detail.Split('\n')) w.WriteValue(line); w.WriteEndArray();
-                }
-                w.WriteEndObject();
-                w.WritePropertyName("fe");
-                w.WriteStartArray();
-                foreach (var fe in row.Fe)
-                {
-                    w.WriteStartObject();
-                    w.WritePropertyName("model"); w.WriteValue(fe.Model);
-                    w.WritePropertyName("value"); w.WriteValue(fe.Value);
-                    w.WritePropertyName("reference"); w.WriteValue(ReferenceEquals(fe, row.Reference));
-                    w.WritePropertyName("ratioToHand"); w.WriteValue(fe.Value / row.Hand.Value);
-                    if (fe.EstimatedError is double ee) { w.WritePropertyName("estimatedError"); w.WriteValue(ee); }
-                    w.WritePropertyName("description"); w.WriteValue(fe.Description);
-                    if (fe.FlexuralShare is double ff) { w.WritePropertyName("flexuralShare"); w.WriteValue(ff); }
-                    if (fe.ShearShare is double fs) { w.WritePropertyName("shearShare"); w.WriteValue(fs); }
-                    w.WriteEndObject();
-                }
-                w.WriteEndArray();
-                w.WritePropertyName("reference"); w.WriteValue(row.Reference.Model);
-                w.WritePropertyName("referenceBasis"); w.WriteValue(row.ReferenceBasis);
-                w.WritePropertyName("ratio"); w.WriteValue(row.Ratio);
-                if (row.AspectRatio is double ar) { w.WritePropertyName("aspectRatio"); w.WriteValue(ar); }
-                w.WritePropertyName("tolerance"); w.WriteValue(row.Tolerance);
-                w.WritePropertyName("verdict"); w.WriteValue(row.VerdictText);
-                w.WritePropertyName("cause"); w.WriteValue(row.Cause);
-                w.WriteEndObject();
-            }
-            w.WriteEndArray();
-            w.WriteEndObject();
-        }
-        return sw.ToString() + "\n";
-    }
+    /// <summary>comparisons.json as a typed document.</summary>
+    public static ComparisonsDocument Document(ComparisonReport r, string producedBy) => new(
+        producedBy,
+        ComparisonReport.Caution,
+        new ComparisonsModel(r.ModelTitle, r.ModelFile),
+        new ComparisonsUnits(r.ForceUnit, r.LengthUnit),
+        r.DefaultTolerance,
+        "ratio = FE/hand for the row's reference FE estimate (named in \"reference\", the first in \"fe\", with the reason in \"referenceBasis\": a converged plane-stress panel where the row has one, else the first line model); within tolerance when |ratio − 1| ≤ tolerance; below: the hand value is higher (hand stiffer), above: lower (hand softer)",
+        r.Rows.Select(row => new ComparisonsRow(
+            row.CheckId, row.Kind, row.Subject, Quantity(row.Quantity), row.Unit,
+            new ComparisonsHand(row.Hand.Value, row.Hand.Method.Name, row.Hand.Method.Source, row.Hand.Method.Assumptions,
+                row.Hand.FlexuralShare, row.Hand.ShearShare, row.Hand.Detail.Length > 0 ? row.Hand.Detail.Split('\n') : null),
+            row.Fe.Select(fe => new ComparisonsFe(fe.Model, fe.Value, ReferenceEquals(fe, row.Reference), fe.Value / row.Hand.Value,
+                fe.EstimatedError, fe.Description, fe.FlexuralShare, fe.ShearShare)),
+            row.Reference.Model, row.ReferenceBasis, row.Ratio, row.AspectRatio, row.Tolerance, row.VerdictText, row.Cause)));
 }

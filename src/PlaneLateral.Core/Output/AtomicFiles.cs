@@ -13,8 +13,6 @@ namespace PlaneLateral.Output;
 /// </summary>
 public static partial class AtomicFiles
 {
-    private static readonly UTF8Encoding Utf8NoBom = new(false);
-
     private static readonly AsyncLocal<IReadOnlyList<string>?> Inputs = new();
 
     /// <summary>
@@ -118,12 +116,24 @@ public static partial class AtomicFiles
     /// <returns>Full paths written, in the order given.</returns>
     /// <exception cref="IOException">The folder cannot be created or written; nothing was replaced.</exception>
     public static IReadOnlyList<string> WriteAll(string directory, IReadOnlyList<(string Name, string Text)> files) =>
-        WriteAll(directory, files.Select(f => (f.Name, Utf8NoBom.GetBytes(f.Text))).ToArray());
+        WriteAll(directory, files.Select(f => OutputFile.Text(f.Name, f.Text)).ToArray());
 
     /// <summary>Writes <paramref name="files"/> (file name → bytes: text, PNG, ...) into <paramref name="directory"/>, creating it if needed.</summary>
     /// <returns>Full paths written, in the order given.</returns>
     /// <exception cref="IOException">The folder cannot be created or written; nothing was replaced.</exception>
-    public static IReadOnlyList<string> WriteAll(string directory, IReadOnlyList<(string Name, byte[] Bytes)> files)
+    public static IReadOnlyList<string> WriteAll(string directory, IReadOnlyList<(string Name, byte[] Bytes)> files) =>
+        WriteAll(directory, files.Select(f => OutputFile.Bytes(f.Name, f.Bytes)).ToArray());
+
+    /// <summary>
+    /// Writes <paramref name="files"/> into <paramref name="directory"/>, creating it if needed: each file's bytes go
+    /// straight into its temporary file as they are produced (a streamed file is never held whole in memory), every
+    /// temporary file is flushed to disk, and only then are they renamed over their targets, in the order given.
+    /// </summary>
+    /// <returns>Full paths written, in the order given.</returns>
+    /// <exception cref="IOException">The folder cannot be created or written; nothing was replaced.</exception>
+    /// <remarks>An exception from a file's writer (any kind) removes every temporary file and replaces nothing; it is
+    /// passed on as it is, unless it is an I/O failure, which is reported as the folder's.</remarks>
+    public static IReadOnlyList<string> WriteAll(string directory, IReadOnlyList<OutputFile> files)
     {
         try
         {
@@ -135,35 +145,37 @@ public static partial class AtomicFiles
         }
 
         if (Inputs.Value is { Count: > 0 } inputs)
-            foreach (var (name, _) in files)
+            foreach (var f in files)
             {
-                string target = Identity(Path.Combine(directory, name));
+                string target = Identity(Path.Combine(directory, f.Name));
                 if (inputs.Any(i => string.Equals(i, target, PathComparison)))
-                    throw new OutputOverwritesInputException(target, name);
+                    throw new OutputOverwritesInputException(target, f.Name);
             }
         RemoveStalePartials(directory);
 
         var temps = new List<(string Temp, string Final)>();
         try
         {
-            foreach (var (name, bytes) in files)
+            foreach (var f in files)
             {
-                string final = Path.Combine(directory, name);
+                string final = Path.Combine(directory, f.Name);
                 // A folder standing where a file must go would stop the renames half-way: refuse before any target changes.
-                if (Directory.Exists(final)) throw new IOException($"'{final}' is a folder, so the file {name} cannot be written there");
-                string temp = Path.Combine(directory, $".{name}.{Environment.ProcessId}-{Guid.NewGuid():N}.partial");
+                if (Directory.Exists(final)) throw new IOException($"'{final}' is a folder, so the file {f.Name} cannot be written there");
+                string temp = Path.Combine(directory, $".{f.Name}.{Environment.ProcessId}-{Guid.NewGuid():N}.partial");
                 temps.Add((temp, final));
-                using (var fs = new FileStream(temp, FileMode.CreateNew, FileAccess.Write, FileShare.None))
+                using (var fs = new FileStream(temp, FileMode.CreateNew, FileAccess.Write, FileShare.None, bufferSize: 1 << 16))
                 {
-                    fs.Write(bytes);
+                    f.WriteTo(fs);
                     fs.Flush(flushToDisk: true);
                 }
             }
         }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        catch (Exception e)
         {
             foreach (var (temp, _) in temps) TryDelete(temp);
-            throw new IOException($"cannot write into the output folder '{directory}': {e.Message}", e);
+            if (e is IOException or UnauthorizedAccessException)
+                throw new IOException($"cannot write into the output folder '{directory}': {e.Message}", e);
+            throw;
         }
 
         int moved = 0;

@@ -1,6 +1,5 @@
 using System.Globalization;
 using System.Text;
-using Newtonsoft.Json;
 using PlaneLateral.Analysis;
 using PlaneLateral.Model;
 using PlaneLateral.Units;
@@ -31,7 +30,7 @@ public static class BuildingFiles
         }
         if (b.DriftChecks.Count > 0) files.Add(("drift-checks.csv", BuildingTables.DriftChecks(run).ToCsv()));
         files.Add(("member-stiffness.csv", MemberStiffness(r)));
-        files.Add(("stories.json", Json(r, br)));
+        files.Add(("stories.json", TypedJson.Write(Document(r, br))));
         return files;
     }
 
@@ -86,101 +85,36 @@ public static class BuildingFiles
         return sb.ToString();
     }
 
-    private static string Json(AnalysisResult r, BuildingResult br)
+    /// <summary>A finite number, or null (the building layer's "cannot be given": a story without shear has no stiffness).</summary>
+    private static double? N(double v) => double.IsFinite(v) ? v : null;
+
+    /// <summary>stories.json as a typed document.</summary>
+    public static StoriesDocument Document(AnalysisResult r, BuildingResult br)
     {
         var m = r.Model;
         var u = m.Units;
-        double L(double v) => u.FromSI(v, Quantity.Length);
-        var sw = new StringWriter(CultureInfo.InvariantCulture) { NewLine = "\n" };
-        using (var w = new JsonTextWriter(sw) { Formatting = Formatting.Indented, Indentation = 2, FloatFormatHandling = FloatFormatHandling.Symbol })
-        {
-            void P(string name, object? v) { w.WritePropertyName(name); if (v is double d && !double.IsFinite(d)) w.WriteNull(); else w.WriteValue(v); }
-            w.WriteStartObject();
-            P("producedBy", $"PlaneLateral {ResultFiles.Version}");
-            P("caution", ResultFiles.Caution);
-            P("units", $"length {u.LengthSymbol}, force {u.ForceSymbol}, stiffness {u.Label(Quantity.TranslationalStiffness)}");
-            P("definitions", "Story i runs from its bottom level to its top level. Level displacement: mean ux of the level's nodes. Drift: top minus bottom. Story shear: horizontal force carried across a horizontal cut in the story by the members crossing it (from their end forces and loads), positive in +x. Story stiffness: shear / drift, null where the story carries no shear or does not drift.");
-            w.WritePropertyName("levels");
-            w.WriteStartArray();
-            foreach (var l in m.Building.Levels)
-            {
-                w.WriteStartObject();
-                P("id", l.Id); P("name", l.Name); P("elevation", L(l.Elevation)); P("diaphragm", l.Rigid ? "rigid" : "none");
-                P("nodesChosen", l.Selection);
-                w.WritePropertyName("nodes"); w.WriteStartArray(); foreach (int n in l.Nodes) w.WriteValue(m.Nodes[n].Id); w.WriteEndArray();
-                w.WriteEndObject();
-            }
-            w.WriteEndArray();
-            w.WritePropertyName("cases");
-            w.WriteStartArray();
-            foreach (var c in br.Cases)
-            {
-                w.WriteStartObject();
-                P("id", c.CaseId); P("kind", c.IsCombination ? "combination" : "load case"); P("lateral", c.Lateral);
-                w.WritePropertyName("levels");
-                w.WriteStartArray();
-                foreach (var ld in c.Levels) { w.WriteStartObject(); P("level", ld.Level.Id); P("ux", L(ld.Ux)); P("spread", L(ld.Spread)); w.WriteEndObject(); }
-                w.WriteEndArray();
-                w.WritePropertyName("stories");
-                w.WriteStartArray();
-                foreach (var s in c.Stories)
-                {
-                    w.WriteStartObject();
-                    P("story", s.Index); P("bottom", s.Bottom.Id); P("top", s.Top.Id); P("height", L(s.Height));
-                    P("topDisplacement", L(s.TopDisplacement)); P("drift", L(s.Drift)); P("driftRatio", s.DriftRatio);
-                    P("cutAt", L(s.CutElevation)); P("shear", u.FromSI(s.Shear, Quantity.Force)); P("stiffness", u.FromSI(s.Stiffness, Quantity.TranslationalStiffness));
-                    w.WritePropertyName("lines");
-                    w.WriteStartArray();
-                    foreach (var l in s.Lines)
-                    {
-                        w.WriteStartObject();
-                        P("line", LineName(l.Line)); P("shear", u.FromSI(l.Shear, Quantity.Force)); P("share", l.Share);
-                        P("drift", L(l.Drift)); P("stiffnessInStructure", u.FromSI(l.Stiffness, Quantity.TranslationalStiffness));
-                        w.WriteEndObject();
-                    }
-                    w.WriteEndArray();
-                    w.WriteEndObject();
-                }
-                w.WriteEndArray();
-                w.WriteEndObject();
-            }
-            w.WriteEndArray();
-            w.WritePropertyName("driftChecks");
-            w.WriteStartArray();
-            foreach (var d in br.DriftChecks)
-            {
-                w.WriteStartObject();
-                P("check", d.Check.Id); P("case", d.CaseId); P("story", d.Story.Index); P("Cd", d.Check.Cd); P("Ie", d.Check.Ie);
-                P("elasticDrift", L(d.ElasticDrift)); P("amplifiedDrift", L(d.AmplifiedDrift)); P("ratio", d.Ratio); P("allowedRatio", d.Allowed);
-                P("result", d.Passes ? "within" : "exceeds"); P("margin", d.Margin); P("limitSource", d.Check.LimitSource);
-                P("method", "amplified drift = Cd·elastic drift / Ie (ASCE 7-16 eq. 12.8-15)");
-                w.WriteEndObject();
-            }
-            w.WriteEndArray();
-            w.WritePropertyName("stiffnessIrregularity");
-            w.WriteStartArray();
-            foreach (var i in br.Irregularity)
-            {
-                w.WriteStartObject();
-                P("case", i.CaseId); P("story", i.Story.Index); P("stiffness", u.FromSI(i.Stiffness, Quantity.TranslationalStiffness));
-                P("ratioToAbove", i.RatioToAbove); P("ratioToMeanOfThreeAbove", i.RatioToAverageAbove);
-                P("type1aSoft", i.Soft); P("type1bExtremelySoft", i.ExtremelySoft); P("windCaseRatiosOnly", i.WindCase);
-                w.WriteEndObject();
-            }
-            w.WriteEndArray();
-            P("irregularitySource", "ASCE 7-16 Table 12.3-2, Types 1a (below 70 % of the story above or 80 % of the mean of the three above) and 1b (60 % and 70 %); the governing code decides");
-            w.WritePropertyName("memberStiffness");
-            w.WriteStartArray();
-            for (int i = 0; i < m.Members.Count && i < m.Building.Modifiers.Count; i++)
-            {
-                var a = m.Building.Modifiers[i];
-                w.WriteStartObject();
-                P("member", m.Members[i].Id); P("I", a.Modifiers.I); P("A", a.Modifiers.A); P("shearArea", a.Modifiers.ShearArea); P("source", a.Source);
-                w.WriteEndObject();
-            }
-            w.WriteEndArray();
-            w.WriteEndObject();
-        }
-        return sw.ToString() + "\n";
+        double? L(double v) => N(u.FromSI(v, Quantity.Length));
+        double? Force(double v) => N(u.FromSI(v, Quantity.Force));
+        double? K(double v) => N(u.FromSI(v, Quantity.TranslationalStiffness));
+        return new StoriesDocument(
+            ProducedBy: $"PlaneLateral {ResultFiles.Version}",
+            Caution: ResultFiles.Caution,
+            Units: $"length {u.LengthSymbol}, force {u.ForceSymbol}, stiffness {u.Label(Quantity.TranslationalStiffness)}",
+            Definitions: "Story i runs from its bottom level to its top level. Level displacement: mean ux of the level's nodes. Drift: top minus bottom. Story shear: horizontal force carried across a horizontal cut in the story by the members crossing it (from their end forces and loads), positive in +x. Story stiffness: shear / drift, null where the story carries no shear or does not drift.",
+            Levels: m.Building.Levels.Select(l => new StoriesLevel(l.Id, l.Name, L(l.Elevation), l.Rigid ? "rigid" : "none", l.Selection, l.Nodes.Select(n => m.Nodes[n].Id))),
+            Cases: br.Cases.Select(c => new StoriesCase(c.CaseId, c.IsCombination ? "combination" : "load case", c.Lateral,
+                c.Levels.Select(ld => new StoriesLevelDisplacement(ld.Level.Id, L(ld.Ux), L(ld.Spread))),
+                c.Stories.Select(s => new StoriesStory(s.Index, s.Bottom.Id, s.Top.Id, L(s.Height), L(s.TopDisplacement), L(s.Drift), N(s.DriftRatio),
+                    L(s.CutElevation), Force(s.Shear), K(s.Stiffness),
+                    s.Lines.Select(l => new StoriesLine(LineName(l.Line), Force(l.Shear), N(l.Share), L(l.Drift), K(l.Stiffness))))))),
+            DriftChecks: br.DriftChecks.Select(d => new StoriesDriftCheck(d.Check.Id, d.CaseId, d.Story.Index, N(d.Check.Cd), N(d.Check.Ie),
+                L(d.ElasticDrift), L(d.AmplifiedDrift), N(d.Ratio), N(d.Allowed), d.Passes ? "within" : "exceeds", N(d.Margin), d.Check.LimitSource,
+                "amplified drift = Cd·elastic drift / Ie (ASCE 7-16 eq. 12.8-15)")),
+            StiffnessIrregularity: br.Irregularity.Select(i => new StoriesIrregularity(i.CaseId, i.Story.Index, K(i.Stiffness), N(i.RatioToAbove),
+                N(i.RatioToAverageAbove), i.Soft, i.ExtremelySoft, i.WindCase)),
+            IrregularitySource: "ASCE 7-16 Table 12.3-2, Types 1a (below 70 % of the story above or 80 % of the mean of the three above) and 1b (60 % and 70 %); the governing code decides",
+            MemberStiffness: Enumerable.Range(0, Math.Min(m.Members.Count, m.Building.Modifiers.Count)).Select(i => new StoriesMemberStiffness(
+                m.Members[i].Id, N(m.Building.Modifiers[i].Modifiers.I), N(m.Building.Modifiers[i].Modifiers.A), N(m.Building.Modifiers[i].Modifiers.ShearArea),
+                m.Building.Modifiers[i].Source)));
     }
 }

@@ -1,6 +1,5 @@
 using System.Globalization;
 using System.Text;
-using Newtonsoft.Json;
 using PlaneLateral.Analysis;
 using PlaneLateral.Units;
 
@@ -15,7 +14,7 @@ namespace PlaneLateral.Output;
 public static class PanelResultFiles
 {
     public static IReadOnlyList<(string Name, string Text)> Render(AnalysisResult r) =>
-        r.Panels.Count == 0 ? [] : [("panels.json", Json(r)), ("panel-stresses.csv", Stresses(r)), ("panel-checks.csv", Checks(r))];
+        r.Panels.Count == 0 ? [] : [("panels.json", TypedJson.Write(Document(r))), ("panel-stresses.csv", Stresses(r)), ("panel-checks.csv", Checks(r))];
 
     private static string F(double v) => v.ToString("G12", CultureInfo.InvariantCulture);
 
@@ -50,98 +49,47 @@ public static class PanelResultFiles
         return sb.ToString();
     }
 
-    private static string Json(AnalysisResult r)
+    /// <summary>A finite number, or null (one that could not be determined; the note beside it says why).</summary>
+    private static double? N(double v) => double.IsFinite(v) ? v : null;
+
+    /// <summary>panels.json as a typed document.</summary>
+    public static PanelsDocument Document(AnalysisResult r)
     {
         var u = r.Model.Units;
-        double Len(double v) => u.FromSI(v, Quantity.Length);
-        double Stiff(double v) => u.FromSI(v, Quantity.TranslationalStiffness);
-        var sw = new StringWriter(CultureInfo.InvariantCulture) { NewLine = "\n" };
-        using (var w = new JsonTextWriter(sw) { Formatting = Formatting.Indented, Indentation = 2, FloatFormatHandling = FloatFormatHandling.String })
+        double? Len(double v) => N(u.FromSI(v, Quantity.Length));
+        double? Stiff(double v) => N(u.FromSI(v, Quantity.TranslationalStiffness));
+        PanelsPanel Panel(PanelResult p)
         {
-            // A number that could not be determined (e.g. no observed order from a non-monotone mesh sequence) is written
-            // as null, never as "NaN"; the note beside it says why.
-            void P(string name, object? v) { w.WritePropertyName(name); w.WriteValue(v is double d && !double.IsFinite(d) ? null : v); }
-            w.WriteStartObject();
-            P("producedBy", $"PlaneLateral {ResultFiles.Version}");
-            P("caution", ResultFiles.Caution);
-            P("method", "Plane-stress continuum (see docs/panels.md): base held in x and y (a panel on a footing: its base nodes follow the rigid footing on its springs, docs/footings.md); with floor ties every node of a level shares one horizontal displacement (exact constraint). Top stiffness = 1 / top displacement under a unit horizontal force through the top tie (without ties: spread along the top edge, mean top displacement).");
-            w.WritePropertyName("units");
-            w.WriteStartObject();
-            P("length", u.LengthSymbol); P("force", u.ForceSymbol); P("stress", u.Label(Quantity.Stress)); P("stiffness", u.Label(Quantity.TranslationalStiffness));
-            w.WriteEndObject();
-            w.WritePropertyName("panels");
-            w.WriteStartArray();
-            foreach (var p in r.Panels)
-            {
-                w.WriteStartObject();
-                P("id", p.Panel.Id);
-                P("element", p.Mesh.Mesh.Element.Name);
-                w.WritePropertyName("mesh");
-                w.WriteStartObject();
-                P("elements", p.Mesh.Mesh.Elements.Length); P("nodes", p.Mesh.Mesh.NodeCount); P("unknowns", p.Analysis.Solve.Unknowns);
-                P("elementSize", Len(p.Mesh.ElementSize)); P("narrowestStrip", Len(p.Mesh.NarrowestStrip)); P("largestAspect", p.Mesh.LargestAspect);
-                P("solver", MachineFree.Solver(p.Analysis.Solve.Solver));
-                w.WriteEndObject();
-                P("floorTies", p.Panel.FloorTies);
-                if (p.Panel.Top == Model.PanelTop.Guided) P("top", "guided: the top edge translates without rotating (fixed-guided stiffness)");
-                var (kRep, kErr) = p.ReportedStiffness;
-                P("topStiffness", Stiff(kRep));
-                P("topStiffnessEstimatedError", kErr);
-                P("topStiffnessOn", p.Convergence is null ? "the panel's one mesh (no error estimate)"
+            var (kRep, kErr) = p.ReportedStiffness;
+            var cv = p.Convergence;
+            var errors = p.LevelDisplacementErrors;
+            return new PanelsPanel(
+                p.Panel.Id, p.Mesh.Mesh.Element.Name,
+                new PanelsMesh(p.Mesh.Mesh.Elements.Length, p.Mesh.Mesh.NodeCount, p.Analysis.Solve.Unknowns, Len(p.Mesh.ElementSize), Len(p.Mesh.NarrowestStrip),
+                    N(p.Mesh.LargestAspect), MachineFree.Solver(p.Analysis.Solve.Solver)),
+                p.Panel.FloorTies,
+                p.Panel.Top == Model.PanelTop.Guided ? "guided: the top edge translates without rotating (fixed-guided stiffness)" : null,
+                Stiff(kRep), N(kErr),
+                cv is null ? "the panel's one mesh (no error estimate)"
                     : double.IsFinite(kErr) ? "Richardson extrapolation over the convergence meshes (estimated relative error beside it)"
-                    : "the finest convergence mesh, not extrapolated (no error estimate)");
-                P("topStiffnessBaseMesh", Stiff(p.TopStiffness));
-                if (p.Convergence is not null)
-                    P("nodalResults", "the nodal displacements and stresses in panel-stresses.csv and the checks in panel-checks.csv are on the base (coarsest) mesh of the study and carry no error estimate; the level displacements here are extrapolated like the stiffness, each with its own estimated relative error");
-                if (p.Convergence is { } cv)
-                {
-                    w.WritePropertyName("convergence");
-                    w.WriteStartObject();
-                    w.WritePropertyName("meshes");
-                    w.WriteStartArray();
-                    for (int i = 0; i < cv.Stiffness.Length; i++)
-                    {
-                        w.WriteStartObject();
-                        P("elementSize", Len(cv.ElementSizes[i])); P("unknowns", cv.Unknowns[i]); P("topStiffness", Stiff(cv.Stiffness[i]));
-                        w.WriteEndObject();
-                    }
-                    w.WriteEndArray();
-                    P("observedOrder", cv.ObservedOrder);
-                    P("extrapolatedStiffness", Stiff(cv.Extrapolated));
-                    P("estimatedRelativeError", cv.EstimatedError);
-                    P("note", cv.Note);
-                    w.WriteEndObject();
-                }
-                w.WritePropertyName("cases");
-                w.WriteStartArray();
-                for (int c = 0; c < p.Analysis.Cases.Count; c++)
-                {
-                    var cr = p.Analysis.Cases[c];
-                    w.WriteStartObject();
-                    P("id", cr.Id);
-                    P("topDisplacement", Len(p.TopDisplacement(c)));
-                    if (p.LevelDisplacementErrors is { } te) P("topDisplacementEstimatedError", te[c][^1]);
-                    w.WritePropertyName("levels");
-                    w.WriteStartArray();
-                    for (int l = 0; l < p.Mesh.Levels.Length; l++)
-                    {
-                        w.WriteStartObject();
-                        P("height", Len(p.Mesh.Levels[l])); P("ux", Len(p.LevelDisplacements[c][l]));
-                        if (p.LevelDisplacementErrors is { } le) P("uxEstimatedError", le[c][l]);
-                        w.WriteEndObject();
-                    }
-                    w.WriteEndArray();
-                    P("backwardError", cr.BackwardError);
-                    P("relativeForceImbalance", cr.Equilibrium.RelativeForceError);
-                    P("relativeMomentImbalance", cr.Equilibrium.RelativeMomentError);
-                    w.WriteEndObject();
-                }
-                w.WriteEndArray();
-                w.WriteEndObject();
-            }
-            w.WriteEndArray();
-            w.WriteEndObject();
+                    : "the finest convergence mesh, not extrapolated (no error estimate)",
+                Stiff(p.TopStiffness),
+                cv is null ? null : "the nodal displacements and stresses in panel-stresses.csv and the checks in panel-checks.csv are on the base (coarsest) mesh of the study and carry no error estimate; the level displacements here are extrapolated like the stiffness, each with its own estimated relative error",
+                cv is null ? null : new PanelsConvergence(
+                    Enumerable.Range(0, cv.Stiffness.Length).Select(i => new PanelsConvergenceMesh(Len(cv.ElementSizes[i]), cv.Unknowns[i], Stiff(cv.Stiffness[i]))),
+                    N(cv.ObservedOrder), Stiff(cv.Extrapolated), N(cv.EstimatedError), cv.Note),
+                Enumerable.Range(0, p.Analysis.Cases.Count).Select(c => new PanelsCase(
+                    p.Analysis.Cases[c].Id, Len(p.TopDisplacement(c)), errors is null ? null : N(errors[c][^1]),
+                    Enumerable.Range(0, p.Mesh.Levels.Length).Select(l => new PanelsLevel(Len(p.Mesh.Levels[l]), Len(p.LevelDisplacements[c][l]),
+                        errors is null ? null : N(errors[c][l])) { HasError = errors is not null }),
+                    N(p.Analysis.Cases[c].BackwardError), N(p.Analysis.Cases[c].Equilibrium.RelativeForceError), N(p.Analysis.Cases[c].Equilibrium.RelativeMomentError))
+                    { HasErrors = errors is not null }));
         }
-        return sw.ToString() + "\n";
+        return new PanelsDocument(
+            $"PlaneLateral {ResultFiles.Version}",
+            ResultFiles.Caution,
+            "Plane-stress continuum (see docs/panels.md): base held in x and y (a panel on a footing: its base nodes follow the rigid footing on its springs, docs/footings.md); with floor ties every node of a level shares one horizontal displacement (exact constraint). Top stiffness = 1 / top displacement under a unit horizontal force through the top tie (without ties: spread along the top edge, mean top displacement).",
+            new PanelsUnits(u.LengthSymbol, u.ForceSymbol, u.Label(Quantity.Stress), u.Label(Quantity.TranslationalStiffness)),
+            r.Panels.Select(Panel));
     }
 }

@@ -1,6 +1,5 @@
 using System.Globalization;
 using System.Text;
-using Newtonsoft.Json.Linq;
 using PlaneLateral.Analysis;
 using PlaneLateral.Model;
 using PlaneLateral.Units;
@@ -53,40 +52,26 @@ public static class PlanDiaphragmFiles
     }
 
     /// <summary>The "floors" block of plan.json, or null without floor blocks.</summary>
-    public static JObject? Json(PlanResult r, IReadOnlyList<TributaryShear>? tributary = null)
+    public static PlanFloorsBlock? Json(PlanResult r, IReadOnlyList<TributaryShear>? tributary = null)
     {
         if (r.Diaphragms is not { } d) return null;
         var hand = Index(tributary);
         var u = r.Plan.Units;
         double L(double v) => u.FromSI(v, Quantity.Length);
-        JToken N(double v) => double.IsFinite(v) ? v : JValue.CreateNull();
-        return new JObject
-        {
-            ["caution"] = DiaphragmStudy.Caution,
-            ["kinds"] = new JArray(d.Kinds.Select((k, i) => new JObject { ["level"] = r.Plan.Levels[i + 1].Id, ["kind"] = PlanFloor.Word(k) })),
-            ["idealisations"] = new JArray(d.Variants),
-            ["notes"] = new JArray(d.Notes),
-            ["flexibility"] = new JArray(d.Flexibility.Select(t => new JObject
+        static double? N(double v) => double.IsFinite(v) ? v : null;
+        return new PlanFloorsBlock(
+            DiaphragmStudy.Caution,
+            d.Kinds.Select((k, i) => new PlanFloorKind(r.Plan.Levels[i + 1].Id, PlanFloor.Word(k))),
+            d.Variants,
+            d.Notes,
+            d.Flexibility.Select(t => new PlanFloorFlexibility(r.Plan.Levels[t.Level].Id, t.Direction, t.Case, t.From, t.To, [L(t.SpanFrom), L(t.SpanTo)],
+                L(t.Mdd), L(t.Adve), N(t.Ratio), t.Flexible)),
+            d.Envelope.Select(e =>
             {
-                ["level"] = r.Plan.Levels[t.Level].Id, ["loading"] = t.Direction, ["case"] = t.Case, ["from"] = t.From, ["to"] = t.To,
-                ["span"] = new JArray(L(t.SpanFrom), L(t.SpanTo)), ["MDD"] = L(t.Mdd), ["ADVE"] = L(t.Adve), ["ratio"] = N(t.Ratio), ["flexible"] = t.Flexible,
-            })),
-            ["envelope"] = new JArray(d.Envelope.Select(e =>
-            {
-                var o = new JObject
-                {
-                    ["case"] = e.Case, ["story"] = e.Story, ["line"] = e.Line, ["rigid"] = N(u.FromSI(e.Rigid, Quantity.Force)),
-                    ["semiRigid"] = N(u.FromSI(e.SemiRigid, Quantity.Force)), ["flexible"] = N(u.FromSI(e.Flexible, Quantity.Force)),
-                    ["envelope"] = N(u.FromSI(e.Envelope, Quantity.Force)), ["governing"] = e.Governing,
-                };
-                if (hand.TryGetValue((e.Case, e.Story, e.Line), out var h))
-                {
-                    o["handTributary"] = N(u.FromSI(h.Hand, Quantity.Force));
-                    o["flexibleOverHandMinusOne"] = N(h.Gap);
-                    o["gapCause"] = h.Cause;
-                }
-                return o;
-            })),
-        };
+                bool has = hand.TryGetValue((e.Case, e.Story, e.Line), out var h);
+                return new PlanFloorEnvelope(e.Case, e.Story, e.Line, N(u.FromSI(e.Rigid, Quantity.Force)), N(u.FromSI(e.SemiRigid, Quantity.Force)),
+                    N(u.FromSI(e.Flexible, Quantity.Force)), N(u.FromSI(e.Envelope, Quantity.Force)), e.Governing,
+                    has ? N(u.FromSI(h!.Hand, Quantity.Force)) : null, has ? N(h!.Gap) : null, has ? h!.Cause : null) { HasHand = has };
+            }));
     }
 }

@@ -1,7 +1,5 @@
 using System.Globalization;
 using System.Text;
-using Newtonsoft.Json;
-using Newtonsoft.Json.Linq;
 using PlaneLateral.Analysis;
 using PlaneLateral.Model;
 using PlaneLateral.Units;
@@ -21,7 +19,7 @@ public static class PlanFiles
     {
         var files = new List<(string, string)>
         {
-            ("plan.json", Json(r, tributary)),
+            ("plan.json", TypedJson.Write(Document(r, tributary))),
             ("plan-floors.csv", Floors(r)),
             ("plan-corners.csv", Corners(r)),
             ("plan-line-stories.csv", LineStories(r)),
@@ -144,67 +142,34 @@ public static class PlanFiles
         return sb.ToString();
     }
 
-    private static string Json(PlanResult r, IReadOnlyList<TributaryShear>? tributary = null)
+    /// <summary>plan.json as a typed document (the floors-that-bend block as PlanDiaphragmFiles builds it).</summary>
+    public static PlanDocument Document(PlanResult r, IReadOnlyList<TributaryShear>? tributary = null)
     {
         var u = r.Plan.Units;
         double? L(double v) => double.IsFinite(v) ? u.FromSI(v, Quantity.Length) : null;   // null where undefined, never "NaN"
         double? Fo(double v) => double.IsFinite(v) ? u.FromSI(v, Quantity.Force) : null;
-        var root = new JObject
-        {
-            ["program"] = $"PlaneLateral {ResultFiles.Version}",
-            ["caution"] = ResultFiles.Caution,
-            ["title"] = r.Plan.Title,
-            ["units"] = new JObject { ["force"] = u.ForceSymbol, ["length"] = u.LengthSymbol },
-            ["method"] = "each line condensed exactly on its level lateral DOFs (one factorisation per line), mapped to the floors' (Ux, Uy, Rz) and assembled; lines recovered under the level forces",
-            ["accidentalEccentricity"] = r.Plan.EccentricityRatio,
+        double? N(double v) => double.IsFinite(v) ? v : null;
+        return new PlanDocument(
+            Program: $"PlaneLateral {ResultFiles.Version}",
+            Caution: ResultFiles.Caution,
+            Title: r.Plan.Title,
+            Units: new PlanUnits(u.ForceSymbol, u.LengthSymbol),
+            Method: "each line condensed exactly on its level lateral DOFs (one factorisation per line), mapped to the floors' (Ux, Uy, Rz) and assembled; lines recovered under the level forces",
+            AccidentalEccentricity: r.Plan.EccentricityRatio,
             // Plausibility of the input (Model/Plausibility.Plan.cs); they do not change any number.
-            ["warnings"] = new JArray(r.Plan.Warnings.Select(x => new JObject
-            {
-                ["file"] = Path.GetFileName(x.File), ["line"] = x.Line, ["column"] = x.Column, ["path"] = x.JsonPath, ["problem"] = x.Problem, ["fix"] = x.Fix,
-            })),
-            ["levels"] = new JArray(r.Plan.Levels.Select(l => new JObject
-            {
-                ["id"] = l.Id, ["elevation"] = L(l.Elevation), ["weight"] = double.IsFinite(l.Weight) ? Fo(l.Weight) : null,
-                ["massAt"] = new JArray((JToken)L(l.CentreOfMass.X), (JToken)L(l.CentreOfMass.Y)),
-            })),
-            ["lines"] = new JArray(r.Lines.Select(l => new JObject
-            {
-                ["id"] = l.Line.Id, ["form"] = l.Line.Form.ToString(), ["at"] = new JArray((JToken)L(l.Line.X0), (JToken)L(l.Line.Y0)),
-                ["direction"] = l.Line.DirectionLabel, ["condensationBackwardError"] = l.CondensationBackwardError,
-                ["flexibilitySymmetryError"] = l.SymmetryError, ["recoveryError"] = l.RecoveryError,
-            })),
-            ["cases"] = new JArray(r.Cases.Select(c => new JObject
-            {
-                ["id"] = c.Case.Id, ["description"] = c.Case.Description, ["backwardError"] = c.BackwardError,
-                ["equilibriumError"] = c.Equilibrium.RelativeError,
-                ["floors"] = new JArray(c.Motion.Select(m => new JObject { ["level"] = r.Plan.Levels[m.Level].Id, ["Ux"] = L(m.Ux), ["Uy"] = L(m.Uy), ["Rz"] = m.Rz })),
-                ["lineStories"] = new JArray(c.LineStories.Select(s => new JObject
-                {
-                    ["story"] = s.Story, ["line"] = s.Line, ["shear"] = Fo(s.Shear), ["share"] = double.IsFinite(s.Share) ? s.Share : null,
-                    ["direct"] = Fo(s.Direct), ["torsional"] = Fo(s.Torsional),
-                })),
-            })),
-            ["rigidity"] = new JArray(r.Rigidity.Select(g => new JObject { ["loading"] = g.Direction, ["story"] = g.Story, ["xR"] = L(g.XR), ["yR"] = L(g.YR) })),
-            ["torsionalIrregularity"] = new JArray(r.Irregularity.Select(t => new JObject
-            {
-                ["loading"] = t.Direction, ["story"] = t.Story, ["case"] = t.Case, ["ratio"] = double.IsFinite(t.Ratio) ? t.Ratio : null, ["type"] = t.Type,
-                ["Ax"] = double.IsFinite(t.Ax) ? t.Ax : null, ["withAccidentalTorsion"] = t.WithAccidental,
-            })),
-        };
-        if (PlanDiaphragmFiles.Json(r, tributary) is { } floors) root["floors"] = floors;
-        if (r.Plan.Points.Count > 0)   // the user's named points: per case and level, displacement and drift
-            root["points"] = new JArray(r.Plan.Points.Select(q => new JObject
-            {
-                ["id"] = q.Id, ["at"] = new JArray((JToken)L(q.At.X), (JToken)L(q.At.Y)),
-                ["cases"] = new JArray(r.Cases.Select(c => new JObject
-                {
-                    ["case"] = c.Case.Id,
-                    ["levels"] = new JArray(c.Points.Where(m => m.Point == q.Id).Select(m => new JObject
-                    {
-                        ["level"] = r.Plan.Levels[m.Level].Id, ["ux"] = L(m.Ux), ["uy"] = L(m.Uy), ["driftX"] = L(m.DriftX), ["driftY"] = L(m.DriftY),
-                    })),
-                })),
-            }));
-        return root.ToString(Formatting.Indented) + "\n";
+            Warnings: r.Plan.Warnings.Select(x => new PlanWarning(Path.GetFileName(x.File), x.Line, x.Column, x.JsonPath, x.Problem, x.Fix)),
+            Levels: r.Plan.Levels.Select(l => new PlanJsonLevel(l.Id, L(l.Elevation), Fo(l.Weight), [L(l.CentreOfMass.X), L(l.CentreOfMass.Y)])),
+            Lines: r.Lines.Select(l => new PlanJsonLine(l.Line.Id, l.Line.Form.ToString(), [L(l.Line.X0), L(l.Line.Y0)], l.Line.DirectionLabel,
+                l.CondensationBackwardError, l.SymmetryError, l.RecoveryError)),
+            Cases: r.Cases.Select(c => new PlanJsonCase(c.Case.Id, c.Case.Description, c.BackwardError, c.Equilibrium.RelativeError,
+                c.Motion.Select(m => new PlanJsonFloor(r.Plan.Levels[m.Level].Id, L(m.Ux), L(m.Uy), m.Rz)),
+                c.LineStories.Select(s => new PlanJsonLineStory(s.Story, s.Line, Fo(s.Shear), N(s.Share), Fo(s.Direct), Fo(s.Torsional))))),
+            Rigidity: r.Rigidity.Select(g => new PlanJsonRigidity(g.Direction, g.Story, L(g.XR), L(g.YR))),
+            TorsionalIrregularity: r.Irregularity.Select(t => new PlanJsonTorsion(t.Direction, t.Story, t.Case, N(t.Ratio), t.Type, N(t.Ax), t.WithAccidental)),
+            Floors: PlanDiaphragmFiles.Json(r, tributary),
+            // The user's named points: per case and level, displacement and drift.
+            Points: r.Plan.Points.Count == 0 ? null : r.Plan.Points.Select(q => new PlanJsonPoint(q.Id, [L(q.At.X), L(q.At.Y)],
+                r.Cases.Select(c => new PlanJsonPointCase(c.Case.Id, c.Points.Where(m => m.Point == q.Id).Select(m =>
+                    new PlanJsonPointLevel(r.Plan.Levels[m.Level].Id, L(m.Ux), L(m.Uy), L(m.DriftX), L(m.DriftY))))))));
     }
 }

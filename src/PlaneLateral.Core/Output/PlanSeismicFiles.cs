@@ -1,7 +1,5 @@
 using System.Globalization;
 using System.Text;
-using Newtonsoft.Json;
-using Newtonsoft.Json.Linq;
 using PlaneLateral.Analysis;
 using PlaneLateral.Model;
 using PlaneLateral.Units;
@@ -34,7 +32,7 @@ public static class PlanSeismicFiles
             files.Add(("plan-spectrum-line-members.csv", SpectrumLineMembers(r, sp)));
             files.Add(("plan-spectrum-line-reactions.csv", SpectrumLineReactions(r, sp)));
         }
-        files.Add(("plan-seismic.json", Json(r, s)));
+        files.Add(("plan-seismic.json", TypedJson.Write(Document(r, s))));
         return files;
     }
 
@@ -171,57 +169,32 @@ public static class PlanSeismicFiles
         return sb.ToString();
     }
 
-    private static string Json(PlanResult r, PlanSeismicResult s)
+    /// <summary>plan-seismic.json as a typed document.</summary>
+    public static PlanSeismicDocument Document(PlanResult r, PlanSeismicResult s)
     {
         var u = r.Plan.Units;
         double L(double v) => u.FromSI(v, Quantity.Length);
         double Fo(double v) => u.FromSI(v, Quantity.Force);
-        var root = new JObject
-        {
-            ["program"] = $"PlaneLateral {ResultFiles.Version}",
-            ["caution"] = ResultFiles.Caution,
-            ["source"] = Source,
-            ["units"] = new JObject { ["force"] = u.ForceSymbol, ["length"] = u.LengthSymbol },
-            ["modes"] = new JArray(s.Modal.Modes.Select(m => new JObject
-            {
-                ["mode"] = m.Number, ["period"] = m.Period, ["dominant"] = m.Dominant,
-                ["share"] = new JArray(m.Share), ["cumulative"] = new JArray(m.Cumulative), ["gamma"] = new JArray(m.Participation[0], m.Participation[1]),
-            })),
-            ["rotationPivot"] = new JArray(L(s.Modal.Pivot.X), L(s.Modal.Pivot.Y)),
-            ["equivalentLateralForces"] = new JArray(s.Elf.Select(e => new JObject
-            {
-                ["direction"] = e.Direction, ["mode"] = e.Mode, ["modalPeriod"] = e.ModalPeriod, ["Ta"] = e.Ta, ["Cu"] = e.Cu, ["periodUsed"] = e.PeriodUsed,
-                ["periodNote"] = e.PeriodNote, ["Cs"] = e.Cs, ["CsGovernedBy"] = e.CsNote, ["W"] = Fo(e.Weight), ["V"] = Fo(e.BaseShear), ["k"] = e.Exponent,
-                ["forces"] = new JArray(e.LevelForces.Select(Fo)), ["cases"] = new JArray(e.Cases),
-            })),
-            ["amplification"] = new JArray(s.Amplification.Select(a => new JObject { ["direction"] = a.Direction, ["level"] = r.Plan.Levels[a.Level].Id, ["Ax"] = a.Ax, ["applied"] = a.Applied })),
-        };
-        if (s.Spectrum is { } sp)
-            root["responseSpectrum"] = new JObject
-            {
-                ["spectrum"] = sp.Spectrum.Describe(), ["combination"] = sp.Settings.Rule.ToString().ToUpperInvariant(), ["damping"] = sp.Settings.Damping,
-                ["R"] = sp.R, ["Ie"] = sp.Ie, ["Cd"] = sp.Settings.Cd,
-                ["accidentalTorsion"] = sp.TorsionMethod, ["combinedValues"] = SpectrumFiles.CombinedNote,
-                ["directions"] = new JArray(sp.Directions.Select(d => new JObject
-                {
-                    ["direction"] = d.Direction, ["modes"] = d.ModesUsed, ["massShare"] = d.CumulativeShare,
-                    ["Vt"] = Fo(d.Scaling.BaseShearModal), ["V"] = Fo(d.Scaling.BaseShearElf), ["forceFactor"] = d.Scaling.ForceFactor, ["driftFactor"] = d.Scaling.DriftFactor,
-                    ["scaling"] = d.Scaling.Why, ["modalEquilibriumError"] = d.EquilibriumError,
-                    ["analyses"] = new JArray(d.Variants.Select(v => new JObject
-                    {
-                        ["label"] = v.Label, ["massShift"] = L(v.Shift), ["modes"] = v.ModesUsed, ["Vt"] = Fo(v.Scaling.BaseShearModal), ["forceFactor"] = v.Scaling.ForceFactor,
-                        ["driftFactor"] = v.Scaling.DriftFactor, ["floorRotation"] = new JArray(v.FloorRotation),
-                    })),
-                    ["stories"] = new JArray(d.Stories.Select(st => new JObject
-                    {
-                        ["story"] = st.Story, ["elfShear"] = Fo(st.ElfShear), ["modalShear"] = Fo(st.ModalShear), ["scaledShear"] = Fo(st.ScaledShear),
-                        ["corner"] = st.Corner + 1, ["drift"] = L(st.Drift), ["designDrift"] = L(st.DesignDrift), ["ratio"] = st.Ratio,
-                        ["allowedRatio"] = r.Plan.DriftLimit is { } lim ? lim.AllowedRatio : null,
-                        ["within"] = r.Plan.DriftLimit is { } lim2 ? st.Ratio <= lim2.AllowedRatio : null,
-                        ["Px"] = Fo(st.Px), ["theta"] = st.Theta, ["thetaElf"] = st.ThetaElf, ["thetaMax"] = st.ThetaMax,
-                    })),
-                })),
-            };
-        return root.ToString(Formatting.Indented) + "\n";
+        var limit = r.Plan.DriftLimit;
+        return new PlanSeismicDocument(
+            Program: $"PlaneLateral {ResultFiles.Version}",
+            Caution: ResultFiles.Caution,
+            Source: Source,
+            Units: new PlanUnits(u.ForceSymbol, u.LengthSymbol),
+            Modes: s.Modal.Modes.Select(m => new PlanSeismicMode(m.Number, m.Period, m.Dominant, m.Share, m.Cumulative, [m.Participation[0], m.Participation[1]])),
+            RotationPivot: [L(s.Modal.Pivot.X), L(s.Modal.Pivot.Y)],
+            EquivalentLateralForces: s.Elf.Select(e => new PlanSeismicElf(e.Direction, e.Mode, e.ModalPeriod, e.Ta, e.Cu, e.PeriodUsed, e.PeriodNote,
+                e.Cs, e.CsNote, Fo(e.Weight), Fo(e.BaseShear), e.Exponent, e.LevelForces.Select(Fo), e.Cases)),
+            Amplification: s.Amplification.Select(a => new PlanSeismicAmplification(a.Direction, r.Plan.Levels[a.Level].Id, a.Ax, a.Applied)),
+            ResponseSpectrum: s.Spectrum is not { } sp ? null : new PlanSeismicSpectrum(
+                sp.Spectrum.Describe(), sp.Settings.Rule.ToString().ToUpperInvariant(), sp.Settings.Damping, sp.R, sp.Ie, sp.Settings.Cd,
+                sp.TorsionMethod, SpectrumFiles.CombinedNote,
+                sp.Directions.Select(d => new PlanSeismicSpectrumDirection(d.Direction, d.ModesUsed, d.CumulativeShare,
+                    Fo(d.Scaling.BaseShearModal), Fo(d.Scaling.BaseShearElf), d.Scaling.ForceFactor, d.Scaling.DriftFactor, d.Scaling.Why, d.EquilibriumError,
+                    d.Variants.Select(v => new PlanSeismicSpectrumAnalysis(v.Label, L(v.Shift), v.ModesUsed, Fo(v.Scaling.BaseShearModal),
+                        v.Scaling.ForceFactor, v.Scaling.DriftFactor, v.FloorRotation)),
+                    d.Stories.Select(st => new PlanSeismicSpectrumStory(st.Story, Fo(st.ElfShear), Fo(st.ModalShear), Fo(st.ScaledShear),
+                        st.Corner + 1, L(st.Drift), L(st.DesignDrift), st.Ratio, limit?.AllowedRatio, limit is null ? null : st.Ratio <= limit.AllowedRatio,
+                        Fo(st.Px), st.Theta, st.ThetaElf, st.ThetaMax))))));
     }
 }

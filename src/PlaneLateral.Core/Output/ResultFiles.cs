@@ -22,62 +22,79 @@ public static class ResultFiles
     public static string Version =>
         typeof(ResultFiles).Assembly.GetCustomAttribute<AssemblyInformationalVersionAttribute>()?.InformationalVersion.Split('+')[0] ?? "0.0.0";
 
-    /// <summary>File name → text of every results file of a run (it only reads the run's results).</summary>
-    public static IReadOnlyList<(string Name, string Text)> Render(ModelResult run) =>
+    /// <summary>Every results file of a run (it only reads the run's results). results.json and the tables that grow
+    /// with nodes, members and cases (displacements, reactions, member forces) are streamed into their files as they
+    /// are written, never built as one string.</summary>
+    public static IReadOnlyList<OutputFile> Files(ModelResult run) =>
     [
         .. Static(run.Analysis),
-        .. BuildingFiles.Render(run),
-        .. PanelResultFiles.Render(run.Analysis),
-        .. PanelLinkFiles.Render(run.Analysis),
-        .. SeismicFiles.Render(run),
+        .. Texts(BuildingFiles.Render(run)),
+        .. Texts(PanelResultFiles.Render(run.Analysis)),
+        .. Texts(PanelLinkFiles.Render(run.Analysis)),
+        .. Texts(SeismicFiles.Render(run)),
     ];
 
     /// <summary>The files of the static results alone (no building or seismic files): JSON, displacements, reactions, member forces, checks, stiffness, panels.</summary>
-    public static IReadOnlyList<(string Name, string Text)> Planar(AnalysisResult result) =>
+    public static IReadOnlyList<OutputFile> PlanarFiles(AnalysisResult result) =>
     [
         .. Static(result),
-        .. PanelResultFiles.Render(result),
-        .. PanelLinkFiles.Render(result),
+        .. Texts(PanelResultFiles.Render(result)),
+        .. Texts(PanelLinkFiles.Render(result)),
     ];
 
-    private static IReadOnlyList<(string Name, string Text)> Static(AnalysisResult result) =>
+    /// <summary>File name → text of every results file of a run, built in memory (tests, small models; the command
+    /// line writes <see cref="Files"/>).</summary>
+    public static IReadOnlyList<(string Name, string Text)> Render(ModelResult run) => InMemory(Files(run));
+
+    /// <summary>File name → text of the files of <see cref="PlanarFiles"/>, built in memory.</summary>
+    public static IReadOnlyList<(string Name, string Text)> Planar(AnalysisResult result) => InMemory(PlanarFiles(result));
+
+    private static IEnumerable<OutputFile> Texts(IEnumerable<(string Name, string Text)> files) => files.Select(f => OutputFile.Text(f.Name, f.Text));
+
+    private static (string Name, string Text)[] InMemory(IEnumerable<OutputFile> files) => files.Select(f => (f.Name, f.ToText())).ToArray();
+
+    private static IReadOnlyList<OutputFile> Static(AnalysisResult result) =>
     [
-        ("results.json", Json(result)),
-        ("displacements.csv", Displacements(result)),
-        ("reactions.csv", Reactions(result)),
-        ("member-forces.csv", MemberForces(result)),
-        ("checks.csv", Checks(result)),
-        ("stiffness.csv", Stiffness(result)),
+        TypedJson.File("results.json", Document(result)),
+        OutputFile.Streamed("displacements.csv", DisplacementTable(result).WriteCsv),
+        OutputFile.Streamed("reactions.csv", ReactionTable(result).WriteCsv),
+        OutputFile.Streamed("member-forces.csv", MemberForceTable(result).WriteCsv),
+        OutputFile.Text("checks.csv", Checks(result)),
+        OutputFile.Text("stiffness.csv", Stiffness(result)),
     ];
 
     private static string F(double v) => v.ToString("G12", CultureInfo.InvariantCulture);
 
     private static string Csv(string s) => PlaneLateral.Output.CsvText.Cell(s);   // the one escaper (quoting, formula neutralising)
 
-    private static string Displacements(AnalysisResult r)
+    /// <summary>Every node's displacements in every case and combination: rows produced as they are read.</summary>
+    public static ResultTable DisplacementTable(AnalysisResult r)
     {
         var u = r.Model.Units;
-        var sb = new StringBuilder($"case,node,ux [{u.LengthSymbol}],uy [{u.LengthSymbol}],rz [rad]\n");
-        foreach (var c in r.Cases)
-            foreach (var n in r.Model.Nodes)
-                sb.Append($"{Csv(c.Id)},{Csv(n.Id)},{F(u.FromSI(c.Displacement(n.Index, Dof.X), Quantity.Length))},{F(u.FromSI(c.Displacement(n.Index, Dof.Y), Quantity.Length))},{F(c.Displacement(n.Index, Dof.RZ))}\n");
-        return sb.ToString();
+        return new ResultTable
+        {
+            Title = "Displacements",
+            Columns = [new("case", Kind: CellKind.Text), new("node", Kind: CellKind.Text), new("ux", u.LengthSymbol), new("uy", u.LengthSymbol), new("rz", "rad")],
+            Rows = r.Cases.SelectMany(c => r.Model.Nodes.Select(n => (IReadOnlyList<object>)
+                [c.Id, n.Id, u.FromSI(c.Displacement(n.Index, Dof.X), Quantity.Length), u.FromSI(c.Displacement(n.Index, Dof.Y), Quantity.Length), c.Displacement(n.Index, Dof.RZ)])),
+        };
     }
 
-    private static string Reactions(AnalysisResult r)
+    /// <summary>Every support's reaction, then each wall panel's held base (the resultant of its base reactions, Mz
+    /// about the middle of its base: docs/panels.md), in every case and combination: rows produced as they are read.</summary>
+    public static ResultTable ReactionTable(AnalysisResult r)
     {
         var u = r.Model.Units;
-        var sb = new StringBuilder($"case,node,Fx [{u.ForceSymbol}],Fy [{u.ForceSymbol}],Mz [{u.Label(Quantity.Moment)}]\n");
-        for (int ci = 0; ci < r.Cases.Count; ci++)
+        IReadOnlyList<object> Row(string caseId, string node, double fx, double fy, double mz) =>
+            [caseId, node, u.FromSI(fx, Quantity.Force), u.FromSI(fy, Quantity.Force), u.FromSI(mz, Quantity.Moment)];
+        return new ResultTable
         {
-            var c = r.Cases[ci];
-            foreach (var re in c.Reactions)
-                sb.Append($"{Csv(c.Id)},{Csv(r.Model.Nodes[re.Node].Id)},{F(u.FromSI(re.Fx, Quantity.Force))},{F(u.FromSI(re.Fy, Quantity.Force))},{F(u.FromSI(re.Mz, Quantity.Moment))}\n");
-            // Each wall panel's held base: the resultant of its base reactions, Mz about the middle of its base (docs/panels.md).
-            foreach (var (_, name, fx, fy, mz) in PanelBases(r, ci))
-                sb.Append($"{Csv(c.Id)},{Csv(name)},{F(u.FromSI(fx, Quantity.Force))},{F(u.FromSI(fy, Quantity.Force))},{F(u.FromSI(mz, Quantity.Moment))}\n");
-        }
-        return sb.ToString();
+            Title = "Reactions",
+            Columns = [new("case", Kind: CellKind.Text), new("node", Kind: CellKind.Text), new("Fx", u.ForceSymbol), new("Fy", u.ForceSymbol), new("Mz", u.Label(Quantity.Moment))],
+            Rows = r.Cases.SelectMany((c, ci) =>
+                c.Reactions.Select(re => Row(c.Id, r.Model.Nodes[re.Node].Id, re.Fx, re.Fy, re.Mz))
+                    .Concat(PanelBases(r, ci).Select(p => Row(c.Id, p.Name, p.Fx, p.Fy, p.Mz)))),
+        };
     }
 
     /// <summary>The label and base-reaction resultant (N, N, N·m about the middle of the base) of every wall panel in a case.</summary>
@@ -94,15 +111,23 @@ public static class ResultFiles
     /// <summary>The name a panel's base goes by in reactions.csv: "&lt;panel id&gt; (panel base)".</summary>
     public static string PanelBaseLabel(WallPanel p) => $"{p.Id} (panel base)";
 
-    private static string MemberForces(AnalysisResult r)
+    /// <summary>Every member's end forces (local axes) in every case and combination: rows produced as they are read.</summary>
+    public static ResultTable MemberForceTable(AnalysisResult r)
     {
         var u = r.Model.Units;
         string fu = u.ForceSymbol, mu = u.Label(Quantity.Moment);
-        var sb = new StringBuilder($"case,member,N1 [{fu}],V1 [{fu}],M1 [{mu}],N2 [{fu}],V2 [{fu}],M2 [{mu}]\n");
-        foreach (var c in r.Cases)
-            foreach (var m in c.MemberForces)
-                sb.Append($"{Csv(c.Id)},{Csv(r.Model.Members[m.Member].Id)},{F(u.FromSI(m.N1, Quantity.Force))},{F(u.FromSI(m.V1, Quantity.Force))},{F(u.FromSI(m.M1, Quantity.Moment))},{F(u.FromSI(m.N2, Quantity.Force))},{F(u.FromSI(m.V2, Quantity.Force))},{F(u.FromSI(m.M2, Quantity.Moment))}\n");
-        return sb.ToString();
+        return new ResultTable
+        {
+            Title = "Member end forces",
+            Columns =
+            [
+                new("case", Kind: CellKind.Text), new("member", Kind: CellKind.Text),
+                new("N1", fu), new("V1", fu), new("M1", mu), new("N2", fu), new("V2", fu), new("M2", mu),
+            ],
+            Rows = r.Cases.SelectMany(c => c.MemberForces.Select(m => (IReadOnlyList<object>)
+                [c.Id, r.Model.Members[m.Member].Id, u.FromSI(m.N1, Quantity.Force), u.FromSI(m.V1, Quantity.Force), u.FromSI(m.M1, Quantity.Moment),
+                 u.FromSI(m.N2, Quantity.Force), u.FromSI(m.V2, Quantity.Force), u.FromSI(m.M2, Quantity.Moment)])),
+        };
     }
 
     private static string Checks(AnalysisResult r)
@@ -127,158 +152,40 @@ public static class ResultFiles
         return sb.ToString();
     }
 
-    private static string Json(AnalysisResult r)
+    /// <summary>results.json as a typed document whose per-case arrays are produced while the file is written.</summary>
+    public static ResultsDocument Document(AnalysisResult r)
     {
         var u = r.Model.Units;
-        var sw = new StringWriter(CultureInfo.InvariantCulture) { NewLine = "\n" };
-        using (var w = new JsonTextWriter(sw) { Formatting = Formatting.Indented, Indentation = 2, FloatFormatHandling = FloatFormatHandling.String })
-        {
-            w.WriteStartObject();
-            w.WritePropertyName("producedBy"); w.WriteValue($"PlaneLateral {Version}");
-            w.WritePropertyName("caution"); w.WriteValue(Caution);
-            w.WritePropertyName("model");
-            w.WriteStartObject();
-            w.WritePropertyName("title"); w.WriteValue(r.Model.Title);
-            w.WritePropertyName("file"); w.WriteValue(Path.GetFileName(r.Model.SourcePath));
-            w.WritePropertyName("nodes"); w.WriteValue(r.Model.Nodes.Count);
-            w.WritePropertyName("members"); w.WriteValue(r.Model.Members.Count);
-            w.WriteEndObject();
-            w.WritePropertyName("units");
-            w.WriteStartObject();
-            w.WritePropertyName("length"); w.WriteValue(u.LengthSymbol);
-            w.WritePropertyName("force"); w.WriteValue(u.ForceSymbol);
-            w.WritePropertyName("moment"); w.WriteValue(u.Label(Quantity.Moment));
-            w.WritePropertyName("rotation"); w.WriteValue("rad");
-            w.WritePropertyName("stiffness"); w.WriteValue(u.Label(Quantity.TranslationalStiffness));
-            w.WriteEndObject();
-            w.WritePropertyName("solver");
-            w.WriteStartObject();
-            w.WritePropertyName("method"); w.WriteValue(MachineFree.Solver(r.Solve.Solver));
-            w.WritePropertyName("unknowns"); w.WriteValue(r.Solve.Unknowns);
-            w.WritePropertyName("matrixNonZerosLower"); w.WriteValue(r.Solve.MatrixNonZerosLower);
-            w.WritePropertyName("factorNonZeros"); w.WriteValue(r.Solve.FactorNonZeros);
-            w.WritePropertyName("rightHandSides"); w.WriteValue(r.Solve.RightHandSides);
-            w.WriteEndObject();
-            if (r.Conditioning is { } cond)
-            {
-                w.WritePropertyName("conditioning");
-                w.WriteStartObject();
-                w.WritePropertyName("method"); w.WriteValue("1-norm condition estimate from solves with the factor (Hager; Higham 2002, Alg. 15.4); a lower bound, usually within a factor 3");
-                w.WritePropertyName("kappa1"); w.WriteValue(cond.Kappa1);
-                w.WritePropertyName("kappa1Scaled"); w.WriteValue(cond.ScaledKappa1);
-                w.WritePropertyName("scaling"); w.WriteValue("kappa1 is of K in SI units (N, m, rad); kappa1Scaled of D^-1/2 K D^-1/2 with D = diag K, free of units");
-                w.WritePropertyName("warningThreshold"); w.WriteValue(cond.Threshold);
-                w.WritePropertyName("illConditioned"); w.WriteValue(cond.IllConditioned);
-                w.WritePropertyName("likelyCause"); w.WriteValue(cond.LikelyCause);
-                w.WriteEndObject();
-            }
-            w.WritePropertyName("notes");
-            w.WriteStartArray(); foreach (var n in r.Notes) w.WriteValue(n); w.WriteEndArray();
-            w.WritePropertyName("warnings");   // plausibility of the input (Model/Plausibility.cs); they do not change any number
-            w.WriteStartArray();
-            foreach (var x in r.Model.Warnings)
-            {
-                w.WriteStartObject();
-                w.WritePropertyName("line"); w.WriteValue(x.Line); w.WritePropertyName("column"); w.WriteValue(x.Column);
-                w.WritePropertyName("path"); w.WriteValue(x.JsonPath); w.WritePropertyName("problem"); w.WriteValue(x.Problem); w.WritePropertyName("fix"); w.WriteValue(x.Fix);
-                w.WriteEndObject();
-            }
-            w.WriteEndArray();
-            w.WritePropertyName("signConvention"); w.WriteValue("Global X right, Y up, rotations counter-clockwise. Member end forces act on the member's flexible segment at its end faces, in local axes (x from start to end node, y 90° counter-clockwise): N, V positive along local x, y; M counter-clockwise. Axial force, tension positive, is N2.");
-
-            w.WritePropertyName("stiffness");
-            w.WriteStartArray();
-            foreach (var s in r.Stiffness)
-            {
-                w.WriteStartObject();
-                w.WritePropertyName("label"); w.WriteValue(s.Point.Label);
-                w.WritePropertyName("node"); w.WriteValue(r.Model.Nodes[s.Point.Node].Id);
-                w.WritePropertyName("direction"); w.WriteValue(DofNames.Name(s.Point.Direction)[1..]);
-                w.WritePropertyName("stiffness"); w.WriteValue(u.FromSI(s.Stiffness, Quantity.TranslationalStiffness));
-                w.WritePropertyName("definition"); w.WriteValue("force per unit displacement at this node and direction when a single force acts there and every other load is absent");
-                w.WriteEndObject();
-            }
-            w.WriteEndArray();
-
-            w.WritePropertyName("cases");
-            w.WriteStartArray();
-            foreach (var c in r.Cases)
-            {
-                w.WriteStartObject();
-                w.WritePropertyName("id"); w.WriteValue(c.Id);
-                w.WritePropertyName("kind"); w.WriteValue(c.IsCombination ? "combination" : "load case");
-                w.WritePropertyName("description"); w.WriteValue(c.Description);
-                w.WritePropertyName("checks");
-                w.WriteStartObject();
-                w.WritePropertyName("relativeResidual"); w.WriteValue(c.RelativeResidual);
-                w.WritePropertyName("backwardError"); w.WriteValue(c.BackwardError);
-                w.WritePropertyName("relativeForceImbalance"); w.WriteValue(c.Equilibrium.RelativeForceError);
-                w.WritePropertyName("relativeMomentImbalance"); w.WriteValue(c.Equilibrium.RelativeMomentError);
-                w.WritePropertyName("appliedFx"); w.WriteValue(u.FromSI(c.Equilibrium.AppliedFx, Quantity.Force));
-                w.WritePropertyName("appliedFy"); w.WriteValue(u.FromSI(c.Equilibrium.AppliedFy, Quantity.Force));
-                w.WritePropertyName("reactionFx"); w.WriteValue(u.FromSI(c.Equilibrium.ReactionFx, Quantity.Force));
-                w.WritePropertyName("reactionFy"); w.WriteValue(u.FromSI(c.Equilibrium.ReactionFy, Quantity.Force));
-                w.WriteEndObject();
-                w.WritePropertyName("displacements");
-                w.WriteStartArray();
-                foreach (var n in r.Model.Nodes)
-                {
-                    w.WriteStartObject();
-                    w.WritePropertyName("node"); w.WriteValue(n.Id);
-                    w.WritePropertyName("ux"); w.WriteValue(u.FromSI(c.Displacement(n.Index, Dof.X), Quantity.Length));
-                    w.WritePropertyName("uy"); w.WriteValue(u.FromSI(c.Displacement(n.Index, Dof.Y), Quantity.Length));
-                    w.WritePropertyName("rz"); w.WriteValue(c.Displacement(n.Index, Dof.RZ));
-                    w.WriteEndObject();
-                }
-                w.WriteEndArray();
-                w.WritePropertyName("reactions");
-                w.WriteStartArray();
-                foreach (var re in c.Reactions)
-                {
-                    w.WriteStartObject();
-                    w.WritePropertyName("node"); w.WriteValue(r.Model.Nodes[re.Node].Id);
-                    w.WritePropertyName("Fx"); w.WriteValue(u.FromSI(re.Fx, Quantity.Force));
-                    w.WritePropertyName("Fy"); w.WriteValue(u.FromSI(re.Fy, Quantity.Force));
-                    w.WritePropertyName("Mz"); w.WriteValue(u.FromSI(re.Mz, Quantity.Moment));
-                    w.WriteEndObject();
-                }
-                w.WriteEndArray();
-                if (r.Panels.Count > 0)
-                {
-                    // Each wall panel's held base: the resultant of its base reactions, Mz about the middle of its base.
-                    w.WritePropertyName("panelBaseReactions");
-                    w.WriteStartArray();
-                    foreach (var (p, _, fx, fy, mz) in PanelBases(r, r.Cases.ToList().IndexOf(c)))
-                    {
-                        w.WriteStartObject();
-                        w.WritePropertyName("panel"); w.WriteValue(p.Id);
-                        w.WritePropertyName("Fx"); w.WriteValue(u.FromSI(fx, Quantity.Force));
-                        w.WritePropertyName("Fy"); w.WriteValue(u.FromSI(fy, Quantity.Force));
-                        w.WritePropertyName("Mz"); w.WriteValue(u.FromSI(mz, Quantity.Moment));
-                        w.WritePropertyName("momentAboutX"); w.WriteValue(u.FromSI(p.X0 + 0.5 * p.Length, Quantity.Length));
-                        w.WritePropertyName("momentAboutY"); w.WriteValue(u.FromSI(p.Y0, Quantity.Length));
-                        w.WriteEndObject();
-                    }
-                    w.WriteEndArray();
-                }
-                w.WritePropertyName("memberForces");
-                w.WriteStartArray();
-                foreach (var m in c.MemberForces)
-                {
-                    w.WriteStartObject();
-                    w.WritePropertyName("member"); w.WriteValue(r.Model.Members[m.Member].Id);
-                    foreach (var (name, v, q) in new[] { ("N1", m.N1, Quantity.Force), ("V1", m.V1, Quantity.Force), ("M1", m.M1, Quantity.Moment), ("N2", m.N2, Quantity.Force), ("V2", m.V2, Quantity.Force), ("M2", m.M2, Quantity.Moment) })
-                    {
-                        w.WritePropertyName(name); w.WriteValue(u.FromSI(v, q));
-                    }
-                    w.WriteEndObject();
-                }
-                w.WriteEndArray();
-                w.WriteEndObject();
-            }
-            w.WriteEndArray();
-            w.WriteEndObject();
-        }
-        return sw.ToString() + "\n";
+        var cond = r.Conditioning;
+        return new ResultsDocument(
+            ProducedBy: $"PlaneLateral {Version}",
+            Caution: Caution,
+            Model: new ResultsModel(r.Model.Title, Path.GetFileName(r.Model.SourcePath), r.Model.Nodes.Count, r.Model.Members.Count),
+            Units: new ResultsUnits(u.LengthSymbol, u.ForceSymbol, u.Label(Quantity.Moment), "rad", u.Label(Quantity.TranslationalStiffness)),
+            Solver: new ResultsSolver(MachineFree.Solver(r.Solve.Solver), r.Solve.Unknowns, r.Solve.MatrixNonZerosLower, r.Solve.FactorNonZeros, r.Solve.RightHandSides),
+            Conditioning: cond is null ? null : new ResultsConditioning(
+                "1-norm condition estimate from solves with the factor (Hager; Higham 2002, Alg. 15.4); a lower bound, usually within a factor 3",
+                cond.Kappa1, cond.ScaledKappa1,
+                "kappa1 is of K in SI units (N, m, rad); kappa1Scaled of D^-1/2 K D^-1/2 with D = diag K, free of units",
+                cond.Threshold, cond.IllConditioned, cond.LikelyCause),
+            Notes: r.Notes,
+            // Plausibility of the input (Model/Plausibility.cs); they do not change any number.
+            Warnings: r.Model.Warnings.Select(x => new ResultsWarning(x.Line, x.Column, x.JsonPath, x.Problem, x.Fix)),
+            SignConvention: "Global X right, Y up, rotations counter-clockwise. Member end forces act on the member's flexible segment at its end faces, in local axes (x from start to end node, y 90° counter-clockwise): N, V positive along local x, y; M counter-clockwise. Axial force, tension positive, is N2.",
+            Stiffness: r.Stiffness.Select(s => new ResultsStiffness(s.Point.Label, r.Model.Nodes[s.Point.Node].Id, DofNames.Name(s.Point.Direction)[1..],
+                u.FromSI(s.Stiffness, Quantity.TranslationalStiffness),
+                "force per unit displacement at this node and direction when a single force acts there and every other load is absent")),
+            Cases: r.Cases.Select((c, ci) => new ResultsCase(
+                c.Id, c.IsCombination ? "combination" : "load case", c.Description,
+                new ResultsCaseChecks(c.RelativeResidual, c.BackwardError, c.Equilibrium.RelativeForceError, c.Equilibrium.RelativeMomentError,
+                    u.FromSI(c.Equilibrium.AppliedFx, Quantity.Force), u.FromSI(c.Equilibrium.AppliedFy, Quantity.Force),
+                    u.FromSI(c.Equilibrium.ReactionFx, Quantity.Force), u.FromSI(c.Equilibrium.ReactionFy, Quantity.Force)),
+                r.Model.Nodes.Select(n => new ResultsDisplacement(n.Id, u.FromSI(c.Displacement(n.Index, Dof.X), Quantity.Length),
+                    u.FromSI(c.Displacement(n.Index, Dof.Y), Quantity.Length), c.Displacement(n.Index, Dof.RZ))),
+                c.Reactions.Select(re => new ResultsReaction(r.Model.Nodes[re.Node].Id, u.FromSI(re.Fx, Quantity.Force), u.FromSI(re.Fy, Quantity.Force), u.FromSI(re.Mz, Quantity.Moment))),
+                r.Panels.Count == 0 ? null : PanelBases(r, ci).Select(p => new ResultsPanelBase(p.Panel.Id, u.FromSI(p.Fx, Quantity.Force), u.FromSI(p.Fy, Quantity.Force),
+                    u.FromSI(p.Mz, Quantity.Moment), u.FromSI(p.Panel.X0 + 0.5 * p.Panel.Length, Quantity.Length), u.FromSI(p.Panel.Y0, Quantity.Length))),
+                c.MemberForces.Select(m => new ResultsMemberForces(r.Model.Members[m.Member].Id, u.FromSI(m.N1, Quantity.Force), u.FromSI(m.V1, Quantity.Force),
+                    u.FromSI(m.M1, Quantity.Moment), u.FromSI(m.N2, Quantity.Force), u.FromSI(m.V2, Quantity.Force), u.FromSI(m.M2, Quantity.Moment))))));
     }
 }

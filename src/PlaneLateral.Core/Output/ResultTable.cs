@@ -1,5 +1,4 @@
 using System.Globalization;
-using System.Text;
 using PlaneLateral.Analysis;
 using PlaneLateral.Units;
 
@@ -18,13 +17,16 @@ public sealed record TableColumn(string Name, string Unit = "", CellKind Kind = 
 /// <summary>
 /// A results table built once (title, columns with units, rows, notes) and rendered to each output: CSV here (one header
 /// row, numbers to 12 significant figures, culture-invariant, text through the one escaper), the console by the command
-/// line's table printer. Cells are text (string) or numbers (double, in the table's units).
+/// line's table printer. Cells are text (string) or numbers (double, in the table's units). The rows may be produced as
+/// they are read (a large results table: <see cref="WriteCsv"/> streams them into a file row by row, never holding the
+/// table or its text whole).
 /// </summary>
 public sealed class ResultTable
 {
     public required string Title { get; init; }
     public required IReadOnlyList<TableColumn> Columns { get; init; }
-    public required IReadOnlyList<IReadOnlyList<object>> Rows { get; init; }
+    /// <summary>The rows, in order; a table of computed rows enumerates them afresh each time it is read.</summary>
+    public required IEnumerable<IReadOnlyList<object>> Rows { get; init; }
     public IReadOnlyList<string> Notes { get; init; } = [];
 
     /// <summary>The index of the column named <paramref name="name"/>.</summary>
@@ -34,17 +36,33 @@ public sealed class ResultTable
         throw new ArgumentException($"the table \"{Title}\" has no column \"{name}\"", nameof(name));
     }
 
+    /// <summary>The table as CSV text (built in memory: see <see cref="WriteCsv"/> for a large table).</summary>
     public string ToCsv()
     {
-        var sb = new StringBuilder(string.Join(",", Columns.Select(c => c.Header))).Append('\n');
+        var sw = new StringWriter(CultureInfo.InvariantCulture) { NewLine = "\n" };
+        WriteCsv(sw);
+        return sw.ToString();
+    }
+
+    /// <summary>Writes the table as CSV into <paramref name="w"/>, one row at a time: the header row, then each row.</summary>
+    public void WriteCsv(TextWriter w)
+    {
+        w.Write(string.Join(",", Columns.Select(c => c.Header)));
+        w.Write('\n');
         foreach (var row in Rows)
-            sb.Append(string.Join(",", row.Select(cell => cell switch
+        {
+            for (int i = 0; i < row.Count; i++)
             {
-                double v => double.IsFinite(v) ? v.ToString("G12", CultureInfo.InvariantCulture) : "n/a",
-                int i => i.ToString(CultureInfo.InvariantCulture),
-                _ => CsvText.Cell(cell?.ToString() ?? ""),
-            }))).Append('\n');
-        return sb.ToString();
+                if (i > 0) w.Write(',');
+                w.Write(row[i] switch
+                {
+                    double v => double.IsFinite(v) ? v.ToString("G12", CultureInfo.InvariantCulture) : "n/a",
+                    int n => n.ToString(CultureInfo.InvariantCulture),
+                    var cell => CsvText.Cell(cell?.ToString() ?? ""),
+                });
+            }
+            w.Write('\n');
+        }
     }
 }
 

@@ -1,6 +1,5 @@
 using System.Globalization;
 using System.Text;
-using Newtonsoft.Json;
 using PlaneLateral.Analysis;
 using PlaneLateral.Model;
 using PlaneLateral.Units;
@@ -26,7 +25,7 @@ public static class SeismicFiles
         var files = new List<(string, string)> { ("periods.csv", Periods(r, sr)), ("period-estimates.csv", PeriodEstimates(sr)), ("story-forces.csv", StoryForcesCsv(r, sr)) };
         if (sr.Stability.Count > 0) files.Add(("second-order.csv", SecondOrder(r, sr)));
         if (sr.SecondOrderDriftChecks.Count > 0) files.Add(("second-order-drift-checks.csv", SecondOrderDriftChecks(r, sr)));
-        files.Add(("seismic.json", Json(r, sr)));
+        files.Add(("seismic.json", TypedJson.Write(Document(r, sr))));
         if (run.Spectrum is { } rs) files.AddRange(SpectrumFiles.Render(r, rs));
         return files;
     }
@@ -84,75 +83,37 @@ public static class SeismicFiles
         return sb.ToString();
     }
 
-    private static string Json(AnalysisResult r, SeismicResult sr)
+    /// <summary>A finite number, or null (a number the seismic step cannot give).</summary>
+    private static double? N(double v) => double.IsFinite(v) ? v : null;
+
+    /// <summary>seismic.json as a typed document.</summary>
+    public static SeismicDocument Document(AnalysisResult r, SeismicResult sr)
     {
         var m = r.Model;
         var s = m.Seismic!;
         var u = m.Units;
         var fo = sr.Forces;
-        double L(double v) => u.FromSI(v, Quantity.Length);
-        double Fc(double v) => u.FromSI(v, Quantity.Force);
-        var sw = new StringWriter(CultureInfo.InvariantCulture) { NewLine = "\n" };
-        using (var w = new JsonTextWriter(sw) { Formatting = Formatting.Indented, Indentation = 2 })
-        {
-            void P(string name, object? v) { w.WritePropertyName(name); if (v is double d && !double.IsFinite(d)) w.WriteNull(); else w.WriteValue(v); }
-            w.WriteStartObject();
-            P("producedBy", $"PlaneLateral {ResultFiles.Version}");
-            P("caution", ResultFiles.Caution);
-            P("source", Source);
-            P("units", $"length {u.LengthSymbol}, force {u.ForceSymbol}, period s");
-            P("loadCase", s.CaseId);
-            w.WritePropertyName("modes");
-            w.WriteStartArray();
-            foreach (var md in fo.Modes)
-            {
-                w.WriteStartObject();
-                P("mode", md.Number); P("period", md.Period); P("omega", md.Omega); P("massShare", md.MassShare);
-                w.WritePropertyName("levelShape"); w.WriteStartArray(); foreach (var v in md.LevelShape) w.WriteValue(v); w.WriteEndArray();
-                w.WriteEndObject();
-            }
-            w.WriteEndArray();
-            P("rayleighPeriod", fo.RayleighPeriod);
-            P("approximatePeriod", fo.Ta); P("Ct", fo.Ct); P("x", fo.X); P("structureRow", fo.TypeRow); P("hnFeet", fo.HeightFeet);
-            P("Cu", fo.Cu); P("periodUsed", fo.PeriodUsed); P("periodNote", fo.PeriodNote);
-            P("Cs", fo.Cs); P("CsGovernedBy", fo.CsNote); P("totalWeight", Fc(fo.TotalWeight)); P("baseShear", Fc(fo.BaseShear)); P("k", fo.Exponent);
-            w.WritePropertyName("storyForces");
-            w.WriteStartArray();
-            for (int i = 1; i < m.Building.Levels.Count; i++)
-            {
-                w.WriteStartObject();
-                P("level", m.Building.Levels[i].Id); P("Cvx", fo.Cvx[i]); P("Fx", Fc(fo.LevelForces[i])); P("storyShearBelow", Fc(sr.Stories.Stories[i - 1].Shear));
-                w.WriteEndObject();
-            }
-            w.WriteEndArray();
-            if (s.SecondOrder is { } so)
-            {
-                P("gravity", so.GravityCase); P("Cd", so.Cd); P("Ie", so.Ie); P("beta", so.Beta);
-                P("gravityFactorToBuckling", sr.CriticalLoadFactor);
-                w.WritePropertyName("stability");
-                w.WriteStartArray();
-                foreach (var x in sr.Stability)
-                {
-                    w.WriteStartObject();
-                    P("story", x.Story.Index); P("Px", Fc(x.Px)); P("Vx", Fc(x.Vx)); P("firstOrderDrift", L(x.ElasticDrift)); P("designDrift", L(x.DesignDrift));
-                    P("theta", x.Theta); P("thetaMax", x.ThetaMax); P("status", x.Status); P("secondOrderDrift", L(x.SecondOrderDrift));
-                    P("secondOverFirst", x.Ratio); P("oneOverOneMinusTheta", x.Estimate);
-                    w.WriteEndObject();
-                }
-                w.WriteEndArray();
-                w.WritePropertyName("secondOrderDriftChecks");
-                w.WriteStartArray();
-                foreach (var d in sr.SecondOrderDriftChecks)
-                {
-                    w.WriteStartObject();
-                    P("check", d.Check.Id); P("story", d.Story.Index); P("drift", L(d.ElasticDrift)); P("amplifiedDrift", L(d.AmplifiedDrift));
-                    P("ratio", d.Ratio); P("allowedRatio", d.Allowed); P("result", d.Passes ? "within" : "exceeds"); P("margin", d.Margin);
-                    w.WriteEndObject();
-                }
-                w.WriteEndArray();
-            }
-            w.WriteEndObject();
-        }
-        return sw.ToString() + "\n";
+        double? L(double v) => N(u.FromSI(v, Quantity.Length));
+        double? Fc(double v) => N(u.FromSI(v, Quantity.Force));
+        var so = s.SecondOrder;
+        return new SeismicDocument(
+            ProducedBy: $"PlaneLateral {ResultFiles.Version}",
+            Caution: ResultFiles.Caution,
+            Source: Source,
+            Units: $"length {u.LengthSymbol}, force {u.ForceSymbol}, period s",
+            LoadCase: s.CaseId,
+            Modes: fo.Modes.Select(md => new SeismicMode(md.Number, N(md.Period), N(md.Omega), N(md.MassShare), md.LevelShape)),
+            RayleighPeriod: N(fo.RayleighPeriod), ApproximatePeriod: N(fo.Ta), Ct: N(fo.Ct), X: N(fo.X), StructureRow: fo.TypeRow, HnFeet: N(fo.HeightFeet),
+            Cu: N(fo.Cu), PeriodUsed: N(fo.PeriodUsed), PeriodNote: fo.PeriodNote,
+            Cs: N(fo.Cs), CsGovernedBy: fo.CsNote, TotalWeight: Fc(fo.TotalWeight), BaseShear: Fc(fo.BaseShear), K: N(fo.Exponent),
+            StoryForces: Enumerable.Range(1, Math.Max(0, m.Building.Levels.Count - 1)).Select(i => new SeismicStoryForce(
+                m.Building.Levels[i].Id, N(fo.Cvx[i]), Fc(fo.LevelForces[i]), Fc(sr.Stories.Stories[i - 1].Shear))),
+            Gravity: so?.GravityCase, Cd: so is null ? null : N(so.Cd), Ie: so is null ? null : N(so.Ie), Beta: so is null ? null : N(so.Beta),
+            GravityFactorToBuckling: N(sr.CriticalLoadFactor),
+            Stability: sr.Stability.Select(x => new SeismicStability(x.Story.Index, Fc(x.Px), Fc(x.Vx), L(x.ElasticDrift), L(x.DesignDrift),
+                N(x.Theta), N(x.ThetaMax), x.Status, L(x.SecondOrderDrift), N(x.Ratio), N(x.Estimate))),
+            SecondOrderDriftChecks: sr.SecondOrderDriftChecks.Select(d => new SeismicSecondOrderDriftCheck(d.Check.Id, d.Story.Index,
+                L(d.ElasticDrift), L(d.AmplifiedDrift), N(d.Ratio), N(d.Allowed), d.Passes ? "within" : "exceeds", N(d.Margin))))
+        { HasSecondOrder = so is not null };
     }
 }

@@ -1,7 +1,5 @@
-using Newtonsoft.Json.Linq;
 using System.Globalization;
 using System.Text;
-using Newtonsoft.Json;
 using PlaneLateral.Analysis;
 using PlaneLateral.Units;
 
@@ -25,25 +23,19 @@ public static class SpectrumFiles
         var stories = new StringBuilder($"story,ELF shear [{fu}],modal shear [{fu}],scaled modal shear [{fu}],drift [{lu}],design drift Cd*drift/Ie [{lu}],height [{lu}],design drift ratio,difference of combined displacements (not the drift) [{lu}],displacement of the level above [{lu}],overturning moment (no sign) [{mu}],scaled overturning moment [{mu}],Px [{fu}],theta (modal),theta (ELF),theta max\n");
         foreach (var st in s.Stories)
             stories.Append($"{st.Story},{F(Fo(st.ElfShear))},{F(Fo(st.ModalShear))},{F(Fo(st.ScaledShear))},{F(L(st.Drift))},{F(L(st.DesignDrift))},{F(L(st.Height))},{F(st.Ratio)},{F(L(st.DriftFromCombinedDisplacements))},{F(L(st.Displacement))},{F(Mo(st.Overturning))},{F(Mo(s.Scaling.ForceFactor * st.Overturning))},{F(Fo(st.Px))},{F(st.Theta)},{F(st.ThetaElf)},{F(st.ThetaMax)}\n");
-        var json = new JObject
-        {
-            ["program"] = $"PlaneLateral {ResultFiles.Version}",
-            ["caution"] = ResultFiles.Caution,
-            ["source"] = PlanSeismicFiles.Source,
-            ["spectrum"] = s.Spectrum.Describe(), ["combination"] = s.Settings.Rule.ToString().ToUpperInvariant(), ["damping"] = s.Settings.Damping,
-            ["R"] = s.R, ["Ie"] = s.Ie, ["Cd"] = s.Settings.Cd, ["modes"] = s.ModesUsed, ["massShare"] = s.CumulativeShare,
-            ["Vt"] = Fo(s.Scaling.BaseShearModal), ["V"] = Fo(s.Scaling.BaseShearElf), ["forceFactor"] = s.Scaling.ForceFactor, ["driftFactor"] = s.Scaling.DriftFactor,
-            ["scaling"] = s.Scaling.Why,
-            ["stories"] = new JArray(s.Stories.Select(st => new JObject
-            {
-                ["story"] = st.Story, ["elfShear"] = Fo(st.ElfShear), ["modalShear"] = Fo(st.ModalShear), ["scaledShear"] = Fo(st.ScaledShear),
-                ["drift"] = L(st.Drift), ["designDrift"] = L(st.DesignDrift), ["ratio"] = st.Ratio,
-                ["overturning"] = Mo(st.Overturning), ["Px"] = Fo(st.Px), ["theta"] = Num(st.Theta), ["thetaElf"] = Num(st.ThetaElf), ["thetaMax"] = Num(st.ThetaMax),
-            })),
-            ["PxFrom"] = s.PxSource,
-            ["combinedValues"] = CombinedNote,
-        };
-        var files = new List<(string, string)> { ("response-spectrum-modes.csv", sb.ToString()), ("response-spectrum-stories.csv", stories.ToString()), ("response-spectrum.json", json.ToString(Formatting.Indented) + "\n") };
+        var json = new SpectrumDocument(
+            Program: $"PlaneLateral {ResultFiles.Version}",
+            Caution: ResultFiles.Caution,
+            Source: PlanSeismicFiles.Source,
+            Spectrum: s.Spectrum.Describe(), Combination: s.Settings.Rule.ToString().ToUpperInvariant(), Damping: s.Settings.Damping,
+            R: s.R, Ie: s.Ie, Cd: s.Settings.Cd, Modes: s.ModesUsed, MassShare: s.CumulativeShare,
+            Vt: Fo(s.Scaling.BaseShearModal), V: Fo(s.Scaling.BaseShearElf), ForceFactor: s.Scaling.ForceFactor, DriftFactor: s.Scaling.DriftFactor,
+            Scaling: s.Scaling.Why,
+            Stories: s.Stories.Select(st => new SpectrumStory(st.Story, Fo(st.ElfShear), Fo(st.ModalShear), Fo(st.ScaledShear),
+                L(st.Drift), L(st.DesignDrift), st.Ratio, Mo(st.Overturning), Fo(st.Px), Num(st.Theta), Num(st.ThetaElf), Num(st.ThetaMax))),
+            PxFrom: s.PxSource,
+            CombinedValues: CombinedNote);
+        var files = new List<(string, string)> { ("response-spectrum-modes.csv", sb.ToString()), ("response-spectrum-stories.csv", stories.ToString()), ("response-spectrum.json", TypedJson.Write(json)) };
         if (s.MemberForces.Count > 0)
         {
             var mf = new StringBuilder($"member,N start [{fu}],V start [{fu}],M start [{mu}],N end [{fu}],V end [{fu}],M end [{mu}],scaled N start [{fu}],scaled V start [{fu}],scaled M start [{mu}],scaled N end [{fu}],scaled V end [{fu}],scaled M end [{mu}]\n");
@@ -64,7 +56,7 @@ public static class SpectrumFiles
     /// <summary>What every combined value is, for the files (a combined peak has no sign).</summary>
     public const string CombinedNote = "combined mode by mode (CQC or SRSS of each response's per-mode values): peak magnitudes without sign, not simultaneous with one another; member end forces in the member's local axes";
 
-    private static JToken Num(double v) => double.IsFinite(v) ? new JValue(v) : JValue.CreateNull();
+    private static double? Num(double v) => double.IsFinite(v) ? v : null;
 
     /// <summary>Six end forces in the model's units, times <paramref name="k"/>, as CSV cells.</summary>
     internal static string EndForces(MemberEndForces e, double k, Func<double, double> fo, Func<double, double> mo, Func<double, string> f) =>

@@ -18,11 +18,27 @@ public static class TypedJson
         NullValueHandling = NullValueHandling.Include,
     });
 
+    /// <summary>The file's text for <paramref name="value"/>, built in memory (a small file).</summary>
     public static string Write(object value)
     {
         var sw = new StringWriter(CultureInfo.InvariantCulture) { NewLine = "\n" };
-        using (var w = new JsonTextWriter(sw) { Formatting = Formatting.Indented, Indentation = 2 })
-            Serializer.Serialize(w, value);
-        return sw.ToString() + "\n";
+        Write(sw, value);
+        return sw.ToString();
     }
+
+    /// <summary>
+    /// Writes the file for <paramref name="value"/> into <paramref name="writer"/> as it is serialised, object by object:
+    /// a sequence property (an <see cref="IEnumerable{T}"/> produced on demand) is read one item at a time, so a file of
+    /// any size streams without its text or its objects all in memory. <paramref name="writer"/>'s <c>NewLine</c> should
+    /// be a line feed (the writers of <see cref="OutputFile"/> and <see cref="Write(object)"/> are).
+    /// </summary>
+    public static void Write(TextWriter writer, object value)
+    {
+        using (var w = new JsonTextWriter(writer) { Formatting = Formatting.Indented, Indentation = 2, CloseOutput = false })
+            Serializer.Serialize(w, value);
+        writer.Write('\n');
+    }
+
+    /// <summary>A results file streamed from <paramref name="value"/> (see <see cref="Write(TextWriter, object)"/>).</summary>
+    public static OutputFile File(string name, object value) => OutputFile.Streamed(name, w => Write(w, value));
 }
