@@ -100,7 +100,7 @@ public static class CliApp
         {
             var model = ModelReader.ReadFile(modelPath);
             var run = ModelRun.Run(model);   // every result, computed once; what follows only reads it
-            var comparisons = withComparisons && model.Comparisons.Count > 0 ? ComparisonStudy.Run(model, ComparisonStudy.DefaultTolerance, run.Analysis) : null;
+            var comparisons = withComparisons && model.Comparisons.Count > 0 ? ComparisonStudy.Run(model, ComparisonStudy.DefaultTolerance, run) : null;
             return (run, comparisons);
         }, stderr, out var solution, out int exit);
         if (!solved) return exit;

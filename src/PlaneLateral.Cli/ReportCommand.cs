@@ -42,7 +42,7 @@ internal static class ReportCommand
             var model = ModelReader.ReadFile(modelPath);
             warnings = model.Warnings;
             var run = ModelRun.Run(model);   // every result, computed once; the report only reads it
-            var comparisons = model.Comparisons.Count > 0 ? ComparisonStudy.Run(model, tol, run.Analysis) : null;
+            var comparisons = model.Comparisons.Count > 0 ? ComparisonStudy.Run(model, tol, run) : null;
             return (Summary.Planar(run, comparisons, modelPath), ModelReport.Build(run, comparisons, Path.GetFileName(modelPath), $"PlaneLateral {ResultFiles.Version}"));
         }, stderr, out var built, out int exit);
         if (!solved) return exit;
