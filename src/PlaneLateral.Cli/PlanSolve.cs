@@ -23,9 +23,8 @@ internal static class PlanSolve
     {
         bool solved = CommandSupport.TrySolve(() => PlanRun.Run(ModelReader.ReadPlanFile(path)), stderr, out var run, out int exit);   // every result, once
         if (!solved) return exit;
-        var (r, seismic, hand) = run;
+        var (r, seismic, hand, tributary) = run;   // tributary: floors that bend, the hand split beside the FE flexible floor
         string folder = outDir ?? CommandSupport.DefaultFolder(path);
-        var tributary = PlanTributarySplit.Run(r);   // floors that bend: the hand tributary split beside the FE flexible floor
         var texts = seismic is null ? PlanFiles.Render(r, tributary) : [.. PlanFiles.Render(r, tributary), .. PlanSeismicFiles.Render(r, seismic)];
         // One plan figure per story under the case of the largest corner drift ratio, beside the CSV files; with a floor
         // block, each bending floor's deflected shape and the line shares under the idealisations.
@@ -38,7 +37,7 @@ internal static class PlanSolve
         if (note is not null) text.Append('\n').Append(note);
         if (detail != Detail.Summary)
         {
-            text.Append('\n').Append(PlanReport.Render(r, hand, path, detail));
+            text.Append('\n').Append(PlanReport.Render(r, hand, tributary, path, detail));
             if (seismic is not null) text.Append(PlanSeismicReport.Render(r, seismic));
         }
         else text.Append($"\nCaution: {ResultFiles.Caution}\n");
