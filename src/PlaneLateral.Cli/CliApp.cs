@@ -61,15 +61,17 @@ public static class CliApp
         var outOption = CommandSupport.OutOption("the results files");
 
         var detailOption = Summary.DetailOption();
+        var strictOption = CommandSupport.StrictOption();
         var solve = new Command("solve", "Solve every load case and combination of a model; print a summary and write results (JSON and CSV).")
         {
-            modelArg, outOption, detailOption,
+            modelArg, outOption, detailOption, strictOption,
         };
-        solve.SetAction(p => Solve(p.GetValue(modelArg)!, p.GetValue(outOption), p.GetValue(detailOption), stdout, stderr));
+        solve.SetAction(p => Solve(p.GetValue(modelArg)!, p.GetValue(outOption), p.GetValue(detailOption), p.GetValue(strictOption), stdout, stderr));
 
         var validateArg = new Argument<string>("model") { Description = "Model file to check." };
-        var validate = new Command("validate", "Read and check a model file without solving it; list every problem found.") { validateArg };
-        validate.SetAction(p => Validate(p.GetValue(validateArg)!, stdout, stderr));
+        var validateStrict = CommandSupport.StrictOption();
+        var validate = new Command("validate", "Read and check a model file without solving it; list every problem found.") { validateArg, validateStrict };
+        validate.SetAction(p => Validate(p.GetValue(validateArg)!, p.GetValue(validateStrict), stdout, stderr));
 
         var root = new RootCommand(
             "PlaneLateral: lateral stiffness, load sharing and drift of walls and frames by shear-deformable finite elements, " +
@@ -88,21 +90,22 @@ public static class CliApp
         return root;
     }
 
-    private static int Solve(string modelPath, string? outDir, string? detailText, TextWriter stdout, TextWriter stderr, bool withComparisons = false)
+    private static int Solve(string modelPath, string? outDir, string? detailText, bool strict, TextWriter stdout, TextWriter stderr, bool withComparisons = false)
     {
         if (!Summary.TryDetail(detailText, out var detail, out string error))
         {
             stderr.Write(error + "\nNothing was written.\n");
             return ExitCodes.Usage;
         }
-        if (ModelReader.IsPlanFile(modelPath)) return PlanSolve.Run(modelPath, outDir, stdout, stderr, detail);   // a building in plan (docs/plan.md)
+        if (ModelReader.IsPlanFile(modelPath)) return PlanSolve.Run(modelPath, outDir, stdout, stderr, detail, strict: strict);   // a building in plan (docs/plan.md)
+        if (!CommandSupport.TrySolve(() => ModelReader.ReadFile(modelPath), stderr, out var model, out int exit)) return exit;
+        if (CommandSupport.RefusedAsStrict(strict, model.Warnings, stderr)) return ExitCodes.BadModel;
         bool solved = CommandSupport.TrySolve(() =>
         {
-            var model = ModelReader.ReadFile(modelPath);
             var run = ModelRun.Run(model);   // every result, computed once; what follows only reads it
-            var comparisons = withComparisons && model.Comparisons.Count > 0 ? ComparisonStudy.Run(model, ComparisonStudy.DefaultTolerance, run.Analysis) : null;
+            var comparisons = withComparisons && model.Comparisons.Count > 0 ? ComparisonStudy.Run(model, ComparisonStudy.DefaultTolerance, run) : null;
             return (run, comparisons);
-        }, stderr, out var solution, out int exit);
+        }, stderr, out var solution, out exit);
         if (!solved) return exit;
         var (result, comparisons) = solution;
 
@@ -129,12 +132,13 @@ public static class CliApp
         return ExitCodes.Success;
     }
 
-    private static int Validate(string modelPath, TextWriter stdout, TextWriter stderr)
+    private static int Validate(string modelPath, bool strict, TextWriter stdout, TextWriter stderr)
     {
-        if (ModelReader.IsPlanFile(modelPath)) return PlanSolve.Validate(modelPath, stdout, stderr);
+        if (ModelReader.IsPlanFile(modelPath)) return PlanSolve.Validate(modelPath, stdout, stderr, strict);
         try
         {
             var m = ModelReader.ReadFile(modelPath);
+            if (CommandSupport.RefusedAsStrict(strict, m.Warnings, stderr, written: false)) return ExitCodes.BadModel;
             stdout.Write($"{modelPath}: valid. {m.Nodes.Count} nodes, {m.Members.Count} members, {m.Supports.Count} supports, {m.LoadCases.Count} load cases, {m.Combinations.Count} combinations, {m.Comparisons.Count} comparison checks, units {m.Units}.\n");
             stderr.Write(ModelWarning.Lines(m.Warnings));
             return ExitCodes.Success;

@@ -28,6 +28,27 @@ internal static class CommandSupport
         Description = $"Folder for {contents} (created if missing). Default: planelateral-results/<model name>{(subfolder is null ? "" : "/" + subfolder)} in the current folder.",
     };
 
+    /// <summary>--strict: input warnings refuse the model (solve, validate, compare, report).</summary>
+    public static Option<bool> StrictOption() => new("--strict")
+    {
+        Description = "Treat every warning about the input (e.g. no \"units\" key, so kip and inch are assumed) as a problem: the model is refused with exit 2 and nothing is written.",
+    };
+
+    /// <summary>
+    /// Under --strict, a model read with warnings is refused: each warning is listed as a problem, with its place in the
+    /// file and its fix, as a bad model's problems are, and true is returned (exit 2). Without --strict, or without
+    /// warnings, nothing is written and false is returned.
+    /// </summary>
+    /// <param name="written">True when the command would have written files ("Nothing was written." follows).</param>
+    public static bool RefusedAsStrict(bool strict, IReadOnlyList<ModelWarning> warnings, TextWriter stderr, bool written = true)
+    {
+        if (!strict || warnings.Count == 0) return false;
+        var problems = warnings.Select(w => new ModelDiagnostic(w.File, w.Line, w.Column, w.JsonPath, w.Problem, w.Fix));
+        stderr.Write($"The model has {warnings.Count} warning{(warnings.Count == 1 ? "" : "s")}, refused under --strict (each counts as a problem):\n" +
+            string.Concat(problems.Select(d => "  " + d + "\n")) + (written ? "Nothing was written.\n" : ""));
+        return true;
+    }
+
     /// <summary>planelateral-results/&lt;model name&gt;[/subfolder] below the current folder.</summary>
     public static string DefaultFolder(string modelPath, string? subfolder = null)
     {

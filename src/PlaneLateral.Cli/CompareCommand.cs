@@ -20,11 +20,12 @@ internal static class CompareCommand
             Description = "Band on FE/hand − 1 for checks that set none of their own, as a fraction (0.10) or a percentage (10%). Default 0.10.",
         };
         var detailOption = Summary.DetailOption();
+        var strictOption = CommandSupport.StrictOption();
         var cmd = new Command("compare", "Set each hand-method number beside the finite-element number for the model's comparison checks, with the gap and its likely cause; print a table and write comparisons.json and comparisons.csv.")
         {
-            modelArg, outOption, tolOption, detailOption,
+            modelArg, outOption, tolOption, detailOption, strictOption,
         };
-        cmd.SetAction(p => Run(p.GetValue(modelArg)!, p.GetValue(outOption), p.GetValue(tolOption), p.GetValue(detailOption), stdout, stderr));
+        cmd.SetAction(p => Run(p.GetValue(modelArg)!, p.GetValue(outOption), p.GetValue(tolOption), p.GetValue(detailOption), p.GetValue(strictOption), stdout, stderr));
         return cmd;
     }
 
@@ -51,7 +52,7 @@ internal static class CompareCommand
         return true;
     }
 
-    private static int Run(string modelPath, string? outDir, string? tolText, string? detailText, TextWriter stdout, TextWriter stderr)
+    private static int Run(string modelPath, string? outDir, string? tolText, string? detailText, bool strict, TextWriter stdout, TextWriter stderr)
     {
         if (!TryTolerance(tolText, out double tol, out string error) || !Summary.TryDetail(detailText, out var detail, out error))
         {
@@ -59,6 +60,7 @@ internal static class CompareCommand
             return ExitCodes.Usage;
         }
         if (!CommandSupport.TrySolve(() => ModelReader.ReadFile(modelPath), stderr, out var model, out int exit)) return exit;
+        if (CommandSupport.RefusedAsStrict(strict, model.Warnings, stderr)) return ExitCodes.BadModel;
         stderr.Write(ModelWarning.Lines(model.Warnings));
         if (model.Comparisons.Count == 0)
         {

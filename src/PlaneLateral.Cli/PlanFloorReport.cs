@@ -9,7 +9,8 @@ namespace PlaneLateral.Cli;
 /// <summary>The console part on floors that bend (docs/plan.md): flexibility test and line shear envelope, within 100 columns.</summary>
 internal static class PlanFloorReport
 {
-    public static string Render(PlanResult r)
+    /// <param name="tributary">The run's hand tributary split beside the FE flexible floor (<see cref="PlanRun.Tributary"/>), read, not computed.</param>
+    public static string Render(PlanResult r, IReadOnlyList<TributaryShear> tributary)
     {
         if (r.Diaphragms is not { } d) return "";
         var p = r.Plan;
@@ -64,7 +65,7 @@ internal static class PlanFloorReport
         sb.Append("  Rigid: every floor rigid; semi-rigid: floors with a section as deep beams, the others rigid;\n" +
                   "  flexible: every floor as simple spans between the lines (tributary). Design for the envelope\n" +
                   "  unless the governing code fixes the idealisation; it decides, not this table.\n");
-        sb.Append(Tributary(r, PlanTributarySplit.Run(r)));
+        sb.Append(Tributary(r, tributary));
         return sb.ToString();
     }
 

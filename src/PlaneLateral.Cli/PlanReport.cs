@@ -10,7 +10,8 @@ namespace PlaneLateral.Cli;
 /// <summary>The console summary of a building in plan (docs/plan.md): reads a <see cref="PlanResult"/>, prints tables of at most 100 columns.</summary>
 internal static class PlanReport
 {
-    public static string Render(PlanResult r, IReadOnlyList<PlanSplitStory> hand, string path, Detail detail = Detail.Normal)
+    /// <param name="tributary">The run's hand tributary split beside the FE flexible floor (<see cref="PlanRun.Tributary"/>).</param>
+    public static string Render(PlanResult r, IReadOnlyList<PlanSplitStory> hand, IReadOnlyList<TributaryShear> tributary, string path, Detail detail = Detail.Normal)
     {
         var p = r.Plan;
         var u = p.Units;
@@ -140,7 +141,7 @@ internal static class PlanReport
                 sb.Append(pt.Render());
             }
         }
-        sb.Append(PlanFloorReport.Render(r));   // floors that bend: with a "floor" block only
+        sb.Append(PlanFloorReport.Render(r, tributary));   // floors that bend: with a "floor" block only
         sb.Append("\n" + Wrap($"Caution: {ResultFiles.Caution}", TextTable.Width));
         return sb.ToString();
     }

@@ -19,13 +19,14 @@ internal static class PlanSolve
             "Use 'planelateral solve <model.json>' for your own model or building, 'planelateral solve models/demo-clinic.json' for the planar demo,\n" +
             "'planelateral --help' for all commands (from the source tree: 'dotnet run --project src/PlaneLateral.Cli -- <command> ...').\n");
 
-    public static int Run(string path, string? outDir, TextWriter stdout, TextWriter stderr, Detail detail = Detail.Normal, string? note = null)
+    public static int Run(string path, string? outDir, TextWriter stdout, TextWriter stderr, Detail detail = Detail.Normal, string? note = null, bool strict = false)
     {
-        bool solved = CommandSupport.TrySolve(() => PlanRun.Run(ModelReader.ReadPlanFile(path)), stderr, out var run, out int exit);   // every result, once
+        if (!CommandSupport.TrySolve(() => ModelReader.ReadPlanFile(path), stderr, out var plan, out int exit)) return exit;
+        if (CommandSupport.RefusedAsStrict(strict, plan.Warnings, stderr)) return ExitCodes.BadModel;
+        bool solved = CommandSupport.TrySolve(() => PlanRun.Run(plan), stderr, out var run, out exit);   // every result, once
         if (!solved) return exit;
-        var (r, seismic, hand) = run;
+        var (r, seismic, hand, tributary) = run;   // tributary: floors that bend, the hand split beside the FE flexible floor
         string folder = outDir ?? CommandSupport.DefaultFolder(path);
-        var tributary = PlanTributarySplit.Run(r);   // floors that bend: the hand tributary split beside the FE flexible floor
         var texts = seismic is null ? PlanFiles.Render(r, tributary) : [.. PlanFiles.Render(r, tributary), .. PlanSeismicFiles.Render(r, seismic)];
         // One plan figure per story under the case of the largest corner drift ratio, beside the CSV files; with a floor
         // block, each bending floor's deflected shape and the line shares under the idealisations.
@@ -38,7 +39,7 @@ internal static class PlanSolve
         if (note is not null) text.Append('\n').Append(note);
         if (detail != Detail.Summary)
         {
-            text.Append('\n').Append(PlanReport.Render(r, hand, path, detail));
+            text.Append('\n').Append(PlanReport.Render(r, hand, tributary, path, detail));
             if (seismic is not null) text.Append(PlanSeismicReport.Render(r, seismic));
         }
         else text.Append($"\nCaution: {ResultFiles.Caution}\n");
@@ -52,13 +53,15 @@ internal static class PlanSolve
     /// <see cref="Reports.BuildingReport"/> to report.html, report.md and the figures; the console prints the summary of
     /// <see cref="Run"/> and where the report went.
     /// </summary>
-    public static int Report(string path, string? outDir, TextWriter stdout, TextWriter stderr, Detail detail)
+    public static int Report(string path, string? outDir, TextWriter stdout, TextWriter stderr, Detail detail, bool strict = false)
     {
+        if (!CommandSupport.TrySolve(() => ModelReader.ReadPlanFile(path), stderr, out var plan, out int exit)) return exit;
+        if (CommandSupport.RefusedAsStrict(strict, plan.Warnings, stderr)) return ExitCodes.BadModel;
         bool solved = CommandSupport.TrySolve(() =>
         {
-            var run = PlanRun.Run(ModelReader.ReadPlanFile(path));   // every result, computed once; the report only reads it
+            var run = PlanRun.Run(plan);   // every result, computed once; the report only reads it
             return (run, Reports.BuildingReport.Build(run, $"PlaneLateral {ResultFiles.Version}"));
-        }, stderr, out var built, out int exit);
+        }, stderr, out var built, out exit);
         if (!solved) return exit;
         var (run, doc) = built;
         string folder = outDir ?? CommandSupport.DefaultFolder(path, "report");
@@ -74,11 +77,12 @@ internal static class PlanSolve
         return ExitCodes.Success;
     }
 
-    public static int Validate(string path, TextWriter stdout, TextWriter stderr)
+    public static int Validate(string path, TextWriter stdout, TextWriter stderr, bool strict = false)
     {
         try
         {
             var p = ModelReader.ReadPlanFile(path);
+            if (CommandSupport.RefusedAsStrict(strict, p.Warnings, stderr, written: false)) return ExitCodes.BadModel;
             stdout.Write($"{path}: valid building in plan. {p.FloorCount} floors, {p.Lines.Count} lines, {p.Cases.Count} load cases, units {p.Units}.\n");
             stderr.Write(ModelWarning.Lines(p.Warnings));
             return ExitCodes.Success;

@@ -19,32 +19,33 @@ internal static class ReportCommand
             Description = "Band on FE/hand − 1 for comparison checks that set none of their own, as 0.10 or 10%. Default 0.10.",
         };
         var detailOption = Summary.DetailOption();
+        var strictOption = CommandSupport.StrictOption();
         var cmd = new Command("report",
             "Solve a model and write a report: one self-contained HTML file with the figures embedded, a Markdown twin and the PNG figures (inputs, units, assumptions, formulas and sources, tables, drift checks, hand methods beside FE, verdicts, cautions).")
         {
-            modelArg, outOption, tolOption, detailOption,
+            modelArg, outOption, tolOption, detailOption, strictOption,
         };
-        cmd.SetAction(p => Run(p.GetValue(modelArg)!, p.GetValue(outOption), p.GetValue(tolOption), p.GetValue(detailOption), stdout, stderr));
+        cmd.SetAction(p => Run(p.GetValue(modelArg)!, p.GetValue(outOption), p.GetValue(tolOption), p.GetValue(detailOption), p.GetValue(strictOption), stdout, stderr));
         return cmd;
     }
 
-    private static int Run(string modelPath, string? outDir, string? tolText, string? detailText, TextWriter stdout, TextWriter stderr)
+    private static int Run(string modelPath, string? outDir, string? tolText, string? detailText, bool strict, TextWriter stdout, TextWriter stderr)
     {
         if (!CompareCommand.TryTolerance(tolText, out double tol, out string error) || !Summary.TryDetail(detailText, out var detail, out error))
         {
             stderr.Write(error + "\nNothing was written.\n");
             return ExitCodes.Usage;
         }
-        if (ModelReader.IsPlanFile(modelPath)) return PlanSolve.Report(modelPath, outDir, stdout, stderr, detail);   // a building in plan (docs/reports.md)
-        IReadOnlyList<ModelWarning> warnings = [];
+        if (ModelReader.IsPlanFile(modelPath)) return PlanSolve.Report(modelPath, outDir, stdout, stderr, detail, strict);   // a building in plan (docs/reports.md)
+        if (!CommandSupport.TrySolve(() => ModelReader.ReadFile(modelPath), stderr, out var model, out int exit)) return exit;
+        if (CommandSupport.RefusedAsStrict(strict, model.Warnings, stderr)) return ExitCodes.BadModel;
+        var warnings = model.Warnings;
         bool solved = CommandSupport.TrySolve(() =>
         {
-            var model = ModelReader.ReadFile(modelPath);
-            warnings = model.Warnings;
             var run = ModelRun.Run(model);   // every result, computed once; the report only reads it
-            var comparisons = model.Comparisons.Count > 0 ? ComparisonStudy.Run(model, tol, run.Analysis) : null;
+            var comparisons = model.Comparisons.Count > 0 ? ComparisonStudy.Run(model, tol, run) : null;
             return (Summary.Planar(run, comparisons, modelPath), ModelReport.Build(run, comparisons, Path.GetFileName(modelPath), $"PlaneLateral {ResultFiles.Version}"));
-        }, stderr, out var built, out int exit);
+        }, stderr, out var built, out exit);
         if (!solved) return exit;
         var (summary, doc) = built;
         stderr.Write(ModelWarning.Lines(warnings));

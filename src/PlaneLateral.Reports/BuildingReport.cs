@@ -142,7 +142,7 @@ public static partial class BuildingReport
         d.Text($"{which} under case {g.Case.Case.Id}, the case of the largest corner drift ratio ({Sci(g.Ratio)} at story {g.Story}), " +
             "all drawn to one displacement scale so that they compare. The same figures are written by the solve command.");
         foreach (var f in figures) d.Figure(f);
-        var floors = PlanFloorPlots.All(d.R, PlanTributarySplit.Run(d.R));
+        var floors = PlanFloorPlots.All(d.R, d.Run.Tributary);
         if (floors.Count == 0) return;
         d.Heading("Floors that bend, in pictures");
         d.Text("Each floor that bends, deflected in its plane under each direction's case at the centres of mass (scale on the figure), and each line's share of the story shear " +

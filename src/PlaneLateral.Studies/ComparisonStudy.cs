@@ -13,12 +13,38 @@ public static class ComparisonStudy
     /// <summary>The default band on FE/hand − 1: ±10%.</summary>
     public const double DefaultTolerance = 0.10;
 
-    /// <summary>Runs every check of <paramref name="model"/>.</summary>
+    /// <summary>
+    /// Runs every check of <paramref name="model"/> on its own: the whole model's static analysis is solved at most once,
+    /// and only when a check reads it (a shear split); it and every sub-model a check builds are solved with one run's
+    /// options (<see cref="AnalysisOptions.ForRun"/>: the solver in <paramref name="options"/>, the default when none), so a
+    /// matrix met twice is factorised once.
+    /// </summary>
     /// <param name="model">A model read by <see cref="ModelReader"/>.</param>
     /// <param name="defaultTolerance">Band used by checks that give no "tolerance" of their own.</param>
-    /// <param name="full">The model's own analysis, if already run (needed by shear-split checks; run here when null).</param>
+    /// <param name="options">The analysis options (the user's solver); null for the default solver.</param>
     /// <exception cref="ModelInputException">A check cannot be worked out (e.g. its levels do not match); names the check's place in the file.</exception>
-    public static ComparisonReport Run(StructureModel model, double defaultTolerance = DefaultTolerance, AnalysisResult? full = null)
+    public static ComparisonReport Run(StructureModel model, double defaultTolerance = DefaultTolerance, AnalysisOptions? options = null)
+    {
+        options = AnalysisOptions.ForRun(options);
+        return Run(model, defaultTolerance, null, options);
+    }
+
+    /// <summary>
+    /// Runs every check of <paramref name="model"/> on what <paramref name="run"/> computed: the whole model's static
+    /// results are read from it (never solved again), and every sub-model a check builds is solved with the run's options
+    /// (<see cref="ModelResult.Options"/>: the user's solver, through the run's factor-once solver, so a matrix the run
+    /// already factorised is not factorised again).
+    /// </summary>
+    /// <param name="model">The model as read (the run's <see cref="ModelResult.Model"/> carries generated cases besides).</param>
+    /// <param name="run">The model's run (<see cref="ModelRun.Run"/>).</param>
+    /// <exception cref="ModelInputException">A check cannot be worked out; names the check's place in the file.</exception>
+    public static ComparisonReport Run(StructureModel model, double defaultTolerance, ModelResult run)
+    {
+        ArgumentNullException.ThrowIfNull(run);
+        return Run(model, defaultTolerance, run.Analysis, run.Options);
+    }
+
+    private static ComparisonReport Run(StructureModel model, double defaultTolerance, AnalysisResult? full, AnalysisOptions options)
     {
         if (!(defaultTolerance > 0 && defaultTolerance < 1))
             throw new ArgumentOutOfRangeException(nameof(defaultTolerance), "The tolerance must be a fraction between 0 and 1, e.g. 0.10.");
@@ -30,13 +56,13 @@ public static class ComparisonStudy
             {
                 rows.AddRange(check switch
                 {
-                    WallLineCheck w => WallLineStudy.Rows(model, w, tol),
-                    PerforatedWallCheck p => PerforatedWallStudy.Rows(model, p, tol),
-                    FrameStoriesCheck fr => FrameStoryStudy.Rows(model, fr, tol),
-                    ShearSplitCheck s => ShearSplitStudy.Rows(model, s, tol, full ??= LinearStaticAnalysis.Run(model)),
-                    CoupledWallCheck cw => CoupledWallStudy.Rows(model, cw, tol),
-                    PanelWallCheck pw => PanelWallStudy.Rows(model, pw, tol),
-                    FootingWallCheck fw => FootingWallStudy.Rows(model, fw, tol),
+                    WallLineCheck w => WallLineStudy.Rows(model, w, tol, options),
+                    PerforatedWallCheck p => PerforatedWallStudy.Rows(model, p, tol, options),
+                    FrameStoriesCheck fr => FrameStoryStudy.Rows(model, fr, tol, options),
+                    ShearSplitCheck s => ShearSplitStudy.Rows(model, s, tol, full ??= LinearStaticAnalysis.Run(model, options), options),
+                    CoupledWallCheck cw => CoupledWallStudy.Rows(model, cw, tol, options),
+                    PanelWallCheck pw => PanelWallStudy.Rows(model, pw, tol, options),
+                    FootingWallCheck fw => FootingWallStudy.Rows(model, fw, tol, options),
                     _ => throw new InvalidOperationException($"unknown check type {check.GetType().Name}"),
                 });
             }
@@ -69,8 +95,8 @@ public static class ComparisonStudy
 
     internal static string StiffnessUnit(UnitSystem u) => u.Label(Quantity.TranslationalStiffness);
 
-    /// <summary>The stiffness at the stiffness point of a sub-model: 1/Δ under a unit force.</summary>
-    internal static double SolveStiffness(StructureModel m) => LinearStaticAnalysis.Run(m).Stiffness[0].Stiffness;
+    /// <summary>The stiffness at the stiffness point of a sub-model: 1/Δ under a unit force, solved with the run's options.</summary>
+    internal static double SolveStiffness(StructureModel m, AnalysisOptions options) => LinearStaticAnalysis.Run(m, options).Stiffness[0].Stiffness;
 
     internal static string Pct(double fraction) => (100 * fraction).ToString("0.#", System.Globalization.CultureInfo.InvariantCulture) + "%";
 

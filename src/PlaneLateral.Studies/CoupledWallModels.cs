@@ -49,7 +49,8 @@ public interface ICoupledWallModel
     string Name { get; }
 
     /// <summary>Solves the wall under the load (w in N/m of height, or P in N at the top).</summary>
-    CoupledWallResponse Solve(CoupledWallCheck wall, CoupledWallLoad load, double magnitude, string source, PlaneLateral.Units.UnitSystem units);
+    /// <param name="options">The run's options (the user's solver); null for the default solver.</param>
+    CoupledWallResponse Solve(CoupledWallCheck wall, CoupledWallLoad load, double magnitude, string source, PlaneLateral.Units.UnitSystem units, AnalysisOptions? options = null);
 }
 
 /// <summary>
@@ -143,10 +144,10 @@ public sealed class WideColumnFrame(bool ShearDeformation) : ICoupledWallModel
         };
     }
 
-    public CoupledWallResponse Solve(CoupledWallCheck c, CoupledWallLoad load, double magnitude, string source, PlaneLateral.Units.UnitSystem units)
+    public CoupledWallResponse Solve(CoupledWallCheck c, CoupledWallLoad load, double magnitude, string source, PlaneLateral.Units.UnitSystem units, AnalysisOptions? options = null)
     {
         var model = Build(c, load, magnitude, source, units);
-        var r = LinearStaticAnalysis.Run(model).Cases[0];
+        var r = LinearStaticAnalysis.Run(model, options).Cases[0];
         int np = c.Piers.Count, ns = c.Stories;
         int NodeOf(int i, int j) => model.NodeIndex($"P{i + 1}-{j}");
         var heights = Enumerable.Range(1, ns).Select(j => j * c.StoryHeight).ToArray();

@@ -53,7 +53,7 @@ public static class CoupledWallStudy
                 CoupledWalls.SolidWall(c.Material.E, areas, inertias, xs, c.Height, load, magnitude));
     }
 
-    internal static IEnumerable<ComparisonRow> Rows(StructureModel model, CoupledWallCheck c, double tol)
+    internal static IEnumerable<ComparisonRow> Rows(StructureModel model, CoupledWallCheck c, double tol, PlaneLateral.Analysis.AnalysisOptions options)
     {
         var u = model.Units;
         string ku = ComparisonStudy.StiffnessUnit(u);
@@ -62,7 +62,7 @@ public static class CoupledWallStudy
         {
             string lname = load == CoupledWallLoad.Uniform ? "uniform load" : "top load";
             double resultant = load == CoupledWallLoad.Uniform ? mag * c.Height : mag;
-            var fe = ModelsFor(c).Select(m => m.Solve(c, load, mag, model.SourcePath, u)).ToList();
+            var fe = ModelsFor(c).Select(m => m.Solve(c, load, mag, model.SourcePath, u, options)).ToList();
             var feShear = fe[0];
             var feFlex = fe.First(r => r.Model == new WideColumnFrame(false).Name);
             // Stiffness = total lateral load / top deflection: the same quantity as the other checks' rows.

@@ -21,7 +21,7 @@ internal static class FootingWallStudy
     /// <summary>Bounds on the soil modulus (common practice for uncertain soil; ASCE 7-16 §12.13.3 uses a similar ±range, from memory).</summary>
     private static readonly double[] Bounds = [0.5, 2.0];
 
-    public static IEnumerable<ComparisonRow> Rows(StructureModel model, FootingWallCheck c, double tol)
+    public static IEnumerable<ComparisonRow> Rows(StructureModel model, FootingWallCheck c, double tol, AnalysisOptions options)
     {
         var u = model.Units;
         var footing = model.Footings.First(f => f.Id == c.FootingId);
@@ -37,8 +37,8 @@ internal static class FootingWallStudy
 
         // FE: the wall's members alone, (a) fixed base with and (b) without shear, (c) rocking spring only, (d) all the footing's springs.
         var fixedBase = new Support(0, "fixed", true, true, true, 0, 0, 0);
-        double dFixed = Deflection(model, c, fixedBase, withShear: true);
-        double dFlexure = Deflection(model, c, fixedBase, withShear: false);
+        double dFixed = Deflection(model, c, fixedBase, withShear: true, options);
+        double dFlexure = Deflection(model, c, fixedBase, withShear: false, options);
         var feFixed = new FeEstimate("line members, fixed base", ComparisonStudy.Stiffness(u, 1 / dFixed),
             $"the check's {c.Members.Count} Timoshenko member(s) alone, base fixed, top free, unit lateral force at the top; shares from a second solve without shear deformation",
             dFlexure / dFixed, 1 - dFlexure / dFixed);
@@ -62,8 +62,8 @@ internal static class FootingWallStudy
         {
             var hand = HandOnFooting(handFixed, f, set, support);
             var springs = SupportOn(support, f);
-            double dRock = Deflection(model, c, springs with { RestrainX = true, SpringX = 0 }, withShear: true);
-            double dAll = Deflection(model, c, springs, withShear: true);
+            double dRock = Deflection(model, c, springs with { RestrainX = true, SpringX = 0 }, withShear: true, options);
+            double dAll = Deflection(model, c, springs, withShear: true, options);
             var fe = new FeEstimate("line members on the footing springs", ComparisonStudy.Stiffness(u, 1 / dAll),
                 $"the check's member(s) alone on the support springs the engine computed by {SetName(f.Formulas)} (sliding {Springs(u, f.Springs.Sliding, Quantity.TranslationalStiffness)}, rocking {Springs(u, f.Springs.Rocking, Quantity.RotationalStiffness)}); "
                 + $"shares from solves on a fixed base without shear, fixed base, rocking spring only: flexure {ComparisonStudy.Pct(dFlexure / dAll)}, shear {ComparisonStudy.Pct((dFixed - dFlexure) / dAll)}, rocking {ComparisonStudy.Pct((dRock - dFixed) / dAll)}, sliding {ComparisonStudy.Pct((dAll - dRock) / dAll)}",
@@ -100,7 +100,7 @@ internal static class FootingWallStudy
     }
 
     /// <summary>Top deflection (m) under a unit force of the check's members alone on <paramref name="baseSupport"/>.</summary>
-    internal static double Deflection(StructureModel model, FootingWallCheck c, Support baseSupport, bool withShear)
+    internal static double Deflection(StructureModel model, FootingWallCheck c, Support baseSupport, bool withShear, AnalysisOptions options)
     {
         var sub = new SubModel($"{c.Id}: wall on its base", model.SourcePath, model.Units);
         var map = new Dictionary<int, int>();
@@ -112,7 +112,7 @@ internal static class FootingWallStudy
         }
         sub.StiffnessAt(map[c.TopNode], "top");
         var built = sub.Build() with { Supports = [baseSupport with { Node = map[c.BaseNode] }] };
-        return 1 / ComparisonStudy.SolveStiffness(built);
+        return 1 / ComparisonStudy.SolveStiffness(built, options);
     }
 
     /// <summary>First period (s) of one mass m (kg) on a flexibility δ (m/N), through the modal solution the seismic analysis uses.</summary>

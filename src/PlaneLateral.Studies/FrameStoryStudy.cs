@@ -20,13 +20,13 @@ internal static class FrameStoryStudy
     /// <summary>Name of the reference FE estimate of a frame-stories row.</summary>
     public const string AsBuiltName = "frame members on their supports";
 
-    public static IEnumerable<ComparisonRow> Rows(StructureModel model, FrameStoriesCheck c, double tol)
+    public static IEnumerable<ComparisonRow> Rows(StructureModel model, FrameStoriesCheck c, double tol, AnalysisOptions options)
     {
         var u = model.Units;
         var stories = Stories(model, c);
         var bases = stories.Select(st => Bases(model, c, st)).ToList();   // refuses (throws) a story no formula here fits
-        var (fe, driftRatio) = StoryStiffness(model, c, rigidBeams: false);
-        var (feRigid, _) = StoryStiffness(model, c, rigidBeams: true);
+        var (fe, driftRatio) = StoryStiffness(model, c, rigidBeams: false, options);
+        var (feRigid, _) = StoryStiffness(model, c, rigidBeams: true, options);
         var members = c.Members.Select(i => model.Members[i]).ToList();
         var columns = stories.SelectMany(st => st.Columns).ToHashSet();
         var effects = Effects(columns, members.Where(m => !columns.Contains(m)).ToList());
@@ -254,7 +254,7 @@ internal static class FrameStoryStudy
     }
 
     /// <summary>FE story stiffness of every story (story shear / interstory drift, SI) and each story's drift angle (drift / h).</summary>
-    internal static (double[] Stiffness, double[] DriftAngle) StoryStiffness(StructureModel model, FrameStoriesCheck c, bool rigidBeams)
+    internal static (double[] Stiffness, double[] DriftAngle) StoryStiffness(StructureModel model, FrameStoriesCheck c, bool rigidBeams, AnalysisOptions options)
     {
         var sub = new SubModel($"{c.Id}: frame alone", model.SourcePath, model.Units);
         var map = new Dictionary<int, int>();
@@ -284,7 +284,7 @@ internal static class FrameStoryStudy
             }
         for (int l = 1; l < c.Levels.Count; l++)
             foreach (int j in joints[l]) sub.Load(j, c.Pattern[l - 1] / joints[l].Count);
-        var r = LinearStaticAnalysis.Run(sub.Build()).Cases[0];
+        var r = LinearStaticAnalysis.Run(sub.Build(), options).Cases[0];
         double Mean(int l) => joints[l].Average(j => r.Displacement(j, Dof.X));
         var k = new double[stories.Count];
         var angle = new double[stories.Count];

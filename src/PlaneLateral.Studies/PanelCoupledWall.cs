@@ -200,10 +200,10 @@ public sealed class PanelCoupledWall(int Refinement = PanelCoupledWall.DefaultRe
     public sealed record Solution(WallPanel Panel, PanelMesh Mesh, PanelResult Result, CoupledWallResponse Response, double[][] BeamShearsFromStress);
 
     /// <summary>Builds and solves the panel of the check (or its piers alone, or the solid wall) under the load.</summary>
-    public Solution SolveFull(CoupledWallCheck c, CoupledWallLoad load, double magnitude, string source, Fill fill = Fill.Openings)
+    public Solution SolveFull(CoupledWallCheck c, CoupledWallLoad load, double magnitude, string source, Fill fill = Fill.Openings, AnalysisOptions? options = null)
     {
         var (panel, pm) = Build(c, load, magnitude, fill);
-        var r = PanelAnalysis.Run(panel, pm, ["coupled"], null, source);
+        var r = PanelAnalysis.Run(panel, pm, ["coupled"], options, source);
         var cr = r.Analysis.Cases[0];
         var mesh = pm.Mesh;
         int np = c.Piers.Count, ns = c.Stories;
@@ -295,6 +295,6 @@ public sealed class PanelCoupledWall(int Refinement = PanelCoupledWall.DefaultRe
         return new Solution(panel, pm, r, response, fromStress);
     }
 
-    public CoupledWallResponse Solve(CoupledWallCheck c, CoupledWallLoad load, double magnitude, string source, PlaneLateral.Units.UnitSystem units) =>
-        SolveFull(c, load, magnitude, source).Response;
+    public CoupledWallResponse Solve(CoupledWallCheck c, CoupledWallLoad load, double magnitude, string source, PlaneLateral.Units.UnitSystem units, AnalysisOptions? options = null) =>
+        SolveFull(c, load, magnitude, source, options: options).Response;
 }

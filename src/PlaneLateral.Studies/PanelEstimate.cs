@@ -22,20 +22,21 @@ internal static class PanelEstimate
     /// Stiffness modifiers on the wall's members (cracked-section I) have no continuum counterpart: callers skip those.
     /// </summary>
     public static (FeEstimate? Estimate, string? Skipped) Cantilever(UnitSystem u, string id, double length, double height, double thickness,
-        double e, double nu, IReadOnlyList<OpeningSpec> openings) =>
-        ForEnds(EndFixity.Cantilever, u, id, length, height, thickness, e, nu, openings);
+        double e, double nu, IReadOnlyList<OpeningSpec> openings, AnalysisOptions? options = null) =>
+        ForEnds(EndFixity.Cantilever, u, id, length, height, thickness, e, nu, openings, options);
 
     /// <summary>
     /// The fixed-fixed (fixed-guided) panel estimate: the top edge guided, translating without rotating
     /// (<see cref="PanelTop.Guided"/>), the continuum counterpart of the hand method's fixed-fixed pier.
     /// </summary>
     public static (FeEstimate? Estimate, string? Skipped) FixedFixed(UnitSystem u, string id, double length, double height, double thickness,
-        double e, double nu, IReadOnlyList<OpeningSpec> openings) =>
-        ForEnds(EndFixity.FixedFixed, u, id, length, height, thickness, e, nu, openings);
+        double e, double nu, IReadOnlyList<OpeningSpec> openings, AnalysisOptions? options = null) =>
+        ForEnds(EndFixity.FixedFixed, u, id, length, height, thickness, e, nu, openings, options);
 
     /// <summary>The panel estimate for either end condition (SI inputs: m, N/m²); the value is in <paramref name="u"/>.</summary>
+    /// <param name="options">The run's options (the user's solver); null for the default solver.</param>
     public static (FeEstimate? Estimate, string? Skipped) ForEnds(EndFixity ends, UnitSystem u, string id, double length, double height, double thickness,
-        double e, double nu, IReadOnlyList<OpeningSpec> openings)
+        double e, double nu, IReadOnlyList<OpeningSpec> openings, AnalysisOptions? options = null)
     {
         PanelResult? r = null;
         string? problem = null;
@@ -53,7 +54,7 @@ internal static class PanelEstimate
             };
             try
             {
-                r = PanelAnalysis.Run(panel, []);
+                r = PanelAnalysis.Run(panel, [], options);
             }
             catch (ArgumentException ex)
             {

@@ -17,7 +17,7 @@ internal static class PanelWallStudy
 {
     public const string Kind = "panel-wall";
 
-    public static IEnumerable<ComparisonRow> Rows(StructureModel model, PanelWallCheck c, double tol)
+    public static IEnumerable<ComparisonRow> Rows(StructureModel model, PanelWallCheck c, double tol, AnalysisOptions options)
     {
         var u = model.Units;
         var panel = model.Panels.First(p => p.Id == c.PanelId);
@@ -35,11 +35,11 @@ internal static class PanelWallStudy
 
         var frame = EquivalentFrame.Build(wall, u, model.SourcePath, rigidSpandrels: false);
         var rigid = EquivalentFrame.Build(wall, u, model.SourcePath, rigidSpandrels: true);
-        double line = PerforatedWallStudy.Stiffness(frame), lineRigid = PerforatedWallStudy.Stiffness(rigid);
+        double line = PerforatedWallStudy.Stiffness(frame, options), lineRigid = PerforatedWallStudy.Stiffness(rigid, options);
         // The same wall without openings bounds any wall with openings from above (removing material cannot stiffen an elastic body).
         double solid = Piers.Rectangular(EndFixity.Cantilever, 1.0, panel.Height, panel.Length, panel.Thickness, material.E, material.G, c.FormFactor).Stiffness;
 
-        var fe = Converged(panel, model.SourcePath);
+        var fe = Converged(panel, model.SourcePath, options);
         var cv = fe.Convergence!;
         bool extrapolated = double.IsFinite(cv.Extrapolated) && cv.Extrapolated > 0;
         double k = extrapolated ? cv.Extrapolated : cv.Stiffness[^1];
@@ -70,7 +70,7 @@ internal static class PanelWallStudy
     public const string LineModelName = "Timoshenko line model (equivalent frame)";
 
     /// <summary>The panel solved on its own mesh settings with its convergence study (as the panel's own analysis does), loads left out: they do not change the stiffness.</summary>
-    internal static PanelResult Converged(WallPanel panel, string source) => PanelAnalysis.Run(panel with { Loads = [] }, [], null, source);
+    internal static PanelResult Converged(WallPanel panel, string source, AnalysisOptions? options = null) => PanelAnalysis.Run(panel with { Loads = [] }, [], options, source);
 
     /// <summary>What the converged panel says about the hand value, appended to the row's cause (docs/comparisons.md).</summary>
     /// <param name="panelOverHand">Converged panel stiffness over the hand value.</param>

@@ -12,7 +12,7 @@ namespace PlaneLateral.Studies;
 /// </summary>
 internal static class PerforatedWallStudy
 {
-    public static IEnumerable<ComparisonRow> Rows(StructureModel model, PerforatedWallCheck c, double tol)
+    public static IEnumerable<ComparisonRow> Rows(StructureModel model, PerforatedWallCheck c, double tol, AnalysisOptions options)
     {
         var u = model.Units;
         var fixity = c.Ends == CheckEnds.Cantilever ? EndFixity.Cantilever : EndFixity.FixedFixed;
@@ -24,7 +24,7 @@ internal static class PerforatedWallStudy
         double handSI = u.ToSI(hand.Stiffness, Quantity.TranslationalStiffness);
         var asBuilt = EquivalentFrame.Build(c, u, model.SourcePath, rigidSpandrels: false);
         var rigid = EquivalentFrame.Build(c, u, model.SourcePath, rigidSpandrels: true);
-        double fe = Stiffness(asBuilt), feRigid = Stiffness(rigid);
+        double fe = Stiffness(asBuilt, options), feRigid = Stiffness(rigid, options);
         string how = $"generated from the wall's geometry: {asBuilt.PierCount} pier member(s), {asBuilt.SpandrelCount} spandrel(s) of their real depth, rigid zones where piers and spandrels overlap; {(c.Ends == CheckEnds.Cantilever ? "base fixed, top free" : "base fixed, top held against rotation")}; unit force shared by the top joints, stiffness 1/(mean top deflection)";
         var estimates = new List<FeEstimate>
         {
@@ -33,7 +33,7 @@ internal static class PerforatedWallStudy
         if (asBuilt.SpandrelCount > 0)
             estimates.Add(new FeEstimate("equivalent frame, spandrels made rigid", ComparisonStudy.Stiffness(u, feRigid),
                 $"the same frame with every spandrel's I and shear area multiplied by {EquivalentFrame.RigidFactor:G3}: the gap left is the frame's own idealisation (pier heights, joints), not spandrel bending"));
-        var (panel, skipped) = PanelEstimate.ForEnds(fixity, u, c.Id, c.Length, c.Height, c.Thickness, c.Material.E, c.Material.Nu, c.Openings);
+        var (panel, skipped) = PanelEstimate.ForEnds(fixity, u, c.Id, c.Length, c.Height, c.Thickness, c.Material.E, c.Material.Nu, c.Openings, options);
         var (ordered, basis, panelFirst) = ReferenceChoice.Order(estimates, panel, tol, skipped);
         double aspect = c.Height / c.Length;
         // The same wall without openings bounds any wall with openings from above (removing material cannot stiffen an elastic body).
@@ -48,9 +48,10 @@ internal static class PerforatedWallStudy
             ordered, aspect, tol, cause, basis);
     }
 
-    internal static double Stiffness(EquivalentFrame frame)
+    /// <param name="options">The run's options (the user's solver); null for the default solver.</param>
+    internal static double Stiffness(EquivalentFrame frame, AnalysisOptions? options = null)
     {
-        var r = LinearStaticAnalysis.Run(frame.Model).Cases[0];
+        var r = LinearStaticAnalysis.Run(frame.Model, options).Cases[0];
         double mean = frame.LoadNodes.Average(n => r.Displacement(n, Dof.X));
         return 1.0 / mean;
     }

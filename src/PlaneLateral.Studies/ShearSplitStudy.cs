@@ -11,7 +11,7 @@ namespace PlaneLateral.Studies;
 /// </summary>
 internal static class ShearSplitStudy
 {
-    public static IEnumerable<ComparisonRow> Rows(StructureModel model, ShearSplitCheck c, double tol, AnalysisResult full)
+    public static IEnumerable<ComparisonRow> Rows(StructureModel model, ShearSplitCheck c, double tol, AnalysisResult full, AnalysisOptions options)
     {
         var u = model.Units;
         var checks = c.Lines.Select(l => model.Comparisons.First(x => x.Id == l.CheckId)).ToList();
@@ -86,7 +86,7 @@ internal static class ShearSplitStudy
         // fixed-base split beside it (hand without them, FE of the same model with the footings' springs replaced by
         // restraints), so the engineer sees how the split moves.
         var fixedModel = FootingWallStudy.FixedBase(model);
-        var fixedFull = LinearStaticAnalysis.Run(fixedModel);
+        var fixedFull = LinearStaticAnalysis.Run(fixedModel, options);
         var crFixed = fixedFull.Cases.First(r => r.Id == lc.Id && !r.IsCombination);
         var fixedFe = FeShears(model, checks, crFixed, lv, stories);
         var footedFe = FeShears(model, checks, cr, lv, stories);

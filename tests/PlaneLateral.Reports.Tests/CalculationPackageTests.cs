@@ -41,7 +41,7 @@ public class CalculationPackageTests
     {
         var model = ModelReader.ReadFile(path);
         var run = ModelRun.Run(model);
-        var comparisons = model.Comparisons.Count > 0 ? ComparisonStudy.Run(model, ComparisonStudy.DefaultTolerance, run.Analysis) : null;
+        var comparisons = model.Comparisons.Count > 0 ? ComparisonStudy.Run(model, ComparisonStudy.DefaultTolerance, run) : null;
         return (run, comparisons, ModelReport.Build(run, comparisons, Path.GetFileName(path), "PlaneLateral test"));
     }
 

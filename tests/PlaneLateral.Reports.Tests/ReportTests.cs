@@ -13,7 +13,7 @@ public class ReportTests
     {
         var model = ModelReader.ReadFile(DemoPath);
         var run = ModelRun.Run(model);
-        return ModelReport.Build(run, ComparisonStudy.Run(model, ComparisonStudy.DefaultTolerance, run.Analysis), "demo-clinic.json", "test");
+        return ModelReport.Build(run, ComparisonStudy.Run(model, ComparisonStudy.DefaultTolerance, run), "demo-clinic.json", "test");
     }
 
     [Theory]

@@ -18,7 +18,7 @@ public class SeismicPanelReportTests
     {
         var model = ModelReader.ReadFile(DemoPath);
         var run = ModelRun.Run(model);
-        return (run.Analysis, ModelReport.Build(run, ComparisonStudy.Run(model, ComparisonStudy.DefaultTolerance, run.Analysis), "demo-clinic.json", "test"));
+        return (run.Analysis, ModelReport.Build(run, ComparisonStudy.Run(model, ComparisonStudy.DefaultTolerance, run), "demo-clinic.json", "test"));
     }
 
     /// <summary>The body rows of the Markdown table whose caption starts with <paramref name="caption"/>, cells trimmed.</summary>

@@ -33,6 +33,13 @@ public sealed class ModelResult
     public required int Factorizations { get; init; }
     public required int FactorizationRequests { get; init; }
 
+    /// <summary>
+    /// The run's options: the solver the user chose, wrapped once in the run's <see cref="FactorOnceSolver"/>. A study that
+    /// solves sub-models of this model (the comparison checks) passes them on, so the user's solver runs them too and a
+    /// matrix this run already factorised (the whole model's K) is not factorised again.
+    /// </summary>
+    public required AnalysisOptions Options { get; init; }
+
     /// <summary>The model as solved (generated cases filled in).</summary>
     public StructureModel Model => Analysis.Model;
 }
@@ -75,6 +82,7 @@ public static class ModelRun
         {
             Analysis = analysis, Building = building, LineSplit = split, LineSplitSkipped = skipped, Seismic = seismic, Spectrum = spectrum,
             Solver = analysis.Solve.Solver, Factorizations = solver.Factorizations, FactorizationRequests = solver.Requests,
+            Options = options,
         };
     }
 }

@@ -109,7 +109,7 @@ public static partial class ModelReader
                     && openings.All(q => double.IsFinite(q.Left) && double.IsFinite(q.Bottom) && double.IsFinite(q.Width) && double.IsFinite(q.Height))
                     && levels.All(double.IsFinite);
                 if (!geometryRead) continue;
-                foreach (var q in PanelLayout.Check(panel))
+                foreach (var q in PanelLayout.Check(panel, _units))   // lengths in the model's units
                     sink.Add(o.SelectToken(q.Key) ?? o, $"panel \"{id}\": {q.Problem}", q.Fix);
                 CheckPanelLinks(panel, o);
                 list.Add(panel);

@@ -385,7 +385,7 @@ public static partial class ModelReader
             var model = PlanLineModels.WallPanel(id, fileName, elevations, length, thickness, material, openings.Select(x => x.Opening).ToList(), mesh, _units);
             // The panel's own layout checks (openings overlapping, strips narrower than an element, mesh too big...), each
             // at the compact wall's key that causes it: an opening's problem at that opening, a mesh problem at "mesh".
-            foreach (var q in PanelLayout.Check(model.Panels[0]))
+            foreach (var q in PanelLayout.Check(model.Panels[0], _units))   // lengths in the building file's units
             {
                 JToken where = o;
                 if (q.Key.StartsWith("openings[", StringComparison.Ordinal) && int.TryParse(q.Key[9..q.Key.IndexOf(']')], out int k) && k < openings.Count) where = openings[k].At;

@@ -1,4 +1,5 @@
 using System.Globalization;
+using PlaneLateral.Units;
 
 namespace PlaneLateral.Model;
 
@@ -16,7 +17,8 @@ public sealed record PanelProblem(string Key, string Problem, string Fix);
 public static class PanelLayout
 {
     /// <summary>Every problem that stops the panel from being meshed (empty when it can be).</summary>
-    public static List<PanelProblem> Check(WallPanel p) => Plan(p).Problems;
+    /// <param name="units">The model's units: every length in a message is given in them, with the unit named (metres when null).</param>
+    public static List<PanelProblem> Check(WallPanel p, UnitSystem? units = null) => Plan(p, units).Problems;
 
     public sealed class GridPlan
     {
@@ -31,12 +33,15 @@ public static class PanelLayout
     }
 
     /// <summary>Checks the panel and, when it can be meshed, lays out the grid lines of its base mesh.</summary>
-    public static GridPlan Plan(WallPanel p)
+    /// <param name="units">The model's units for the lengths in the problems' texts (metres when null); the plan itself is SI.</param>
+    public static GridPlan Plan(WallPanel p, UnitSystem? units = null)
     {
         var plan = new GridPlan();
         var bad = plan.Problems;
         double L = p.Length, H = p.Height, tol = 1e-9 * Math.Max(L, H);
-        string F(double v) => v.ToString("0.###", CultureInfo.InvariantCulture) + " m";
+        var u = units ?? UnitSystem.KilonewtonMetre;
+        string F(double v) => u.FromSI(v, Quantity.Length).ToString("0.###", CultureInfo.InvariantCulture) + " " + u.LengthSymbol;
+        string G(double v) => u.FromSI(v, Quantity.Length).ToString("G9", CultureInfo.InvariantCulture) + " " + u.LengthSymbol;
 
         for (int k = 0; k < p.Openings.Count; k++)
         {
@@ -141,8 +146,8 @@ public static class PanelLayout
             // the mesh too large: name them.
             var (gap, axis, first, second) = ClosestLines(p, tol);
             bad.Add(new(second.Key != "" ? second.Key : first.Key,
-                $"{second.What} ({axis} = {G(second.V)} m) and {first.What} ({axis} = {G(first.V)} m) are only {G(gap)} m apart, so elements no longer than {G(size)} m (maxAspect × {G(gap)} m) are needed and the {(m.Refinements > 1 ? "finest mesh" : "mesh")} would have about {nodes} nodes, more than the limit of {m.MaxNodes}",
-                $"give them the same value if they are meant to line up (values within {G(tol)} m are one line), or move them further apart"));
+                $"{second.What} ({axis} = {G(second.V)}) and {first.What} ({axis} = {G(first.V)}) are only {G(gap)} apart, so elements no longer than {G(size)} (maxAspect × {G(gap)}) are needed and the {(m.Refinements > 1 ? "finest mesh" : "mesh")} would have about {nodes} nodes, more than the limit of {m.MaxNodes}",
+                $"give them the same value if they are meant to line up (values within {G(tol)} are one line), or move them further apart"));
             return plan;
         }
         if (nodes > m.MaxNodes)
@@ -165,8 +170,8 @@ public static class PanelLayout
         {
             string key = Math.Abs(p.X0) >= Math.Abs(p.Y0) ? "x" : "y";
             double at = key == "x" ? p.X0 : p.Y0;
-            bad.Add(new(key, $"the panel is placed at {key} = {G(at)} m, so far from the origin that the sides of its finest elements ({G(finestSide)} m) are lost to round-off in the node coordinates",
-                $"place the panel nearer the origin (its position only places its nodes), within {G(finestSide * PlacementDigits)} m of it, or use a coarser mesh"));
+            bad.Add(new(key, $"the panel is placed at {key} = {G(at)}, so far from the origin that the sides of its finest elements ({G(finestSide)}) are lost to round-off in the node coordinates",
+                $"place the panel nearer the origin (its position only places its nodes), within {G(finestSide * PlacementDigits)} of it, or use a coarser mesh"));
             return plan;
         }
         plan.XLines = xl; plan.YLines = yl; plan.Size = size; plan.Narrowest = narrowest; plan.Nodes = (int)nodes;
@@ -179,8 +184,6 @@ public static class PanelLayout
 
     /// <summary>The farthest node coordinate accepted, in finest element sides (1e7; see the check in <see cref="Plan"/>).</summary>
     public const double PlacementDigits = 1e7;
-
-    private static string G(double v) => v.ToString("G9", CultureInfo.InvariantCulture);
 
     /// <summary>
     /// The two neighbouring grid lines closest together, on either axis, each with what puts it there and its panel key:

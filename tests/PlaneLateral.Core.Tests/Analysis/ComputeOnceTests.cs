@@ -14,7 +14,7 @@ namespace PlaneLateral.Tests.Analysis;
 public class ComputeOnceTests
 {
     /// <summary>Counts the factorisations handed to it and remembers each matrix's fingerprint (order, pattern, values).</summary>
-    private sealed class CountingSolver(ISparseSpdSolver inner) : ISparseSpdSolver
+    internal sealed class CountingSolver(ISparseSpdSolver inner) : ISparseSpdSolver
     {
         private readonly Lock _gate = new();
         public List<(int Size, int NonZeros, string Fingerprint)> Seen { get; } = [];

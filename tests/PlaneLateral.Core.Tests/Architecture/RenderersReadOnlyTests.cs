@@ -29,6 +29,9 @@ public class RenderersReadOnlyTests
         ["PlaneLateral.Analysis.PlanSeismic"] = ["Run"],
         ["PlaneLateral.Analysis.PlanModal"] = ["Solve"],
         ["PlaneLateral.Solvers.ISparseSpdSolver"] = ["Factorize"],
+        // Computed once into the building's run (PlanRun.Hand, PlanRun.Tributary): a view reads them, never works them out.
+        ["PlaneLateral.Studies.PlanHandSplit"] = ["Run"],
+        ["PlaneLateral.Studies.PlanTributarySplit"] = ["Run"],
     };
 
     private static IEnumerable<Type> Renderers()
@@ -39,7 +42,7 @@ public class RenderersReadOnlyTests
         var core = System.Reflection.Assembly.Load("PlaneLateral.Core");
         foreach (var t in core.GetTypes().Where(t => t.Namespace == "PlaneLateral.Output" && !t.IsNested)) yield return t;
         var reports = System.Reflection.Assembly.Load("PlaneLateral.Reports");
-        foreach (var name in new[] { "ModelReport", "ModelPlots", "PanelPlots", "SeismicPlots", "PlanPlots", "ReportDocument", "FigureNames" })
+        foreach (var name in new[] { "ModelReport", "ModelPlots", "PanelPlots", "SeismicPlots", "PlanPlots", "PlanFloorPlots", "BuildingReport", "ReportDocument", "FigureNames" })
             if (reports.GetType("PlaneLateral.Reports." + name) is { } t) yield return t;
     }
 

@@ -52,11 +52,12 @@ public class ReaderFuzzCampaign(ITestOutputHelper output)
         {
             var r = LinearStaticAnalysis.Run(model);
             foreach (var c in r.Cases) Assert.All(c.Displacements, v => Assert.True(double.IsFinite(v)));
-            var files = ResultFiles.Render(ModelRun.Run(model));
+            var run = ModelRun.Run(model);
+            var files = ResultFiles.Render(run);
             Assert.All(files, f => Assert.DoesNotContain("NaN", f.Text));
             if (model.Comparisons.Count > 0)
             {
-                var report = ComparisonStudy.Run(model, ComparisonStudy.DefaultTolerance, r);
+                var report = ComparisonStudy.Run(model, ComparisonStudy.DefaultTolerance, run);
                 ComparisonFiles.Render(report, "fuzz");
             }
         }
