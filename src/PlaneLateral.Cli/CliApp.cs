@@ -95,10 +95,12 @@ public static class CliApp
             stderr.Write(error + "\nNothing was written.\n");
             return ExitCodes.Usage;
         }
-        if (ModelReader.IsPlanFile(modelPath)) return PlanSolve.Run(modelPath, outDir, stdout, stderr, detail);   // a building in plan (docs/plan.md)
+        // The file is read, hashed and parsed once, whichever kind it is (a planar model or a building in plan).
+        if (!CommandSupport.TrySolve(() => ModelReader.ReadSource(modelPath), stderr, out var source, out int readExit)) return readExit;
+        if (source.IsPlan) return PlanSolve.Run(modelPath, outDir, stdout, stderr, detail, source: source);   // a building in plan (docs/plan.md)
         bool solved = CommandSupport.TrySolve(() =>
         {
-            var model = ModelReader.ReadFile(modelPath);
+            var model = ModelReader.Read(source);
             var run = ModelRun.Run(model);   // every result, computed once; what follows only reads it
             var comparisons = withComparisons && model.Comparisons.Count > 0 ? ComparisonStudy.Run(model, ComparisonStudy.DefaultTolerance, run.Analysis) : null;
             return (run, comparisons);

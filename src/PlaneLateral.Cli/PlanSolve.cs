@@ -19,9 +19,10 @@ internal static class PlanSolve
             "Use 'planelateral solve <model.json>' for your own model or building, 'planelateral solve models/demo-clinic.json' for the planar demo,\n" +
             "'planelateral --help' for all commands (from the source tree: 'dotnet run --project src/PlaneLateral.Cli -- <command> ...').\n");
 
-    public static int Run(string path, string? outDir, TextWriter stdout, TextWriter stderr, Detail detail = Detail.Normal, string? note = null)
+    /// <param name="source">The file already read by <see cref="ModelReader.ReadSource"/>, or null to read <paramref name="path"/>.</param>
+    public static int Run(string path, string? outDir, TextWriter stdout, TextWriter stderr, Detail detail = Detail.Normal, string? note = null, ModelSource? source = null)
     {
-        bool solved = CommandSupport.TrySolve(() => PlanRun.Run(ModelReader.ReadPlanFile(path)), stderr, out var run, out int exit);   // every result, once
+        bool solved = CommandSupport.TrySolve(() => PlanRun.Run(source is null ? ModelReader.ReadPlanFile(path) : ModelReader.ReadPlan(source)), stderr, out var run, out int exit);   // every result, once
         if (!solved) return exit;
         var (r, seismic, hand) = run;
         string folder = outDir ?? CommandSupport.DefaultFolder(path);
@@ -52,11 +53,11 @@ internal static class PlanSolve
     /// <see cref="Reports.BuildingReport"/> to report.html, report.md and the figures; the console prints the summary of
     /// <see cref="Run"/> and where the report went.
     /// </summary>
-    public static int Report(string path, string? outDir, TextWriter stdout, TextWriter stderr, Detail detail)
+    public static int Report(string path, string? outDir, TextWriter stdout, TextWriter stderr, Detail detail, ModelSource? source = null)
     {
         bool solved = CommandSupport.TrySolve(() =>
         {
-            var run = PlanRun.Run(ModelReader.ReadPlanFile(path));   // every result, computed once; the report only reads it
+            var run = PlanRun.Run(source is null ? ModelReader.ReadPlanFile(path) : ModelReader.ReadPlan(source));   // every result, computed once; the report only reads it
             return (run, Reports.BuildingReport.Build(run, $"PlaneLateral {ResultFiles.Version}"));
         }, stderr, out var built, out int exit);
         if (!solved) return exit;

@@ -35,11 +35,13 @@ internal static class ReportCommand
             stderr.Write(error + "\nNothing was written.\n");
             return ExitCodes.Usage;
         }
-        if (ModelReader.IsPlanFile(modelPath)) return PlanSolve.Report(modelPath, outDir, stdout, stderr, detail);   // a building in plan (docs/reports.md)
+        // Read, hashed and parsed once, whichever kind the file is.
+        if (!CommandSupport.TrySolve(() => ModelReader.ReadSource(modelPath), stderr, out var source, out int readExit)) return readExit;
+        if (source.IsPlan) return PlanSolve.Report(modelPath, outDir, stdout, stderr, detail, source);   // a building in plan (docs/reports.md)
         IReadOnlyList<ModelWarning> warnings = [];
         bool solved = CommandSupport.TrySolve(() =>
         {
-            var model = ModelReader.ReadFile(modelPath);
+            var model = ModelReader.Read(source);
             warnings = model.Warnings;
             var run = ModelRun.Run(model);   // every result, computed once; the report only reads it
             var comparisons = model.Comparisons.Count > 0 ? ComparisonStudy.Run(model, tol, run.Analysis) : null;
