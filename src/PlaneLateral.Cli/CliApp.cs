@@ -97,8 +97,10 @@ public static class CliApp
             stderr.Write(error + "\nNothing was written.\n");
             return ExitCodes.Usage;
         }
-        if (ModelReader.IsPlanFile(modelPath)) return PlanSolve.Run(modelPath, outDir, stdout, stderr, detail, strict: strict);   // a building in plan (docs/plan.md)
-        if (!CommandSupport.TrySolve(() => ModelReader.ReadFile(modelPath), stderr, out var model, out int exit)) return exit;
+        // The file is read, hashed and parsed once, whichever kind it is (a planar model or a building in plan).
+        if (!CommandSupport.TrySolve(() => ModelReader.ReadSource(modelPath), stderr, out var source, out int exit)) return exit;
+        if (source.IsPlan) return PlanSolve.Run(modelPath, outDir, stdout, stderr, detail, strict: strict, source: source);   // a building in plan (docs/plan.md)
+        if (!CommandSupport.TrySolve(() => ModelReader.Read(source), stderr, out var model, out exit)) return exit;
         if (CommandSupport.RefusedAsStrict(strict, model.Warnings, stderr)) return ExitCodes.BadModel;
         bool solved = CommandSupport.TrySolve(() =>
         {

@@ -19,9 +19,10 @@ internal static class PlanSolve
             "Use 'planelateral solve <model.json>' for your own model or building, 'planelateral solve models/demo-clinic.json' for the planar demo,\n" +
             "'planelateral --help' for all commands (from the source tree: 'dotnet run --project src/PlaneLateral.Cli -- <command> ...').\n");
 
-    public static int Run(string path, string? outDir, TextWriter stdout, TextWriter stderr, Detail detail = Detail.Normal, string? note = null, bool strict = false)
+    /// <param name="source">The file already read by <see cref="ModelReader.ReadSource"/>, or null to read <paramref name="path"/>.</param>
+    public static int Run(string path, string? outDir, TextWriter stdout, TextWriter stderr, Detail detail = Detail.Normal, string? note = null, bool strict = false, ModelSource? source = null)
     {
-        if (!CommandSupport.TrySolve(() => ModelReader.ReadPlanFile(path), stderr, out var plan, out int exit)) return exit;
+        if (!CommandSupport.TrySolve(() => source is null ? ModelReader.ReadPlanFile(path) : ModelReader.ReadPlan(source), stderr, out var plan, out int exit)) return exit;
         if (CommandSupport.RefusedAsStrict(strict, plan.Warnings, stderr)) return ExitCodes.BadModel;
         bool solved = CommandSupport.TrySolve(() => PlanRun.Run(plan), stderr, out var run, out exit);   // every result, once
         if (!solved) return exit;
@@ -53,9 +54,9 @@ internal static class PlanSolve
     /// <see cref="Reports.BuildingReport"/> to report.html, report.md and the figures; the console prints the summary of
     /// <see cref="Run"/> and where the report went.
     /// </summary>
-    public static int Report(string path, string? outDir, TextWriter stdout, TextWriter stderr, Detail detail, bool strict = false)
+    public static int Report(string path, string? outDir, TextWriter stdout, TextWriter stderr, Detail detail, bool strict = false, ModelSource? source = null)
     {
-        if (!CommandSupport.TrySolve(() => ModelReader.ReadPlanFile(path), stderr, out var plan, out int exit)) return exit;
+        if (!CommandSupport.TrySolve(() => source is null ? ModelReader.ReadPlanFile(path) : ModelReader.ReadPlan(source), stderr, out var plan, out int exit)) return exit;
         if (CommandSupport.RefusedAsStrict(strict, plan.Warnings, stderr)) return ExitCodes.BadModel;
         bool solved = CommandSupport.TrySolve(() =>
         {

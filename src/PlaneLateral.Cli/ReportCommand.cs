@@ -36,8 +36,10 @@ internal static class ReportCommand
             stderr.Write(error + "\nNothing was written.\n");
             return ExitCodes.Usage;
         }
-        if (ModelReader.IsPlanFile(modelPath)) return PlanSolve.Report(modelPath, outDir, stdout, stderr, detail, strict);   // a building in plan (docs/reports.md)
-        if (!CommandSupport.TrySolve(() => ModelReader.ReadFile(modelPath), stderr, out var model, out int exit)) return exit;
+        // Read, hashed and parsed once, whichever kind the file is.
+        if (!CommandSupport.TrySolve(() => ModelReader.ReadSource(modelPath), stderr, out var source, out int exit)) return exit;
+        if (source.IsPlan) return PlanSolve.Report(modelPath, outDir, stdout, stderr, detail, strict, source);   // a building in plan (docs/reports.md)
+        if (!CommandSupport.TrySolve(() => ModelReader.Read(source), stderr, out var model, out exit)) return exit;
         if (CommandSupport.RefusedAsStrict(strict, model.Warnings, stderr)) return ExitCodes.BadModel;
         var warnings = model.Warnings;
         bool solved = CommandSupport.TrySolve(() =>

@@ -50,9 +50,17 @@ public static partial class ModelReader
     }
 
     /// <summary>Reads a building from JSON text; <paramref name="fileName"/> names it in messages and fixes the folder line files are read from.</summary>
-    public static BuildingPlan ParsePlan(string json, string fileName)
+    public static BuildingPlan ParsePlan(string json, string fileName) => ParsePlanTree(ReadTree(json, fileName), fileName);   // strict JSON, as every model (ModelReader.cs)
+
+    /// <summary>Validates a building read by <see cref="ReadSource"/>; the same result as <see cref="ReadPlanFile"/> on its path.</summary>
+    public static BuildingPlan ReadPlan(ModelSource source)
     {
-        var root = ReadTree(json, fileName);   // strict JSON, as every model (ModelReader.cs)
+        var plan = ParsePlanTree(source.Root, source.Path);
+        return plan with { Inputs = [source.Input, .. plan.Inputs] };
+    }
+
+    private static BuildingPlan ParsePlanTree(JToken root, string fileName)
+    {
         SuggestBudget.Reset();
         var sink = new DiagnosticSink(fileName);
         if (root is not JObject obj)

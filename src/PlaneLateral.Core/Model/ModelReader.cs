@@ -24,9 +24,27 @@ public static partial class ModelReader
     }
 
     /// <summary>Reads and validates a model from JSON text; <paramref name="fileName"/> is used in messages.</summary>
-    public static StructureModel Parse(string json, string fileName = "<model>")
+    public static StructureModel Parse(string json, string fileName = "<model>") => ParseTree(ReadTree(json, fileName), fileName);
+
+    /// <summary>
+    /// A model file read once (regular files only, bounded, its SHA-256 taken: ModelFile.cs) and parsed once into its
+    /// JSON tree, strictly as every model is (<see cref="ReadTree"/>); <see cref="ModelSource.IsPlan"/> says which reader
+    /// takes it: <see cref="Read(ModelSource)"/> or <see cref="ReadPlan(ModelSource)"/>. A command that accepts both a
+    /// planar model and a building reads the file through this, not <see cref="IsPlanFile"/> and then the reader (which
+    /// read, hashed and tokenised the file twice).
+    /// </summary>
+    /// <exception cref="ModelInputException">The file cannot be read, is too large or is not valid JSON (the same messages as <see cref="ReadFile"/>).</exception>
+    public static ModelSource ReadSource(string path)
     {
-        var root = ReadTree(json, fileName);
+        string text = ModelFile.ReadText(path, out var input);
+        return new ModelSource(path, input, ReadTree(text, path));
+    }
+
+    /// <summary>Validates a planar model read by <see cref="ReadSource"/>; the same result as <see cref="ReadFile"/> on its path.</summary>
+    public static StructureModel Read(ModelSource source) => ParseTree(source.Root, source.Path) with { Inputs = [source.Input] };
+
+    private static StructureModel ParseTree(JToken root, string fileName)
+    {
         var sink = new DiagnosticSink(fileName);
         if (root is not JObject obj)
         {

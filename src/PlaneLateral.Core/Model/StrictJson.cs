@@ -289,7 +289,13 @@ internal static class StrictJson
     {
         string raw = s[from..to];
         if (!raw.Contains('\\')) return raw;
-        try { return System.Text.Json.JsonSerializer.Deserialize<string>("\"" + raw + "\"") ?? raw; }
+        // JsonDocument, not JsonSerializer: the same unescaping without reflection, so a Native AOT build (docs/benchmarks.md,
+        // "Start-up"), where reflection-based serialisation is off, reads an escaped key as the JIT build does.
+        try
+        {
+            using var doc = System.Text.Json.JsonDocument.Parse("\"" + raw + "\"");
+            return doc.RootElement.GetString() ?? raw;
+        }
         catch (System.Text.Json.JsonException) { return raw; }
     }
 }

@@ -98,6 +98,17 @@ public sealed class StrictInputTests : IDisposable
     }
 
     [Fact]
+    public void AnEscapedKeyIsUnescapedInTheJsonPath()
+    {
+        // RFC 8259 §7: "n\u006fdes" is the key "nodes". The path of a refusal inside it names the unescaped key (the
+        // unescaping does not use reflection, so a Native AOT build gives the same message: docs/benchmarks.md).
+        string text = Good.Replace("\"nodes\": [ { \"id\": \"A\", \"x\": 0, \"y\": 0 }", "\"n\\u006fdes\": [ { \"id\": \"A\", \"x\": 00, \"y\": 0 }", StringComparison.Ordinal);
+        Assert.NotEqual(Good, text);
+        var e = Assert.Throws<ModelInputException>(() => ModelReader.Parse(text, "escaped.json"));
+        Assert.Equal("$.nodes[0].x", Assert.Single(e.Diagnostics).JsonPath);
+    }
+
+    [Fact]
     public void CommentsTheDocsAllowAndEveryRfcNumberFormRead()
     {
         // docs/model-format.md: "//" and "/* */" comments are ignored. RFC 8259 §6: -0.5, 1E+3, 2e-1, 0 and escapes are JSON.
