@@ -99,8 +99,9 @@ public static class CliApp
         bool solved = CommandSupport.TrySolve(() =>
         {
             var model = ModelReader.ReadFile(modelPath);
-            var run = ModelRun.Run(model);   // every result, computed once; what follows only reads it
-            var comparisons = withComparisons && model.Comparisons.Count > 0 ? ComparisonStudy.Run(model, ComparisonStudy.DefaultTolerance, run.Analysis) : null;
+            var options = AnalysisOptions.ForRun(null);   // one solver for the run and its checks: each distinct matrix factorised once
+            var run = ModelRun.Run(model, options);   // every result, computed once; what follows only reads it
+            var comparisons = withComparisons && model.Comparisons.Count > 0 ? ComparisonStudy.Run(model, ComparisonStudy.DefaultTolerance, run.Analysis, options) : null;
             return (run, comparisons);
         }, stderr, out var solution, out int exit);
         if (!solved) return exit;

@@ -41,8 +41,9 @@ internal static class ReportCommand
         {
             var model = ModelReader.ReadFile(modelPath);
             warnings = model.Warnings;
-            var run = ModelRun.Run(model);   // every result, computed once; the report only reads it
-            var comparisons = model.Comparisons.Count > 0 ? ComparisonStudy.Run(model, tol, run.Analysis) : null;
+            var options = AnalysisOptions.ForRun(null);   // one solver for the run and its checks: each distinct matrix factorised once
+            var run = ModelRun.Run(model, options);   // every result, computed once; the report only reads it
+            var comparisons = model.Comparisons.Count > 0 ? ComparisonStudy.Run(model, tol, run.Analysis, options) : null;
             return (Summary.Planar(run, comparisons, modelPath), ModelReport.Build(run, comparisons, Path.GetFileName(modelPath), $"PlaneLateral {ResultFiles.Version}"));
         }, stderr, out var built, out int exit);
         if (!solved) return exit;

@@ -17,9 +17,13 @@ public static class ComparisonStudy
     /// <param name="model">A model read by <see cref="ModelReader"/>.</param>
     /// <param name="defaultTolerance">Band used by checks that give no "tolerance" of their own.</param>
     /// <param name="full">The model's own analysis, if already run (needed by shear-split checks; run here when null).</param>
+    /// <param name="options">The run's options: give the ones the model's own run used (<see cref="AnalysisOptions.ForRun"/>,
+    /// the same object to <see cref="ModelRun.Run"/> and here), so that a panel the run has factorised is not factorised
+    /// again by a check (one factorisation per distinct matrix in the whole run); null: the checks' own run.</param>
     /// <exception cref="ModelInputException">A check cannot be worked out (e.g. its levels do not match); names the check's place in the file.</exception>
-    public static ComparisonReport Run(StructureModel model, double defaultTolerance = DefaultTolerance, AnalysisResult? full = null)
+    public static ComparisonReport Run(StructureModel model, double defaultTolerance = DefaultTolerance, AnalysisResult? full = null, AnalysisOptions? options = null)
     {
+        options = AnalysisOptions.ForRun(options);
         if (!(defaultTolerance > 0 && defaultTolerance < 1))
             throw new ArgumentOutOfRangeException(nameof(defaultTolerance), "The tolerance must be a fraction between 0 and 1, e.g. 0.10.");
         var rows = new List<ComparisonRow>();
@@ -30,12 +34,12 @@ public static class ComparisonStudy
             {
                 rows.AddRange(check switch
                 {
-                    WallLineCheck w => WallLineStudy.Rows(model, w, tol),
-                    PerforatedWallCheck p => PerforatedWallStudy.Rows(model, p, tol),
+                    WallLineCheck w => WallLineStudy.Rows(model, w, tol, options),
+                    PerforatedWallCheck p => PerforatedWallStudy.Rows(model, p, tol, options),
                     FrameStoriesCheck fr => FrameStoryStudy.Rows(model, fr, tol),
-                    ShearSplitCheck s => ShearSplitStudy.Rows(model, s, tol, full ??= LinearStaticAnalysis.Run(model)),
-                    CoupledWallCheck cw => CoupledWallStudy.Rows(model, cw, tol),
-                    PanelWallCheck pw => PanelWallStudy.Rows(model, pw, tol),
+                    ShearSplitCheck s => ShearSplitStudy.Rows(model, s, tol, full ??= LinearStaticAnalysis.Run(model, options)),
+                    CoupledWallCheck cw => CoupledWallStudy.Rows(model, cw, tol, options),
+                    PanelWallCheck pw => PanelWallStudy.Rows(model, pw, tol, full, options),
                     FootingWallCheck fw => FootingWallStudy.Rows(model, fw, tol),
                     _ => throw new InvalidOperationException($"unknown check type {check.GetType().Name}"),
                 });

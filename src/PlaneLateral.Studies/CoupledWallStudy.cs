@@ -1,3 +1,4 @@
+using PlaneLateral.Analysis;
 using System.Globalization;
 using System.Text;
 using PlaneLateral.Hand;
@@ -53,7 +54,7 @@ public static class CoupledWallStudy
                 CoupledWalls.SolidWall(c.Material.E, areas, inertias, xs, c.Height, load, magnitude));
     }
 
-    internal static IEnumerable<ComparisonRow> Rows(StructureModel model, CoupledWallCheck c, double tol)
+    internal static IEnumerable<ComparisonRow> Rows(StructureModel model, CoupledWallCheck c, double tol, AnalysisOptions? options = null)
     {
         var u = model.Units;
         string ku = ComparisonStudy.StiffnessUnit(u);
@@ -62,7 +63,8 @@ public static class CoupledWallStudy
         {
             string lname = load == CoupledWallLoad.Uniform ? "uniform load" : "top load";
             double resultant = load == CoupledWallLoad.Uniform ? mag * c.Height : mag;
-            var fe = ModelsFor(c).Select(m => m.Solve(c, load, mag, model.SourcePath, u)).ToList();
+            // The panel of each load is the same matrix: on the run's solver it is factorised for the first load only.
+            var fe = ModelsFor(c).Select(m => (m is PanelCoupledWall p ? p.On(options) : m).Solve(c, load, mag, model.SourcePath, u)).ToList();
             var feShear = fe[0];
             var feFlex = fe.First(r => r.Model == new WideColumnFrame(false).Name);
             // Stiffness = total lateral load / top deflection: the same quantity as the other checks' rows.

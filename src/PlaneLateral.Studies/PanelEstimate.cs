@@ -34,8 +34,9 @@ internal static class PanelEstimate
         ForEnds(EndFixity.FixedFixed, u, id, length, height, thickness, e, nu, openings);
 
     /// <summary>The panel estimate for either end condition (SI inputs: m, N/m²); the value is in <paramref name="u"/>.</summary>
+    /// <param name="options">The run's options (its solver factorises each distinct matrix once), or null.</param>
     public static (FeEstimate? Estimate, string? Skipped) ForEnds(EndFixity ends, UnitSystem u, string id, double length, double height, double thickness,
-        double e, double nu, IReadOnlyList<OpeningSpec> openings)
+        double e, double nu, IReadOnlyList<OpeningSpec> openings, AnalysisOptions? options = null)
     {
         PanelResult? r = null;
         string? problem = null;
@@ -53,7 +54,7 @@ internal static class PanelEstimate
             };
             try
             {
-                r = PanelAnalysis.Run(panel, []);
+                r = PanelAnalysis.Run(panel, [], options);
             }
             catch (ArgumentException ex)
             {

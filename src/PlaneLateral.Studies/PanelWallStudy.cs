@@ -17,7 +17,10 @@ internal static class PanelWallStudy
 {
     public const string Kind = "panel-wall";
 
-    public static IEnumerable<ComparisonRow> Rows(StructureModel model, PanelWallCheck c, double tol)
+    /// <param name="full">The model's own analysis when it has run: its result for the panel (the same stiffness matrices,
+    /// loads aside) is read, not solved again.</param>
+    /// <param name="options">The run's options (its solver factorises each distinct matrix once), or null.</param>
+    public static IEnumerable<ComparisonRow> Rows(StructureModel model, PanelWallCheck c, double tol, AnalysisResult? full = null, AnalysisOptions? options = null)
     {
         var u = model.Units;
         var panel = model.Panels.First(p => p.Id == c.PanelId);
@@ -39,7 +42,7 @@ internal static class PanelWallStudy
         // The same wall without openings bounds any wall with openings from above (removing material cannot stiffen an elastic body).
         double solid = Piers.Rectangular(EndFixity.Cantilever, 1.0, panel.Height, panel.Length, panel.Thickness, material.E, material.G, c.FormFactor).Stiffness;
 
-        var fe = Converged(panel, model.SourcePath);
+        var fe = Solved(model, panel, full) ?? Converged(panel, model.SourcePath, options);
         var cv = fe.Convergence!;
         bool extrapolated = double.IsFinite(cv.Extrapolated) && cv.Extrapolated > 0;
         double k = extrapolated ? cv.Extrapolated : cv.Stiffness[^1];
@@ -70,7 +73,20 @@ internal static class PanelWallStudy
     public const string LineModelName = "Timoshenko line model (equivalent frame)";
 
     /// <summary>The panel solved on its own mesh settings with its convergence study (as the panel's own analysis does), loads left out: they do not change the stiffness.</summary>
-    internal static PanelResult Converged(WallPanel panel, string source) => PanelAnalysis.Run(panel with { Loads = [] }, [], null, source);
+    internal static PanelResult Converged(WallPanel panel, string source, AnalysisOptions? options = null) => PanelAnalysis.Run(panel with { Loads = [] }, [], options, source);
+
+    /// <summary>
+    /// The panel as the model's own run solved it, when that is the panel on its own base: its convergence study is the
+    /// one <see cref="Converged"/> would make (the loads add right-hand sides, not matrices, and each solve stands alone),
+    /// so it is read instead of being assembled and factorised again. Null for a panel on a footing (its own run stands
+    /// on the springs, the check's on a held base) or when the run has no convergence study of it.
+    /// </summary>
+    private static PanelResult? Solved(StructureModel model, WallPanel panel, AnalysisResult? full)
+    {
+        if (full is null || model.Footings.Any(f => f.Panel == panel.Id)) return null;
+        var r = full.Panels.FirstOrDefault(p => p.Panel.Id == panel.Id);
+        return r?.Convergence is null ? null : r;
+    }
 
     /// <summary>What the converged panel says about the hand value, appended to the row's cause (docs/comparisons.md).</summary>
     /// <param name="panelOverHand">Converged panel stiffness over the hand value.</param>

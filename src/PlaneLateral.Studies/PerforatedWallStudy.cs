@@ -12,7 +12,7 @@ namespace PlaneLateral.Studies;
 /// </summary>
 internal static class PerforatedWallStudy
 {
-    public static IEnumerable<ComparisonRow> Rows(StructureModel model, PerforatedWallCheck c, double tol)
+    public static IEnumerable<ComparisonRow> Rows(StructureModel model, PerforatedWallCheck c, double tol, AnalysisOptions? options = null)
     {
         var u = model.Units;
         var fixity = c.Ends == CheckEnds.Cantilever ? EndFixity.Cantilever : EndFixity.FixedFixed;
@@ -33,7 +33,7 @@ internal static class PerforatedWallStudy
         if (asBuilt.SpandrelCount > 0)
             estimates.Add(new FeEstimate("equivalent frame, spandrels made rigid", ComparisonStudy.Stiffness(u, feRigid),
                 $"the same frame with every spandrel's I and shear area multiplied by {EquivalentFrame.RigidFactor:G3}: the gap left is the frame's own idealisation (pier heights, joints), not spandrel bending"));
-        var (panel, skipped) = PanelEstimate.ForEnds(fixity, u, c.Id, c.Length, c.Height, c.Thickness, c.Material.E, c.Material.Nu, c.Openings);
+        var (panel, skipped) = PanelEstimate.ForEnds(fixity, u, c.Id, c.Length, c.Height, c.Thickness, c.Material.E, c.Material.Nu, c.Openings, options);
         var (ordered, basis, panelFirst) = ReferenceChoice.Order(estimates, panel, tol, skipped);
         double aspect = c.Height / c.Length;
         // The same wall without openings bounds any wall with openings from above (removing material cannot stiffen an elastic body).

@@ -1,3 +1,4 @@
+using PlaneLateral.Analysis;
 using PlaneLateral.Units;
 using PlaneLateral.Hand;
 using PlaneLateral.Model;
@@ -17,7 +18,7 @@ internal static class WallLineStudy
     /// <summary>Name of the wall line's own FE estimate (its members alone).</summary>
     public const string LineModelName = "line members, isolated";
 
-    public static IEnumerable<ComparisonRow> Rows(StructureModel model, WallLineCheck c, double tol)
+    public static IEnumerable<ComparisonRow> Rows(StructureModel model, WallLineCheck c, double tol, AnalysisOptions? options = null)
     {
         var u = model.Units;
         var m0 = model.Members[c.Members[0]];
@@ -44,7 +45,7 @@ internal static class WallLineStudy
             else if (m0.Modifiers != StiffnessModifiers.None)
                 noPanel = "not modelled, because the wall's members carry stiffness modifiers (cracked-section I) that a continuum of the gross section cannot represent";
             else
-                (panel, noPanel) = PanelEstimate.ForEnds(fixity, u, c.Id, depth, h, thickness, m0.E, m0.E / (2 * m0.G) - 1, []);
+                (panel, noPanel) = PanelEstimate.ForEnds(fixity, u, c.Id, depth, h, thickness, m0.E, m0.E / (2 * m0.G) - 1, [], options);
             var (ordered, basis, panelFirst) = ReferenceChoice.Order([feEstimate], panel, tol, noPanel);
             double ratio = fe / hand.Stiffness;
             double handValue = ComparisonStudy.Stiffness(u, hand.Stiffness);
