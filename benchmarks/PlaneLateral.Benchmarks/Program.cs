@@ -25,4 +25,10 @@ if (args.Length > 1 && args[0] == "supernodal")
     SupernodalReport.Run(args);
     return;
 }
+// "sweep [RUNS]": the default sweep's phases (points on 1 and 2 threads, figures serial and concurrent, CSV) in one process.
+if (args.Length > 0 && args[0] == "sweep")
+{
+    DefaultSweep.Report(args);
+    return;
+}
 BenchmarkSwitcher.FromAssembly(typeof(EnvelopeSolverBenchmarks).Assembly).Run(args);
