@@ -57,7 +57,13 @@ public static class DefaultSweep
             foreach (int threads in new[] { 1, 2 })
             {
                 SweepResult r = null!;
+                long bytes0 = GC.GetTotalAllocatedBytes(precise: true);
+                int gc0 = GC.CollectionCount(0), gc2 = GC.CollectionCount(2);
+                var pause0 = GC.GetTotalPauseDuration();
                 var points = Time(() => r = Points(threads));
+                double mib = (GC.GetTotalAllocatedBytes(precise: true) - bytes0) / 1048576.0;
+                int gen0 = GC.CollectionCount(0) - gc0, gen2 = GC.CollectionCount(2) - gc2;
+                double pause = (GC.GetTotalPauseDuration() - pause0).TotalSeconds;
                 (string, byte[])[] files = null!;
                 var serial = Time(() => { SweepFiles.RatioFigure(r); SweepFiles.ShearShareFigure(r); });
                 var render = Time(() => files = SweepFiles.Render(r, "benchmark").ToArray());
@@ -71,7 +77,7 @@ public static class DefaultSweep
                 Add($"CSV + figures at the same time (SweepFiles.Render), {threads} thread(s) for points", render);
                 Add($"CSV text alone, {threads} thread(s) for points", csv);
                 Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
-                    $"run {run + 1} threads {threads}: points {points.Wall:F3} s (cpu {points.Cpu:F3}), figures serial {serial.Wall:F3} s (cpu {serial.Cpu:F3}), render {render.Wall:F3} s (cpu {render.Cpu:F3})"));
+                    $"run {run + 1} threads {threads}: points {points.Wall:F3} s (cpu {points.Cpu:F3}, {mib:F0} MiB allocated, {gen0} gen-0 / {gen2} gen-2 collections, paused {pause:F3} s), figures serial {serial.Wall:F3} s (cpu {serial.Cpu:F3}), render {render.Wall:F3} s (cpu {render.Cpu:F3})"));
             }
         Console.WriteLine($"\nmedians of {runs} runs (wall s, process cpu s); processors {Environment.ProcessorCount}; load average before {load0}, after {LoadAverage()}");
         foreach (var (key, list) in rows)
