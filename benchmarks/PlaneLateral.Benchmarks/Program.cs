@@ -38,4 +38,16 @@ if (args.Length > 1 && args[0] == "result-edge")
     ResultEdgeReport.Run(args);
     return;
 }
+// "sweep-alloc": what the default sweep's points allocate, by type.
+if (args.Length > 0 && args[0] == "sweep-alloc")
+{
+    SweepAllocations.Run();
+    return;
+}
+// "sweep [RUNS]": the default sweep's phases (points on 1 and 2 threads, figures serial and concurrent, CSV) in one process.
+if (args.Length > 0 && args[0] == "sweep")
+{
+    DefaultSweep.Report(args);
+    return;
+}
 BenchmarkSwitcher.FromAssembly(typeof(EnvelopeSolverBenchmarks).Assembly).Run(args);

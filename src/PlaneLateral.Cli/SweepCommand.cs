@@ -138,8 +138,12 @@ internal static class SweepCommand
         // Progress only for a person watching: stderr is the console and a terminal.
         bool terminal = ReferenceEquals(stderr, Console.Error) && !Console.IsErrorRedirected;
         var progress = terminal ? new TerminalProgress(stderr, total) : null;
+        // The drawing library's one-time start beside the points, not after them (off the run's critical path).
+        var warmUp = Task.Run(SweepFiles.WarmUp);
         var result = AspectSweep.Run(spec, a.Models(), progress);
         progress?.Finish();
+        try { warmUp.Wait(); }
+        catch (AggregateException) { /* nothing drawn was kept: the figures below meet the same fault and report it */ }
 
         string folder = a.Out ?? Path.Combine(Directory.GetCurrentDirectory(), "planelateral-results", "sweep");
         IReadOnlyList<string> written;

@@ -1,3 +1,4 @@
+using System.Collections.Concurrent;
 using System.Globalization;
 using PlaneLateral.Analysis;
 using PlaneLateral.Hand;
@@ -128,6 +129,12 @@ public interface ISweepFeModel
 
     /// <summary>How the model is built and loaded, in plain words.</summary>
     string Description { get; }
+
+    /// <summary>
+    /// A rough relative cost of <see cref="Solve"/> for this wall (any unit, the same for every wall of one model), used
+    /// only to start the dearest points first; it never changes a result. Default 1: every wall alike.
+    /// </summary>
+    double Cost(SweepWall wall) => 1;
 }
 
 /// <summary>
@@ -294,12 +301,18 @@ public static class AspectSweep
         return p;
     }
 
-    /// <summary>Runs the sweep on every core.</summary>
+    /// <summary>
+    /// Runs the sweep on every core (or on <paramref name="threads"/>). The points are handed out one at a time, the
+    /// dearest first (by the models' <see cref="ISweepFeModel.Cost"/>), so that no thread is left with a long point at
+    /// the end; each is stored at its own index, so the result does not depend on the threads or the order they ran in.
+    /// </summary>
     /// <param name="models">FE models in order (the first is the reference); at least one.</param>
     /// <param name="progress">Told the number of finished points (of Points × Ends) as they finish; may be called from any thread.</param>
+    /// <param name="threads">Threads to run the points on; 0 (default): <see cref="Environment.ProcessorCount"/>.</param>
     /// <exception cref="ArgumentException">The spec has problems (<see cref="Problems(SweepSpec, IReadOnlyList{ISweepFeModel})"/>), all listed.</exception>
-    public static SweepResult Run(SweepSpec spec, IReadOnlyList<ISweepFeModel> models, IProgress<int>? progress = null)
+    public static SweepResult Run(SweepSpec spec, IReadOnlyList<ISweepFeModel> models, IProgress<int>? progress = null, int threads = 0)
     {
+        ArgumentOutOfRangeException.ThrowIfNegative(threads);
         var problems = Problems(spec, models);
         if (problems.Count > 0) throw new ArgumentException(string.Join("\n", problems));
         if (models.Count == 0) throw new ArgumentException("the sweep needs at least one FE model.");
@@ -313,16 +326,30 @@ public static class AspectSweep
         int n = ratios.Length * spec.Ends.Count;
         var points = new SweepPoint[n];
         int done = 0;
-        Parallel.For(0, n, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, k =>
+        SweepWall Wall(int k)
         {
-            var ends = spec.Ends[k / ratios.Length];
             double aspect = ratios[k % ratios.Length];
+            return new SweepWall(aspect, aspect * l, l, t, e, g, spec.FormFactor, spec.Ends[k / ratios.Length]) { Opening = spec.Opening, BaseSprings = springs };
+        }
+        // Dearest first, ties in index order; handed out one by one (no chunks), so the threads finish together.
+        var cost = new double[n];
+        for (int k = 0; k < n; k++)
+        {
+            var w = Wall(k);
+            foreach (var m in models) cost[k] += m.Cost(w);
+        }
+        var order = Enumerable.Range(0, n).OrderByDescending(k => cost[k]).ThenBy(k => k).ToArray();
+        var parallel = new ParallelOptions { MaxDegreeOfParallelism = threads > 0 ? threads : Environment.ProcessorCount };
+        Parallel.ForEach(Partitioner.Create(order, EnumerablePartitionerOptions.NoBuffering), parallel, k =>
+        {
+            var wall = Wall(k);
+            var ends = wall.Ends;
+            double aspect = wall.AspectRatio;
             double hUser = aspect * spec.Length;
             // Hand side in the user's units (the library takes any consistent set): a unit force at the top.
             var hand = spec.Opening is null
                 ? Piers.Rectangular(ends, 1.0, hUser, spec.Length, spec.Thickness, spec.E, spec.G, spec.FormFactor)
                 : PerforatedHand(spec, ends, hUser);
-            var wall = new SweepWall(aspect, aspect * l, l, t, e, g, spec.FormFactor, ends) { Opening = spec.Opening, BaseSprings = springs };
             var fe = new FeEstimate[models.Count];
             var errors = new double?[models.Count];
             for (int m = 0; m < models.Count; m++)

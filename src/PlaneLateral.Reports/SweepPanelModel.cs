@@ -78,6 +78,9 @@ public sealed class PanelWallModel : IConvergedSweepFeModel
         return (s.Stiffness, s.ShearShare);
     }
 
+    /// <summary>The base mesh's planned nodes: the nested meshes and the banded factorisation grow with it alike.</summary>
+    public double Cost(SweepWall wall) => Math.Max(1, PanelMesher.PlannedNodes(Panel(wall)));
+
     public SweepFeSolution SolveConverged(SweepWall wall)
     {
         var r = PanelAnalysis.Run(Panel(wall), []);

@@ -46,6 +46,7 @@ public static class ComparisonStudy
 
     private static ComparisonReport Run(StructureModel model, double defaultTolerance, AnalysisResult? full, AnalysisOptions options)
     {
+        options = AnalysisOptions.ForRun(options);
         if (!(defaultTolerance > 0 && defaultTolerance < 1))
             throw new ArgumentOutOfRangeException(nameof(defaultTolerance), "The tolerance must be a fraction between 0 and 1, e.g. 0.10.");
         var rows = new List<ComparisonRow>();

@@ -1,3 +1,4 @@
+using PlaneLateral.Analysis;
 using System.Globalization;
 using System.Text;
 using PlaneLateral.Hand;

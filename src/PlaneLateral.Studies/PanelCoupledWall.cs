@@ -47,6 +47,12 @@ public sealed class PanelCoupledWall(int Refinement = PanelCoupledWall.DefaultRe
 
     public string Name => ModelName;
 
+    /// <summary>The options the panel is solved with (the run's solver, which factorises each distinct matrix once), or null.</summary>
+    public AnalysisOptions? Options { get; init; }
+
+    /// <summary>The same model solved with <paramref name="options"/>.</summary>
+    public PanelCoupledWall On(AnalysisOptions? options) => new(Refinement, ElementSize, Element, TieBeams, MaxNodes) { Options = options };
+
     public int MeshRefinement => Refinement;
 
     /// <summary>What the panel is: the coupled wall itself, its piers alone (beams left out), or the solid wall (openings filled).</summary>
@@ -203,7 +209,7 @@ public sealed class PanelCoupledWall(int Refinement = PanelCoupledWall.DefaultRe
     public Solution SolveFull(CoupledWallCheck c, CoupledWallLoad load, double magnitude, string source, Fill fill = Fill.Openings, AnalysisOptions? options = null)
     {
         var (panel, pm) = Build(c, load, magnitude, fill);
-        var r = PanelAnalysis.Run(panel, pm, ["coupled"], options, source);
+        var r = PanelAnalysis.Run(panel, pm, ["coupled"], options ?? Options, source);
         var cr = r.Analysis.Cases[0];
         var mesh = pm.Mesh;
         int np = c.Piers.Count, ns = c.Stories;

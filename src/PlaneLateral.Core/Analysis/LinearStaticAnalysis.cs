@@ -149,9 +149,36 @@ public static partial class LinearStaticAnalysis
             Conditioning = condition,
             // With linked panels, K and the load vectors are the frame's with the panels condensed onto their frame nodes.
             System = new LinearSystem { Stiffness = k, CaseIds = model.LoadCases.Select(c => c.Id).ToArray(), LoadVectors = loadVectors },
-            Panels = model.Panels.Select(p => links?.Result(p) ?? RunPanel(model, p, options)).ToArray(),
+            Panels = Panels(model, links, options),
             PanelLinks = linkResults,
         };
+    }
+
+    /// <summary>
+    /// Every wall panel's result, in model order: a linked panel's from its recovery; the others solved, independent
+    /// of one another, side by side on the processors when there are several (each stored at its own index, each solve
+    /// the same arithmetic on any thread, so the results do not depend on the processors). A failure is reported for the
+    /// first failing panel in model order, as a one-by-one run would.
+    /// </summary>
+    private static PanelResult[] Panels(StructureModel model, LinkedPanels? links, AnalysisOptions options)
+    {
+        int n = model.Panels.Count;
+        var results = new PanelResult[n];
+        for (int i = 0; i < n; i++) results[i] = links?.Result(model.Panels[i])!;
+        var own = Enumerable.Range(0, n).Where(i => results[i] is null).ToArray();
+        if (own.Length <= 1)
+        {
+            foreach (int i in own) results[i] = RunPanel(model, model.Panels[i], options);
+            return results;
+        }
+        var errors = new Exception?[n];
+        Parallel.ForEach(own, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, i =>
+        {
+            try { results[i] = RunPanel(model, model.Panels[i], options); }
+            catch (Exception e) { errors[i] = e; }
+        });
+        if (errors.FirstOrDefault(e => e is not null) is { } first) System.Runtime.ExceptionServices.ExceptionDispatchInfo.Throw(first);
+        return results;
     }
 
     /// <summary>

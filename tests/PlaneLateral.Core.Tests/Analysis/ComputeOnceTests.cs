@@ -2,6 +2,7 @@ using PlaneLateral.Analysis;
 using PlaneLateral.Model;
 using PlaneLateral.Output;
 using PlaneLateral.Solvers;
+using PlaneLateral.Studies;
 using PlaneLateral.Tests.Input;
 using PlaneLateral.Tests.Seismic;
 
@@ -73,6 +74,85 @@ public class ComputeOnceTests
         Assert.NotNull(run.Analysis.PanelLinks);
         Assert.Equal(counter.Distinct, counter.Count);
         Assert.Equal(5, counter.Count);
+    }
+
+    /// <summary>
+    /// What `report` (and the no-argument demo's `solve`) runs: the model's run, then its comparison checks, on one set of
+    /// options, so that one solver sees every factorisation of the run.
+    /// </summary>
+    private static (ModelResult Run, ComparisonReport? Checks, CountingSolver Counter, int ChecksRequests) Report(StructureModel model)
+    {
+        var counter = new CountingSolver(DefaultSolver.Create());
+        var options = AnalysisOptions.ForRun(new AnalysisOptions { Solver = counter });
+        var run = ModelRun.Run(model, options);
+        var checks = model.Comparisons.Count > 0 ? ComparisonStudy.Run(model, ComparisonStudy.DefaultTolerance, run) : null;
+        return (run, checks, counter, ((FactorOnceSolver)options.Solver!).Requests - run.FactorizationRequests);
+    }
+
+    [Theory]
+    [InlineData("panels/masonry-wall-and-frame.json")]
+    [InlineData("panels/squat-wall.json")]
+    [InlineData("panels/two-story-wall.json")]
+    [InlineData("panels/wall-in-frame.json")]
+    [InlineData("footings/panel-on-footing.json")]
+    public void EveryShippedPanelModelFactorisesEachDistinctMatrixOnceInSolveAndReport(string relative)
+    {
+        // `solve`: the run alone. Every panel's meshes are among the matrices the counter saw, each once.
+        var model = ModelReader.ReadFile(RepositoryFiles.ModelPath(relative));
+        var (run, counter) = Run(model);
+        Assert.NotEmpty(run.Analysis.Panels);
+        Assert.Equal(counter.Distinct, counter.Count);
+        foreach (var p in run.Analysis.Panels)   // a standalone panel's meshes (a linked panel's are its interior, not checked here)
+            foreach (int size in p.Convergence?.Unknowns ?? (run.Analysis.PanelLinks is null ? [p.Analysis.Solve.Unknowns] : []))
+                Assert.Contains(counter.Seen, s => s.Size == size);
+        Assert.Equal(run.Factorizations, counter.Count);
+        // `report`: the checks on the run's solver add no factorisation of a matrix the run made.
+        var (run2, _, counter2, _) = Report(model);
+        Assert.Equal(counter2.Distinct, counter2.Count);
+        Assert.True(counter2.Count >= run2.Factorizations);
+    }
+
+    [Fact]
+    public void TheCoupledWallDemoFactorisesItsPanelOnceForBothLoads()
+    {
+        // demo-coupled-wall.json: a coupled-wall check with a uniform and a top load. The plane-stress panel of the wall
+        // (about 21,000 unknowns) is one matrix under both loads; it was assembled and factorised once per load.
+        var model = ModelReader.ReadFile(RepositoryFiles.ModelPath("demo-coupled-wall.json"));
+        var (_, checks, counter, _) = Report(model);
+        Assert.Contains(checks!.Rows, r => r.Fe.Any(f => f.Model == "plane-stress panel"));
+        Assert.Equal(2, CoupledWallStudy.Loads((CoupledWallCheck)model.Comparisons[0]).Count());
+        var big = counter.Seen.Where(s => s.Size > 10_000).ToArray();
+        Assert.Single(big);
+        Assert.Equal(counter.Distinct, counter.Count);
+    }
+
+    [Fact]
+    public void IndependentPanelsOfOneModelSolvedSideBySideEqualEachSolvedAlone()
+    {
+        // Two standalone panels (the two-story wall and a copy with other openings, 10 m along): the run solves them in
+        // parallel; each result is bitwise the panel's own analysis (common practice: the output depends on the input only).
+        var json = Newtonsoft.Json.Linq.JObject.Parse(File.ReadAllText(RepositoryFiles.ModelPath("panels/two-story-wall.json")));
+        var panels = (Newtonsoft.Json.Linq.JArray)json["panels"]!;
+        var second = (Newtonsoft.Json.Linq.JObject)panels[0].DeepClone();
+        second["id"] = "south wall";
+        second["x"] = 10;
+        ((Newtonsoft.Json.Linq.JArray)second["openings"]!).RemoveAt(2);
+        panels.Add(second);
+        var model = ModelReader.Parse(json.ToString(), "two-panels.json");
+        var (run, counter) = Run(model);
+        Assert.Equal(2, run.Analysis.Panels.Count);
+        Assert.Equal(counter.Distinct, counter.Count);
+        string[] cases = model.LoadCases.Select(c => c.Id).ToArray();
+        for (int i = 0; i < 2; i++)
+        {
+            var got = run.Analysis.Panels[i];
+            var alone = PanelAnalysis.Run(model.Panels[i], cases, null, model.SourcePath, model.Combinations);
+            Assert.Equal(model.Panels[i].Id, got.Panel.Id);
+            Assert.Equal(BitConverter.DoubleToInt64Bits(alone.TopStiffness), BitConverter.DoubleToInt64Bits(got.TopStiffness));
+            Assert.Equal(alone.Convergence!.Stiffness, got.Convergence!.Stiffness);
+            Assert.Equal(alone.LevelDisplacements, got.LevelDisplacements);
+        }
+        Assert.NotEqual(run.Analysis.Panels[0].TopStiffness, run.Analysis.Panels[1].TopStiffness);
     }
 
     [Fact]

@@ -16,15 +16,19 @@ public sealed class ProcessorCountTests : IDisposable
 
     public void Dispose() => Directory.Delete(_dir, recursive: true);
 
-    private static async Task RunChild(string variable, string value, string command, string model, string outDir)
+    private static Task RunChild(string variable, string value, string command, string model, string outDir) =>
+        RunChild(variable, value, [command, model, "--out", outDir], outDir);
+
+    private static async Task RunChild(string variable, string value, string[] args, string outDir)
     {
+        string command = string.Join(' ', args), model = "";
         var psi = new ProcessStartInfo("dotnet")
         {
             RedirectStandardOutput = true, RedirectStandardError = true, UseShellExecute = false,
             WorkingDirectory = Path.GetDirectoryName(outDir)!,
         };
         psi.ArgumentList.Add(Path.Combine(AppContext.BaseDirectory, "planelateral.dll"));
-        foreach (var a in new[] { command, model, "--out", outDir }) psi.ArgumentList.Add(a);
+        foreach (var a in args) psi.ArgumentList.Add(a);
         psi.Environment[variable] = value;
         using var p = Process.Start(psi)!;
         var stdout = p.StandardOutput.ReadToEndAsync();
@@ -82,4 +86,16 @@ public sealed class ProcessorCountTests : IDisposable
     [InlineData("panels/two-story-wall.json", "solve")]
     public Task VectorInstructionsOnAndOffWriteTheSameBytes(string relative, string command) =>
         AssertSameBytes(relative, command, "DOTNET_EnableAVX", "1", "0");
+
+    [Fact]
+    public async Task TheSweepWritesTheSameBytesOnOneAndTwoProcessors()
+    {
+        // The sweep's points run on every processor and its two figures are drawn at the same time; 6 h/l values × both
+        // ends with the converged panel (the command's default models).
+        string one = Path.Combine(_dir, "sweep-one"), two = Path.Combine(_dir, "sweep-two");
+        await RunChild("DOTNET_PROCESSOR_COUNT", "1", ["sweep", "--points", "6", "--out", one], one);
+        await RunChild("DOTNET_PROCESSOR_COUNT", "2", ["sweep", "--points", "6", "--out", two], two);
+        foreach (var f in new[] { "sweep.csv", "sweep-ratio.png", "sweep-shear-share.png" })
+            Assert.True(File.ReadAllBytes(Path.Combine(one, f)).AsSpan().SequenceEqual(File.ReadAllBytes(Path.Combine(two, f))), $"{f} differs between 1 and 2 processors");
+    }
 }

@@ -33,7 +33,9 @@ public sealed class LagrangeQuad9 : IPlaneElement
         return n;
     }
 
-    private static (double[,] B, double Det) Matrix(ReadOnlySpan<double> x, ReadOnlySpan<double> y, double xi, double eta)
+    /// <summary>The strain-displacement matrix B at (ξ, η) into <paramref name="b"/> (3 × 18, row by row), and det J.
+    /// On the caller's stack: the stiffness asks for it at 9 points of every element of every mesh.</summary>
+    private static double Matrix(ReadOnlySpan<double> x, ReadOnlySpan<double> y, double xi, double eta, Span<double> b)
     {
         Span<double> dxi = stackalloc double[9], deta = stackalloc double[9];
         double j00 = 0, j01 = 0, j10 = 0, j11 = 0;
@@ -45,26 +47,27 @@ public sealed class LagrangeQuad9 : IPlaneElement
         }
         var (i00, i01, i10, i11, det) = PlaneMath.Invert2(j00, j01, j10, j11);
         if (!(det > 0)) throw new ArgumentException("element has a non-positive Jacobian: nodes must be counter-clockwise and the shape not folded");
-        var b = new double[3, 18];
+        b.Clear();
         for (int a = 0; a < 9; a++)
         {
             double nx = i00 * dxi[a] + i01 * deta[a], ny = i10 * dxi[a] + i11 * deta[a];
-            b[0, 2 * a] = nx; b[1, 2 * a + 1] = ny; b[2, 2 * a] = ny; b[2, 2 * a + 1] = nx;
+            b[2 * a] = nx; b[18 + 2 * a + 1] = ny; b[36 + 2 * a] = ny; b[36 + 2 * a + 1] = nx;
         }
-        return (b, det);
+        return det;
     }
 
     public double[,] Stiffness(ReadOnlySpan<double> x, ReadOnlySpan<double> y, PlaneStressMaterial material)
     {
         var d = material.D();
         var k = new double[18, 18];
+        Span<double> b = stackalloc double[3 * 18];
         var g = GaussLegendre.Points3;
         var w = GaussLegendre.Weights3;
         for (int p = 0; p < 3; p++)
             for (int q = 0; q < 3; q++)
             {
-                var (b, det) = Matrix(x, y, g[p], g[q]);
-                PlaneMath.AddAtDB(k, b, d, b, w[p] * w[q] * det * material.Thickness);
+                double det = Matrix(x, y, g[p], g[q], b);
+                PlaneMath.AddBtDB(k, b, 18, d, w[p] * w[q] * det * material.Thickness);
             }
         for (int i = 0; i < 18; i++)
             for (int j = 0; j < i; j++) { double v = 0.5 * (k[i, j] + k[j, i]); k[i, j] = v; k[j, i] = v; }
@@ -77,13 +80,14 @@ public sealed class LagrangeQuad9 : IPlaneElement
         var d = material.D();
         var g = GaussLegendre.Points3;
         var list = new PlaneStressPoint[9];
+        Span<double> b = stackalloc double[3 * 18];
         int k = 0;
         foreach (double eta in g)
             foreach (double xi in g)
             {
-                var (b, _) = Matrix(x, y, xi, eta);
+                Matrix(x, y, xi, eta, b);
                 double ex = 0, ey = 0, gxy = 0;
-                for (int j = 0; j < 18; j++) { ex += b[0, j] * ue[j]; ey += b[1, j] * ue[j]; gxy += b[2, j] * ue[j]; }
+                for (int j = 0; j < 18; j++) { ex += b[j] * ue[j]; ey += b[18 + j] * ue[j]; gxy += b[36 + j] * ue[j]; }
                 var (sx, sy, txy) = PlaneMath.Stress(d, ex, ey, gxy);
                 var n = Shape(xi, eta);
                 double px = 0, py = 0;

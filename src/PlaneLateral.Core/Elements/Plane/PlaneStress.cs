@@ -94,6 +94,21 @@ internal static class PlaneMath
                 k[i, j] += w * (a[0, i] * db[0, j] + a[1, i] * db[1, j] + a[2, i] * db[2, j]);
     }
 
+    /// <summary>
+    /// Adds w·Bᵀ·D·B to k, B given row by row (3 × n) in a span: the same arithmetic, in the same order, as
+    /// <see cref="AddAtDB"/> with A = B, without a temporary on the heap.
+    /// </summary>
+    public static void AddBtDB(double[,] k, ReadOnlySpan<double> b, int n, double[,] d, double w)
+    {
+        Span<double> db = n <= 32 ? stackalloc double[3 * n] : new double[3 * n];
+        for (int i = 0; i < 3; i++)
+            for (int j = 0; j < n; j++)
+                db[i * n + j] = d[i, 0] * b[j] + d[i, 1] * b[n + j] + d[i, 2] * b[2 * n + j];
+        for (int i = 0; i < n; i++)
+            for (int j = 0; j < n; j++)
+                k[i, j] += w * (b[i] * db[j] + b[n + i] * db[n + j] + b[2 * n + i] * db[2 * n + j]);
+    }
+
     /// <summary>Solves A·X = B for a small SPD A by Gaussian elimination with partial pivoting (A and B are copied).</summary>
     public static double[,] Solve(double[,] a, double[,] b)
     {
