@@ -149,19 +149,7 @@ internal sealed class TextTable(params string[] headers)
     }
 
     /// <summary>Four significant figures; exponent form only for very small or very large magnitudes.</summary>
-    public static string Num(double v)
-    {
-        if (v == 0) return "0";
-        if (double.IsNaN(v)) return "n/a";   // undefined (e.g. a centre of rigidity of a story without shear), never "NaN"
-        if (!double.IsFinite(v)) return v > 0 ? "inf" : "-inf";
-        double a = Math.Abs(v);
-        if (a >= 1e-3 && a < 1e7)
-        {
-            int decimals = Math.Max(0, 3 - (int)Math.Floor(Math.Log10(a)));
-            return v.ToString("F" + decimals, CultureInfo.InvariantCulture);
-        }
-        return v.ToString("0.000E+0", CultureInfo.InvariantCulture);
-    }
+    public static string Num(double v) => PlaneLateral.Output.ResultTable.Number(v);   // one number format for console and report
 
     public static string Sci(double v) => v.ToString("0.0E+0", CultureInfo.InvariantCulture);
 }

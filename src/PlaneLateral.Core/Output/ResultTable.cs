@@ -28,6 +28,11 @@ public sealed class ResultTable
     /// <summary>The rows, in order; a table of computed rows enumerates them afresh each time it is read.</summary>
     public required IEnumerable<IReadOnlyList<object>> Rows { get; init; }
     public IReadOnlyList<string> Notes { get; init; } = [];
+    /// <summary>
+    /// Lines the CSV file opens with before its header, each written as one <c># text</c> comment (the caution, notes of
+    /// how the file was produced): the only thing a results CSV carries besides its one table.
+    /// </summary>
+    public IReadOnlyList<string> Comments { get; init; } = [];
 
     /// <summary>The index of the column named <paramref name="name"/>.</summary>
     public int Column(string name)
@@ -47,6 +52,7 @@ public sealed class ResultTable
     /// <summary>Writes the table as CSV into <paramref name="w"/>, one row at a time: the header row, then each row.</summary>
     public void WriteCsv(TextWriter w)
     {
+        foreach (var comment in Comments) w.Write(CsvText.Comment(comment));
         w.Write(string.Join(",", Columns.Select(c => c.Header)));
         w.Write('\n');
         foreach (var row in Rows)
@@ -63,6 +69,33 @@ public sealed class ResultTable
             }
             w.Write('\n');
         }
+    }
+
+    /// <summary>
+    /// A cell as the console and the report show it: numbers to four significant figures (fixed between 1e-3 and 1e7,
+    /// otherwise scientific), a percentage column as "12.3 %", a non-finite number as "n/a", text as it is.
+    /// </summary>
+    public static string Display(object? cell, CellKind kind) => cell switch
+    {
+        int i => i.ToString(CultureInfo.InvariantCulture),
+        double v when kind == CellKind.Percent => double.IsFinite(v) ? (100 * v).ToString("0.0", CultureInfo.InvariantCulture) + " %" : "n/a",
+        double v => double.IsFinite(v) ? Number(v) : "n/a",
+        _ => cell?.ToString() ?? "",
+    };
+
+    /// <summary>A number to four significant figures: fixed between 1e-3 and 1e7, scientific otherwise; "0" for zero.</summary>
+    public static string Number(double v)
+    {
+        if (v == 0) return "0";
+        if (double.IsNaN(v)) return "n/a";
+        if (!double.IsFinite(v)) return v > 0 ? "inf" : "-inf";
+        double a = Math.Abs(v);
+        if (a >= 1e-3 && a < 1e7)
+        {
+            int decimals = Math.Max(0, 3 - (int)Math.Floor(Math.Log10(a)));
+            return v.ToString("F" + decimals, CultureInfo.InvariantCulture);
+        }
+        return v.ToString("0.000E+0", CultureInfo.InvariantCulture);
     }
 }
 
