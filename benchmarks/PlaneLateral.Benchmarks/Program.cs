@@ -31,6 +31,13 @@ if (args.Length > 1 && args[0] == "supernodal")
     SupernodalReport.Run(args);
     return;
 }
+// "memory NX [NY] [THREADS]" or "memory FILE.mtx [THREADS]": one pass (matrix, order, factorise, solve) with the memory at each
+// phase boundary, for the peak-memory comparison with the CHOLMOD harness under /usr/bin/time -v (MemoryReport).
+if (args.Length > 1 && args[0] == "memory")
+{
+    MemoryReport.Run(args);
+    return;
+}
 // "result-edge DIR [CASES]": the count limits' edge (10 000 nodes, 20 000 members, 200 cases) analysed and its results
 // files streamed to DIR/out, with wall times, peak working set and file sizes (docs/hardening.md, "Size limits").
 if (args.Length > 1 && args[0] == "result-edge")

@@ -63,20 +63,28 @@ public sealed class SymmetricMatrixBuilder
             vals[p] = v;
         }
 
+        // Duplicates are summed in place (the write position never passes the read position, and each column is sorted
+        // before it is read), in the same order as before, so the values are the same to the bit; only the result is
+        // copied out at its final size. No second pair of triplet-sized arrays: issue 19, the builder's peak set the
+        // process's peak memory at 10⁶ unknowns (docs/solver.md, "Process peak memory").
         var colPtr = new int[Size + 1];
-        var outRows = new List<int>(_entries.Count);
-        var outVals = new List<double>(_entries.Count);
+        int w = 0;
         for (int j = 0; j < Size; j++)
         {
-            int start = counts[j], end = counts[j + 1];
+            int start = counts[j], end = counts[j + 1], colStart = w;
             Array.Sort(rows, vals, start, end - start);
             for (int p = start; p < end; p++)
             {
-                if (outRows.Count > colPtr[j] && outRows[^1] == rows[p]) outVals[^1] += vals[p];
-                else { outRows.Add(rows[p]); outVals.Add(vals[p]); }
+                if (w > colStart && rows[w - 1] == rows[p]) vals[w - 1] += vals[p];
+                else { rows[w] = rows[p]; vals[w] = vals[p]; w++; }
             }
-            colPtr[j + 1] = outRows.Count;
+            colPtr[j + 1] = w;
         }
-        return new SymmetricSparseMatrix(Size, colPtr, outRows.ToArray(), outVals.ToArray());
+        if (w < rows.Length)
+        {
+            rows = rows.AsSpan(0, w).ToArray();
+            vals = vals.AsSpan(0, w).ToArray();
+        }
+        return new SymmetricSparseMatrix(Size, colPtr, rows, vals);
     }
 }
