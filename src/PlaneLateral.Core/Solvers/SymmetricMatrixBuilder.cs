@@ -1,18 +1,30 @@
+using System.Buffers;
+
 namespace PlaneLateral.Solvers;
 
 /// <summary>
 /// Collects the entries of a symmetric matrix as coordinate triplets (duplicates are summed) and compresses them
 /// into a <see cref="SymmetricSparseMatrix"/>. Only the lower triangle is kept.
 /// </summary>
+/// <remarks>
+/// The triplets and <see cref="Build"/>'s working arrays are rented from <see cref="ArrayPool{T}.Shared"/> and given back
+/// when the matrix is built, so that a thread assembling one system after another (the sweep's points, a convergence
+/// study's meshes) reuses the same memory instead of asking the collector for a fresh large-object array each time: a
+/// builder is built once. Only the compressed matrix is newly allocated; its entries are the same, summed in the same
+/// order, as with fresh arrays.
+/// </remarks>
 public sealed class SymmetricMatrixBuilder
 {
-    private readonly List<(int Row, int Col, double Value)> _entries;
+    private (int Row, int Col, double Value)[] _entries;
+    private int _count;
+    private bool _built;
 
     public SymmetricMatrixBuilder(int size, int capacityHint = 0)
     {
         ArgumentOutOfRangeException.ThrowIfNegative(size);
+        ArgumentOutOfRangeException.ThrowIfNegative(capacityHint);
         Size = size;
-        _entries = new List<(int, int, double)>(capacityHint);
+        _entries = capacityHint > 0 ? ArrayPool<(int, int, double)>.Shared.Rent(capacityHint) : [];
     }
 
     public int Size { get; }
@@ -21,7 +33,7 @@ public sealed class SymmetricMatrixBuilder
     public void AddDiagonal(int i, double value)
     {
         if ((uint)i >= (uint)Size) throw new ArgumentOutOfRangeException(nameof(i));
-        _entries.Add((i, i, value));
+        Add(i, i, value);
     }
 
     /// <summary>
@@ -42,41 +54,83 @@ public sealed class SymmetricMatrixBuilder
             {
                 int gj = dofs[b];
                 if (gj < 0 || gj > gi) continue;
-                _entries.Add((gi, gj, ke[a, b]));
+                Add(gi, gj, ke[a, b]);
             }
         }
     }
 
-    /// <summary>Compresses the triplets: lower triangle, rows ascending in each column, duplicates summed.</summary>
+    private void Add(int row, int col, double value)
+    {
+        if (_built) throw new InvalidOperationException("The matrix was built already; a builder is built once.");
+        if (_count == _entries.Length) Grow();
+        _entries[_count++] = (row, col, value);
+    }
+
+    private void Grow()
+    {
+        var pool = ArrayPool<(int, int, double)>.Shared;
+        var bigger = pool.Rent(Math.Max(16, 2 * _entries.Length));
+        _entries.AsSpan(0, _count).CopyTo(bigger);
+        if (_entries.Length > 0) pool.Return(_entries);
+        _entries = bigger;
+    }
+
+    /// <summary>Compresses the triplets: lower triangle, rows ascending in each column, duplicates summed. Call it once.</summary>
+    /// <exception cref="InvalidOperationException">The builder was built already.</exception>
     public SymmetricSparseMatrix Build()
     {
-        var counts = new int[Size + 1];
-        foreach (var (r, c, _) in _entries) counts[c + 1]++;
-        for (int j = 0; j < Size; j++) counts[j + 1] += counts[j];
-        var rows = new int[_entries.Count];
-        var vals = new double[_entries.Count];
-        var next = (int[])counts.Clone();
-        foreach (var (r, c, v) in _entries)
+        if (_built) throw new InvalidOperationException("The matrix was built already; a builder is built once.");
+        _built = true;
+        var ints = ArrayPool<int>.Shared;
+        var doubles = ArrayPool<double>.Shared;
+        int count = _count;
+        var entries = _entries;
+        var counts = ints.Rent(Size + 1);
+        var next = ints.Rent(Size + 1);
+        var rows = ints.Rent(count);
+        var vals = doubles.Rent(count);
+        var outRows = ints.Rent(count);
+        var outVals = doubles.Rent(count);
+        try
         {
-            int p = next[c]++;
-            rows[p] = r;
-            vals[p] = v;
-        }
-
-        var colPtr = new int[Size + 1];
-        var outRows = new List<int>(_entries.Count);
-        var outVals = new List<double>(_entries.Count);
-        for (int j = 0; j < Size; j++)
-        {
-            int start = counts[j], end = counts[j + 1];
-            Array.Sort(rows, vals, start, end - start);
-            for (int p = start; p < end; p++)
+            Array.Clear(counts, 0, Size + 1);
+            for (int e = 0; e < count; e++) counts[entries[e].Col + 1]++;
+            for (int j = 0; j < Size; j++) counts[j + 1] += counts[j];
+            Array.Copy(counts, next, Size + 1);
+            for (int e = 0; e < count; e++)
             {
-                if (outRows.Count > colPtr[j] && outRows[^1] == rows[p]) outVals[^1] += vals[p];
-                else { outRows.Add(rows[p]); outVals.Add(vals[p]); }
+                var (r, c, v) = entries[e];
+                int p = next[c]++;
+                rows[p] = r;
+                vals[p] = v;
             }
-            colPtr[j + 1] = outRows.Count;
+
+            var colPtr = new int[Size + 1];
+            int m = 0;
+            for (int j = 0; j < Size; j++)
+            {
+                int start = counts[j], end = counts[j + 1];
+                Array.Sort(rows, vals, start, end - start);
+                for (int p = start; p < end; p++)
+                {
+                    if (m > colPtr[j] && outRows[m - 1] == rows[p]) outVals[m - 1] += vals[p];
+                    else { outRows[m] = rows[p]; outVals[m] = vals[p]; m++; }
+                }
+                colPtr[j + 1] = m;
+            }
+            return new SymmetricSparseMatrix(Size, colPtr, outRows.AsSpan(0, m).ToArray(), outVals.AsSpan(0, m).ToArray());
         }
-        return new SymmetricSparseMatrix(Size, colPtr, outRows.ToArray(), outVals.ToArray());
+        finally
+        {
+            ints.Return(counts);
+            ints.Return(next);
+            ints.Return(rows);
+            doubles.Return(vals);
+            ints.Return(outRows);
+            doubles.Return(outVals);
+            if (entries.Length > 0) ArrayPool<(int, int, double)>.Shared.Return(entries);
+            _entries = [];
+            _count = 0;
+        }
     }
 }
