@@ -60,7 +60,9 @@ public static class DefaultSweep
                 long bytes0 = GC.GetTotalAllocatedBytes(precise: true);
                 int gc0 = GC.CollectionCount(0), gc2 = GC.CollectionCount(2);
                 var pause0 = GC.GetTotalPauseDuration();
+                long faults0 = MinorFaults(), locks0 = Monitor.LockContentionCount;
                 var points = Time(() => r = Points(threads));
+                long faults = MinorFaults() - faults0, locks = Monitor.LockContentionCount - locks0;
                 double mib = (GC.GetTotalAllocatedBytes(precise: true) - bytes0) / 1048576.0;
                 int gen0 = GC.CollectionCount(0) - gc0, gen2 = GC.CollectionCount(2) - gc2;
                 double pause = (GC.GetTotalPauseDuration() - pause0).TotalSeconds;
@@ -77,7 +79,7 @@ public static class DefaultSweep
                 Add($"CSV + figures at the same time (SweepFiles.Render), {threads} thread(s) for points", render);
                 Add($"CSV text alone, {threads} thread(s) for points", csv);
                 Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
-                    $"run {run + 1} threads {threads}: points {points.Wall:F3} s (cpu {points.Cpu:F3}, {mib:F0} MiB allocated, {gen0} gen-0 / {gen2} gen-2 collections, paused {pause:F3} s), figures serial {serial.Wall:F3} s (cpu {serial.Cpu:F3}), render {render.Wall:F3} s (cpu {render.Cpu:F3})"));
+                    $"run {run + 1} threads {threads}: points {points.Wall:F3} s (cpu {points.Cpu:F3}, {mib:F0} MiB allocated, {gen0} gen-0 / {gen2} gen-2 collections, paused {pause:F3} s, {faults} minor page faults, {locks} lock contentions), figures serial {serial.Wall:F3} s (cpu {serial.Cpu:F3}), render {render.Wall:F3} s (cpu {render.Cpu:F3})"));
             }
         Console.WriteLine($"\nmedians of {runs} runs (wall s, process cpu s); processors {Environment.ProcessorCount}; load average before {load0}, after {LoadAverage()}");
         foreach (var (key, list) in rows)
@@ -93,6 +95,18 @@ public static class DefaultSweep
     {
         var a = v.Order().ToArray();
         return a.Length % 2 == 1 ? a[a.Length / 2] : 0.5 * (a[a.Length / 2 - 1] + a[a.Length / 2]);
+    }
+
+    /// <summary>The process's minor page faults so far (first touches of fresh memory), from /proc/self/stat; 0 where there is none.</summary>
+    private static long MinorFaults()
+    {
+        try
+        {
+            string stat = File.ReadAllText("/proc/self/stat");
+            var fields = stat[(stat.LastIndexOf(')') + 2)..].Split(' ');
+            return long.Parse(fields[7], CultureInfo.InvariantCulture);   // field 10 of proc(5): minflt
+        }
+        catch (IOException) { return 0; }
     }
 
     private static string LoadAverage()

@@ -1,3 +1,5 @@
+using System.Buffers;
+
 namespace PlaneLateral.Solvers;
 
 /// <summary>How <see cref="Orderings.ReverseCuthillMcKee(SymmetricSparseMatrix, RcmStart)"/> picks each component's starting node.</summary>
@@ -119,17 +121,40 @@ public static class Orderings
         ArgumentNullException.ThrowIfNull(a);
         if (!Enum.IsDefined(startNode)) throw new ArgumentOutOfRangeException(nameof(startNode));
         int n = a.Size;
+        // The adjacency and the scratch arrays are rented and given back at the end (a thread ordering one system after
+        // another reuses them); each is cleared or fully written before it is read, so the ordering is the same.
+        var ints = ArrayPool<int>.Shared;
         var (xadj, adj) = Adjacency(a);
-        var degree = new int[n];
-        for (int v = 0; v < n; v++) degree[v] = xadj[v + 1] - xadj[v];
-
-        var perm = new int[n];
-        var numbered = new bool[n];
+        var degree = ints.Rent(n);
+        var numbered = ArrayPool<bool>.Shared.Rent(n);
         // Scratch for level structures: a level-set list and its level pointers, plus a per-node stamp so that
         // "visited in this sweep" needs no clearing between sweeps.
-        var levelNodes = new int[n];
-        var levelPtr = new int[n + 1];
-        var stamp = new int[n];
+        var levelNodes = ints.Rent(n);
+        var levelPtr = ints.Rent(n + 1);
+        var stamp = ints.Rent(n);
+        try
+        {
+            return ReverseCuthillMcKee(n, startNode, xadj, adj, degree, numbered, levelNodes, levelPtr, stamp);
+        }
+        finally
+        {
+            ints.Return(xadj);
+            ints.Return(adj);
+            ints.Return(degree);
+            ArrayPool<bool>.Shared.Return(numbered);
+            ints.Return(levelNodes);
+            ints.Return(levelPtr);
+            ints.Return(stamp);
+        }
+    }
+
+    private static int[] ReverseCuthillMcKee(int n, RcmStart startNode, int[] xadj, int[] adj, int[] degree, bool[] numbered,
+        int[] levelNodes, int[] levelPtr, int[] stamp)
+    {
+        for (int v = 0; v < n; v++) degree[v] = xadj[v + 1] - xadj[v];
+        Array.Clear(numbered, 0, n);
+        Array.Clear(stamp, 0, n);
+        var perm = new int[n];
         int stampValue = 0;
         var neighbourBuffer = new List<int>();
         var candidates = new List<int>();
@@ -260,14 +285,18 @@ public static class Orderings
     }
 
     /// <summary>
-    /// Full (both triangles) adjacency of the structural off-diagonal non-zeros, neighbours in ascending order.
+    /// Full (both triangles) adjacency of the structural off-diagonal non-zeros, neighbours in ascending order, in arrays
+    /// rented from <see cref="ArrayPool{T}.Shared"/> (longer than needed: xadj[0..n], adj[0..xadj[n]) hold it) that the
+    /// caller gives back.
     /// </summary>
     internal static (int[] Xadj, int[] Adj) Adjacency(SymmetricSparseMatrix a)
     {
         int n = a.Size;
         var cp = a.ColumnPointers;
         var ri = a.RowIndices;
-        var xadj = new int[n + 1];
+        var ints = ArrayPool<int>.Shared;
+        var xadj = ints.Rent(n + 1);
+        Array.Clear(xadj, 0, n + 1);
         for (int j = 0; j < n; j++)
             for (int p = cp[j]; p < cp[j + 1]; p++)
             {
@@ -277,8 +306,8 @@ public static class Orderings
                 xadj[j + 1]++;
             }
         for (int v = 0; v < n; v++) xadj[v + 1] += xadj[v];
-        var adj = new int[xadj[n]];
-        var fill = new int[n];
+        var adj = ints.Rent(xadj[n]);
+        var fill = ints.Rent(n);
         Array.Copy(xadj, fill, n);
         // Column j ascending: node i > j receives j (ascending j); node j receives its rows i > j (ascending),
         // after all of its smaller neighbours were added from earlier columns — so each list comes out sorted.
@@ -290,6 +319,7 @@ public static class Orderings
                 adj[fill[i]++] = j;
                 adj[fill[j]++] = i;
             }
+        ints.Return(fill);
         return (xadj, adj);
     }
 

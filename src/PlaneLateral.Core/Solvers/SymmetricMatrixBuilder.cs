@@ -1,18 +1,42 @@
+using System.Buffers;
+
 namespace PlaneLateral.Solvers;
 
 /// <summary>
 /// Collects the entries of a symmetric matrix as coordinate triplets (duplicates are summed) and compresses them
 /// into a <see cref="SymmetricSparseMatrix"/>. Only the lower triangle is kept.
 /// </summary>
+/// <remarks>
+/// The triplets and <see cref="Build"/>'s working arrays are rented from <see cref="ArrayPool{T}.Shared"/> and given back
+/// when the matrix is built, so that a thread assembling one system after another (the sweep's points, a convergence
+/// study's meshes) reuses the same memory instead of asking the collector for a fresh large-object array each time: a
+/// builder is built once. Only the compressed matrix is newly allocated; its entries are the same, summed in the same
+/// order, as with fresh arrays. Arrays larger than <see cref="PooledLength"/> elements are allocated and left to the
+/// collector instead: the pool would keep them alive beside a large factor and raise the process's peak memory
+/// (issue 19, docs/solver.md, "Process peak memory").
+/// </remarks>
 public sealed class SymmetricMatrixBuilder
 {
-    private readonly List<(int Row, int Col, double Value)> _entries;
+    private (int Row, int Col, double Value)[] _entries;
+    private int _count;
+    private bool _built;
+
+    /// <summary>The largest array, in elements, taken from and given back to the shared pool (2²⁰: 16 MiB of triplets).</summary>
+    public const int PooledLength = 1 << 20;
 
     public SymmetricMatrixBuilder(int size, int capacityHint = 0)
     {
         ArgumentOutOfRangeException.ThrowIfNegative(size);
+        ArgumentOutOfRangeException.ThrowIfNegative(capacityHint);
         Size = size;
-        _entries = new List<(int, int, double)>(capacityHint);
+        _entries = capacityHint > 0 ? Rent<(int, int, double)>(capacityHint) : [];
+    }
+
+    private static T[] Rent<T>(int length) => length <= PooledLength ? ArrayPool<T>.Shared.Rent(length) : new T[length];
+
+    private static void Return<T>(T[] array)
+    {
+        if (array.Length > 0 && array.Length <= PooledLength) ArrayPool<T>.Shared.Return(array);
     }
 
     public int Size { get; }
@@ -21,7 +45,7 @@ public sealed class SymmetricMatrixBuilder
     public void AddDiagonal(int i, double value)
     {
         if ((uint)i >= (uint)Size) throw new ArgumentOutOfRangeException(nameof(i));
-        _entries.Add((i, i, value));
+        Add(i, i, value);
     }
 
     /// <summary>
@@ -42,49 +66,80 @@ public sealed class SymmetricMatrixBuilder
             {
                 int gj = dofs[b];
                 if (gj < 0 || gj > gi) continue;
-                _entries.Add((gi, gj, ke[a, b]));
+                Add(gi, gj, ke[a, b]);
             }
         }
     }
 
-    /// <summary>Compresses the triplets: lower triangle, rows ascending in each column, duplicates summed.</summary>
+    private void Add(int row, int col, double value)
+    {
+        if (_built) throw new InvalidOperationException("The matrix was built already; a builder is built once.");
+        if (_count == _entries.Length) Grow();
+        _entries[_count++] = (row, col, value);
+    }
+
+    private void Grow()
+    {
+        var bigger = Rent<(int, int, double)>(Math.Max(16, 2 * _entries.Length));
+        _entries.AsSpan(0, _count).CopyTo(bigger);
+        Return(_entries);
+        _entries = bigger;
+    }
+
+    /// <summary>Compresses the triplets: lower triangle, rows ascending in each column, duplicates summed. Call it once.</summary>
+    /// <exception cref="InvalidOperationException">The builder was built already.</exception>
     public SymmetricSparseMatrix Build()
     {
-        var counts = new int[Size + 1];
-        foreach (var (r, c, _) in _entries) counts[c + 1]++;
-        for (int j = 0; j < Size; j++) counts[j + 1] += counts[j];
-        var rows = new int[_entries.Count];
-        var vals = new double[_entries.Count];
-        var next = (int[])counts.Clone();
-        foreach (var (r, c, v) in _entries)
+        if (_built) throw new InvalidOperationException("The matrix was built already; a builder is built once.");
+        _built = true;
+        int count = _count;
+        var entries = _entries;
+        var counts = Rent<int>(Size + 1);
+        var next = Rent<int>(Size + 1);
+        var rows = Rent<int>(count);
+        var vals = Rent<double>(count);
+        try
         {
-            int p = next[c]++;
-            rows[p] = r;
-            vals[p] = v;
-        }
-
-        // Duplicates are summed in place (the write position never passes the read position, and each column is sorted
-        // before it is read), in the same order as before, so the values are the same to the bit; only the result is
-        // copied out at its final size. No second pair of triplet-sized arrays: issue 19, the builder's peak set the
-        // process's peak memory at 10⁶ unknowns (docs/solver.md, "Process peak memory").
-        var colPtr = new int[Size + 1];
-        int w = 0;
-        for (int j = 0; j < Size; j++)
-        {
-            int start = counts[j], end = counts[j + 1], colStart = w;
-            Array.Sort(rows, vals, start, end - start);
-            for (int p = start; p < end; p++)
+            Array.Clear(counts, 0, Size + 1);
+            for (int e = 0; e < count; e++) counts[entries[e].Col + 1]++;
+            for (int j = 0; j < Size; j++) counts[j + 1] += counts[j];
+            Array.Copy(counts, next, Size + 1);
+            for (int e = 0; e < count; e++)
             {
-                if (w > colStart && rows[w - 1] == rows[p]) vals[w - 1] += vals[p];
-                else { rows[w] = rows[p]; vals[w] = vals[p]; w++; }
+                var (r, c, v) = entries[e];
+                int p = next[c]++;
+                rows[p] = r;
+                vals[p] = v;
             }
-            colPtr[j + 1] = w;
+
+            // Duplicates are summed in place (the write position never passes the read position, and each column is
+            // sorted before it is read), in the same order as with separate output arrays, so the values are the same to
+            // the bit; only the result is copied out at its final size. No second pair of triplet-sized arrays: issue 19,
+            // the builder's peak set the process's peak memory at 10⁶ unknowns (docs/solver.md, "Process peak memory").
+            var colPtr = new int[Size + 1];
+            int w = 0;
+            for (int j = 0; j < Size; j++)
+            {
+                int start = counts[j], end = counts[j + 1], colStart = w;
+                Array.Sort(rows, vals, start, end - start);
+                for (int p = start; p < end; p++)
+                {
+                    if (w > colStart && rows[w - 1] == rows[p]) vals[w - 1] += vals[p];
+                    else { rows[w] = rows[p]; vals[w] = vals[p]; w++; }
+                }
+                colPtr[j + 1] = w;
+            }
+            return new SymmetricSparseMatrix(Size, colPtr, rows.AsSpan(0, w).ToArray(), vals.AsSpan(0, w).ToArray());
         }
-        if (w < rows.Length)
+        finally
         {
-            rows = rows.AsSpan(0, w).ToArray();
-            vals = vals.AsSpan(0, w).ToArray();
+            Return(counts);
+            Return(next);
+            Return(rows);
+            Return(vals);
+            Return(entries);
+            _entries = [];
+            _count = 0;
         }
-        return new SymmetricSparseMatrix(Size, colPtr, rows, vals);
     }
 }

@@ -109,6 +109,43 @@ public class BuilderTests
     }
 
     [Fact]
+    public void ABuilderIsBuiltOnce()
+    {
+        // Its triplets go back to the shared pool when the matrix is built, so a second build or a later entry is refused.
+        var b = new SymmetricMatrixBuilder(2, 4);
+        b.AddDiagonal(0, 1.0);
+        b.Build();
+        Assert.Throws<InvalidOperationException>(() => b.Build());
+        Assert.Throws<InvalidOperationException>(() => b.AddDiagonal(1, 1.0));
+    }
+
+    [Fact]
+    public void ASmallMatrixBuiltAfterALargeOne_HoldsOnlyItsOwnEntries()
+    {
+        // The pooled working arrays come back holding the large matrix's entries; the small one must not see them.
+        // Expected values derived by direct stiffness summation (common practice): two unit springs between DOFs 0 and 1
+        // each add [[1, -1], [-1, 1]], and 1 on each diagonal gives [[3, -2], [-2, 3]]; an inner DOF of the large chain
+        // of springs of stiffness 7 (off-diagonal -5) gets 7 from each of its two elements.
+        for (int round = 0; round < 3; round++)
+        {
+            var large = new SymmetricMatrixBuilder(400, 4000);
+            for (int i = 0; i < 399; i++) large.AddElement(new[] { i, i + 1 }, new[,] { { 7.0, -5.0 }, { -5.0, 7.0 } });
+            Assert.Equal(7.0 * 2, large.Build().Diagonal(200));
+
+            var small = new SymmetricMatrixBuilder(2);
+            var spring = new[,] { { 1.0, -1.0 }, { -1.0, 1.0 } };
+            small.AddElement(new[] { 0, 1 }, spring);
+            small.AddElement(new[] { 1, 0 }, spring);
+            small.AddDiagonal(0, 1.0);
+            small.AddDiagonal(1, 1.0);
+            var a = small.Build();
+            AssertStorageInvariants(a);
+            Assert.Equal(3, a.NonZerosLower);
+            Assert.Equal(new[,] { { 3.0, -2.0 }, { -2.0, 3.0 } }, a.ToDense());
+        }
+    }
+
+    [Fact]
     public void MatrixMarket_RoundTrips()
     {
         // Format: Boisvert, Pozo and Remington, "The Matrix Market Exchange Formats: Initial Design" (NIST, 1996).
