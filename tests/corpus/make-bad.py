@@ -226,6 +226,12 @@ add("slow-many-unknown-references", "slow input", "unknown node \"joint-00000000
 # --- size limits (ModelLimits) ---
 add("limit-too-many-nodes", "size limit", "the model has 10001 nodes, more than the 10000", "$.nodes",
     text=good.replace('"nodes": [', '"nodes": [' + "{}," * 9997, 1))
+add("limit-too-many-members", "size limit", "the model has 20001 members, more than the 20000", "$.members",
+    text=good.replace('"members": [', '"members": [' + "{}," * 19998, 1))
+add("limit-too-many-stiffness-points", "size limit", "the model has 201 stiffness points, more than the 200", "$.stiffnessAt",
+    m(lambda d: d.update({"stiffnessAt": [{"node": "B", "direction": "x"} for _ in range(201)]})))
+add("limit-too-many-comparisons", "size limit", "the model has 201 comparison checks, more than the 200", "$.comparisons",
+    m(lambda d: d.update({"comparisons": [dict(WALL, id="wall %d" % i) for i in range(201)]})))
 add("limit-too-many-cases", "size limit", "the model has 150 load cases and 51 combinations, more than the 200 together", "$.loadCases",
     m(lambda d: d.update({"loadCases": [{"id": "w%d" % i, "nodalLoads": [{"node": "B", "fx": float(i)}]} for i in range(150)],
                           "combinations": [{"id": "c%d" % i, "factors": {"w%d" % i: 1.5}} for i in range(51)]})))
