@@ -15,7 +15,8 @@ public sealed class MassDofLimitTests : IDisposable
 
     public void Dispose() => Directory.Delete(_dir, recursive: true);
 
-    /// <summary><paramref name="columns"/> cantilever columns, fixed at the base, their tops at one weighted level without a diaphragm.</summary>
+    /// <summary><paramref name="columns"/> cantilever columns, fixed at the base (a level without a diaphragm: a rigid one
+    /// across the supports is refused), their tops at one weighted level without a diaphragm.</summary>
     private static JObject Columns(int columns) => new()
     {
         ["formatVersion"] = 1,
@@ -30,7 +31,7 @@ public sealed class MassDofLimitTests : IDisposable
         ["members"] = new JArray(Enumerable.Range(0, columns).Select(i => new JObject { ["id"] = $"M{i}", ["start"] = $"B{i}", ["end"] = $"T{i}", ["section"] = "C", ["material"] = "S" })),
         ["supports"] = new JArray(Enumerable.Range(0, columns).Select(i => new JObject { ["node"] = $"B{i}", ["type"] = "fixed" })),
         ["loadCases"] = new JArray(new JObject { ["id"] = "W", ["nodalLoads"] = new JArray(new JObject { ["node"] = "T0", ["fx"] = 1.0 }) }),
-        ["levels"] = new JArray(new JObject { ["id"] = "L0", ["elevation"] = 0.0 }, new JObject { ["id"] = "L1", ["elevation"] = 3.0, ["diaphragm"] = "none" }),
+        ["levels"] = new JArray(new JObject { ["id"] = "L0", ["elevation"] = 0.0, ["diaphragm"] = "none" }, new JObject { ["id"] = "L1", ["elevation"] = 3.0, ["diaphragm"] = "none" }),
         ["seismic"] = new JObject
         {
             ["loadCase"] = "EQ", ["baseShear"] = 100.0,
