@@ -226,11 +226,28 @@ add("slow-many-unknown-references", "slow input", "unknown node \"joint-00000000
 # --- size limits (ModelLimits) ---
 add("limit-too-many-nodes", "size limit", "the model has 10001 nodes, more than the 10000", "$.nodes",
     text=good.replace('"nodes": [', '"nodes": [' + "{}," * 9997, 1))
+add("limit-too-many-members", "size limit", "the model has 20001 members, more than the 20000", "$.members",
+    text=good.replace('"members": [', '"members": [' + "{}," * 19998, 1))
+add("limit-too-many-stiffness-points", "size limit", "the model has 201 stiffness points, more than the 200", "$.stiffnessAt",
+    m(lambda d: d.update({"stiffnessAt": [{"node": "B", "direction": "x"} for _ in range(201)]})))
+add("limit-too-many-comparisons", "size limit", "the model has 201 comparison checks, more than the 200", "$.comparisons",
+    m(lambda d: d.update({"comparisons": [dict(WALL, id="wall %d" % i) for i in range(201)]})))
 add("limit-too-many-cases", "size limit", "the model has 150 load cases and 51 combinations, more than the 200 together", "$.loadCases",
     m(lambda d: d.update({"loadCases": [{"id": "w%d" % i, "nodalLoads": [{"node": "B", "fx": float(i)}]} for i in range(150)],
                           "combinations": [{"id": "c%d" % i, "factors": {"w%d" % i: 1.5}} for i in range(51)]})))
 add("limit-too-many-openings", "size limit", "101 openings in one wall, more than the 100", "$.comparisons[0].openings",
     m(lambda d: d.update({"comparisons": [dict(WALL, openings=[{"x": 0.01 * i, "y": 0, "width": 0.005, "height": 1} for i in range(101)])]})))
+# Panel mesh entries, Σ maxNodes × cases: two walls at the 40 000-node ceiling under 101 cases, 8 080 000 entries, over
+# the 8 000 000 measured at the edge (one such wall under 200 cases; two under 200 made a CSV longer than a string holds).
+def two_ceiling_walls(d):
+    wall_at_ceiling = d["panels"][0]
+    wall_at_ceiling["mesh"]["maxNodes"] = 40000
+    twin = copy.deepcopy(wall_at_ceiling)
+    twin.update({"id": "south wall", "x": 10})
+    d["panels"].append(twin)
+    d["loadCases"] = [{"id": "wind"}] + [{"id": "wind %d" % i} for i in range(2, 102)]
+    return d
+add("limit-panel-mesh-entries", "size limit", "8080000 panel mesh entries", "$.panels", two_ceiling_walls(wall_panel(lambda p: None)))
 # --- buildings in plan: floors that bend (docs/plan.md); `compare` reads planar models only, so solve and validate ---
 BUILDING = {
     "formatVersion": 1,

@@ -46,6 +46,21 @@ public static class ModelLimits
     /// mesh is this size too).</summary>
     public const int MaxPanelMeshNodes = 40_000;
 
+    /// <summary>Most panel mesh entries, Σ over the panels of <c>mesh.maxNodes</c> × (load cases + combinations): every
+    /// panel keeps its displacements and stresses at every node of its mesh for every case, and panel-stresses.csv has a
+    /// row for each. One panel at the mesh ceiling under the most cases is the edge measured (6 GB of memory,
+    /// docs/hardening.md, "Size limits"); two such panels made a panel-stresses.csv longer than one .NET string holds.</summary>
+    public const long MaxPanelMeshEntries = 8_000_000;
+
+    /// <summary>The most panel mesh entries a run has been measured at (<see cref="MaxPanelMeshEntries"/>'s edge: a
+    /// 39 601-node panel under 200 load cases, and two under 100). A test keeps the limits within it: raising the mesh
+    /// ceiling, the case limit or the entry limit means measuring the new edge first (benchmarks/edge/run.sh).</summary>
+    public const long MeasuredPanelMeshEntries = 8_000_000;
+
+    /// <summary>The largest panel mesh measured (<see cref="MaxPanelMeshNodes"/> asked, 39 601 nodes built); a test keeps
+    /// the ceiling within it.</summary>
+    public const int MeasuredPanelMeshNodes = 40_000;
+
     /// <summary>Most floors (levels above the base) of a building in plan: the floor system is dense on 3 DOFs per floor,
     /// and its modes are a dense eigen decomposition of that size (docs/hardening.md gives the measured cost).</summary>
     public const int MaxFloors = 300;
@@ -100,6 +115,20 @@ public static class ModelLimits
                         $"give 'maxNodes' at most {MaxPanelMeshNodes}, and a larger element size or fewer refinements");
                     over = true;
                 }
+        if (root["panels"] is JArray meshed && meshed.Count > 0 && cases + combos > 0)
+        {
+            // Each panel's asked ceiling (the default when not given; a value out of range is reported at its own key).
+            long nodes = meshed.Sum(p => p is JObject po && po["mesh"] is JObject mesh && mesh["maxNodes"] is JValue { Value: long or int or double } mn
+                && Convert.ToDouble(mn.Value, System.Globalization.CultureInfo.InvariantCulture) is var v && v >= 1 && v <= MaxPanelMeshNodes
+                ? (long)v : PanelMeshSettings.Default.MaxNodes);
+            long entries = nodes * (cases + combos);
+            if (entries > MaxPanelMeshEntries)
+            {
+                sink.Add(meshed, $"the panels ask for meshes of up to {nodes} nodes in all under {cases + combos} load cases and combinations: {entries} panel mesh entries (Σ 'maxNodes' × cases), more than the {MaxPanelMeshEntries} this version accepts (each panel keeps every node's displacements and stresses for every case)",
+                    $"keep Σ 'maxNodes' × (load cases + combinations) to at most {MaxPanelMeshEntries}: give the panels a lower 'maxNodes' (and a coarser mesh), or split the cases or the panels into several files");
+                over = true;
+            }
+        }
         if (root["seismic"] is JObject seismic && seismic["weights"] is JArray weights && weights.Count > MaxMassDofs)
         {
             sink.Add(weights, $"the seismic block weighs {weights.Count} levels, more than the {MaxMassDofs} whose periods this version computes (a dense eigenproblem of that size)",
