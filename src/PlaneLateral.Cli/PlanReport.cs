@@ -35,24 +35,18 @@ internal static class PlanReport
         sb.Append(lt.Render());
 
         sb.Append("\nChecks of every floor solve (line forces against floor loads)\n");
-        var ct = new TextTable("case", $"ΣFx [{force}]", $"ΣFy [{force}]", $"ΣMz [{u.Label(Quantity.Moment)}]", "imbalance", "backward error").Numeric(1, 2, 3, 4, 5);
-        foreach (var c in r.Cases)
-            ct.Add(c.Case.Id, Fo(c.Equilibrium.AppliedFx), Fo(c.Equilibrium.AppliedFy), TextTable.Num(u.FromSI(c.Equilibrium.AppliedMz, Quantity.Moment)),
-                TextTable.Sci(c.Equilibrium.RelativeError), TextTable.Sci(c.BackwardError));
-        sb.Append(ct.Render());
+        sb.Append(TableView.Render(PlanFiles.ChecksTable(r), ["what", "applied Fx", "applied Fy", "applied Mz about origin", "relative imbalance", "backward error"],
+            row => ((string)row[0]).StartsWith("case ", StringComparison.Ordinal)));
 
         // Normal detail: the cases without accidental eccentricity; full: every case, the shifted ones too.
+        var lineStories = PlanFiles.LineStoriesTable(r);
         foreach (var c in r.Cases.Where(c => c.Case.Eccentricity == 0 || detail == Detail.Full))
         {
             sb.Append($"\nStory shear per line, case {c.Case.Id}: {c.Case.Description}\n" +
                 "  direct: floors held against twist; torsional: what the twist adds\n");
-            var t = new TextTable("story", "line", "dir", $"shear [{force}]", "share", $"direct [{force}]", $"torsional [{force}]").Numeric(0, 3, 4, 5, 6);
-            foreach (var s in c.LineStories.OrderByDescending(s => s.Story))
-            {
-                var line = p.Lines.First(l => l.Id == s.Line);
-                t.Add(s.Story.ToString(), s.Line, line.DirectionLabel, Fo(s.Shear), double.IsFinite(s.Share) ? s.Share.ToString("0.000") : "-", Fo(s.Direct), Fo(s.Torsional));
-            }
-            sb.Append(t.Render());
+            string id = c.Case.Id;
+            sb.Append(TableView.Render(lineStories.WithRows(rows => rows.Where(x => (string)x[0] == id).OrderByDescending(x => (int)x[1])),
+                ["story", "line", "direction", "shear", "share", "direct", "torsional"]));
         }
 
         if (detail == Detail.Full) sb.Append(FloorMotion(r));
@@ -91,10 +85,8 @@ internal static class PlanReport
         if (r.Irregularity.Count > 0)
         {
             sb.Append("\nTorsional irregularity (ASCE 7-16 Table 12.3-1: 1a above 1.2, 1b above 1.4; A_x eq. 12.8-14)\n");
-            var t = new TextTable("loading", "story", "case", $"max drift [{len}]", $"avg of ends [{len}]", "ratio", "type", "A_x").Numeric(1, 3, 4, 5, 7);
-            foreach (var x in r.Irregularity)
-                t.Add(x.Direction, x.Story.ToString(), x.Case, L(x.MaxDrift), L(x.AverageDrift), x.Ratio.ToString("0.000"), x.Type, x.Ax.ToString("0.000"));
-            sb.Append(t.Render());
+            sb.Append(TableView.Render(PlanFiles.IrregularityTable(r), ["loading", "story", "governing case", "max corner drift", "average of the extreme corners", "ratio",
+                "type (ASCE 7-16 Table 12.3-1)", "A_x (eq. 12.8-14)"]));
             sb.Append("  Drifts along the loading at the outline corners, with accidental torsion (worst shifted case).\n");
         }
 
@@ -147,21 +139,8 @@ internal static class PlanReport
     }
 
     /// <summary>Full detail: each floor's motion per case (plan-floors.csv), with the motion of the floors held against twist.</summary>
-    private static string FloorMotion(PlanResult r)
-    {
-        var u = r.Plan.Units;
-        string len = u.LengthSymbol;
-        string L(double v) => TextTable.Num(u.FromSI(v, Quantity.Length));
-        var t = new TextTable("case", "level", $"Ux [{len}]", $"Uy [{len}]", "Rz [rad]", $"Ux held [{len}]", $"Uy held [{len}]").Numeric(2, 3, 4, 5, 6);
-        foreach (var c in r.Cases)
-            for (int i = 0; i < c.Motion.Count; i++)
-            {
-                var m = c.Motion[i];
-                var l = c.LockedMotion[i];
-                t.Add(c.Case.Id, r.Plan.Levels[m.Level].Id, L(m.Ux), L(m.Uy), TextTable.Num(m.Rz), L(l.Ux), L(l.Uy));
-            }
-        return "\nFloor motion per case (Ux, Uy of the plan origin; \"held\": the same loads with the floors held against twist)\n" + t.Render();
-    }
+    private static string FloorMotion(PlanResult r) =>
+        "\nFloor motion per case (Ux, Uy of the plan origin; \"locked\": the same loads with the floors held against twist)\n" + TableView.Render(PlanFiles.FloorsTable(r));
 
     private static string Wrap(string text, int width)
     {

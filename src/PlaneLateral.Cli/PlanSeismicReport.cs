@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Text;
 using PlaneLateral.Analysis;
 using PlaneLateral.Model;
+using PlaneLateral.Output;
 using PlaneLateral.Units;
 
 namespace PlaneLateral.Cli;
@@ -22,20 +23,12 @@ internal static class PlanSeismicReport
         var sb = new StringBuilder();
 
         sb.Append("\nModes in plan (floor mass W/g at the centre of mass, J about it; K on Ux, Uy, Rz of every floor)\n");
-        var mt = new TextTable("mode", "period [s]", "dominant", "mass x", "mass y", "mass torsion", "cum. x", "cum. y", "cum. torsion").Numeric(0, 1, 3, 4, 5, 6, 7, 8);
-        foreach (var m in s.Modal.Modes)
-            mt.Add(m.Number.ToString(CultureInfo.InvariantCulture), P(m.Period, "0.0000"), m.Dominant, Pct(m.Share[0]), Pct(m.Share[1]), Pct(m.Share[2]),
-                Pct(m.Cumulative[0]), Pct(m.Cumulative[1]), Pct(m.Cumulative[2]));
-        sb.Append(mt.Render());
+        sb.Append(TableView.Render(PlanSeismicFiles.ModesTable(r, s), ["mode", "period", "dominant", "share x", "share y", "share torsion", "cumulative x", "cumulative y", "cumulative torsion"]));
         sb.Append($"  Effective mass shares; torsion about the building's centre of mass ({L(s.Modal.Pivot.X)}, {L(s.Modal.Pivot.Y)}) {len}.\n");
 
         var sd = p.Seismic!;
         sb.Append($"\nEquivalent lateral forces (ASCE 7-16 §12.8), S_DS = {sd.Spectrum.Sds}, S_D1 = {sd.Spectrum.Sd1}, R = {sd.Spectrum.R}, I_e = {sd.Spectrum.Ie}\n");
-        var et = new TextTable("dir", "mode", "T mode [s]", "Ta [s]", "Cu·Ta [s]", "T used [s]", "Cs", "k", $"V [{force}]").Numeric(1, 2, 3, 4, 5, 6, 7, 8);
-        foreach (var e in s.Elf)
-            et.Add(e.Direction, e.Mode.ToString(CultureInfo.InvariantCulture), P(e.ModalPeriod, "0.0000"), P(e.Ta, "0.0000"), P(e.Cu * e.Ta, "0.0000"), P(e.PeriodUsed, "0.0000"),
-                P(e.Cs, "0.0000"), P(e.Exponent), Fo(e.BaseShear));
-        sb.Append(et.Render());
+        sb.Append(TableView.Render(PlanSeismicFiles.ElfTable(r, s), ["direction", "mode", "modal period", "Ta", "Cu*Ta", "period used", "Cs", "k", "V"]));
         foreach (var e in s.Elf)
             sb.Append($"  {e.Direction}: T = {e.PeriodNote}; Cs by {e.CsNote}; cases {string.Join(", ", e.Cases)}\n");
         var ft = new TextTable("level", $"Fx along x [{force}]", $"Fy along y [{force}]").Numeric(1, 2);
@@ -65,17 +58,17 @@ internal static class PlanSeismicReport
             var pts = new TextTable("mode", "analysis", "period [s]", "S_a [g]").Numeric(0, 2, 3);
             foreach (var m in sp.Directions[0].Modes) pts.Add(m.Mode.ToString(CultureInfo.InvariantCulture), m.Variant == "" ? "-" : "masses " + m.Variant, P(m.Period, "0.0000"), P(m.Sa, "0.0000"));
             sb.Append(pts.Render());
+            var stories = PlanSeismicFiles.SpectrumStoriesTable(r, sp);
+            var lines = PlanSeismicFiles.SpectrumLinesTable(r, sp);
             foreach (var d in sp.Directions)
             {
                 sb.Append($"\n  Along {d.Direction}: {d.ModesUsed} modes, {Pct(d.CumulativeShare)} of the mass (§12.9.1.1: at least 90 %); " +
                           $"V_t = {Fo(d.Scaling.BaseShearModal)}, V = {Fo(d.Scaling.BaseShearElf)} {force}\n");
                 sb.Append(Wrap("Scaling: " + d.Scaling.Why + ".", 100, "  "));
-                var t = new TextTable("story", $"ELF [{force}]", $"modal [{force}]", $"scaled [{force}]", "corner", $"drift [{len}]", $"δ [{len}]", "δ/h", $"Δ comb. [{len}]")
-                    .Numeric(0, 1, 2, 3, 4, 5, 6, 7, 8);
-                foreach (var st in d.Stories.OrderByDescending(x => x.Story))
-                    t.Add(st.Story.ToString(CultureInfo.InvariantCulture), Fo(st.ElfShear), Fo(st.ModalShear), Fo(st.ScaledShear), (st.Corner + 1).ToString(CultureInfo.InvariantCulture),
-                        L(st.Drift), L(st.DesignDrift), P(st.Ratio, "0.00000"), L(st.DriftFromCombinedDisplacements));
-                sb.Append(t.Render());
+                string dir = d.Direction;
+                sb.Append(TableView.Render(stories.WithRows(rows => rows.Where(x => (string)x[0] == dir).OrderByDescending(x => (int)x[1])),
+                    ["story", "ELF shear", "modal shear", "scaled modal shear", "corner", "drift", "design drift Cd*drift/Ie", "design drift ratio",
+                     "difference of combined displacements (not the drift)"]));
                 if (p.DriftLimit is { } lim)
                 {
                     var worst = d.Stories.OrderByDescending(x => x.Ratio).First();
@@ -89,11 +82,9 @@ internal static class PlanSeismicReport
                 sb.Append(tt.Render());
                 string mu = u.Label(Quantity.Moment);
                 string Mo(double v) => TextTable.Num(u.FromSI(v, Quantity.Moment));
-                var lt = new TextTable("story", "line", $"ELF [{force}]", $"modal [{force}]", $"scaled [{force}]", $"acc. torsion [{force}]", $"design [{force}]", $"overturning [{mu}]")
-                    .Numeric(0, 2, 3, 4, 5, 6, 7);
-                foreach (var l in d.Lines.Where(l => Along(p, l.Line, d.Direction)).OrderByDescending(l => l.Story).ThenBy(l => l.Line, StringComparer.Ordinal))
-                    lt.Add(l.Story.ToString(CultureInfo.InvariantCulture), l.Line, Fo(l.Elf), Fo(l.Modal), Fo(l.Scaled), Fo(l.Torsion), Fo(l.Design), Mo(l.DesignOverturning));
-                sb.Append(lt.Render());
+                sb.Append(TableView.Render(lines.WithRows(rows => rows.Where(x => (string)x[0] == dir && Along(p, (string)x[2], dir))
+                        .OrderByDescending(x => (int)x[1]).ThenBy(x => (string)x[2], StringComparer.Ordinal)),
+                    ["story", "line", "ELF shear", "modal shear", "scaled modal shear", "accidental torsion", "design shear", "design overturning"]));
                 var rt = new TextTable("line", "node", $"Rx [{force}]", $"Ry [{force}]", $"Mz [{mu}]").Numeric(2, 3, 4);
                 foreach (var lf in d.LineForces.Where(x => Along(p, x.Line, d.Direction)))
                 {

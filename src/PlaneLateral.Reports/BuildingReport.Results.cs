@@ -200,9 +200,8 @@ public static partial class BuildingReport
             d.Text("Per story and direction of loading, the largest story drift along the loading at the outline's corners over the average of the two extreme corners, with " +
                 "accidental torsion (the worst of the shifted cases), ASCE 7-16 Table 12.3-1: Type 1a above 1.2, Type 1b above 1.4 (rigid and semi-rigid floors). " +
                 "A_x = (δ_max/1.2·δ_avg)², 1 ≤ A_x ≤ 3, on the displacements of the story's top level (§12.8.4.3, eq. 12.8-14).");
-            d.Table("Torsional irregularity", ["loading along", "story", "case", $"max drift [{d.Len}]", $"average of the ends [{d.Len}]", "ratio", "type", $"max displacement [{d.Len}]", $"average [{d.Len}]", "A_x"],
-                r.Irregularity.Select(x => (IReadOnlyList<string>)[x.Direction, I(x.Story), x.Case, d.L(x.MaxDrift), d.L(x.AverageDrift), Ratio(x.Ratio), x.Type,
-                    d.L(x.MaxDisplacement), d.L(x.AverageDisplacement), Ratio(x.Ax)]), 1, 3, 4, 5, 7, 8, 9);
+            d.Add(ReportTables.From(Output.PlanFiles.IrregularityTable(r), "Torsional irregularity", ["loading", "story", "governing case", "max corner drift",
+                "average of the extreme corners", "ratio", "type (ASCE 7-16 Table 12.3-1)", "max corner displacement", "average displacement", "A_x (eq. 12.8-14)"]));
         }
     }
 }

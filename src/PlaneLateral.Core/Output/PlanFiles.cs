@@ -1,5 +1,3 @@
-using System.Globalization;
-using System.Text;
 using PlaneLateral.Analysis;
 using PlaneLateral.Model;
 using PlaneLateral.Units;
@@ -17,19 +15,8 @@ public static class PlanFiles
     /// <param name="tributary">Floors that bend: the hand tributary split beside the FE flexible floor (PlaneLateral.Studies.PlanTributarySplit), or null.</param>
     public static IReadOnlyList<(string Name, string Text)> Render(PlanResult r, IReadOnlyList<TributaryShear>? tributary = null)
     {
-        var files = new List<(string, string)>
-        {
-            ("plan.json", TypedJson.Write(Document(r, tributary))),
-            ("plan-floors.csv", Floors(r)),
-            ("plan-corners.csv", Corners(r)),
-            ("plan-line-stories.csv", LineStories(r)),
-            ("plan-rigidity.csv", Rigidity(r)),
-            ("plan-torsional-irregularity.csv", Irregularity(r)),
-            ("plan-checks.csv", Checks(r)),
-        };
-        if (r.Plan.Points.Count > 0) files.Add(("plan-points.csv", Points(r)));
-        if (r.DriftChecks.Count > 0) files.Add(("plan-drift-checks.csv", Drifts(r)));
-        files.AddRange(PlanDiaphragmFiles.Render(r, tributary));   // floors that bend: with a "floor" block only
+        var files = new List<(string, string)> { ("plan.json", TypedJson.Write(Document(r, tributary))) };
+        files.AddRange(Tables(r, tributary).Select(t => (t.Name, t.Table.ToCsv())));
         foreach (var line in r.Lines)
         {
             var own = ResultFiles.Planar(line.Recovered).ToDictionary(f => f.Name, f => f.Text);
@@ -39,107 +26,181 @@ public static class PlanFiles
         return files;
     }
 
+    /// <summary>
+    /// Every plan-*.csv table of the building (without the seismic block's, <see cref="PlanSeismicFiles.Tables"/>), by file
+    /// name, in the order <see cref="Render"/> writes them: each file is its table's <see cref="ResultTable.ToCsv"/>.
+    /// </summary>
+    public static IReadOnlyList<(string Name, ResultTable Table)> Tables(PlanResult r, IReadOnlyList<TributaryShear>? tributary = null)
+    {
+        var tables = new List<(string, ResultTable)>
+        {
+            ("plan-floors.csv", FloorsTable(r)),
+            ("plan-corners.csv", CornersTable(r)),
+            ("plan-line-stories.csv", LineStoriesTable(r)),
+            ("plan-rigidity.csv", RigidityTable(r)),
+            ("plan-torsional-irregularity.csv", IrregularityTable(r)),
+            ("plan-checks.csv", ChecksTable(r)),
+        };
+        if (r.Plan.Points.Count > 0) tables.Add(("plan-points.csv", PointsTable(r)));
+        if (r.DriftChecks.Count > 0) tables.Add(("plan-drift-checks.csv", DriftChecksTable(r)));
+        tables.AddRange(PlanDiaphragmFiles.Tables(r, tributary));   // floors that bend: with a "floor" block only
+        return tables;
+    }
+
     /// <summary>A line id as a file-name part: letters, digits, '-' and '_' kept, anything else '_'.</summary>
     public static string Safe(string id) => new(id.Select(ch => char.IsAsciiLetterOrDigit(ch) || ch is '-' or '_' ? ch : '_').ToArray());
 
-    /// <summary>A number cell; empty where the number is undefined (a share of a nil story shear), as plan.json writes null.</summary>
-    private static string F(double v) => double.IsFinite(v) ? v.ToString("G12", CultureInfo.InvariantCulture) : "";
-    private static string Csv(string s) => CsvText.Cell(s);   // the tool's one CSV escaper (quoting, control characters, formula-like text)
+    /// <summary>
+    /// A number cell of a plan table; an empty text cell where the number is undefined (a share of a nil story shear), as
+    /// plan.json writes null, rather than the table's "n/a".
+    /// </summary>
+    internal static object Defined(double v) => double.IsFinite(v) ? v : "";
 
-    private static string Floors(PlanResult r)
-    {
-        var u = r.Plan.Units;
-        var sb = new StringBuilder($"case,level,Ux [{u.LengthSymbol}],Uy [{u.LengthSymbol}],Rz [rad],Ux locked [{u.LengthSymbol}],Uy locked [{u.LengthSymbol}]\n");
-        foreach (var c in r.Cases)
-            for (int i = 0; i < c.Motion.Count; i++)
-            {
-                var m = c.Motion[i]; var l = c.LockedMotion[i];
-                sb.Append($"{Csv(c.Case.Id)},{Csv(r.Plan.Levels[m.Level].Id)},{F(u.FromSI(m.Ux, Quantity.Length))},{F(u.FromSI(m.Uy, Quantity.Length))},{F(m.Rz)},{F(u.FromSI(l.Ux, Quantity.Length))},{F(u.FromSI(l.Uy, Quantity.Length))}\n");
-            }
-        return sb.ToString();
-    }
+    private static TableColumn Text(string name) => new(name, Kind: CellKind.Text);
 
-    private static string Corners(PlanResult r) =>
-        Motions(r, "corner", r.Cases.SelectMany(c => c.Vertices.Select(v => (c.Case.Id, v.Level, $"{v.Vertex + 1}", v.At, v.Ux, v.Uy, v.DriftX, v.DriftY))));
-
-    /// <summary>The user's named points: displacement and drift per case and level (with "points" only).</summary>
-    private static string Points(PlanResult r) =>
-        Motions(r, "point", r.Cases.SelectMany(c => c.Points.Select(q => (c.Case.Id, q.Level, Csv(q.Point), q.At, q.Ux, q.Uy, q.DriftX, q.DriftY))));
-
-    /// <summary>One row per case, level and plan place (an outline corner or a named point): where it is, its displacement and its story drift.</summary>
-    private static string Motions(PlanResult r, string place, IEnumerable<(string Case, int Level, string Name, PlanPoint At, double Ux, double Uy, double DriftX, double DriftY)> rows)
+    /// <summary>Each floor's motion per case (Ux, Uy of the plan origin, Rz), and the same with the floors held against twist.</summary>
+    public static ResultTable FloorsTable(PlanResult r)
     {
         var u = r.Plan.Units;
         string len = u.LengthSymbol;
-        string L(double si) => F(u.FromSI(si, Quantity.Length));
-        var sb = new StringBuilder($"case,level,{place},x [{len}],y [{len}],ux [{len}],uy [{len}],drift x [{len}],drift y [{len}]\n");
-        foreach (var m in rows)
-            sb.Append($"{Csv(m.Case)},{Csv(r.Plan.Levels[m.Level].Id)},{m.Name},{L(m.At.X)},{L(m.At.Y)},{L(m.Ux)},{L(m.Uy)},{L(m.DriftX)},{L(m.DriftY)}\n");
-        return sb.ToString();
+        object L(double v) => Defined(u.FromSI(v, Quantity.Length));
+        return new ResultTable
+        {
+            Title = "Floor motion per case",
+            Columns = [Text("case"), Text("level"), new("Ux", len), new("Uy", len), new("Rz", "rad"), new("Ux locked", len), new("Uy locked", len)],
+            Rows = r.Cases.SelectMany(c => c.Motion.Select((m, i) =>
+            {
+                var l = c.LockedMotion[i];
+                return (IReadOnlyList<object>)[c.Case.Id, r.Plan.Levels[m.Level].Id, L(m.Ux), L(m.Uy), Defined(m.Rz), L(l.Ux), L(l.Uy)];
+            })),
+        };
     }
 
-    private static string LineStories(PlanResult r)
+    /// <summary>Every outline corner's displacement and story drift, per case and level.</summary>
+    public static ResultTable CornersTable(PlanResult r) =>
+        Motions(r, "Outline corners per case and level", new("corner"),
+            r.Cases.SelectMany(c => c.Vertices.Select(v => (c.Case.Id, v.Level, (object)(v.Vertex + 1), v.At, v.Ux, v.Uy, v.DriftX, v.DriftY))));
+
+    /// <summary>The user's named points: displacement and drift per case and level (with "points" only).</summary>
+    public static ResultTable PointsTable(PlanResult r) =>
+        Motions(r, "Named points per case and level", Text("point"),
+            r.Cases.SelectMany(c => c.Points.Select(q => (c.Case.Id, q.Level, (object)q.Point, q.At, q.Ux, q.Uy, q.DriftX, q.DriftY))));
+
+    /// <summary>One row per case, level and plan place (an outline corner or a named point): where it is, its displacement and its story drift.</summary>
+    private static ResultTable Motions(PlanResult r, string title, TableColumn place, IEnumerable<(string Case, int Level, object Name, PlanPoint At, double Ux, double Uy, double DriftX, double DriftY)> rows)
+    {
+        var u = r.Plan.Units;
+        string len = u.LengthSymbol;
+        object L(double si) => Defined(u.FromSI(si, Quantity.Length));
+        return new ResultTable
+        {
+            Title = title,
+            Columns = [Text("case"), Text("level"), place, new("x", len), new("y", len), new("ux", len), new("uy", len), new("drift x", len), new("drift y", len)],
+            Rows = rows.Select(m => (IReadOnlyList<object>)[m.Case, r.Plan.Levels[m.Level].Id, m.Name, L(m.At.X), L(m.At.Y), L(m.Ux), L(m.Uy), L(m.DriftX), L(m.DriftY)]),
+        };
+    }
+
+    /// <summary>Each line's story shear per case, with its direct and torsional parts, its share, the shear by its own member statics and its drift.</summary>
+    public static ResultTable LineStoriesTable(PlanResult r)
     {
         var u = r.Plan.Units;
         string fu = u.ForceSymbol;
-        var sb = new StringBuilder($"case,story,line,direction,shear [{fu}],share,direct [{fu}],torsional [{fu}],shear by the line's member statics [{fu}],line drift [{u.LengthSymbol}]\n");
-        foreach (var c in r.Cases)
-            foreach (var s in c.LineStories)
-            {
-                var line = r.Plan.Lines.First(l => l.Id == s.Line);
-                sb.Append($"{Csv(c.Case.Id)},{s.Story},{Csv(s.Line)},{line.DirectionLabel},{F(u.FromSI(s.Shear, Quantity.Force))},{F(s.Share)},{F(u.FromSI(s.Direct, Quantity.Force))},{F(u.FromSI(s.Torsional, Quantity.Force))},{F(u.FromSI(s.PlanarShear, Quantity.Force))},{F(u.FromSI(s.Drift, Quantity.Length))}\n");
-            }
-        return sb.ToString();
+        object Fo(double v) => Defined(u.FromSI(v, Quantity.Force));
+        return new ResultTable
+        {
+            Title = "Story shear per line",
+            Columns =
+            [
+                Text("case"), new("story"), Text("line"), Text("direction"), new("shear", fu), new("share"), new("direct", fu), new("torsional", fu),
+                new("shear by the line's member statics", fu), new("line drift", u.LengthSymbol),
+            ],
+            Rows = r.Cases.SelectMany(c => c.LineStories.Select(s => (IReadOnlyList<object>)[c.Case.Id, s.Story, s.Line, r.Plan.Lines.First(l => l.Id == s.Line).DirectionLabel,
+                Fo(s.Shear), Defined(s.Share), Fo(s.Direct), Fo(s.Torsional), Fo(s.PlanarShear), Defined(u.FromSI(s.Drift, Quantity.Length))])),
+        };
     }
 
-    private static string Rigidity(PlanResult r)
+    /// <summary>Each line's story stiffness alone per loading and story, beside the story's centre of rigidity.</summary>
+    public static ResultTable RigidityTable(PlanResult r)
     {
         var u = r.Plan.Units;
-        var sb = new StringBuilder($"loading,story,line,story stiffness alone [{u.Label(Quantity.TranslationalStiffness)}],x_R [{u.LengthSymbol}],y_R [{u.LengthSymbol}]\n");
-        foreach (var g in r.Rigidity)
-            foreach (var l in g.Lines)
-                sb.Append($"{g.Direction},{g.Story},{Csv(l.Line)},{F(u.FromSI(l.Stiffness, Quantity.TranslationalStiffness))},{F(u.FromSI(g.XR, Quantity.Length))},{F(u.FromSI(g.YR, Quantity.Length))}\n");
-        return sb.ToString();
+        object L(double v) => Defined(u.FromSI(v, Quantity.Length));
+        return new ResultTable
+        {
+            Title = "Centre of rigidity per story, with each line's story stiffness alone",
+            Columns = [Text("loading"), new("story"), Text("line"), new("story stiffness alone", u.Label(Quantity.TranslationalStiffness)), new("x_R", u.LengthSymbol), new("y_R", u.LengthSymbol)],
+            Rows = r.Rigidity.SelectMany(g => g.Lines.Select(l => (IReadOnlyList<object>)[g.Direction, g.Story, l.Line,
+                Defined(u.FromSI(l.Stiffness, Quantity.TranslationalStiffness)), L(g.XR), L(g.YR)])),
+        };
     }
 
-    private static string Irregularity(PlanResult r)
+    /// <summary>Torsional irregularity per loading and story (ASCE 7-16 Table 12.3-1) with A_x (eq. 12.8-14).</summary>
+    public static ResultTable IrregularityTable(PlanResult r)
     {
         var u = r.Plan.Units;
         string len = u.LengthSymbol;
-        var sb = new StringBuilder($"loading,story,governing case,with accidental torsion,max corner drift [{len}],average of the extreme corners [{len}],ratio,type (ASCE 7-16 Table 12.3-1),max corner displacement [{len}],average displacement [{len}],A_x (eq. 12.8-14)\n");
-        foreach (var t in r.Irregularity)
-            sb.Append($"{t.Direction},{t.Story},{Csv(t.Case)},{(t.WithAccidental ? "yes" : "no")},{F(u.FromSI(t.MaxDrift, Quantity.Length))},{F(u.FromSI(t.AverageDrift, Quantity.Length))},{F(t.Ratio)},{t.Type},{F(u.FromSI(t.MaxDisplacement, Quantity.Length))},{F(u.FromSI(t.AverageDisplacement, Quantity.Length))},{F(t.Ax)}\n");
-        return sb.ToString();
+        object L(double v) => Defined(u.FromSI(v, Quantity.Length));
+        return new ResultTable
+        {
+            Title = "Torsional irregularity (ASCE 7-16 Table 12.3-1: 1a above 1.2, 1b above 1.4; A_x eq. 12.8-14)",
+            Columns =
+            [
+                Text("loading"), new("story"), Text("governing case"), Text("with accidental torsion"), new("max corner drift", len), new("average of the extreme corners", len),
+                new("ratio"), Text("type (ASCE 7-16 Table 12.3-1)"), new("max corner displacement", len), new("average displacement", len), new("A_x (eq. 12.8-14)"),
+            ],
+            Rows = r.Irregularity.Select(t => (IReadOnlyList<object>)[t.Direction, t.Story, t.Case, t.WithAccidental ? "yes" : "no", L(t.MaxDrift), L(t.AverageDrift),
+                Defined(t.Ratio), t.Type, L(t.MaxDisplacement), L(t.AverageDisplacement), Defined(t.Ax)]),
+        };
     }
 
-    private static string Drifts(PlanResult r)
+    /// <summary>The amplified corner drift against the allowable ratio, every corner (and named point) of every story in every case.</summary>
+    public static ResultTable DriftChecksTable(PlanResult r)
     {
         var u = r.Plan.Units;
         string len = u.LengthSymbol;
+        object L(double v) => Defined(u.FromSI(v, Quantity.Length));
         bool points = r.Plan.Points.Count > 0;   // a last column "point" (the named point's id) only when the building names points
-        var sb = new StringBuilder($"case,story,corner,x [{len}],y [{len}],elastic drift [{len}],amplified drift [{len}],height [{len}],ratio,allowed,result{(points ? ",point" : "")}\n");
-        foreach (var d in r.DriftChecks)
-            sb.Append($"{Csv(d.Case)},{d.Story},{(d.Point is null ? (d.Vertex + 1).ToString(CultureInfo.InvariantCulture) : "")},{F(u.FromSI(d.At.X, Quantity.Length))},{F(u.FromSI(d.At.Y, Quantity.Length))},{F(u.FromSI(d.Drift, Quantity.Length))},{F(u.FromSI(d.Amplified, Quantity.Length))},{F(u.FromSI(d.Height, Quantity.Length))},{F(d.Ratio)},{F(d.Allowed)},{(d.Within ? "within" : "exceeds")}{(points ? "," + Csv(d.Point ?? "") : "")}\n");
-        return sb.ToString();
+        return new ResultTable
+        {
+            Title = "Corner drift check: δ = C_d·δ_e/I_e (ASCE 7-16 eq. 12.8-15) against the allowable ratio",
+            Columns =
+            [
+                Text("case"), new("story"), new("corner"), new("x", len), new("y", len), new("elastic drift", len), new("amplified drift", len), new("height", len),
+                new("ratio"), new("allowed"), Text("result"), .. points ? [Text("point")] : Array.Empty<TableColumn>(),
+            ],
+            Rows = r.DriftChecks.Select(d => (IReadOnlyList<object>)[d.Case, d.Story, d.Point is null ? d.Vertex + 1 : "", L(d.At.X), L(d.At.Y), L(d.Drift), L(d.Amplified), L(d.Height),
+                Defined(d.Ratio), Defined(d.Allowed), d.Within ? "within" : "exceeds", .. points ? [d.Point ?? ""] : Array.Empty<object>()]),
+        };
     }
 
-    private static string Checks(PlanResult r)
+    /// <summary>The checks of every solve: each case's floor loads against the line forces, each line's condensation and recovery.</summary>
+    public static ResultTable ChecksTable(PlanResult r)
     {
         var u = r.Plan.Units;
         string fu = u.ForceSymbol, mu = u.Label(Quantity.Moment);
-        var sb = new StringBuilder($"what,backward error,applied Fx [{fu}],applied Fy [{fu}],applied Mz about origin [{mu}],lines Fx [{fu}],lines Fy [{fu}],lines Mz about origin [{mu}],relative imbalance\n");
+        object Fo(double v) => Defined(u.FromSI(v, Quantity.Force));
+        object Mo(double v) => Defined(u.FromSI(v, Quantity.Moment));
+        var rows = new List<IReadOnlyList<object>>();
         foreach (var c in r.Cases)
         {
             var e = c.Equilibrium;
-            sb.Append($"case {Csv(c.Case.Id)},{F(c.BackwardError)},{F(u.FromSI(e.AppliedFx, Quantity.Force))},{F(u.FromSI(e.AppliedFy, Quantity.Force))},{F(u.FromSI(e.AppliedMz, Quantity.Moment))},{F(u.FromSI(e.LinesFx, Quantity.Force))},{F(u.FromSI(e.LinesFy, Quantity.Force))},{F(u.FromSI(e.LinesMz, Quantity.Moment))},{F(e.RelativeError)}\n");
+            rows.Add([$"case {c.Case.Id}", Defined(c.BackwardError), Fo(e.AppliedFx), Fo(e.AppliedFy), Mo(e.AppliedMz), Fo(e.LinesFx), Fo(e.LinesFy), Mo(e.LinesMz), Defined(e.RelativeError)]);
         }
         foreach (var l in r.Lines)
         {
-            double worst = l.RecoveryBackwardError;   // the line's frame and, for a panel line, its panel
-            sb.Append($"condensation of line {Csv(l.Line.Id)},{F(l.CondensationBackwardError)},,,,,,,\n");
-            sb.Append($"recovery of line {Csv(l.Line.Id)},{F(worst)},,,,,,,{F(l.RecoveryError)}\n");
+            // the recovery's backward error: the line's frame and, for a panel line, its panel
+            rows.Add([$"condensation of line {l.Line.Id}", Defined(l.CondensationBackwardError), "", "", "", "", "", "", ""]);
+            rows.Add([$"recovery of line {l.Line.Id}", Defined(l.RecoveryBackwardError), "", "", "", "", "", "", Defined(l.RecoveryError)]);
         }
-        return sb.ToString();
+        return new ResultTable
+        {
+            Title = "Checks of every solve",
+            Columns =
+            [
+                Text("what"), new("backward error"), new("applied Fx", fu), new("applied Fy", fu), new("applied Mz about origin", mu),
+                new("lines Fx", fu), new("lines Fy", fu), new("lines Mz about origin", mu), new("relative imbalance"),
+            ],
+            Rows = rows,
+        };
     }
 
     /// <summary>plan.json as a typed document (the floors-that-bend block as PlanDiaphragmFiles builds it).</summary>

@@ -1,5 +1,3 @@
-using System.Globalization;
-using System.Text;
 using PlaneLateral.Analysis;
 using PlaneLateral.Model;
 using PlaneLateral.Units;
@@ -15,118 +13,171 @@ public static class PlanSeismicFiles
 {
     public const string Source = "ASCE 7-16 §11.4.6, §12.8, §12.9.1 (numbering and values from memory: confirm the edition); the governing code decides";
 
-    public static IReadOnlyList<(string Name, string Text)> Render(PlanResult r, PlanSeismicResult s)
+    public static IReadOnlyList<(string Name, string Text)> Render(PlanResult r, PlanSeismicResult s) =>
+        [.. Tables(r, s).Select(t => (t.Name, t.Table.ToCsv())), ("plan-seismic.json", TypedJson.Write(Document(r, s)))];
+
+    /// <summary>The seismic block's plan-*.csv tables by file name, in the order <see cref="Render"/> writes them: each file is its table's <see cref="ResultTable.ToCsv"/>.</summary>
+    public static IReadOnlyList<(string Name, ResultTable Table)> Tables(PlanResult r, PlanSeismicResult s)
     {
-        var files = new List<(string, string)>
+        var tables = new List<(string, ResultTable)>
         {
-            ("plan-modes.csv", Modes(r, s)),
-            ("plan-elf.csv", Elf(r, s)),
-            ("plan-elf-forces.csv", ElfForces(r, s)),   // one table per file: the level forces apart from the per-direction figures
+            ("plan-modes.csv", ModesTable(r, s)),
+            ("plan-elf.csv", ElfTable(r, s)),
+            ("plan-elf-forces.csv", ElfForcesTable(r, s)),   // one table per file: the level forces apart from the per-direction figures
         };
-        if (s.Amplification.Count > 0) files.Add(("plan-amplification.csv", Amplification(r, s)));
+        if (s.Amplification.Count > 0) tables.Add(("plan-amplification.csv", AmplificationTable(r, s)));
         if (s.Spectrum is { } sp)
         {
-            files.Add(("plan-spectrum-modes.csv", SpectrumModes(r, sp)));
-            files.Add(("plan-spectrum-stories.csv", SpectrumStories(r, sp)));
-            files.Add(("plan-spectrum-lines.csv", SpectrumLines(r, sp)));
-            files.Add(("plan-spectrum-line-members.csv", SpectrumLineMembers(r, sp)));
-            files.Add(("plan-spectrum-line-reactions.csv", SpectrumLineReactions(r, sp)));
+            tables.Add(("plan-spectrum-modes.csv", SpectrumModesTable(r, sp)));
+            tables.Add(("plan-spectrum-stories.csv", SpectrumStoriesTable(r, sp)));
+            tables.Add(("plan-spectrum-lines.csv", SpectrumLinesTable(r, sp)));
+            tables.Add(("plan-spectrum-line-members.csv", SpectrumLineMembersTable(r, sp)));
+            tables.Add(("plan-spectrum-line-reactions.csv", SpectrumLineReactionsTable(r, sp)));
         }
-        files.Add(("plan-seismic.json", TypedJson.Write(Document(r, s))));
-        return files;
+        return tables;
     }
 
-    private static string F(double v) => double.IsFinite(v) ? v.ToString("G12", CultureInfo.InvariantCulture) : "n/a";
-    private static string Csv(string s) => CsvText.Cell(s);
+    private static TableColumn Text(string name) => new(name, Kind: CellKind.Text);
 
-    private static string Modes(PlanResult r, PlanSeismicResult s)
+    /// <summary>The modes in plan: period, effective mass shares (a fraction; shown as a percentage), participation and each floor's shape.</summary>
+    public static ResultTable ModesTable(PlanResult r, PlanSeismicResult s)
     {
         var p = r.Plan;
-        var sb = new StringBuilder("mode,period [s],omega [rad/s],dominant,share x,share y,share torsion,cumulative x,cumulative y,cumulative torsion,gamma x,gamma y");
-        foreach (var l in p.Levels.Skip(1)) sb.Append($",{Csv(l.Id + " Ux")},{Csv(l.Id + " Uy")},{Csv(l.Id + " Rz [1/" + p.Units.LengthSymbol + "]")}");
-        sb.Append('\n');
-        foreach (var m in s.Modal.Modes)
+        double perLength = p.Units.FromSI(1, Quantity.Length);
+        return new ResultTable
         {
-            sb.Append($"{m.Number},{F(m.Period)},{F(m.Omega)},{m.Dominant},{F(m.Share[0])},{F(m.Share[1])},{F(m.Share[2])},{F(m.Cumulative[0])},{F(m.Cumulative[1])},{F(m.Cumulative[2])},{F(m.Participation[0])},{F(m.Participation[1])}");
-            foreach (var (ux, uy, rz) in m.Display(p)) sb.Append($",{F(ux)},{F(uy)},{F(rz / p.Units.FromSI(1, Quantity.Length))}");
-            sb.Append('\n');
-        }
-        return sb.ToString();
+            Title = "Modes in plan",
+            Columns =
+            [
+                new("mode"), new("period", "s"), new("omega", "rad/s"), Text("dominant"), new("share x", Kind: CellKind.Percent), new("share y", Kind: CellKind.Percent),
+                new("share torsion", Kind: CellKind.Percent), new("cumulative x", Kind: CellKind.Percent), new("cumulative y", Kind: CellKind.Percent),
+                new("cumulative torsion", Kind: CellKind.Percent), new("gamma x"), new("gamma y"),
+                .. p.Levels.Skip(1).SelectMany(l => new TableColumn[] { new(l.Id + " Ux"), new(l.Id + " Uy"), new(l.Id + " Rz", "1/" + p.Units.LengthSymbol) }),
+            ],
+            Rows = s.Modal.Modes.Select(m => (IReadOnlyList<object>)[m.Number, m.Period, m.Omega, m.Dominant, m.Share[0], m.Share[1], m.Share[2],
+                m.Cumulative[0], m.Cumulative[1], m.Cumulative[2], m.Participation[0], m.Participation[1],
+                .. m.Display(p).SelectMany(x => new object[] { x.Item1, x.Item2, x.Item3 / perLength })]),
+        };
     }
 
-    private static string Elf(PlanResult r, PlanSeismicResult s)
+    /// <summary>The equivalent lateral force per direction: the period used and why, C_s and what set it, W, V and k.</summary>
+    public static ResultTable ElfTable(PlanResult r, PlanSeismicResult s)
     {
         var u = r.Plan.Units;
         string fu = u.ForceSymbol;
-        var sb = new StringBuilder($"direction,mode,modal period [s],Ta [s],Cu,Cu*Ta [s],period used [s],period note,Cs,Cs governed by,W [{fu}],V [{fu}],k,cases\n");
-        foreach (var e in s.Elf)
-            sb.Append($"{e.Direction},{e.Mode},{F(e.ModalPeriod)},{F(e.Ta)},{F(e.Cu)},{F(e.Cu * e.Ta)},{F(e.PeriodUsed)},{Csv(e.PeriodNote)},{F(e.Cs)},{Csv(e.CsNote)},{F(u.FromSI(e.Weight, Quantity.Force))},{F(u.FromSI(e.BaseShear, Quantity.Force))},{F(e.Exponent)},{Csv(string.Join(" ", e.Cases))}\n");
-        return sb.ToString();
+        return new ResultTable
+        {
+            Title = "Equivalent lateral forces (ASCE 7-16 §12.8)",
+            Columns =
+            [
+                Text("direction"), new("mode"), new("modal period", "s"), new("Ta", "s"), new("Cu"), new("Cu*Ta", "s"), new("period used", "s"), Text("period note"), new("Cs"),
+                Text("Cs governed by"), new("W", fu), new("V", fu), new("k"), Text("cases"),
+            ],
+            Rows = s.Elf.Select(e => (IReadOnlyList<object>)[e.Direction, e.Mode, e.ModalPeriod, e.Ta, e.Cu, e.Cu * e.Ta, e.PeriodUsed, e.PeriodNote, e.Cs, e.CsNote,
+                u.FromSI(e.Weight, Quantity.Force), u.FromSI(e.BaseShear, Quantity.Force), e.Exponent, string.Join(" ", e.Cases)]),
+        };
     }
 
-    private static string ElfForces(PlanResult r, PlanSeismicResult s)
+    /// <summary>The equivalent lateral force at each level per direction: C_vx and F_x.</summary>
+    public static ResultTable ElfForcesTable(PlanResult r, PlanSeismicResult s)
     {
         var u = r.Plan.Units;
-        var sb = new StringBuilder($"direction,level,Cvx,Fx [{u.ForceSymbol}]\n");
-        foreach (var e in s.Elf)
-            for (int l = 0; l < e.LevelForces.Count; l++)
-                sb.Append($"{e.Direction},{Csv(r.Plan.Levels[l + 1].Id)},{F(e.Cvx[l])},{F(u.FromSI(e.LevelForces[l], Quantity.Force))}\n");
-        return sb.ToString();
+        return new ResultTable
+        {
+            Title = "Equivalent lateral forces at the levels",
+            Columns = [Text("direction"), Text("level"), new("Cvx"), new("Fx", u.ForceSymbol)],
+            Rows = s.Elf.SelectMany(e => e.LevelForces.Select((f, l) => (IReadOnlyList<object>)[e.Direction, r.Plan.Levels[l + 1].Id, e.Cvx[l], u.FromSI(f, Quantity.Force)])),
+        };
     }
 
-    private static string Amplification(PlanResult r, PlanSeismicResult s)
+    /// <summary>A_x per direction and level (ASCE 7-16 §12.8.4.3) and whether it was applied.</summary>
+    public static ResultTable AmplificationTable(PlanResult r, PlanSeismicResult s)
     {
         var u = r.Plan.Units;
-        var sb = new StringBuilder($"direction,level,max displacement [{u.LengthSymbol}],average of the ends [{u.LengthSymbol}],Ax,applied\n");
-        foreach (var a in s.Amplification)
-            sb.Append($"{a.Direction},{Csv(r.Plan.Levels[a.Level].Id)},{F(u.FromSI(a.MaxDisplacement, Quantity.Length))},{F(u.FromSI(a.AverageDisplacement, Quantity.Length))},{F(a.Ax)},{(a.Applied ? "yes" : "no")}\n");
-        return sb.ToString();
+        return new ResultTable
+        {
+            Title = "Amplification of the accidental torsion A_x = (δmax / 1.2 δavg)², 1 to 3 (ASCE 7-16 §12.8.4.3)",
+            Columns = [Text("direction"), Text("level"), new("max displacement", u.LengthSymbol), new("average of the ends", u.LengthSymbol), new("Ax"), Text("applied")],
+            Rows = s.Amplification.Select(a => (IReadOnlyList<object>)[a.Direction, r.Plan.Levels[a.Level].Id, u.FromSI(a.MaxDisplacement, Quantity.Length),
+                u.FromSI(a.AverageDisplacement, Quantity.Length), a.Ax, a.Applied ? "yes" : "no"]),
+        };
     }
 
-    private static string SpectrumModes(PlanResult r, PlanSpectrumResult sp)
+    /// <summary>The response spectrum's modes per excitation direction: S_a, Γ and each mode's base shears and torque.</summary>
+    public static ResultTable SpectrumModesTable(PlanResult r, PlanSpectrumResult sp)
     {
         var u = r.Plan.Units;
         string fu = u.ForceSymbol;
-        var sb = new StringBuilder($"direction,mode,period [s],Sa [g],gamma,base shear x [{fu}],base shear y [{fu}],base torque [{u.Label(Quantity.Moment)}]\n");
-        foreach (var d in sp.Directions)
-            foreach (var m in d.Modes)
-                sb.Append($"{d.Direction},{m.Mode},{F(m.Period)},{F(m.Sa)},{F(m.Gamma)},{F(u.FromSI(m.BaseShearX, Quantity.Force))},{F(u.FromSI(m.BaseShearY, Quantity.Force))},{F(u.FromSI(m.BaseTorque, Quantity.Moment))}\n");
-        return sb.ToString();
+        return new ResultTable
+        {
+            Title = "Response spectrum: modes per excitation direction",
+            Columns = [Text("direction"), new("mode"), new("period", "s"), new("Sa", "g"), new("gamma"), new("base shear x", fu), new("base shear y", fu), new("base torque", u.Label(Quantity.Moment))],
+            Rows = sp.Directions.SelectMany(d => d.Modes.Select(m => (IReadOnlyList<object>)[d.Direction, m.Mode, m.Period, m.Sa, m.Gamma,
+                u.FromSI(m.BaseShearX, Quantity.Force), u.FromSI(m.BaseShearY, Quantity.Force), u.FromSI(m.BaseTorque, Quantity.Moment)])),
+        };
     }
 
-    private static string SpectrumStories(PlanResult r, PlanSpectrumResult sp)
+    /// <summary>The response spectrum's stories per excitation direction: shears beside the ELF, drift at the worst corner, stability.</summary>
+    public static ResultTable SpectrumStoriesTable(PlanResult r, PlanSpectrumResult sp)
     {
         var u = r.Plan.Units;
         string fu = u.ForceSymbol, lu = u.LengthSymbol;
         double L(double v) => u.FromSI(v, Quantity.Length);
-        var sb = new StringBuilder($"direction,story,ELF shear [{fu}],modal shear [{fu}],scaled modal shear [{fu}],corner,x [{lu}],y [{lu}],modal drift [{lu}],accidental torsion drift [{lu}],drift [{lu}],design drift Cd*drift/Ie [{lu}],height [{lu}],design drift ratio,difference of combined displacements (not the drift) [{lu}],Px [{fu}],theta (modal),theta (ELF),theta max,governing shifted analysis\n");
-        foreach (var d in sp.Directions)
-            foreach (var st in d.Stories)
-                sb.Append($"{d.Direction},{st.Story},{F(u.FromSI(st.ElfShear, Quantity.Force))},{F(u.FromSI(st.ModalShear, Quantity.Force))},{F(u.FromSI(st.ScaledShear, Quantity.Force))},{st.Corner + 1},{F(L(st.At.X))},{F(L(st.At.Y))},{F(L(st.ModalDrift))},{F(L(st.TorsionDrift))},{F(L(st.Drift))},{F(L(st.DesignDrift))},{F(L(st.Height))},{F(st.Ratio)},{F(L(st.DriftFromCombinedDisplacements))},{F(u.FromSI(st.Px, Quantity.Force))},{F(st.Theta)},{F(st.ThetaElf)},{F(st.ThetaMax)},{st.Variant}\n");
-        return sb.ToString();
+        double Fo(double v) => u.FromSI(v, Quantity.Force);
+        return new ResultTable
+        {
+            Title = "Response spectrum: stories per excitation direction",
+            Columns =
+            [
+                Text("direction"), new("story"), new("ELF shear", fu), new("modal shear", fu), new("scaled modal shear", fu), new("corner"), new("x", lu), new("y", lu),
+                new("modal drift", lu), new("accidental torsion drift", lu), new("drift", lu), new("design drift Cd*drift/Ie", lu), new("height", lu), new("design drift ratio"),
+                new("difference of combined displacements (not the drift)", lu), new("Px", fu), new("theta (modal)"), new("theta (ELF)"), new("theta max"),
+                Text("governing shifted analysis"),
+            ],
+            Rows = sp.Directions.SelectMany(d => d.Stories.Select(st => (IReadOnlyList<object>)[d.Direction, st.Story, Fo(st.ElfShear), Fo(st.ModalShear), Fo(st.ScaledShear),
+                st.Corner + 1, L(st.At.X), L(st.At.Y), L(st.ModalDrift), L(st.TorsionDrift), L(st.Drift), L(st.DesignDrift), L(st.Height), st.Ratio,
+                L(st.DriftFromCombinedDisplacements), Fo(st.Px), st.Theta, st.ThetaElf, st.ThetaMax, st.Variant])),
+        };
     }
 
-    private static string SpectrumLines(PlanResult r, PlanSpectrumResult sp)
+    /// <summary>The response spectrum's line story shears and overturning per excitation direction: ELF, modal, scaled, accidental torsion and design.</summary>
+    public static ResultTable SpectrumLinesTable(PlanResult r, PlanSpectrumResult sp)
     {
         var u = r.Plan.Units;
         string fu = u.ForceSymbol, mu = u.Label(Quantity.Moment);
         double Fo(double v) => u.FromSI(v, Quantity.Force);
         double Mo(double v) => u.FromSI(v, Quantity.Moment);
-        var sb = new StringBuilder($"direction,story,line,ELF shear [{fu}],modal shear [{fu}],scaled modal shear [{fu}],accidental torsion [{fu}],design shear [{fu}],overturning (no sign) [{mu}],scaled overturning [{mu}],accidental torsion overturning [{mu}],design overturning [{mu}]\n");
-        foreach (var d in sp.Directions)
-            foreach (var l in d.Lines)
-                sb.Append($"{d.Direction},{l.Story},{Csv(l.Line)},{F(Fo(l.Elf))},{F(Fo(l.Modal))},{F(Fo(l.Scaled))},{F(Fo(l.Torsion))},{F(Fo(l.Design))},{F(Mo(l.Overturning))},{F(Mo(l.ScaledOverturning))},{F(Mo(l.TorsionOverturning))},{F(Mo(l.DesignOverturning))}\n");
-        return sb.ToString();
+        return new ResultTable
+        {
+            Title = "Response spectrum: line story shears per excitation direction",
+            Columns =
+            [
+                Text("direction"), new("story"), Text("line"), new("ELF shear", fu), new("modal shear", fu), new("scaled modal shear", fu), new("accidental torsion", fu),
+                new("design shear", fu), new("overturning (no sign)", mu), new("scaled overturning", mu), new("accidental torsion overturning", mu), new("design overturning", mu),
+            ],
+            Rows = sp.Directions.SelectMany(d => d.Lines.Select(l => (IReadOnlyList<object>)[d.Direction, l.Story, l.Line, Fo(l.Elf), Fo(l.Modal), Fo(l.Scaled), Fo(l.Torsion),
+                Fo(l.Design), Mo(l.Overturning), Mo(l.ScaledOverturning), Mo(l.TorsionOverturning), Mo(l.DesignOverturning)])),
+        };
     }
 
+    private static readonly string[] Parts = ["modal", "scaled", "accidental torsion", "design"];
+
     /// <summary>Each line's member end forces combined mode by mode (no sign), scaled, the static torsion's and the design sum; one row per member end.</summary>
-    private static string SpectrumLineMembers(PlanResult r, PlanSpectrumResult sp)
+    public static ResultTable SpectrumLineMembersTable(PlanResult r, PlanSpectrumResult sp)
     {
         var u = r.Plan.Units;
         string fu = u.ForceSymbol, mu = u.Label(Quantity.Moment);
-        var sb = new StringBuilder("direction,line,member,end");
-        foreach (var k in new[] { "modal", "scaled", "accidental torsion", "design" }) sb.Append($",N {k} [{fu}],V {k} [{fu}],M {k} [{mu}]");
-        sb.Append('\n');
+        return new ResultTable
+        {
+            Title = "Response spectrum: member end forces of each line",
+            Columns = [Text("direction"), Text("line"), Text("member"), Text("end"), .. Parts.SelectMany(k => new TableColumn[] { new($"N {k}", fu), new($"V {k}", fu), new($"M {k}", mu) })],
+            Rows = MemberRows(r, sp),
+        };
+    }
+
+    private static IEnumerable<IReadOnlyList<object>> MemberRows(PlanResult r, PlanSpectrumResult sp)
+    {
+        var u = r.Plan.Units;
         foreach (var d in sp.Directions)
             foreach (var lf in d.LineForces)
             {
@@ -135,24 +186,34 @@ public static class PlanSeismicFiles
                 for (int m = 0; m < lf.Modal.Count; m++)
                     foreach (var start in new[] { true, false })
                     {
-                        sb.Append($"{d.Direction},{Csv(lf.Line)},{Csv(model.Members[lf.Modal[m].Member].Id)},{(start ? "start" : "end")}");
+                        var row = new List<object>(16) { d.Direction, lf.Line, model.Members[lf.Modal[m].Member].Id, start ? "start" : "end" };
                         foreach (var e in new[] { lf.Modal[m], lf.Scaled[m], lf.Torsion[m], design[m] })
-                            sb.Append(start ? $",{F(u.FromSI(e.N1, Quantity.Force))},{F(u.FromSI(e.V1, Quantity.Force))},{F(u.FromSI(e.M1, Quantity.Moment))}"
-                                            : $",{F(u.FromSI(e.N2, Quantity.Force))},{F(u.FromSI(e.V2, Quantity.Force))},{F(u.FromSI(e.M2, Quantity.Moment))}");
-                        sb.Append('\n');
+                        {
+                            row.Add(u.FromSI(start ? e.N1 : e.N2, Quantity.Force));
+                            row.Add(u.FromSI(start ? e.V1 : e.V2, Quantity.Force));
+                            row.Add(u.FromSI(start ? e.M1 : e.M2, Quantity.Moment));
+                        }
+                        yield return row;
                     }
             }
-        return sb.ToString();
     }
 
     /// <summary>Each line's support reactions combined mode by mode (no sign), scaled, the static torsion's and the design sum.</summary>
-    private static string SpectrumLineReactions(PlanResult r, PlanSpectrumResult sp)
+    public static ResultTable SpectrumLineReactionsTable(PlanResult r, PlanSpectrumResult sp)
     {
         var u = r.Plan.Units;
         string fu = u.ForceSymbol, mu = u.Label(Quantity.Moment);
-        var sb = new StringBuilder("direction,line,node");
-        foreach (var k in new[] { "modal", "scaled", "accidental torsion", "design" }) sb.Append($",Rx {k} [{fu}],Ry {k} [{fu}],Mz {k} [{mu}]");
-        sb.Append('\n');
+        return new ResultTable
+        {
+            Title = "Response spectrum: support reactions of each line",
+            Columns = [Text("direction"), Text("line"), Text("node"), .. Parts.SelectMany(k => new TableColumn[] { new($"Rx {k}", fu), new($"Ry {k}", fu), new($"Mz {k}", mu) })],
+            Rows = ReactionRows(r, sp),
+        };
+    }
+
+    private static IEnumerable<IReadOnlyList<object>> ReactionRows(PlanResult r, PlanSpectrumResult sp)
+    {
+        var u = r.Plan.Units;
         foreach (var d in sp.Directions)
             foreach (var lf in d.LineForces)
             {
@@ -160,13 +221,16 @@ public static class PlanSeismicFiles
                 var design = lf.DesignReactions;
                 for (int j = 0; j < lf.ModalReactions.Count; j++)
                 {
-                    sb.Append($"{d.Direction},{Csv(lf.Line)},{Csv(model.Nodes[lf.ModalReactions[j].Node].Id)}");
+                    var row = new List<object>(15) { d.Direction, lf.Line, model.Nodes[lf.ModalReactions[j].Node].Id };
                     foreach (var e in new[] { lf.ModalReactions[j], lf.ScaledReactions[j], lf.TorsionReactions[j], design[j] })
-                        sb.Append($",{F(u.FromSI(e.Fx, Quantity.Force))},{F(u.FromSI(e.Fy, Quantity.Force))},{F(u.FromSI(e.Mz, Quantity.Moment))}");
-                    sb.Append('\n');
+                    {
+                        row.Add(u.FromSI(e.Fx, Quantity.Force));
+                        row.Add(u.FromSI(e.Fy, Quantity.Force));
+                        row.Add(u.FromSI(e.Mz, Quantity.Moment));
+                    }
+                    yield return row;
                 }
             }
-        return sb.ToString();
     }
 
     /// <summary>plan-seismic.json as a typed document.</summary>
