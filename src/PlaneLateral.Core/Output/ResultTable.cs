@@ -53,7 +53,7 @@ public sealed class ResultTable
     public void WriteCsv(TextWriter w)
     {
         foreach (var comment in Comments) w.Write(CsvText.Comment(comment));
-        w.Write(string.Join(",", Columns.Select(c => c.Header)));
+        w.Write(string.Join(",", Columns.Select(c => CsvText.Cell(c.Header))));   // a header holding an id (a level, a line) is escaped like any text cell
         w.Write('\n');
         foreach (var row in Rows)
         {
