@@ -45,13 +45,8 @@ internal static class BuildingReport
             if (StoryPanels.Lines(r.Model).Count > 0)
             {
                 sb.Append("\nStory shear by line of resistance (from member end forces and, for linked wall panels, base reactions and link forces by statics; stiffness = line shear / line drift, within the whole structure)\n");
-                var lt = new TextTable("case", "story", "line", $"shear [{force}]", "share", $"stiffness [{ku}]").Numeric(1, 3, 4, 5);
-                foreach (var c in lateral)
-                    foreach (var s in c.Stories)
-                        foreach (var l in s.Lines)
-                            lt.Add(c.CaseId, s.Index.ToString(CultureInfo.InvariantCulture), l.Line.Length == 0 ? "(no line)" : l.Line, TextTable.Num(u.FromSI(l.Shear, Quantity.Force)),
-                                double.IsFinite(l.Share) ? (100 * l.Share).ToString("0.0", CultureInfo.InvariantCulture) + " %" : "n/a", TextTable.Num(u.FromSI(l.Stiffness, Quantity.TranslationalStiffness)));
-                sb.Append(lt.Render());
+                sb.Append(TableView.Render(BuildingFiles.StoryLinesTable(r, br),
+                    ["case", "story", "line", "shear", "share of story shear", "line story stiffness in the structure"], row => shown.Contains((string)row[0])));
             }
 
             var (split, skipped) = (run.LineSplit, run.LineSplitSkipped);
@@ -59,21 +54,13 @@ internal static class BuildingReport
             if (loadCaseSplit.Count > 0)
             {
                 sb.Append("\nStory shear split: each line's story stiffness alone (same level forces) and the split it implies, beside the split in the structure\n");
-                var st = new TextTable("case", "story", "line", $"k alone [{ku}]", "share by k alone", "share in structure").Numeric(1, 3, 4, 5);
-                foreach (var (id, rows) in loadCaseSplit)
-                    foreach (var x in rows)
-                        st.Add(id, x.Story.ToString(CultureInfo.InvariantCulture), x.Line, TextTable.Num(u.FromSI(x.AloneStiffness, Quantity.TranslationalStiffness)), Pct(x.AloneShare), Pct(x.InStructureShare));
-                sb.Append(st.Render());
+                sb.Append(TableView.Render(BuildingFiles.LineSplitTable(r, loadCaseSplit)));
                 sb.Append("  the difference is the interaction the diaphragms force between lines that deform differently (combinations: line-split.csv).\n");
             }
             foreach (var id in skipped) sb.Append($"  {id}: a line alone is a mechanism, so no split by stiffness alone.\n");
 
             sb.Append("\nStiffness (soft story) irregularity, ASCE 7-16 Table 12.3-2 Types 1a/1b: k below 70 % (60 %) of the story above or 80 % (70 %) of the mean of the three above (load cases; all cases in soft-story.csv)\n");
-            var it = new TextTable("case", "story", $"stiffness [{ku}]", "k / k above", "k / mean of 3 above", "1a soft", "1b extreme").Numeric(1, 2, 3, 4);
-            foreach (var i in br.Irregularity.Where(i => shown.Contains(i.CaseId)))
-                it.Add(i.CaseId, i.Story.Index.ToString(CultureInfo.InvariantCulture), TextTable.Num(u.FromSI(i.Stiffness, Quantity.TranslationalStiffness)), Ratio(i.RatioToAbove), Ratio(i.RatioToAverageAbove),
-                    i.WindCase ? "n/a (wind)" : i.Soft ? "yes" : "no", i.WindCase ? "n/a (wind)" : i.ExtremelySoft ? "yes" : "no");
-            sb.Append(it.Render());
+            sb.Append(TableView.Render(BuildingFiles.SoftStoryTable(r, br), row => shown.Contains((string)row[0])));
         }
 
         if (br.DriftChecks.Count > 0)
@@ -99,8 +86,4 @@ internal static class BuildingReport
         }
         return sb.ToString();
     }
-
-    private static string Pct(double v) => double.IsFinite(v) ? (100 * v).ToString("0.0", CultureInfo.InvariantCulture) + " %" : "n/a";
-
-    private static string Ratio(double v) => double.IsFinite(v) ? v.ToString("0.000", CultureInfo.InvariantCulture) : "n/a";
 }

@@ -82,7 +82,7 @@ internal static class CouplingSweepCommand
             }
         }
         catch (UnstableModelException e) { stderr.Write(e.Message + "\nNothing was written.\n"); return ExitCodes.Unstable; }
-        files.Add(OutputSet.Text("coupling-sweep.csv", CoupledWallStudy.SweepCsv(check, sweeps, u)));
+        files.Add(OutputSet.Text("coupling-sweep.csv", CoupledWallStudy.SweepTable(check, sweeps, u).ToCsv()));
         files.AddRange(figures);
         string folder = outDir ?? Path.Combine(Directory.GetCurrentDirectory(), "planelateral-results", Path.GetFileNameWithoutExtension(modelPath));
         try { OutputSet.WriteAll(folder, files); }

@@ -1,4 +1,5 @@
 using PlaneLateral.Analysis;
+using PlaneLateral.Output;
 using PlaneLateral.Units;
 
 namespace PlaneLateral.Cli;
@@ -12,11 +13,7 @@ internal static class PanelLinkReport
         var u = r.Model.Units;
         string fu = u.ForceSymbol, mu = u.Label(Quantity.Moment);
         var sb = new System.Text.StringBuilder("\nPanel links (frame node to panel edge, rigid and exact; force the link passes to the panel)\n");
-        var t = new TextTable("case", "panel", "node", $"Fx [{fu}]", $"Fy [{fu}]", $"Mz [{mu}]").Numeric(3, 4, 5);
-        foreach (var c in links.Cases)
-            foreach (var f in c.Forces)
-                t.Add(c.Id, f.Panel, r.Model.Nodes[f.Node].Id, TextTable.Num(u.FromSI(f.Fx, Quantity.Force)), TextTable.Num(u.FromSI(f.Fy, Quantity.Force)), TextTable.Num(u.FromSI(f.Mz, Quantity.Moment)));
-        sb.Append(t.Render());
+        sb.Append(TableView.Render(PanelLinkFiles.ForcesTable(r, links), ["case", "panel", "node", "Fx", "Fy", "Mz"]));
         // Each linked panel's foundation: its base reaction beside the sum of the link forces it takes (with no load of
         // its own on the panel, the two balance: the wall's base shear is what its links bring).
         var bt = new TextTable("case", "panel", $"base Fx [{fu}]", $"base Fy [{fu}]", $"Σ link Fx [{fu}]", $"Σ link Fy [{fu}]").Numeric(2, 3, 4, 5);

@@ -30,10 +30,7 @@ internal static class SolveReport
         if (r.Stiffness.Count > 0)
         {
             sb.Append("\nLateral stiffness (force per unit displacement under a single force at the point)\n");
-            var t = new TextTable("point", "node", "dir", $"stiffness [{u.Label(Quantity.TranslationalStiffness)}]").Numeric(3);
-            foreach (var s in r.Stiffness)
-                t.Add(s.Point.Label, m.Nodes[s.Point.Node].Id, DofNames.Name(s.Point.Direction)[1..], TextTable.Num(u.FromSI(s.Stiffness, Quantity.TranslationalStiffness)));
-            sb.Append(t.Render());
+            sb.Append(TableView.Render(ResultFiles.StiffnessTable(r), ["label", "node", "direction", "stiffness"]));
         }
 
         if (r.Cases.Count > 0 && m.Members.Count > 0)

@@ -1,6 +1,6 @@
 using System.Globalization;
-using System.Text;
 using PlaneLateral.Hand;
+using PlaneLateral.Output;
 using PlaneLateral.Studies;
 using PlaneLateral.Units;
 
@@ -54,31 +54,42 @@ public static class SweepFiles
 
     private static string F(double v) => v.ToString("G12", CultureInfo.InvariantCulture);
 
-    /// <summary>One line per point; hand deflections are for a unit force at the top (length per unit force).</summary>
-    public static string Csv(SweepResult r, string producedBy)
+    /// <summary>sweep.csv: the sweep's table written as CSV, its notes leading as comments.</summary>
+    public static string Csv(SweepResult r, string producedBy) => Table(r, producedBy).ToCsv();
+
+    /// <summary>
+    /// One row per point (hand deflections for a unit force at the top, length per unit force), then for each FE model
+    /// its stiffness, FE/hand, shear share, FE/hand against the flexure-only formula and estimated error; the notes
+    /// (<see cref="Notes"/>) are the CSV's leading comments. A value a model does not give is an empty cell.
+    /// </summary>
+    public static ResultTable Table(SweepResult r, string producedBy)
     {
         var s = r.Spec;
         var u = s.Units;
         string len = u.LengthSymbol, k = u.Label(Quantity.TranslationalStiffness), flex = $"{len}/{u.ForceSymbol}";
-        var sb = new StringBuilder();
-        foreach (var note in Notes(r, producedBy)) sb.Append(PlaneLateral.Output.CsvText.Comment(note));   // notes lead, as comments
-        sb.Append($"point,ends,h/l,height [{len}],hand flexural deflection [{flex}],hand shear deflection [{flex}],hand total deflection [{flex}],hand stiffness [{k}],hand flexural share,hand shear share");
+        var columns = new List<TableColumn>
+        {
+            new("point"), new("ends", Kind: CellKind.Text), new("h/l"), new("height", len), new("hand flexural deflection", flex), new("hand shear deflection", flex),
+            new("hand total deflection", flex), new("hand stiffness", k), new("hand flexural share"), new("hand shear share"),
+        };
         for (int m = 0; m < r.FeModels.Count; m++)
-            sb.Append($",fe{m + 1} stiffness [{k}],fe{m + 1} FE/hand,fe{m + 1} shear share,fe{m + 1} FE/hand flexure only,fe{m + 1} estimated error");
-        sb.Append(",verdict\n");
+            columns.AddRange([new($"fe{m + 1} stiffness", k), new($"fe{m + 1} FE/hand"), new($"fe{m + 1} shear share"), new($"fe{m + 1} FE/hand flexure only"), new($"fe{m + 1} estimated error")]);
+        columns.Add(new("verdict", Kind: CellKind.Text));
+        var rows = new List<IReadOnlyList<object>>();
         foreach (var p in r.Points)
         {
             var h = p.Hand;
-            sb.Append($"{p.Index + 1},{EndsName(p.Ends)},{F(p.AspectRatio)},{F(p.Height)},{F(h.FlexuralDeflection)},{F(h.ShearDeflection)},{F(h.TotalDeflection)},{F(h.Stiffness)},{F(h.FlexuralShare)},{F(h.ShearShare)}");
+            var row = new List<object> { p.Index + 1, EndsName(p.Ends), p.AspectRatio, p.Height, h.FlexuralDeflection, h.ShearDeflection, h.TotalDeflection, h.Stiffness, h.FlexuralShare, h.ShearShare };
             for (int m = 0; m < p.Fe.Count; m++)
             {
                 var fe = p.Fe[m];
                 double? err = m < p.FeErrors.Count ? p.FeErrors[m] : null;
-                sb.Append($",{F(fe.Value)},{F(fe.Value / h.Stiffness)},{(fe.ShearShare is double sh ? F(sh) : "")},{F(fe.Value * h.FlexuralDeflection)},{(err is double er ? F(er) : "")}");
+                row.AddRange([fe.Value, fe.Value / h.Stiffness, fe.ShearShare is double sh ? sh : null!, fe.Value * h.FlexuralDeflection, err is double er ? er : null!]);
             }
-            sb.Append(',').Append(ComparisonRow.VerdictWords(p.Verdict, ComparedQuantity.Stiffness)).Append('\n');
+            row.Add(ComparisonRow.VerdictWords(p.Verdict, ComparedQuantity.Stiffness));
+            rows.Add(row);
         }
-        return sb.ToString();
+        return new ResultTable { Title = "Aspect-ratio sweep", Columns = columns, Rows = rows, Comments = Notes(r, producedBy) };
     }
 
     /// <summary>The sweep's notes (the caution first, then FE models, wall, hand method, tolerance, departures): the CSV's leading comment lines.</summary>

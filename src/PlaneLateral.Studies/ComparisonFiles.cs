@@ -1,5 +1,4 @@
-using System.Globalization;
-using System.Text;
+using PlaneLateral.Output;
 
 namespace PlaneLateral.Studies;
 
@@ -13,34 +12,46 @@ public static class ComparisonFiles
     public static IReadOnlyList<(string Name, string Text)> Render(ComparisonReport report, string producedBy) =>
     [
         ("comparisons.json", PlaneLateral.Output.TypedJson.Write(Document(report, producedBy))),
-        ("comparisons.csv", Csv(report)),
+        Tables(report)[0].Text(),
     ];
 
-    private static string F(double v) => v.ToString("G12", CultureInfo.InvariantCulture);
+    /// <summary>The CSV file of <see cref="Render"/> as the table it is written from.</summary>
+    public static IReadOnlyList<CsvTableFile> Tables(ComparisonReport report) => [new("comparisons.csv", Table(report))];
 
-    private static string CsvCell(string s) => PlaneLateral.Output.CsvText.Cell(s);   // the one escaper (quoting, formula neutralising)
-
-    private static string Csv(ComparisonReport r)
+    /// <summary>
+    /// One row per comparison row and FE estimate (rank 1 the reference), the caution as the CSV's leading comment; the
+    /// hand and FE values are in the row's own unit, named in "unit". Empty cells where a value does not apply.
+    /// </summary>
+    public static ResultTable Table(ComparisonReport r)
     {
-        // The caution leads as a comment line; the hand and FE values are in the row's own unit, named in "unit".
-        var sb = new StringBuilder(PlaneLateral.Output.CsvText.Comment(ComparisonReport.Caution));
-        sb.Append("check,kind,subject,quantity,unit,hand method,hand value,FE rank,FE model,reference,FE value,FE estimated error,FE/hand,hand flexural share,hand shear share,FE flexural share,FE shear share,h/l,tolerance,verdict,cause,reference basis\n");
+        var rows = new List<IReadOnlyList<object>>();
         foreach (var row in r.Rows)
             for (int k = 0; k < row.Fe.Count; k++)
             {
                 var fe = row.Fe[k];
-                string Opt(double? v) => v is double d ? F(d) : "";
                 var verdict = k == 0 ? row.VerdictText : ComparisonRow.VerdictWords(ComparisonRow.Judge(fe.Value / row.Hand.Value, row.Tolerance), row.Quantity);
-                sb.Append(string.Join(",", new[]
-                {
-                    CsvCell(row.CheckId), row.Kind, CsvCell(row.Subject), Quantity(row.Quantity), CsvCell(row.Unit), CsvCell(row.Hand.Method.Name), F(row.Hand.Value),
-                    (k + 1).ToString(CultureInfo.InvariantCulture), CsvCell(fe.Model), k == 0 ? "yes" : "no", F(fe.Value), Opt(fe.EstimatedError), F(fe.Value / row.Hand.Value),
-                    Opt(row.Hand.FlexuralShare), Opt(row.Hand.ShearShare), Opt(fe.FlexuralShare), Opt(fe.ShearShare), Opt(row.AspectRatio),
-                    F(row.Tolerance), verdict, CsvCell(k == 0 ? row.Cause : "(see the reference estimate, rank 1)"), CsvCell(row.ReferenceBasis),
-                })).Append('\n');
+                rows.Add([row.CheckId, row.Kind, row.Subject, Quantity(row.Quantity), row.Unit, row.Hand.Method.Name, row.Hand.Value, k + 1, fe.Model, k == 0 ? "yes" : "no",
+                    fe.Value, Opt(fe.EstimatedError), fe.Value / row.Hand.Value, Opt(row.Hand.FlexuralShare), Opt(row.Hand.ShearShare), Opt(fe.FlexuralShare),
+                    Opt(fe.ShearShare), Opt(row.AspectRatio), row.Tolerance, verdict, k == 0 ? row.Cause : "(see the reference estimate, rank 1)", row.ReferenceBasis]);
             }
-        return sb.ToString();
+        return new ResultTable
+        {
+            Title = "Hand methods beside the FE model",
+            Columns =
+            [
+                new("check", Kind: CellKind.Text), new("kind", Kind: CellKind.Text), new("subject", Kind: CellKind.Text), new("quantity", Kind: CellKind.Text),
+                new("unit", Kind: CellKind.Text), new("hand method", Kind: CellKind.Text), new("hand value"), new("FE rank"), new("FE model", Kind: CellKind.Text),
+                new("reference", Kind: CellKind.Text), new("FE value"), new("FE estimated error"), new("FE/hand"), new("hand flexural share"), new("hand shear share"),
+                new("FE flexural share"), new("FE shear share"), new("h/l"), new("tolerance"), new("verdict", Kind: CellKind.Text), new("cause", Kind: CellKind.Text),
+                new("reference basis", Kind: CellKind.Text),
+            ],
+            Rows = rows,
+            Comments = [ComparisonReport.Caution],
+        };
     }
+
+    /// <summary>An optional number as a cell: the value, or null (an empty cell).</summary>
+    private static object Opt(double? v) => v is double d ? d : null!;
 
     private static string Quantity(ComparedQuantity q) => q switch
     {

@@ -3,6 +3,7 @@ using System.Globalization;
 using System.Text;
 using PlaneLateral.Hand;
 using PlaneLateral.Model;
+using PlaneLateral.Output;
 using PlaneLateral.Units;
 
 namespace PlaneLateral.Studies;
@@ -242,25 +243,39 @@ public static class CoupledWallStudy
 
     /// <summary>The sweep as CSV in the model's units: the caution as a leading comment line, one header, one line per depth.</summary>
     public static string SweepCsv(CoupledWallCheck c, CoupledWallLoad load, IReadOnlyList<SweepPoint> points, UnitSystem u) =>
-        SweepCsv(c, [(load, points)], u);
+        SweepTable(c, [(load, points)], u).ToCsv();
 
-    /// <summary>The sweep of every load in one table (one line per load and depth), the caution leading as a comment.</summary>
-    public static string SweepCsv(CoupledWallCheck c, IReadOnlyList<(CoupledWallLoad Load, IReadOnlyList<SweepPoint> Points)> sweeps, UnitSystem u)
+    /// <summary>The sweep of every load in one table as CSV (one line per load and depth), the caution leading as a comment.</summary>
+    public static string SweepCsv(CoupledWallCheck c, IReadOnlyList<(CoupledWallLoad Load, IReadOnlyList<SweepPoint> Points)> sweeps, UnitSystem u) =>
+        SweepTable(c, sweeps, u).ToCsv();
+
+    /// <summary>
+    /// The sweep of every load in one table (coupling-sweep.csv), one row per load and depth, in the model's units, the
+    /// caution as the CSV's leading comment; a value a model cannot give (NaN) is an empty cell.
+    /// </summary>
+    public static ResultTable SweepTable(CoupledWallCheck c, IReadOnlyList<(CoupledWallLoad Load, IReadOnlyList<SweepPoint> Points)> sweeps, UnitSystem u)
     {
-        var ci = CultureInfo.InvariantCulture;
-        string F(double v) => double.IsNaN(v) ? "" : v.ToString("G12", ci);
-        string L(double v) => F(u.FromSI(v, Quantity.Length));
+        object N(double v) => double.IsNaN(v) ? null! : v;
+        object L(double v) => N(u.FromSI(v, Quantity.Length));
         string lu = u.LengthSymbol;
-        var sb = new StringBuilder(PlaneLateral.Output.CsvText.Comment(ComparisonReport.Caution));
-        sb.Append($"check,load,beam depth [{lu}],clear span/depth,k alpha H,top deflection continuous medium [{lu}],top deflection continuous medium with beam shear [{lu}],top deflection independent cantilevers [{lu}],top deflection one solid wall [{lu}],top deflection wide column [{lu}],top deflection wide column without shear [{lu}],coupling continuous medium,coupling continuous medium with beam shear,coupling wide column,coupling wide column without shear,top deflection plane-stress panel [{lu}],coupling plane-stress panel\n");
-        foreach (var (load, points) in sweeps)
+        TableColumn Len(string name) => new(name, lu);
+        TableColumn Ratio(string name) => new(name);
+        return new ResultTable
         {
-            string ln = load == CoupledWallLoad.Uniform ? "uniform" : "top";
-            foreach (var p in points)
-                sb.Append(string.Join(",", PlaneLateral.Output.CsvText.Cell(c.Id), ln, L(p.BeamDepth), F(p.SpanToDepth), F(p.KAlphaH),
-                    L(p.ClosedForm), L(p.ClosedFormBeamShear), L(p.Cantilevers), L(p.Solid), L(p.FeShear), L(p.FeNoShear),
-                    F(p.DocClosedForm), F(p.DocClosedFormBeamShear), F(p.DocFeShear), F(p.DocFeNoShear), L(p.FePanel), F(p.DocPanel))).Append('\n');
-        }
-        return sb.ToString();
+            Title = $"Coupled wall \"{c.Id}\" over the coupling-beam depth",
+            Columns =
+            [
+                new("check", Kind: CellKind.Text), new("load", Kind: CellKind.Text), Len("beam depth"), Ratio("clear span/depth"), Ratio("k alpha H"),
+                Len("top deflection continuous medium"), Len("top deflection continuous medium with beam shear"), Len("top deflection independent cantilevers"),
+                Len("top deflection one solid wall"), Len("top deflection wide column"), Len("top deflection wide column without shear"),
+                Ratio("coupling continuous medium"), Ratio("coupling continuous medium with beam shear"), Ratio("coupling wide column"),
+                Ratio("coupling wide column without shear"), Len("top deflection plane-stress panel"), Ratio("coupling plane-stress panel"),
+            ],
+            Rows = sweeps.SelectMany(s => s.Points.Select(p => (IReadOnlyList<object>)
+                [c.Id, s.Load == CoupledWallLoad.Uniform ? "uniform" : "top", L(p.BeamDepth), N(p.SpanToDepth), N(p.KAlphaH),
+                 L(p.ClosedForm), L(p.ClosedFormBeamShear), L(p.Cantilevers), L(p.Solid), L(p.FeShear), L(p.FeNoShear),
+                 N(p.DocClosedForm), N(p.DocClosedFormBeamShear), N(p.DocFeShear), N(p.DocFeNoShear), L(p.FePanel), N(p.DocPanel)])).ToList(),
+            Comments = [ComparisonReport.Caution],
+        };
     }
 }

@@ -1,5 +1,3 @@
-using System.Globalization;
-using System.Text;
 using PlaneLateral.Analysis;
 using PlaneLateral.Model;
 using PlaneLateral.Units;
@@ -15,74 +13,109 @@ public static class BuildingFiles
 {
     public static IReadOnlyList<(string Name, string Text)> Render(ModelResult run)
     {
+        if (ReferenceEquals(run.Model.Building, BuildingData.Empty)) return [];
+        return [.. Tables(run).Select(t => t.Text()), ("stories.json", TypedJson.Write(Document(run.Analysis, run.Building)))];
+    }
+
+    /// <summary>The building layer's CSV files, each from its table (none without building keys).</summary>
+    public static IReadOnlyList<CsvTableFile> Tables(ModelResult run)
+    {
         var r = run.Analysis;
         var b = r.Model.Building;
         if (ReferenceEquals(b, BuildingData.Empty)) return [];
         var br = run.Building;
-        var files = new List<(string, string)>();
+        var files = new List<CsvTableFile>();
         if (br.HasStories)
         {
-            files.Add(("stories.csv", BuildingTables.Stories(run).ToCsv()));
-            files.Add(("story-lines.csv", StoryLines(r, br)));
-            files.Add(("soft-story.csv", SoftStory(r, br)));
+            files.Add(new("stories.csv", BuildingTables.Stories(run)));
+            files.Add(new("story-lines.csv", StoryLinesTable(r, br)));
+            files.Add(new("soft-story.csv", SoftStoryTable(r, br)));
             var split = run.LineSplit;
-            if (split.Count > 0) files.Add(("line-split.csv", Split(r, split)));
+            if (split.Count > 0) files.Add(new("line-split.csv", LineSplitTable(r, split)));
         }
-        if (b.DriftChecks.Count > 0) files.Add(("drift-checks.csv", BuildingTables.DriftChecks(run).ToCsv()));
-        files.Add(("member-stiffness.csv", MemberStiffness(r)));
-        files.Add(("stories.json", TypedJson.Write(Document(r, br))));
+        if (b.DriftChecks.Count > 0) files.Add(new("drift-checks.csv", BuildingTables.DriftChecks(run)));
+        files.Add(new("member-stiffness.csv", MemberStiffnessTable(r)));
         return files;
     }
 
-    private static string F(double v) => double.IsFinite(v) ? v.ToString("G12", CultureInfo.InvariantCulture) : "n/a";
-
-    private static string Csv(string s) => PlaneLateral.Output.CsvText.Cell(s);   // the one escaper (quoting, formula neutralising)
-
     private static string LineName(string l) => l.Length == 0 ? "(no line)" : l;
 
-    private static string StoryLines(AnalysisResult r, BuildingResult br)
+    /// <summary>Each line's share of each story's shear, its drift and its story stiffness within the structure, every case.</summary>
+    public static ResultTable StoryLinesTable(AnalysisResult r, BuildingResult br)
     {
         var u = r.Model.Units;
-        var sb = new StringBuilder($"case,story,line,shear [{u.ForceSymbol}],share of story shear,line drift [{u.LengthSymbol}],line story stiffness in the structure [{u.Label(Quantity.TranslationalStiffness)}]\n");
-        foreach (var c in br.Cases)
-            foreach (var s in c.Stories)
-                foreach (var l in s.Lines)
-                    sb.Append($"{Csv(c.CaseId)},{s.Index},{Csv(LineName(l.Line))},{F(u.FromSI(l.Shear, Quantity.Force))},{F(l.Share)},{F(u.FromSI(l.Drift, Quantity.Length))},{F(u.FromSI(l.Stiffness, Quantity.TranslationalStiffness))}\n");
-        return sb.ToString();
+        return new ResultTable
+        {
+            Title = "Story shear by line of resistance",
+            Columns =
+            [
+                new("case", Kind: CellKind.Text), new("story"), new("line", Kind: CellKind.Text), new("shear", u.ForceSymbol), new("share of story shear", Kind: CellKind.Percent),
+                new("line drift", u.LengthSymbol), new("line story stiffness in the structure", u.Label(Quantity.TranslationalStiffness)),
+            ],
+            Rows = br.Cases.SelectMany(c => c.Stories.SelectMany(s => s.Lines.Select(l => (IReadOnlyList<object>)
+                [c.CaseId, s.Index, LineName(l.Line), u.FromSI(l.Shear, Quantity.Force), l.Share, u.FromSI(l.Drift, Quantity.Length),
+                 u.FromSI(l.Stiffness, Quantity.TranslationalStiffness)]))).ToList(),
+        };
     }
 
-    private static string Split(AnalysisResult r, IReadOnlyList<(string CaseId, IReadOnlyList<LineSplitRow> Rows)> split)
+    /// <summary>Each line's story stiffness alone and the split it implies, beside the split in the structure.</summary>
+    public static ResultTable LineSplitTable(AnalysisResult r, IReadOnlyList<(string CaseId, IReadOnlyList<LineSplitRow> Rows)> split)
     {
         var u = r.Model.Units;
-        var sb = new StringBuilder($"case,story,line,stiffness of the line alone [{u.Label(Quantity.TranslationalStiffness)}],share by stiffness alone,share in the structure\n");
-        foreach (var (id, rows) in split)
-            foreach (var x in rows)
-                sb.Append($"{Csv(id)},{x.Story},{Csv(x.Line)},{F(u.FromSI(x.AloneStiffness, Quantity.TranslationalStiffness))},{F(x.AloneShare)},{F(x.InStructureShare)}\n");
-        return sb.ToString();
+        return new ResultTable
+        {
+            Title = "Story shear split: each line's story stiffness alone (same level forces) and the split it implies, beside the split in the structure",
+            Columns =
+            [
+                new("case", Kind: CellKind.Text), new("story"), new("line", Kind: CellKind.Text), new("stiffness of the line alone", u.Label(Quantity.TranslationalStiffness)),
+                new("share by stiffness alone", Kind: CellKind.Percent), new("share in the structure", Kind: CellKind.Percent),
+            ],
+            Rows = split.SelectMany(x => x.Rows.Select(row => (IReadOnlyList<object>)
+                [x.CaseId, row.Story, row.Line, u.FromSI(row.AloneStiffness, Quantity.TranslationalStiffness), row.AloneShare, row.InStructureShare])).ToList(),
+        };
     }
 
-    private static string SoftStory(AnalysisResult r, BuildingResult br)
+    /// <summary>The stiffness (soft story) irregularity check of every case and story.</summary>
+    public static ResultTable SoftStoryTable(AnalysisResult r, BuildingResult br)
     {
         var u = r.Model.Units;
-        var sb = new StringBuilder($"case,story,stiffness [{u.Label(Quantity.TranslationalStiffness)}],ratio to story above,ratio to mean of three above,type 1a soft (<0.70 or <0.80),type 1b extreme (<0.60 or <0.70)\n");
-        foreach (var i in br.Irregularity)
-            sb.Append($"{Csv(i.CaseId)},{i.Story.Index},{F(u.FromSI(i.Stiffness, Quantity.TranslationalStiffness))},{F(i.RatioToAbove)},{F(i.RatioToAverageAbove)},{(i.WindCase ? "not applied (wind case)" : i.Soft ? "yes" : "no")},{(i.WindCase ? "not applied (wind case)" : i.ExtremelySoft ? "yes" : "no")}\n");
-        return sb.ToString();
+        static string Flag(bool wind, bool yes) => wind ? "not applied (wind case)" : yes ? "yes" : "no";
+        return new ResultTable
+        {
+            Title = "Stiffness (soft story) irregularity, ASCE 7-16 Table 12.3-2 Types 1a/1b: k below 70 % (60 %) of the story above or 80 % (70 %) of the mean of the three above",
+            Columns =
+            [
+                new("case", Kind: CellKind.Text), new("story"), new("stiffness", u.Label(Quantity.TranslationalStiffness)), new("ratio to story above"),
+                new("ratio to mean of three above"), new("type 1a soft (<0.70 or <0.80)", Kind: CellKind.Text), new("type 1b extreme (<0.60 or <0.70)", Kind: CellKind.Text),
+            ],
+            Rows = br.Irregularity.Select(i => (IReadOnlyList<object>)
+                [i.CaseId, i.Story.Index, u.FromSI(i.Stiffness, Quantity.TranslationalStiffness), i.RatioToAbove, i.RatioToAverageAbove,
+                 Flag(i.WindCase, i.Soft), Flag(i.WindCase, i.ExtremelySoft)]).ToList(),
+        };
     }
 
-    private static string MemberStiffness(AnalysisResult r)
+    /// <summary>The stiffness modifiers (I, A, shear area) of every member and where they come from.</summary>
+    public static ResultTable MemberStiffnessTable(AnalysisResult r)
     {
         var m = r.Model;
         var b = m.Building;
-        var sb = new StringBuilder("member,role,line,I modifier,A modifier,shear area modifier,source\n");
+        var rows = new List<IReadOnlyList<object>>();
         for (int i = 0; i < m.Members.Count; i++)
         {
             var mem = m.Members[i];
             var a = i < b.Modifiers.Count ? b.Modifiers[i] : new ModifierAssignment(i, mem.Modifiers, "");
-            string line = i < b.MemberLines.Count ? b.MemberLines[i] : "";
-            sb.Append($"{Csv(mem.Id)},{Csv(mem.Role)},{Csv(line)},{F(a.Modifiers.I)},{F(a.Modifiers.A)},{F(a.Modifiers.ShearArea)},{Csv(a.Source)}\n");
+            rows.Add([mem.Id, mem.Role, i < b.MemberLines.Count ? b.MemberLines[i] : "", a.Modifiers.I, a.Modifiers.A, a.Modifiers.ShearArea, a.Source]);
         }
-        return sb.ToString();
+        return new ResultTable
+        {
+            Title = "Stiffness modifiers by member (I, A, shear area multipliers, and why)",
+            Columns =
+            [
+                new("member", Kind: CellKind.Text), new("role", Kind: CellKind.Text), new("line", Kind: CellKind.Text), new("I modifier"), new("A modifier"),
+                new("shear area modifier"), new("source", Kind: CellKind.Text),
+            ],
+            Rows = rows,
+        };
     }
 
     /// <summary>A finite number, or null (the building layer's "cannot be given": a story without shear has no stiffness).</summary>

@@ -1,5 +1,4 @@
 using System.Globalization;
-using System.Text;
 using PlaneLateral.Analysis;
 using PlaneLateral.Assembly;
 using PlaneLateral.Model;
@@ -36,7 +35,7 @@ public static class MatrixExportFiles
             string what = $"frame model \"{model.Title}\"";
             files.Add((FrameStiffness, Stiffness(sys, what, FrameIndex, who)));
             files.Add((FrameLoads, Loads(sys, what, FrameIndex, who, "")));
-            files.Add((FrameIndex, Index(r.Dofs, i => model.Nodes[i].Id, i => (model.Nodes[i].X, model.Nodes[i].Y), "diaphragm tie")));
+            files.Add(FrameIndexTable(r).Text());
         }
         for (int p = 0; p < r.Panels.Count; p++)
         {
@@ -47,10 +46,23 @@ public static class MatrixExportFiles
             string extra = pr.Panel.FloorTies ? "" : "\nThe last column, \"unit top force\", is a unit horizontal force spread along the top edge (the panel has no floor ties).";
             files.Add((b + "-K.mtx", Stiffness(sys, what, index, who)));
             files.Add((b + "-f.mtx", Loads(sys, what, index, who, extra)));
-            var m = pr.Mesh.Mesh;
-            files.Add((index, Index(pr.Analysis.Dofs, i => $"{pr.Panel.Id}:{i}", i => (m.X[i], m.Y[i]), "floor tie")));
+            files.Add(PanelIndexTable(r, p).Text());
         }
         return files;
+    }
+
+    /// <summary>The CSV files of <see cref="Render"/>, each from its table: the frame's equation index, then each panel's.</summary>
+    public static IReadOnlyList<CsvTableFile> Tables(AnalysisResult r) =>
+        [.. r.Dofs.FreeCount > 0 ? [FrameIndexTable(r)] : Array.Empty<CsvTableFile>(), .. Enumerable.Range(0, r.Panels.Count).Select(p => PanelIndexTable(r, p))];
+
+    private static CsvTableFile FrameIndexTable(AnalysisResult r) =>
+        new(FrameIndex, IndexTable(r.Dofs, i => r.Model.Nodes[i].Id, i => (r.Model.Nodes[i].X, r.Model.Nodes[i].Y), "diaphragm tie"));
+
+    private static CsvTableFile PanelIndexTable(AnalysisResult r, int p)
+    {
+        var pr = r.Panels[p];
+        var m = pr.Mesh.Mesh;
+        return new(PanelBase(p, pr.Panel.Id) + "-index.csv", IndexTable(pr.Analysis.Dofs, i => $"{pr.Panel.Id}:{i}", i => (m.X[i], m.Y[i]), "floor tie"));
     }
 
     private const string Units = "Units: SI. Force N, length m, rotation rad: K in N/m between translations, N/rad and N·m/m between a rotation and a translation, N·m/rad between rotations; f in N (forces) and N·m (moments).";
@@ -78,15 +90,12 @@ public static class MatrixExportFiles
         return sw.ToString();
     }
 
-    private static string F(double v) => v.ToString("R", CultureInfo.InvariantCulture);
-
-    private static string Csv(string s) => PlaneLateral.Output.CsvText.Cell(s);   // the one escaper (quoting, formula neutralising)
-
     /// <summary>
-    /// One row per nodal DOF that is an unknown, by equation then node: the equation's own DOF first, then the DOFs a
-    /// tie makes share it (with the owner named in "shared with").
+    /// The equation index: one row per nodal DOF that is an unknown, by equation then node: the equation's own DOF first,
+    /// then the DOFs a tie makes share it (with the owner named in "shared with"). Coordinates in m, written round-trip
+    /// (<see cref="RoundTrip"/>) so another tool reads back the very numbers the matrices were assembled from.
     /// </summary>
-    private static string Index(DofMap dofs, Func<int, string> nodeId, Func<int, (double X, double Y)> at, string tie)
+    public static ResultTable IndexTable(DofMap dofs, Func<int, string> nodeId, Func<int, (double X, double Y)> at, string tie)
     {
         var rows = new List<(int Eq, bool Shared, int Node, Dof Dof)>();
         for (int n = 0; n < dofs.NodeCount; n++)
@@ -97,18 +106,25 @@ public static class MatrixExportFiles
                 var own = dofs.DofOf(eq);
                 rows.Add((eq, own.Node != n || own.Dof != (Dof)d, n, (Dof)d));
             }
-        var sb = new StringBuilder("equation,node,dof,x [m],y [m],shared with\n");
-        foreach (var (eq, shared, n, d) in rows.OrderBy(r => r.Eq).ThenBy(r => r.Shared).ThenBy(r => r.Node))
+        return new ResultTable
         {
-            var (x, y) = at(n);
-            string note = "";
-            if (shared)
+            Title = "Equation index",
+            Columns =
+            [
+                new("equation"), new("node", Kind: CellKind.Text), new("dof", Kind: CellKind.Text), new("x", "m"), new("y", "m"), new("shared with", Kind: CellKind.Text),
+            ],
+            Rows = rows.OrderBy(r => r.Eq).ThenBy(r => r.Shared).ThenBy(r => r.Node).Select(r =>
             {
-                var own = dofs.DofOf(eq);
-                note = Csv($"{tie}: {DofNames.Name(d)} of node {nodeId(own.Node)}");
-            }
-            sb.Append($"{eq + 1},{Csv(nodeId(n))},{DofNames.Name(d)},{F(x)},{F(y)},{note}\n");
-        }
-        return sb.ToString();
+                var (x, y) = at(r.Node);
+                string note = r.Shared ? $"{tie}: {DofNames.Name(r.Dof)} of node {nodeId(dofs.DofOf(r.Eq).Node)}" : "";
+                return (IReadOnlyList<object>)[r.Eq + 1, nodeId(r.Node), DofNames.Name(r.Dof), new RoundTrip(x), new RoundTrip(y), note];
+            }).ToList(),
+        };
+    }
+
+    /// <summary>A number a table writes round-trip ("R": the shortest text that reads back to the same double), not to 12 figures.</summary>
+    public readonly record struct RoundTrip(double Value)
+    {
+        public override string ToString() => Value.ToString("R", CultureInfo.InvariantCulture);
     }
 }

@@ -1,5 +1,3 @@
-using System.Globalization;
-using System.Text;
 using PlaneLateral.Analysis;
 using PlaneLateral.Units;
 
@@ -13,33 +11,46 @@ namespace PlaneLateral.Output;
 /// </summary>
 public static class PanelLinkFiles
 {
-    public static IReadOnlyList<(string Name, string Text)> Render(AnalysisResult r) =>
-        r.PanelLinks is null ? [] : [("panel-links.csv", Forces(r, r.PanelLinks)), ("panel-link-checks.csv", Checks(r, r.PanelLinks))];
+    public static IReadOnlyList<(string Name, string Text)> Render(AnalysisResult r) => [.. Tables(r).Select(t => t.Text())];
 
-    private static string F(double v) => v.ToString("G12", CultureInfo.InvariantCulture);
+    /// <summary>The links' CSV files, each from its table (none without links).</summary>
+    public static IReadOnlyList<CsvTableFile> Tables(AnalysisResult r) =>
+        r.PanelLinks is not { } links ? [] : [new("panel-links.csv", ForcesTable(r, links)), new("panel-link-checks.csv", ChecksTable(r, links))];
 
-    private static string Csv(string s) => PlaneLateral.Output.CsvText.Cell(s);   // the one escaper (quoting, formula neutralising)
-
-    private static string Forces(AnalysisResult r, PanelLinkResults links)
+    /// <summary>The force and moment each link passes from its frame node to the panel, every case.</summary>
+    public static ResultTable ForcesTable(AnalysisResult r, PanelLinkResults links)
     {
         var u = r.Model.Units;
-        var sb = new StringBuilder($"panel,node,case,Fx [{u.ForceSymbol}],Fy [{u.ForceSymbol}],Mz [{u.Label(Quantity.Moment)}]\n");
-        foreach (var c in links.Cases)
-            foreach (var f in c.Forces)
-                sb.Append($"{Csv(f.Panel)},{Csv(r.Model.Nodes[f.Node].Id)},{Csv(c.Id)},{F(u.FromSI(f.Fx, Quantity.Force))},{F(u.FromSI(f.Fy, Quantity.Force))},{F(u.FromSI(f.Mz, Quantity.Moment))}\n");
-        return sb.ToString();
+        return new ResultTable
+        {
+            Title = "Panel links (frame node to panel edge, rigid and exact; force the link passes to the panel)",
+            Columns =
+            [
+                new("panel", Kind: CellKind.Text), new("node", Kind: CellKind.Text), new("case", Kind: CellKind.Text),
+                new("Fx", u.ForceSymbol), new("Fy", u.ForceSymbol), new("Mz", u.Label(Quantity.Moment)),
+            ],
+            Rows = links.Cases.SelectMany(c => c.Forces.Select(f => (IReadOnlyList<object>)
+                [f.Panel, r.Model.Nodes[f.Node].Id, c.Id, u.FromSI(f.Fx, Quantity.Force), u.FromSI(f.Fy, Quantity.Force), u.FromSI(f.Mz, Quantity.Moment)])).ToList(),
+        };
     }
 
-    private static string Checks(AnalysisResult r, PanelLinkResults links)
+    /// <summary>The checks of the whole (frame and panels together), every case.</summary>
+    public static ResultTable ChecksTable(AnalysisResult r, PanelLinkResults links)
     {
         var u = r.Model.Units;
         string fu = u.ForceSymbol;
-        var sb = new StringBuilder($"case,whole backward error,condensed backward error,applied Fx [{fu}],applied Fy [{fu}],reaction Fx [{fu}],reaction Fy [{fu}],relative force imbalance,relative moment imbalance\n");
-        foreach (var c in links.Cases)
+        double Fo(double v) => u.FromSI(v, Quantity.Force);
+        return new ResultTable
         {
-            var e = c.Whole;
-            sb.Append($"{Csv(c.Id)},{F(c.WholeBackwardError)},{F(c.CondensedBackwardError)},{F(u.FromSI(e.AppliedFx, Quantity.Force))},{F(u.FromSI(e.AppliedFy, Quantity.Force))},{F(u.FromSI(e.ReactionFx, Quantity.Force))},{F(u.FromSI(e.ReactionFy, Quantity.Force))},{F(e.RelativeForceError)},{F(e.RelativeMomentError)}\n");
-        }
-        return sb.ToString();
+            Title = "Checks of the whole, frame and panels together",
+            Columns =
+            [
+                new("case", Kind: CellKind.Text), new("whole backward error"), new("condensed backward error"), new("applied Fx", fu), new("applied Fy", fu),
+                new("reaction Fx", fu), new("reaction Fy", fu), new("relative force imbalance"), new("relative moment imbalance"),
+            ],
+            Rows = links.Cases.Select(c => (IReadOnlyList<object>)
+                [c.Id, c.WholeBackwardError, c.CondensedBackwardError, Fo(c.Whole.AppliedFx), Fo(c.Whole.AppliedFy), Fo(c.Whole.ReactionFx), Fo(c.Whole.ReactionFy),
+                 c.Whole.RelativeForceError, c.Whole.RelativeMomentError]).ToList(),
+        };
     }
 }

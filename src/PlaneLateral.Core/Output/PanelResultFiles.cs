@@ -1,5 +1,3 @@
-using System.Globalization;
-using System.Text;
 using PlaneLateral.Analysis;
 using PlaneLateral.Units;
 
@@ -14,39 +12,50 @@ namespace PlaneLateral.Output;
 public static class PanelResultFiles
 {
     public static IReadOnlyList<(string Name, string Text)> Render(AnalysisResult r) =>
-        r.Panels.Count == 0 ? [] : [("panels.json", TypedJson.Write(Document(r))), ("panel-stresses.csv", Stresses(r)), ("panel-checks.csv", Checks(r))];
+        r.Panels.Count == 0 ? [] : [("panels.json", TypedJson.Write(Document(r))), .. Tables(r).Select(t => t.Text())];
 
-    private static string F(double v) => v.ToString("G12", CultureInfo.InvariantCulture);
+    /// <summary>The panels' CSV files, each from its table (none without panels).</summary>
+    public static IReadOnlyList<CsvTableFile> Tables(AnalysisResult r) =>
+        r.Panels.Count == 0 ? [] : [new("panel-stresses.csv", StressTable(r)), new("panel-checks.csv", ChecksTable(r))];
 
-    private static string Csv(string s) => PlaneLateral.Output.CsvText.Cell(s);   // the one escaper (quoting, formula neutralising)
-
-    private static string Stresses(AnalysisResult r)
+    /// <summary>Every panel mesh node's position, displacements and smoothed stresses, every case.</summary>
+    public static ResultTable StressTable(AnalysisResult r)
     {
         var u = r.Model.Units;
         string l = u.LengthSymbol, s = u.Label(Quantity.Stress);
-        var sb = new StringBuilder($"panel,case,node,x [{l}],y [{l}],ux [{l}],uy [{l}],sigma x [{s}],sigma y [{s}],tau xy [{s}]\n");
-        foreach (var p in r.Panels)
+        double L(double v) => u.FromSI(v, Quantity.Length);
+        double S(double v) => u.FromSI(v, Quantity.Stress);
+        return new ResultTable
         {
-            var m = p.Mesh.Mesh;
-            foreach (var c in p.Analysis.Cases)
-                for (int i = 0; i < m.NodeCount; i++)
-                    sb.Append($"{Csv(p.Panel.Id)},{Csv(c.Id)},{i},{F(u.FromSI(m.X[i], Quantity.Length))},{F(u.FromSI(m.Y[i], Quantity.Length))},{F(u.FromSI(c.Ux[i], Quantity.Length))},{F(u.FromSI(c.Uy[i], Quantity.Length))},{F(u.FromSI(c.NodalStress[i, 0], Quantity.Stress))},{F(u.FromSI(c.NodalStress[i, 1], Quantity.Stress))},{F(u.FromSI(c.NodalStress[i, 2], Quantity.Stress))}\n");
-        }
-        return sb.ToString();
+            Title = "Panel nodal displacements and smoothed stresses",
+            Columns =
+            [
+                new("panel", Kind: CellKind.Text), new("case", Kind: CellKind.Text), new("node"), new("x", l), new("y", l), new("ux", l), new("uy", l),
+                new("sigma x", s), new("sigma y", s), new("tau xy", s),
+            ],
+            Rows = r.Panels.SelectMany(p => p.Analysis.Cases.SelectMany(c => Enumerable.Range(0, p.Mesh.Mesh.NodeCount).Select(i => (IReadOnlyList<object>)
+                [p.Panel.Id, c.Id, i, L(p.Mesh.Mesh.X[i]), L(p.Mesh.Mesh.Y[i]), L(c.Ux[i]), L(c.Uy[i]), S(c.NodalStress[i, 0]), S(c.NodalStress[i, 1]), S(c.NodalStress[i, 2])]))),
+        };
     }
 
-    private static string Checks(AnalysisResult r)
+    /// <summary>Each panel's residual, backward error and equilibrium, every case.</summary>
+    public static ResultTable ChecksTable(AnalysisResult r)
     {
         var u = r.Model.Units;
         string fu = u.ForceSymbol;
-        var sb = new StringBuilder($"panel,case,relative residual,backward error,applied Fx [{fu}],applied Fy [{fu}],reaction Fx [{fu}],reaction Fy [{fu}],relative force imbalance,relative moment imbalance\n");
-        foreach (var p in r.Panels)
-            foreach (var c in p.Analysis.Cases)
-            {
-                var e = c.Equilibrium;
-                sb.Append($"{Csv(p.Panel.Id)},{Csv(c.Id)},{F(c.RelativeResidual)},{F(c.BackwardError)},{F(u.FromSI(e.AppliedFx, Quantity.Force))},{F(u.FromSI(e.AppliedFy, Quantity.Force))},{F(u.FromSI(e.ReactionFx, Quantity.Force))},{F(u.FromSI(e.ReactionFy, Quantity.Force))},{F(e.RelativeForceError)},{F(e.RelativeMomentError)}\n");
-            }
-        return sb.ToString();
+        double Fo(double v) => u.FromSI(v, Quantity.Force);
+        return new ResultTable
+        {
+            Title = "Panel solution checks",
+            Columns =
+            [
+                new("panel", Kind: CellKind.Text), new("case", Kind: CellKind.Text), new("relative residual"), new("backward error"), new("applied Fx", fu),
+                new("applied Fy", fu), new("reaction Fx", fu), new("reaction Fy", fu), new("relative force imbalance"), new("relative moment imbalance"),
+            ],
+            Rows = r.Panels.SelectMany(p => p.Analysis.Cases.Select(c => (IReadOnlyList<object>)
+                [p.Panel.Id, c.Id, c.RelativeResidual, c.BackwardError, Fo(c.Equilibrium.AppliedFx), Fo(c.Equilibrium.AppliedFy), Fo(c.Equilibrium.ReactionFx),
+                 Fo(c.Equilibrium.ReactionFy), c.Equilibrium.RelativeForceError, c.Equilibrium.RelativeMomentError])).ToList(),
+        };
     }
 
     /// <summary>A finite number, or null (one that could not be determined; the note beside it says why).</summary>

@@ -1,6 +1,4 @@
-using System.Globalization;
 using System.Reflection;
-using System.Text;
 using Newtonsoft.Json;
 using PlaneLateral.Analysis;
 using PlaneLateral.Model;
@@ -54,18 +52,30 @@ public static class ResultFiles
     private static (string Name, string Text)[] InMemory(IEnumerable<OutputFile> files) => files.Select(f => (f.Name, f.ToText())).ToArray();
 
     private static IReadOnlyList<OutputFile> Static(AnalysisResult result) =>
+        [TypedJson.File("results.json", Document(result)), .. StaticTables(result).Select(t => t.File())];
+
+    /// <summary>The CSV files of the static results, each from its table: displacements, reactions, member forces (streamed), checks, stiffness.</summary>
+    public static IReadOnlyList<CsvTableFile> StaticTables(AnalysisResult result) =>
     [
-        TypedJson.File("results.json", Document(result)),
-        OutputFile.Streamed("displacements.csv", DisplacementTable(result).WriteCsv),
-        OutputFile.Streamed("reactions.csv", ReactionTable(result).WriteCsv),
-        OutputFile.Streamed("member-forces.csv", MemberForceTable(result).WriteCsv),
-        OutputFile.Text("checks.csv", Checks(result)),
-        OutputFile.Text("stiffness.csv", Stiffness(result)),
+        new("displacements.csv", DisplacementTable(result)),
+        new("reactions.csv", ReactionTable(result)),
+        new("member-forces.csv", MemberForceTable(result)),
+        new("checks.csv", ChecksTable(result)),
+        new("stiffness.csv", StiffnessTable(result)),
     ];
 
-    private static string F(double v) => v.ToString("G12", CultureInfo.InvariantCulture);
-
-    private static string Csv(string s) => PlaneLateral.Output.CsvText.Cell(s);   // the one escaper (quoting, formula neutralising)
+    /// <summary>
+    /// Every CSV file of <see cref="Files"/>, in the same order, as the table it is written from: the files' CSV bytes
+    /// are these tables' (Output/CsvFromTablesTests holds every shipped model to it).
+    /// </summary>
+    public static IReadOnlyList<CsvTableFile> CsvTables(ModelResult run) =>
+    [
+        .. StaticTables(run.Analysis),
+        .. BuildingFiles.Tables(run),
+        .. PanelResultFiles.Tables(run.Analysis),
+        .. PanelLinkFiles.Tables(run.Analysis),
+        .. SeismicFiles.Tables(run),
+    ];
 
     /// <summary>Every node's displacements in every case and combination: rows produced as they are read.</summary>
     public static ResultTable DisplacementTable(AnalysisResult r)
@@ -130,26 +140,45 @@ public static class ResultFiles
         };
     }
 
-    private static string Checks(AnalysisResult r)
+    /// <summary>Per case: residual, backward error, applied load against reactions and the relative imbalances (checks.csv).</summary>
+    public static ResultTable ChecksTable(AnalysisResult r)
     {
         var u = r.Model.Units;
         string fu = u.ForceSymbol, mu = u.Label(Quantity.Moment);
-        var sb = new StringBuilder($"case,kind,relative residual,backward error,applied Fx [{fu}],applied Fy [{fu}],applied Mz about origin [{mu}],reaction Fx [{fu}],reaction Fy [{fu}],reaction Mz about origin [{mu}],relative force imbalance,relative moment imbalance\n");
-        foreach (var c in r.Cases)
+        double Fo(double v) => u.FromSI(v, Quantity.Force);
+        double Mo(double v) => u.FromSI(v, Quantity.Moment);
+        return new ResultTable
         {
-            var e = c.Equilibrium;
-            sb.Append($"{Csv(c.Id)},{(c.IsCombination ? "combination" : "load case")},{F(c.RelativeResidual)},{F(c.BackwardError)},{F(u.FromSI(e.AppliedFx, Quantity.Force))},{F(u.FromSI(e.AppliedFy, Quantity.Force))},{F(u.FromSI(e.AppliedMz, Quantity.Moment))},{F(u.FromSI(e.ReactionFx, Quantity.Force))},{F(u.FromSI(e.ReactionFy, Quantity.Force))},{F(u.FromSI(e.ReactionMz, Quantity.Moment))},{F(e.RelativeForceError)},{F(e.RelativeMomentError)}\n");
-        }
-        return sb.ToString();
+            Title = "Solution checks per case",
+            Columns =
+            [
+                new("case", Kind: CellKind.Text), new("kind", Kind: CellKind.Text), new("relative residual"), new("backward error"),
+                new("applied Fx", fu), new("applied Fy", fu), new("applied Mz about origin", mu), new("reaction Fx", fu), new("reaction Fy", fu),
+                new("reaction Mz about origin", mu), new("relative force imbalance"), new("relative moment imbalance"),
+            ],
+            Rows = r.Cases.Select(c => (IReadOnlyList<object>)
+                [c.Id, c.IsCombination ? "combination" : "load case", c.RelativeResidual, c.BackwardError, Fo(c.Equilibrium.AppliedFx), Fo(c.Equilibrium.AppliedFy),
+                 Mo(c.Equilibrium.AppliedMz), Fo(c.Equilibrium.ReactionFx), Fo(c.Equilibrium.ReactionFy), Mo(c.Equilibrium.ReactionMz),
+                 c.Equilibrium.RelativeForceError, c.Equilibrium.RelativeMomentError]).ToList(),
+        };
     }
 
-    private static string Stiffness(AnalysisResult r)
+    /// <summary>The lateral stiffness and flexibility at each reported point (stiffness.csv).</summary>
+    public static ResultTable StiffnessTable(AnalysisResult r)
     {
         var u = r.Model.Units;
-        var sb = new StringBuilder($"label,node,direction,stiffness [{u.Label(Quantity.TranslationalStiffness)}],flexibility [{u.LengthSymbol}/{u.ForceSymbol}]\n");
-        foreach (var s in r.Stiffness)
-            sb.Append($"{Csv(s.Point.Label)},{Csv(r.Model.Nodes[s.Point.Node].Id)},{DofNames.Name(s.Point.Direction)[1..]},{F(u.FromSI(s.Stiffness, Quantity.TranslationalStiffness))},{F(s.Flexibility * u.ForceScale / u.LengthScale)}\n");
-        return sb.ToString();
+        return new ResultTable
+        {
+            Title = "Lateral stiffness (force per unit displacement under a single force at the point)",
+            Columns =
+            [
+                new("label", Kind: CellKind.Text), new("node", Kind: CellKind.Text), new("direction", Kind: CellKind.Text),
+                new("stiffness", u.Label(Quantity.TranslationalStiffness)), new("flexibility", $"{u.LengthSymbol}/{u.ForceSymbol}"),
+            ],
+            Rows = r.Stiffness.Select(s => (IReadOnlyList<object>)
+                [s.Point.Label, r.Model.Nodes[s.Point.Node].Id, DofNames.Name(s.Point.Direction)[1..],
+                 u.FromSI(s.Stiffness, Quantity.TranslationalStiffness), s.Flexibility * u.ForceScale / u.LengthScale]).ToList(),
+        };
     }
 
     /// <summary>results.json as a typed document whose per-case arrays are produced while the file is written.</summary>

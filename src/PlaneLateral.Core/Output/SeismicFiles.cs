@@ -1,5 +1,3 @@
-using System.Globalization;
-using System.Text;
 using PlaneLateral.Analysis;
 using PlaneLateral.Model;
 using PlaneLateral.Units;
@@ -18,69 +16,113 @@ public static class SeismicFiles
     public static IReadOnlyList<(string Name, string Text)> Render(ModelResult run)
     {
         var r = run.Analysis;
-        var sr = run.Seismic;
-        if (sr is null) return [];
-        // One table per file (docs/model-format.md, "CSV files"): the modes and the period estimates apart, the stability
-        // coefficients and the drift check on the second-order drift apart.
-        var files = new List<(string, string)> { ("periods.csv", Periods(r, sr)), ("period-estimates.csv", PeriodEstimates(sr)), ("story-forces.csv", StoryForcesCsv(r, sr)) };
-        if (sr.Stability.Count > 0) files.Add(("second-order.csv", SecondOrder(r, sr)));
-        if (sr.SecondOrderDriftChecks.Count > 0) files.Add(("second-order-drift-checks.csv", SecondOrderDriftChecks(r, sr)));
-        files.Add(("seismic.json", TypedJson.Write(Document(r, sr))));
+        if (run.Seismic is not { } sr) return [];
+        var files = new List<(string, string)>(Tables(r, sr).Select(t => t.Text())) { ("seismic.json", TypedJson.Write(Document(r, sr))) };
         if (run.Spectrum is { } rs) files.AddRange(SpectrumFiles.Render(r, rs));
         return files;
     }
 
-    private static string F(double v) => double.IsFinite(v) ? v.ToString("G12", CultureInfo.InvariantCulture) : "n/a";
+    /// <summary>The seismic block's CSV files, then the response spectrum's, each from its table (none without a seismic block).</summary>
+    public static IReadOnlyList<CsvTableFile> Tables(ModelResult run) =>
+        run.Seismic is not { } sr ? [] : [.. Tables(run.Analysis, sr), .. run.Spectrum is { } rs ? SpectrumFiles.Tables(run.Analysis, rs) : []];
 
-    private static string Csv(string s) => PlaneLateral.Output.CsvText.Cell(s);   // the one escaper (quoting, formula neutralising)
+    private static List<CsvTableFile> Tables(AnalysisResult r, SeismicResult sr)
+    {
+        // One table per file (docs/model-format.md, "CSV files"): the modes and the period estimates apart, the stability
+        // coefficients and the drift check on the second-order drift apart.
+        var files = new List<CsvTableFile> { new("periods.csv", PeriodsTable(r, sr)), new("period-estimates.csv", PeriodEstimatesTable(sr)), new("story-forces.csv", StoryForcesTable(r, sr)) };
+        if (sr.Stability.Count > 0) files.Add(new("second-order.csv", SecondOrderTable(r, sr)));
+        if (sr.SecondOrderDriftChecks.Count > 0) files.Add(new("second-order-drift-checks.csv", SecondOrderDriftChecksTable(r, sr)));
+        return files;
+    }
 
-    private static string Periods(AnalysisResult r, SeismicResult sr)
+    /// <summary>The vibration modes: period, circular frequency, mass share and the shape at each level above the base.</summary>
+    public static ResultTable PeriodsTable(AnalysisResult r, SeismicResult sr)
     {
         var levels = r.Model.Building.Levels;
-        var sb = new StringBuilder("mode,period [s],omega [rad/s],mass share," + string.Join(",", levels.Skip(1).Select(l => Csv("shape " + l.Id))) + "\n");
-        foreach (var m in sr.Forces.Modes)
-            sb.Append($"{m.Number},{F(m.Period)},{F(m.Omega)},{F(m.MassShare)},{string.Join(",", m.LevelShape.Skip(1).Select(F))}\n");
-        return sb.ToString();
+        return new ResultTable
+        {
+            Title = "Periods (masses = story weights / g on the diaphragm equations; K condensed to them exactly)",
+            Columns = [new("mode"), new("period", "s"), new("omega", "rad/s"), new("mass share", Kind: CellKind.Percent), .. levels.Skip(1).Select(l => new TableColumn("shape " + l.Id))],
+            Rows = sr.Forces.Modes.Select(m => (IReadOnlyList<object>)[m.Number, m.Period, m.Omega, m.MassShare, .. m.LevelShape.Skip(1).Select(v => (object)v)]).ToList(),
+        };
     }
 
-    private static string PeriodEstimates(SeismicResult sr)
+    /// <summary>The period estimates side by side: first eigen period, Rayleigh, the approximate period, its upper limit, the one used.</summary>
+    public static ResultTable PeriodEstimatesTable(SeismicResult sr)
     {
         var f = sr.Forces;
-        return $"estimate,period [s]\neigen mode 1,{F(f.Modes.Count > 0 ? f.Modes[0].Period : double.NaN)}\nRayleigh (story forces),{F(f.RayleighPeriod)}\nTa = Ct*hn^x,{F(f.Ta)}\nCu*Ta,{F(f.Cu * f.Ta)}\nused,{F(f.PeriodUsed)}\n";
+        return new ResultTable
+        {
+            Title = "Period estimates",
+            Columns = [new("estimate", Kind: CellKind.Text), new("period", "s")],
+            Rows =
+            [
+                ["eigen mode 1", f.Modes.Count > 0 ? f.Modes[0].Period : double.NaN], ["Rayleigh (story forces)", f.RayleighPeriod], ["Ta = Ct*hn^x", f.Ta],
+                ["Cu*Ta", f.Cu * f.Ta], ["used", f.PeriodUsed],
+            ],
+        };
     }
 
-    private static string StoryForcesCsv(AnalysisResult r, SeismicResult sr)
+    /// <summary>The equivalent lateral forces: each level's height, weight, Cvx, force and the story shear below it (bottom level first).</summary>
+    public static ResultTable StoryForcesTable(AnalysisResult r, SeismicResult sr)
     {
         var u = r.Model.Units;
         var levels = r.Model.Building.Levels;
         var s = r.Model.Seismic!;
-        var sb = new StringBuilder($"case,level,height [{u.LengthSymbol}],weight [{u.ForceSymbol}],Cvx,Fx [{u.ForceSymbol}],story shear below [{u.ForceSymbol}]\n");
+        var rows = new List<IReadOnlyList<object>>();
         for (int i = 1; i < levels.Count; i++)
+            rows.Add([s.CaseId, levels[i].Id, u.FromSI(levels[i].Elevation - levels[0].Elevation, Quantity.Length), u.FromSI(s.Weights.FirstOrDefault(x => x.Level == i)?.Weight ?? 0, Quantity.Force),
+                sr.Forces.Cvx[i], u.FromSI(sr.Forces.LevelForces[i], Quantity.Force), u.FromSI(sr.Stories.Stories[i - 1].Shear, Quantity.Force)]);
+        return new ResultTable
         {
-            double w = s.Weights.FirstOrDefault(x => x.Level == i)?.Weight ?? 0;
-            sb.Append($"{Csv(s.CaseId)},{Csv(levels[i].Id)},{F(u.FromSI(levels[i].Elevation - levels[0].Elevation, Quantity.Length))},{F(u.FromSI(w, Quantity.Force))},{F(sr.Forces.Cvx[i])},{F(u.FromSI(sr.Forces.LevelForces[i], Quantity.Force))},{F(u.FromSI(sr.Stories.Stories[i - 1].Shear, Quantity.Force))}\n");
-        }
-        return sb.ToString();
+            Title = $"Story forces, case \"{s.CaseId}\": Fx = Cvx·V, Cvx = wx·hx^k / Σ wi·hi^k (ASCE 7-16 §12.8.3)",
+            Columns =
+            [
+                new("case", Kind: CellKind.Text), new("level", Kind: CellKind.Text), new("height", u.LengthSymbol), new("weight", u.ForceSymbol), new("Cvx"),
+                new("Fx", u.ForceSymbol), new("story shear below", u.ForceSymbol),
+            ],
+            Rows = rows,
+        };
     }
 
-    private static string SecondOrder(AnalysisResult r, SeismicResult sr)
+    /// <summary>The stability coefficient per story beside the second-order drift.</summary>
+    public static ResultTable SecondOrderTable(AnalysisResult r, SeismicResult sr)
     {
         var u = r.Model.Units;
         string l = u.LengthSymbol, f = u.ForceSymbol;
-        var sb = new StringBuilder($"story,Px [{f}],Vx [{f}],height [{l}],first-order drift [{l}],design drift Cd*de/Ie [{l}],theta,theta max,status,second-order drift [{l}],second/first,1/(1-theta)\n");
-        foreach (var x in sr.Stability)
-            sb.Append($"{x.Story.Index},{F(u.FromSI(x.Px, Quantity.Force))},{F(u.FromSI(x.Vx, Quantity.Force))},{F(u.FromSI(x.Story.Height, Quantity.Length))},{F(u.FromSI(x.ElasticDrift, Quantity.Length))},{F(u.FromSI(x.DesignDrift, Quantity.Length))},{F(x.Theta)},{F(x.ThetaMax)},{Csv(x.Status)},{F(u.FromSI(x.SecondOrderDrift, Quantity.Length))},{F(x.Ratio)},{F(x.Estimate)}\n");
-        return sb.ToString();
+        double L(double v) => u.FromSI(v, Quantity.Length);
+        double Fo(double v) => u.FromSI(v, Quantity.Force);
+        return new ResultTable
+        {
+            Title = "Second-order effects: θ = Px·Δ·Ie/(Vx·hsx·Cd) (ASCE 7-16 §12.8.7) beside the second-order drift",
+            Columns =
+            [
+                new("story"), new("Px", f), new("Vx", f), new("height", l), new("first-order drift", l), new("design drift Cd*de/Ie", l), new("theta"), new("theta max"),
+                new("status", Kind: CellKind.Text), new("second-order drift", l), new("second/first"), new("1/(1-theta)"),
+            ],
+            Rows = sr.Stability.Select(x => (IReadOnlyList<object>)
+                [x.Story.Index, Fo(x.Px), Fo(x.Vx), L(x.Story.Height), L(x.ElasticDrift), L(x.DesignDrift), x.Theta, x.ThetaMax, x.Status, L(x.SecondOrderDrift), x.Ratio, x.Estimate]).ToList(),
+        };
     }
 
-    private static string SecondOrderDriftChecks(AnalysisResult r, SeismicResult sr)
+    /// <summary>The drift check on the second-order drift, every check and story.</summary>
+    public static ResultTable SecondOrderDriftChecksTable(AnalysisResult r, SeismicResult sr)
     {
         var u = r.Model.Units;
         string l = u.LengthSymbol;
-        var sb = new StringBuilder($"check,case,story,drift [{l}],amplified [{l}],ratio,allowed,result,margin\n");
-        foreach (var d in sr.SecondOrderDriftChecks)
-            sb.Append($"{Csv(d.Check.Id)},{Csv(d.CaseId)},{d.Story.Index},{F(u.FromSI(d.ElasticDrift, Quantity.Length))},{F(u.FromSI(d.AmplifiedDrift, Quantity.Length))},{F(d.Ratio)},{F(d.Allowed)},{(d.Passes ? "within" : "exceeds")},{F(d.Margin)}\n");
-        return sb.ToString();
+        return new ResultTable
+        {
+            Title = "Drift check on the second-order drift (amplified = Cd·drift / Ie, ASCE 7-16 eq. 12.8-15)",
+            Columns =
+            [
+                new("check", Kind: CellKind.Text), new("case", Kind: CellKind.Text), new("story"), new("drift", l), new("amplified", l), new("ratio"), new("allowed"),
+                new("result", Kind: CellKind.Text), new("margin", Kind: CellKind.Percent),
+            ],
+            Rows = sr.SecondOrderDriftChecks.Select(d => (IReadOnlyList<object>)
+                [d.Check.Id, d.CaseId, d.Story.Index, u.FromSI(d.ElasticDrift, Quantity.Length), u.FromSI(d.AmplifiedDrift, Quantity.Length), d.Ratio, d.Allowed,
+                 d.Passes ? "within" : "exceeds", d.Margin]).ToList(),
+        };
     }
 
     /// <summary>A finite number, or null (a number the seismic step cannot give).</summary>

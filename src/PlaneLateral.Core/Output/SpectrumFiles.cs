@@ -11,18 +11,9 @@ public static class SpectrumFiles
     public static IReadOnlyList<(string Name, string Text)> Render(AnalysisResult r, PlanarSpectrumResult s)
     {
         var u = r.Model.Units;
-        string fu = u.ForceSymbol, lu = u.LengthSymbol;
         double L(double v) => u.FromSI(v, Quantity.Length);
         double Fo(double v) => u.FromSI(v, Quantity.Force);
         double Mo(double v) => u.FromSI(v, Quantity.Moment);
-        string mu = u.Label(Quantity.Moment);
-        string F(double v) => double.IsFinite(v) ? v.ToString("G12", CultureInfo.InvariantCulture) : "n/a";
-        var sb = new StringBuilder($"mode,period [s],omega [rad/s],Sa [g],gamma,mass share,cumulative,base shear [{fu}]\n");
-        foreach (var m in s.Modes)
-            sb.Append($"{m.Mode},{F(m.Period)},{F(m.Omega)},{F(m.Sa)},{F(m.Gamma)},{F(m.Share)},{F(m.Cumulative)},{F(Fo(m.BaseShear))}\n");
-        var stories = new StringBuilder($"story,ELF shear [{fu}],modal shear [{fu}],scaled modal shear [{fu}],drift [{lu}],design drift Cd*drift/Ie [{lu}],height [{lu}],design drift ratio,difference of combined displacements (not the drift) [{lu}],displacement of the level above [{lu}],overturning moment (no sign) [{mu}],scaled overturning moment [{mu}],Px [{fu}],theta (modal),theta (ELF),theta max\n");
-        foreach (var st in s.Stories)
-            stories.Append($"{st.Story},{F(Fo(st.ElfShear))},{F(Fo(st.ModalShear))},{F(Fo(st.ScaledShear))},{F(L(st.Drift))},{F(L(st.DesignDrift))},{F(L(st.Height))},{F(st.Ratio)},{F(L(st.DriftFromCombinedDisplacements))},{F(L(st.Displacement))},{F(Mo(st.Overturning))},{F(Mo(s.Scaling.ForceFactor * st.Overturning))},{F(Fo(st.Px))},{F(st.Theta)},{F(st.ThetaElf)},{F(st.ThetaMax)}\n");
         var json = new SpectrumDocument(
             Program: $"PlaneLateral {ResultFiles.Version}",
             Caution: ResultFiles.Caution,
@@ -35,22 +26,99 @@ public static class SpectrumFiles
                 L(st.Drift), L(st.DesignDrift), st.Ratio, Mo(st.Overturning), Fo(st.Px), Num(st.Theta), Num(st.ThetaElf), Num(st.ThetaMax))),
             PxFrom: s.PxSource,
             CombinedValues: CombinedNote);
-        var files = new List<(string, string)> { ("response-spectrum-modes.csv", sb.ToString()), ("response-spectrum-stories.csv", stories.ToString()), ("response-spectrum.json", TypedJson.Write(json)) };
-        if (s.MemberForces.Count > 0)
-        {
-            var mf = new StringBuilder($"member,N start [{fu}],V start [{fu}],M start [{mu}],N end [{fu}],V end [{fu}],M end [{mu}],scaled N start [{fu}],scaled V start [{fu}],scaled M start [{mu}],scaled N end [{fu}],scaled V end [{fu}],scaled M end [{mu}]\n");
-            foreach (var e in s.MemberForces)
-                mf.Append($"{CsvText.Cell(r.Model.Members[e.Member].Id)},{EndForces(e, 1, Fo, Mo, F)},{EndForces(e, s.Scaling.ForceFactor, Fo, Mo, F)}\n");
-            files.Add(("response-spectrum-members.csv", mf.ToString()));
-        }
-        if (s.Reactions.Count > 0)
-        {
-            var rf = new StringBuilder($"node,Rx [{fu}],Ry [{fu}],Mz [{mu}],scaled Rx [{fu}],scaled Ry [{fu}],scaled Mz [{mu}]\n");
-            foreach (var e in s.Reactions)
-                rf.Append($"{CsvText.Cell(r.Model.Nodes[e.Node].Id)},{Reactions(e, 1, Fo, Mo, F)},{Reactions(e, s.Scaling.ForceFactor, Fo, Mo, F)}\n");
-            files.Add(("response-spectrum-reactions.csv", rf.ToString()));
-        }
+        var tables = Tables(r, s).Select(t => t.Text()).ToList();
+        return [.. tables.Take(2), ("response-spectrum.json", TypedJson.Write(json)), .. tables.Skip(2)];
+    }
+
+    /// <summary>The response spectrum's CSV files, each from its table: modes, stories, then member end forces and reactions where there are any.</summary>
+    public static IReadOnlyList<CsvTableFile> Tables(AnalysisResult r, PlanarSpectrumResult s)
+    {
+        var files = new List<CsvTableFile> { new("response-spectrum-modes.csv", ModesTable(r, s)), new("response-spectrum-stories.csv", StoriesTable(r, s)) };
+        if (s.MemberForces.Count > 0) files.Add(new("response-spectrum-members.csv", MembersTable(r, s)));
+        if (s.Reactions.Count > 0) files.Add(new("response-spectrum-reactions.csv", ReactionsTable(r, s)));
         return files;
+    }
+
+    /// <summary>The modes: period, frequency, spectral acceleration, participation, mass share and base shear.</summary>
+    public static ResultTable ModesTable(AnalysisResult r, PlanarSpectrumResult s)
+    {
+        var u = r.Model.Units;
+        return new ResultTable
+        {
+            Title = "Modal response spectrum: modes",
+            Columns =
+            [
+                new("mode"), new("period", "s"), new("omega", "rad/s"), new("Sa", "g"), new("gamma"), new("mass share", Kind: CellKind.Percent),
+                new("cumulative", Kind: CellKind.Percent), new("base shear", u.ForceSymbol),
+            ],
+            Rows = s.Modes.Select(m => (IReadOnlyList<object>)[m.Mode, m.Period, m.Omega, m.Sa, m.Gamma, m.Share, m.Cumulative, u.FromSI(m.BaseShear, Quantity.Force)]).ToList(),
+        };
+    }
+
+    /// <summary>The combined story results beside the ELF: shears, drifts, overturning and θ, story 1 first.</summary>
+    public static ResultTable StoriesTable(AnalysisResult r, PlanarSpectrumResult s)
+    {
+        var u = r.Model.Units;
+        string fu = u.ForceSymbol, lu = u.LengthSymbol, mu = u.Label(Quantity.Moment);
+        double L(double v) => u.FromSI(v, Quantity.Length);
+        double Fo(double v) => u.FromSI(v, Quantity.Force);
+        double Mo(double v) => u.FromSI(v, Quantity.Moment);
+        return new ResultTable
+        {
+            Title = "Modal response spectrum: stories, combined, beside the ELF",
+            Columns =
+            [
+                new("story"), new("ELF shear", fu), new("modal shear", fu), new("scaled modal shear", fu), new("drift", lu), new("design drift Cd*drift/Ie", lu),
+                new("height", lu), new("design drift ratio"), new("difference of combined displacements (not the drift)", lu), new("displacement of the level above", lu),
+                new("overturning moment (no sign)", mu), new("scaled overturning moment", mu), new("Px", fu), new("theta (modal)"), new("theta (ELF)"), new("theta max"),
+            ],
+            Rows = s.Stories.Select(st => (IReadOnlyList<object>)
+                [st.Story, Fo(st.ElfShear), Fo(st.ModalShear), Fo(st.ScaledShear), L(st.Drift), L(st.DesignDrift), L(st.Height), st.Ratio,
+                 L(st.DriftFromCombinedDisplacements), L(st.Displacement), Mo(st.Overturning), Mo(s.Scaling.ForceFactor * st.Overturning), Fo(st.Px),
+                 st.Theta, st.ThetaElf, st.ThetaMax]).ToList(),
+        };
+    }
+
+    /// <summary>Member end forces combined mode by mode (local axes), unscaled then scaled.</summary>
+    public static ResultTable MembersTable(AnalysisResult r, PlanarSpectrumResult s)
+    {
+        var u = r.Model.Units;
+        string fu = u.ForceSymbol, mu = u.Label(Quantity.Moment);
+        double Fo(double v) => u.FromSI(v, Quantity.Force);
+        double Mo(double v) => u.FromSI(v, Quantity.Moment);
+        double k = s.Scaling.ForceFactor;
+        return new ResultTable
+        {
+            Title = "Member end forces, combined mode by mode (local axes)",
+            Columns =
+            [
+                new("member", Kind: CellKind.Text), new("N start", fu), new("V start", fu), new("M start", mu), new("N end", fu), new("V end", fu), new("M end", mu),
+                new("scaled N start", fu), new("scaled V start", fu), new("scaled M start", mu), new("scaled N end", fu), new("scaled V end", fu), new("scaled M end", mu),
+            ],
+            Rows = s.MemberForces.Select(e => (IReadOnlyList<object>)
+                [r.Model.Members[e.Member].Id, Fo(e.N1), Fo(e.V1), Mo(e.M1), Fo(e.N2), Fo(e.V2), Mo(e.M2),
+                 Fo(k * e.N1), Fo(k * e.V1), Mo(k * e.M1), Fo(k * e.N2), Fo(k * e.V2), Mo(k * e.M2)]).ToList(),
+        };
+    }
+
+    /// <summary>Support reactions combined mode by mode, unscaled then scaled.</summary>
+    public static ResultTable ReactionsTable(AnalysisResult r, PlanarSpectrumResult s)
+    {
+        var u = r.Model.Units;
+        string fu = u.ForceSymbol, mu = u.Label(Quantity.Moment);
+        double Fo(double v) => u.FromSI(v, Quantity.Force);
+        double Mo(double v) => u.FromSI(v, Quantity.Moment);
+        double k = s.Scaling.ForceFactor;
+        return new ResultTable
+        {
+            Title = "Support reactions, combined mode by mode",
+            Columns =
+            [
+                new("node", Kind: CellKind.Text), new("Rx", fu), new("Ry", fu), new("Mz", mu), new("scaled Rx", fu), new("scaled Ry", fu), new("scaled Mz", mu),
+            ],
+            Rows = s.Reactions.Select(e => (IReadOnlyList<object>)
+                [r.Model.Nodes[e.Node].Id, Fo(e.Fx), Fo(e.Fy), Mo(e.Mz), Fo(k * e.Fx), Fo(k * e.Fy), Mo(k * e.Mz)]).ToList(),
+        };
     }
 
     /// <summary>What every combined value is, for the files (a combined peak has no sign).</summary>
