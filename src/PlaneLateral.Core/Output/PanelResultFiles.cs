@@ -14,6 +14,14 @@ public static class PanelResultFiles
     public static IReadOnlyList<(string Name, string Text)> Render(AnalysisResult r) =>
         r.Panels.Count == 0 ? [] : [("panels.json", TypedJson.Write(Document(r))), .. Tables(r).Select(t => t.Text())];
 
+    /// <summary>
+    /// The panels' files as the command line writes them: panels.json and the CSV files streamed into their files, row
+    /// by row (panel-stresses.csv grows with mesh nodes × cases: at the panel limit's edge it is about 0.9 GB of text,
+    /// docs/hardening.md), never built as one string.
+    /// </summary>
+    public static IReadOnlyList<OutputFile> Files(AnalysisResult r) =>
+        r.Panels.Count == 0 ? [] : [TypedJson.File("panels.json", Document(r)), .. Tables(r).Select(t => t.File())];
+
     /// <summary>The panels' CSV files, each from its table (none without panels).</summary>
     public static IReadOnlyList<CsvTableFile> Tables(AnalysisResult r) =>
         r.Panels.Count == 0 ? [] : [new("panel-stresses.csv", StressTable(r)), new("panel-checks.csv", ChecksTable(r))];

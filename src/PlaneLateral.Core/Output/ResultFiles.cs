@@ -27,7 +27,7 @@ public static class ResultFiles
     [
         .. Static(run.Analysis),
         .. Texts(BuildingFiles.Render(run)),
-        .. Texts(PanelResultFiles.Render(run.Analysis)),
+        .. PanelResultFiles.Files(run.Analysis),
         .. Texts(PanelLinkFiles.Render(run.Analysis)),
         .. Texts(SeismicFiles.Render(run)),
     ];
@@ -36,7 +36,7 @@ public static class ResultFiles
     public static IReadOnlyList<OutputFile> PlanarFiles(AnalysisResult result) =>
     [
         .. Static(result),
-        .. Texts(PanelResultFiles.Render(result)),
+        .. PanelResultFiles.Files(result),
         .. Texts(PanelLinkFiles.Render(result)),
     ];
 
