@@ -148,7 +148,9 @@ if [[ $skip_cholmod == 0 ]]; then
     for k in "${!grids[@]}"; do
       g=${grids[$k]}
       say "solver against CHOLMOD: grid $g x $g (writing the matrix)"
-      "${B[@]}" supernodal "$g" "$g" "$work/mtx" "$threads" 1 >"$work/sn/write-$g.out"   # also the warm-up
+      # also the warm-up, and the one-pass process whose max RSS is compared (a second pass would add the first's garbage)
+      /usr/bin/time -v -o "$work/sn/write-$g.time" "${B[@]}" supernodal "$g" "$g" "$work/mtx" "$threads" 1 >"$work/sn/write-$g.out"
+      one_pass_rss=$(sed -n 's/.*Maximum resident set size (kbytes): //p' "$work/sn/write-$g.time")
       A=$work/mtx/wall${g}x${g}.mtx; b=$work/mtx/wall${g}x${g}_b.mtx
       n=$(M field "$work/sn/write-$g.out" n)
       ratios=(); mems=()
@@ -173,7 +175,7 @@ if [[ $skip_cholmod == 0 ]]; then
         done
         [[ -n $best ]] || continue
         ratios+=("$(M div "$ours" "$best")")
-        mems+=("$(M div "$ours_rss" "$best_rss")")
+        mems+=("$(M div "$one_pass_rss" "$best_rss")")
         details+=("- n = $n, round $r: ours $ours s (max RSS $((ours_rss / 1024)) MiB), CHOLMOD's fastest $best_ord $best s (max RSS $((best_rss / 1024)) MiB)")
       done
       if [[ ${#ratios[@]} -gt 0 ]]; then
@@ -184,7 +186,7 @@ if [[ $skip_cholmod == 0 ]]; then
           details+=("- n = $n, CHOLMOD $o: total $(M stats ${ctot[$o]} | cut -d' ' -f1) s (median of the rounds)")
         done
         if [[ $k == $(( ${#grids[@]} - 1 )) ]]; then
-          row "Solver: peak memory (process max RSS) ÷ CHOLMOD's, fastest ordering, n = $n" "$(M stats "${mems[@]}")" le 1.1
+          row "Solver: peak memory (max RSS of a one-pass process) ÷ CHOLMOD's, fastest ordering, n = $n" "$(M stats "${mems[@]}")" le 1.1
         fi
       fi
       unset ctot
