@@ -45,6 +45,7 @@ if (args.Length > 1 && args[0] == "result-edge")
     ResultEdgeReport.Run(args);
     return;
 }
+if (args.Length > 3 && args[0] == "frame-json") { FrameJsonCommand.Run(args); return; }   // "frame-json BAYS STORIES FILE": the benchmark frame as a model file
 // "sweep-alloc": what the default sweep's points allocate, by type.
 if (args.Length > 0 && args[0] == "sweep-alloc")
 {
