@@ -1,6 +1,7 @@
 using System.Globalization;
 using System.Text;
 using PlaneLateral.Analysis;
+using PlaneLateral.Output;
 using PlaneLateral.Units;
 
 namespace PlaneLateral.Cli;
@@ -50,20 +51,14 @@ internal static class SpectrumReport
         sb.Append(PlanSeismicReport.Wrap($"Overturning: at each story's base, per mode, combined. θ = P_x·Δ·I_e/(V_x·h_sx·C_d) (ASCE 7-16 eq. 12.8-16) with Δ the design drift above and V_x the scaled story shear; P_x is {s.PxSource}.", 100, "  "));
         if (s.Reactions.Count > 0)
         {
-            var rt = new TextTable("node", $"Rx [{force}]", $"Ry [{force}]", $"Mz [{mu}]", $"scaled Rx [{force}]", $"scaled Ry [{force}]", $"scaled Mz [{mu}]").Numeric(1, 2, 3, 4, 5, 6);
-            foreach (var x in s.Reactions)
-                rt.Add(r.Model.Nodes[x.Node].Id, Fo(x.Fx), Fo(x.Fy), Mo(x.Mz), Fo(s.Scaling.ForceFactor * x.Fx), Fo(s.Scaling.ForceFactor * x.Fy), Mo(s.Scaling.ForceFactor * x.Mz));
-            sb.Append("\n  Support reactions, combined mode by mode\n").Append(rt.Render());
+            sb.Append("\n  Support reactions, combined mode by mode\n").Append(TableView.Render(SpectrumFiles.ReactionsTable(r, s)));   // the file's table
         }
         if (s.MemberForces.Count > 0)
         {
-            var et = new TextTable("member", $"N start [{force}]", $"V start [{force}]", $"M start [{mu}]", $"N end [{force}]", $"V end [{force}]", $"M end [{mu}]").Numeric(1, 2, 3, 4, 5, 6);
-            foreach (var x in s.MemberForces.Take(MaxMemberRows))
-            {
-                double k = s.Scaling.ForceFactor;
-                et.Add(r.Model.Members[x.Member].Id, Fo(k * x.N1), Fo(k * x.V1), Mo(k * x.M1), Fo(k * x.N2), Fo(k * x.V2), Mo(k * x.M2));
-            }
-            sb.Append("\n  Member end forces, combined mode by mode and scaled (local axes)\n").Append(et.Render());
+            // The file's table, its scaled columns, the first rows.
+            var et = SpectrumFiles.MembersTable(r, s).WithRows(rows => rows.Take(MaxMemberRows));
+            string[] scaled = ["member", "scaled N start", "scaled V start", "scaled M start", "scaled N end", "scaled V end", "scaled M end"];
+            sb.Append("\n  Member end forces, combined mode by mode and scaled (local axes)\n").Append(TableView.Render(et, scaled));
             if (s.MemberForces.Count > MaxMemberRows)
                 sb.Append($"  The first {MaxMemberRows} of {s.MemberForces.Count} members; all of them in response-spectrum-members.csv.\n");
         }

@@ -1,6 +1,7 @@
 using System.Globalization;
 using PlaneLateral.Analysis;
 using PlaneLateral.Model;
+using PlaneLateral.Output;
 using PlaneLateral.Units;
 
 namespace PlaneLateral.Reports;
@@ -183,15 +184,13 @@ public static partial class ModelReport
                 x.Theta > x.ThetaMax ? "EXCEEDS theta max" : x.Theta > SecondOrderAnalysis.NeglectLimit ? "P-delta to be included" : "may be neglected"]).ToList(),
             [0, 1, 2, 3, 4, 5, 6]));
         if (s.Reactions.Count > 0)
-            blocks.Add(new Table($"Modal response spectrum: support reactions combined mode by mode (no sign), scaled × {P4(k)}",
-                ["node", $"R_x [{force}]", $"R_y [{force}]", $"M_z [{mom}]"],
-                s.Reactions.Select(x => (IReadOnlyList<string>)[m.Nodes[x.Node].Id, Fo(k * x.Fx), Fo(k * x.Fy), Mo(k * x.Mz)]).ToList(), [1, 2, 3]));
+            blocks.Add(ReportTables.From(SpectrumFiles.ReactionsTable(r, s), $"Modal response spectrum: support reactions combined mode by mode (no sign), scaled × {P4(k)} (response-spectrum-reactions.csv)",
+                ["node", "scaled Rx", "scaled Ry", "scaled Mz"]));
         if (s.MemberForces.Count > 0)
         {
-            blocks.Add(new Table($"Modal response spectrum: member end forces combined mode by mode (no sign, local axes), scaled × {P4(k)}",
-                ["member", $"N start [{force}]", $"V start [{force}]", $"M start [{mom}]", $"N end [{force}]", $"V end [{force}]", $"M end [{mom}]"],
-                s.MemberForces.Take(MaxSpectrumMemberRows).Select(x => (IReadOnlyList<string>)[m.Members[x.Member].Id, Fo(k * x.N1), Fo(k * x.V1), Mo(k * x.M1), Fo(k * x.N2), Fo(k * x.V2), Mo(k * x.M2)]).ToList(),
-                [1, 2, 3, 4, 5, 6]));
+            blocks.Add(ReportTables.From(SpectrumFiles.MembersTable(r, s).WithRows(rows => rows.Take(MaxSpectrumMemberRows)),
+                $"Modal response spectrum: member end forces combined mode by mode (no sign, local axes), scaled × {P4(k)} (response-spectrum-members.csv)",
+                ["member", "scaled N start", "scaled V start", "scaled M start", "scaled N end", "scaled V end", "scaled M end"]));
             if (s.MemberForces.Count > MaxSpectrumMemberRows)
                 blocks.Add(new Paragraph($"The first {MaxSpectrumMemberRows} of {s.MemberForces.Count} members are listed; all are in response-spectrum-members.csv."));
         }
