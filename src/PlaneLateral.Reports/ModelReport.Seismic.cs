@@ -82,10 +82,8 @@ public static partial class ModelReport
 
         // Periods.
         var upper = levels.Skip(1).ToList();
-        blocks.Add(new Table("Vibration modes (level masses = story weights / g on the diaphragm equations)",
-            ["mode", "period [s]", "mass share (x)", .. upper.Select(l => $"shape {l.Id}")],
-            f.Modes.Select(md => (IReadOnlyList<string>)[$"{md.Number}", P4(md.Period), Pct(md.MassShare, "0.0"), .. md.LevelShape.Skip(1).Select(P3)]).ToList(),
-            [.. Enumerable.Range(0, upper.Count + 3)]));
+        blocks.Add(ReportTables.From(SeismicFiles.PeriodsTable(r, sr), "Vibration modes (level masses = story weights / g on the diaphragm equations; periods.csv)",
+            ["mode", "period", "mass share", .. upper.Select(l => "shape " + l.Id)]));
         var est = new List<IReadOnlyList<string>>
         {
             new[] { "first eigen period", P4(f.Modes.Count > 0 ? f.Modes[0].Period : double.NaN), "K·φ = ω²·M·φ", "docs/seismic.md" },
