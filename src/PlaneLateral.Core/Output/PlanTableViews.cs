@@ -57,4 +57,38 @@ public static class PlanTableViews
     public static ResultTable ShearEnvelope(PlanResult r, DiaphragmStudy d, IReadOnlyList<TributaryShear>? tributary, string caseId, string direction) =>
         PlanDiaphragmFiles.EnvelopeTable(r, d, tributary).WithRows(rows => rows.Where(x => (string)x[0] == caseId && Along(r.Plan, x[2], direction))
             .OrderByDescending(x => (int)x[1]));
+
+    /// <summary>
+    /// plan-drift-checks.csv's governing row of each story (the largest ratio over its allowed ratio, the first of equals),
+    /// over the outline corners only or over every row (named points too), the top story first or the bottom one.
+    /// </summary>
+    public static ResultTable GoverningDriftChecks(PlanResult r, bool cornersOnly, bool topFirst)
+    {
+        var table = PlanFiles.DriftChecksTable(r);
+        int corner = table.Column("corner");
+        var use = Use(table);
+        return table.WithRows(rows =>
+        {
+            var governing = rows.Where(x => !cornersOnly || x[corner] is int).GroupBy(x => (int)x[1]).Select(g => g.MaxBy(use)!);
+            return topFirst ? governing.OrderByDescending(x => (int)x[1]) : governing.OrderBy(x => (int)x[1]);
+        });
+    }
+
+    /// <summary>plan-drift-checks.csv's governing row of each story and named point, by story, then point.</summary>
+    public static ResultTable GoverningPointDriftChecks(PlanResult r)
+    {
+        var table = PlanFiles.DriftChecksTable(r);
+        if (r.Plan.Points.Count == 0) return table;   // no point rows, no "point" column
+        int point = table.Column("point");
+        var use = Use(table);
+        return table.WithRows(rows => rows.Where(x => (string)x[point] != "").GroupBy(x => ((int)x[1], (string)x[point]))
+            .OrderBy(g => g.Key.Item1).ThenBy(g => g.Key.Item2, StringComparer.Ordinal).Select(g => g.MaxBy(use)!));
+    }
+
+    /// <summary>A drift check row's ratio over its allowed ratio (NaN where either is not a number).</summary>
+    private static Func<IReadOnlyList<object>, double> Use(ResultTable driftChecks)
+    {
+        int ratio = driftChecks.Column("ratio"), allowed = driftChecks.Column("allowed");
+        return x => x[ratio] is double a && x[allowed] is double b ? a / b : double.NaN;
+    }
 }

@@ -23,8 +23,32 @@ public sealed partial class TablesShowTheFilesTests : IDisposable
 
     public void Dispose() => Directory.Delete(_dir, recursive: true);
 
-    /// <summary>A file's columns a table shows (by name, the unit left out) and which of its rows (all when null).</summary>
-    private sealed record View(string File, string[] Columns, Func<IReadOnlyDictionary<string, string>, bool>? Rows = null);
+    /// <summary>A file's row: each column's cell by the column's name (the unit left out).</summary>
+    private sealed class Row(Dictionary<string, string> cells)
+    {
+        public string this[string name] => cells[name];
+        public double Number(string name) => double.TryParse(cells[name], NumberStyles.Float, CultureInfo.InvariantCulture, out double v) ? v : double.NaN;
+    }
+
+    /// <summary>A file's columns a table shows (by name, the unit left out) and which of its rows, given all of them (all when null).</summary>
+    /// <remarks><paramref name="Optional"/>: a file that may lack the columns (a column written only when the input has such things); without them, no rows are checked.</remarks>
+    private sealed record View(string File, string[] Columns, Func<Row, IReadOnlyList<Row>, bool>? Rows = null, bool Optional = false);
+
+    /// <summary>
+    /// A drift check row that governs its story (and named point): the largest ratio over allowed ratio of its group, the
+    /// first of equals, over the outline corners only (a corner number given) or every row.
+    /// </summary>
+    private static bool Governs(Row row, IReadOnlyList<Row> all, bool cornersOnly, bool byPoint)
+    {
+        bool Point(Row x) => x["corner"] == "";
+        if (cornersOnly && Point(row) || byPoint && !Point(row)) return false;
+        var group = all.Where(x => x["story"] == row["story"] && (!cornersOnly || !Point(x)) && (!byPoint || Point(x) && x["point"] == row["point"])).ToList();
+        double Use(Row x) => x.Number("ratio") / x.Number("allowed");
+        return ReferenceEquals(group.MaxBy(Use), row);
+    }
+
+    public static TheoryData<string> PlanarModelsWithResponseSpectrum() =>
+        new(RepositoryFiles.Models().Where(m => !ModelReader.IsPlanFile(RepositoryFiles.ModelPath(m)) && ModelReader.ReadFile(RepositoryFiles.ModelPath(m)).Seismic?.ResponseSpectrum is not null));
 
     public static TheoryData<string> Buildings() => new(["demo-building.json", .. RepositoryFiles.Models("plan")]);
 
@@ -41,18 +65,20 @@ public sealed partial class TablesShowTheFilesTests : IDisposable
         }
         var atCentres = plan.Cases.Where(c => c.Direction is "x" or "y" && c.Eccentricity == 0).ToDictionary(c => c.Id, c => c.Direction);
         View flexibility = new("plan-floor-flexibility.csv", ["level", "case", "from line", "to line", "span from", "span to", "MDD", "ADVE", "MDD/ADVE", "flexible by eq. 12.3-1"]);
-        View lines = new("plan-spectrum-lines.csv", ["story", "line", "ELF shear", "modal shear", "scaled modal shear", "accidental torsion", "design shear"], r => Along(r["line"], r["direction"]));
+        View lines = new("plan-spectrum-lines.csv", ["story", "line", "ELF shear", "modal shear", "scaled modal shear", "accidental torsion", "design shear"], (r, _) => Along(r["line"], r["direction"]));
         View amplification = new("plan-amplification.csv", ["direction", "level", "max displacement", "average of the ends", "Ax", "applied"]);
         View[] console =
         [
             flexibility,
             new("plan-shear-envelope.csv", ["story", "line", "flexible", "hand tributary", "flexible/hand - 1", "gap cause"],
-                r => r["hand tributary"] != "" && atCentres.TryGetValue(r["case"], out var dir) && Along(r["line"], dir)),
+                (r, _) => r["hand tributary"] != "" && atCentres.TryGetValue(r["case"], out var dir) && Along(r["line"], dir)),
             new("plan-elf-forces.csv", ["direction", "level", "Fx"]),
             amplification,
             new("plan-spectrum-stories.csv", ["story", "Px", "theta (modal)", "theta (ELF)", "theta max"]),
             lines with { Columns = [.. lines.Columns, "design overturning"] },
-            new("plan-spectrum-line-reactions.csv", ["line", "node", "Rx design", "Ry design", "Mz design"], r => Along(r["line"], r["direction"])),
+            new("plan-spectrum-line-reactions.csv", ["line", "node", "Rx design", "Ry design", "Mz design"], (r, _) => Along(r["line"], r["direction"])),
+            new("plan-drift-checks.csv", ["case", "story", "corner", "amplified drift", "ratio", "allowed", "result"], (r, all) => Governs(r, all, cornersOnly: true, byPoint: false)),
+            new("plan-drift-checks.csv", ["point", "case", "story", "amplified drift", "ratio", "allowed", "result"], (r, all) => Governs(r, all, cornersOnly: false, byPoint: true), Optional: true),
         ];
         View[] report =
         [
@@ -60,11 +86,29 @@ public sealed partial class TablesShowTheFilesTests : IDisposable
             amplification,
             new("plan-spectrum-modes.csv", ["mode", "period", "gamma", "base shear x", "base shear y", "base torque"]),
             lines,
+            new("plan-drift-checks.csv", ["story", "case", "corner", "x", "y", "elastic drift", "amplified drift", "height", "ratio", "allowed", "result"],
+                (r, all) => Governs(r, all, cornersOnly: false, byPoint: false)),
         ];
         var (files, stdout, markdown) = await Task.Run(() => Run(path)).WaitAsync(Guard);
         int shown = Check(files, console, ConsoleRows(stdout), "console") + Check(files, report, MarkdownRows(markdown), "report.md");
-        // The buildings with a seismic block or floors that bend have these files; the others have none of them.
-        Assert.True(shown > 0 == (plan.Seismic is not null || plan.Floors.Count > 0), $"{building}: {shown} rows checked");
+        // A building with any of these files has rows in them (seismic block, floors that bend, a drift limit).
+        bool any = console.Concat(report).Any(v => File.Exists(Path.Combine(files, v.File)));
+        Assert.True(any == (shown > 0), $"{building}: {shown} rows checked");
+        Assert.Equal(plan.Seismic is not null || plan.Floors.Count > 0 || plan.DriftLimit is not null, any);
+    }
+
+    [Theory]
+    [MemberData(nameof(PlanarModelsWithResponseSpectrum))]
+    public async Task PlanarSpectrumTablesShowTheirFilesRows(string model)
+    {
+        var (files, stdout, _) = await Task.Run(() => Run(RepositoryFiles.ModelPath(model))).WaitAsync(Guard);
+        View[] console =
+        [
+            new("response-spectrum-stories.csv", ["story", "ELF shear", "modal shear", "scaled modal shear", "drift", "design drift Cd*drift/Ie", "design drift ratio",
+                "difference of combined displacements (not the drift)"]),
+            new("response-spectrum-stories.csv", ["story", "overturning moment (no sign)", "scaled overturning moment", "Px", "theta (modal)", "theta (ELF)", "theta max"]),
+        ];
+        Assert.True(Check(files, console, ConsoleRows(stdout), "console") > 0, $"{model}: response-spectrum-stories.csv has no rows");
     }
 
     /// <summary>The solve command's files and console (default detail) and the report command's Markdown.</summary>
@@ -88,6 +132,7 @@ public sealed partial class TablesShowTheFilesTests : IDisposable
             if (!File.Exists(file)) continue;
             var records = CsvTextTests.Read(File.ReadAllText(file), comments: true).Where(r => r.Length > 1 || r[0] != "").ToList();
             var header = records[0];
+            if (view.Optional && !view.Columns.All(c => header.Any(h => h == c || h.StartsWith(c + " [", StringComparison.Ordinal)))) continue;
             int Index(string name)
             {
                 int i = Array.FindIndex(header, h => h == name || h.StartsWith(name + " [", StringComparison.Ordinal));
@@ -95,10 +140,11 @@ public sealed partial class TablesShowTheFilesTests : IDisposable
                 return i;
             }
             var columns = view.Columns.Select(Index).ToArray();
-            foreach (var record in records.Skip(1))
+            var rows = records.Skip(1).Select(record => new Row(header.Select((h, i) => (Name: Regex.Replace(h, @" \[[^\]]*\]$", ""), Value: record[i]))
+                .ToDictionary(x => x.Name, x => x.Value))).ToList();
+            foreach (var (record, row) in records.Skip(1).Zip(rows))
             {
-                var cells = header.Select((h, i) => (Name: Regex.Replace(h, @" \[[^\]]*\]$", ""), Value: record[i])).ToDictionary(x => x.Name, x => x.Value);
-                if (view.Rows is { } keep && !keep(cells)) continue;
+                if (view.Rows is { } keep && !keep(row, rows)) continue;
                 var expected = columns.Select(i => record[i]).Where(v => v != "").ToArray();
                 Assert.True(printed.Any(row => Same(row, expected)),
                     $"{where}: no row shows {view.File}'s row [{string.Join(", ", record)}] as [{string.Join(" | ", expected)}]");
