@@ -47,8 +47,10 @@ public sealed partial class TablesShowTheFilesTests : IDisposable
         return ReferenceEquals(group.MaxBy(Use), row);
     }
 
-    public static TheoryData<string> PlanarModelsWithResponseSpectrum() =>
-        new(RepositoryFiles.Models().Where(m => !ModelReader.IsPlanFile(RepositoryFiles.ModelPath(m)) && ModelReader.ReadFile(RepositoryFiles.ModelPath(m)).Seismic?.ResponseSpectrum is not null));
+    /// <summary>The shipped planar models with a drift check or a response spectrum (the planar tables this test reads).</summary>
+    public static TheoryData<string> PlanarModelsWithDriftChecksOrSpectrum() =>
+        new(RepositoryFiles.Models().Where(m => !ModelReader.IsPlanFile(RepositoryFiles.ModelPath(m)) &&
+            ModelReader.ReadFile(RepositoryFiles.ModelPath(m)) is var model && (model.Building.DriftChecks.Count > 0 || model.Seismic?.ResponseSpectrum is not null)));
 
     public static TheoryData<string> Buildings() => new(["demo-building.json", .. RepositoryFiles.Models("plan")]);
 
@@ -98,17 +100,19 @@ public sealed partial class TablesShowTheFilesTests : IDisposable
     }
 
     [Theory]
-    [MemberData(nameof(PlanarModelsWithResponseSpectrum))]
-    public async Task PlanarSpectrumTablesShowTheirFilesRows(string model)
+    [MemberData(nameof(PlanarModelsWithDriftChecksOrSpectrum))]
+    public async Task PlanarTablesShowTheirFilesRows(string model)
     {
-        var (files, stdout, _) = await Task.Run(() => Run(RepositoryFiles.ModelPath(model))).WaitAsync(Guard);
+        var (files, stdout, markdown) = await Task.Run(() => Run(RepositoryFiles.ModelPath(model))).WaitAsync(Guard);
         View[] console =
         [
             new("response-spectrum-stories.csv", ["story", "ELF shear", "modal shear", "scaled modal shear", "drift", "design drift Cd*drift/Ie", "design drift ratio",
                 "difference of combined displacements (not the drift)"]),
             new("response-spectrum-stories.csv", ["story", "overturning moment (no sign)", "scaled overturning moment", "Px", "theta (modal)", "theta (ELF)", "theta max"]),
         ];
-        Assert.True(Check(files, console, ConsoleRows(stdout), "console") > 0, $"{model}: response-spectrum-stories.csv has no rows");
+        View[] report = [new("drift-checks.csv", ["check", "case", "story", "elastic drift", "amplified drift", "drift ratio", "allowed ratio", "margin", "result"])];
+        int shown = Check(files, console, ConsoleRows(stdout), "console") + Check(files, report, MarkdownRows(markdown), "report.md");
+        Assert.True(shown > 0, $"{model}: no rows checked");
     }
 
     /// <summary>The solve command's files and console (default detail) and the report command's Markdown.</summary>
@@ -154,7 +158,7 @@ public sealed partial class TablesShowTheFilesTests : IDisposable
         return n;
     }
 
-    /// <summary>A printed row shows the file's cells: as many, each number to four significant figures, each text equal.</summary>
+    /// <summary>A printed row shows the file's cells: as many, each number to four significant figures (a fraction as a percentage to one decimal), each text equal.</summary>
     private static bool Same(string[] row, string[] file)
     {
         if (row.Length != file.Length) return false;
@@ -162,7 +166,13 @@ public sealed partial class TablesShowTheFilesTests : IDisposable
         {
             const NumberStyles style = NumberStyles.Float;
             var inv = CultureInfo.InvariantCulture;
-            if (double.TryParse(file[i], style, inv, out double v) && double.TryParse(row[i], style, inv, out double shown))
+            if (row[i].EndsWith(" %", StringComparison.Ordinal) && double.TryParse(file[i], style, inv, out double share) &&
+                double.TryParse(row[i][..^2], style, inv, out double percent))
+            {
+                // A fraction shown as a percentage to one decimal: half a unit of it, 0.05 % (derived from the one-decimal display).
+                if (Math.Abs(percent / 100 - share) > 5e-4 * (1 + 1e-9)) return false;
+            }
+            else if (double.TryParse(file[i], style, inv, out double v) && double.TryParse(row[i], style, inv, out double shown))
             {
                 if (Math.Abs(shown - v) > 5e-4 * Math.Abs(v) * (1 + 1e-9)) return false;
             }
