@@ -1,6 +1,7 @@
 using System.Text;
 using PlaneLateral.Analysis;
 using PlaneLateral.Model;
+using PlaneLateral.Output;
 using PlaneLateral.Studies;
 using PlaneLateral.Units;
 
@@ -15,8 +16,7 @@ internal static class PlanFloorReport
         if (r.Diaphragms is not { } d) return "";
         var p = r.Plan;
         var u = p.Units;
-        string len = u.LengthSymbol, force = u.ForceSymbol;
-        string L(double v) => TextTable.Num(u.FromSI(v, Quantity.Length));
+        string force = u.ForceSymbol;
         string Fo(double v) => double.IsFinite(v) ? TextTable.Num(u.FromSI(v, Quantity.Force)) : "-";
         var sb = new StringBuilder();
         sb.Append($"\nFloors in plan: {string.Join(", ", d.Kinds.Select((k, i) => $"{p.Levels[i + 1].Id} {PlanFloor.Word(k)}"))}\n");
@@ -27,12 +27,8 @@ internal static class PlanFloorReport
         if (d.Flexibility.Count > 0)
         {
             sb.Append("\nFloor flexibility test (ASCE 7-16 §12.3.1.3, eq. 12.3-1), semi-rigid floor under the story forces\n");
-            var t = new TextTable("level", "load", "lines", $"span [{len}]", $"MDD [{len}]", $"ADVE [{len}]", "MDD/ADVE", "> 2").Numeric(4, 5, 6);
-            foreach (var x in d.Flexibility)
-                t.Add(p.Levels[x.Level].Id, x.Case, $"{(x.From == "" ? "end" : x.From)}-{(x.To == "" ? "end" : x.To)}", $"{L(x.SpanFrom)}..{L(x.SpanTo)}",
-                    TextTable.Sci(u.FromSI(x.Mdd, Quantity.Length)), TextTable.Sci(u.FromSI(x.Adve, Quantity.Length)), double.IsFinite(x.Ratio) ? x.Ratio.ToString("0.000") : "-",
-                    x.Flexible ? "flexible" : "no");
-            sb.Append(t.Render());
+            sb.Append(TableView.Render(PlanDiaphragmFiles.FlexibilityTable(r, d),
+                ["level", "case", "from line", "to line", "span from", "span to", "MDD", "ADVE", "MDD/ADVE", "flexible by eq. 12.3-1"]));
             foreach (var g in d.Flexibility.GroupBy(x => (x.Level, x.Direction)))
             {
                 var w = g.Where(x => double.IsFinite(x.Ratio)).OrderByDescending(x => x.Ratio).FirstOrDefault();
@@ -40,6 +36,7 @@ internal static class PlanFloorReport
                 sb.Append($"  {p.Levels[w.Level].Id}, loads along {w.Direction}: largest MDD/ADVE {w.Ratio:0.000} " +
                     $"({(w.From == "" ? "end" : w.From)}-{(w.To == "" ? "end" : w.To)}): {(w.Flexible ? "flexible by eq. 12.3-1" : "not flexible by eq. 12.3-1")}\n");
             }
+            sb.Append("  A line left empty: the span ends at the floor's free end.\n");
             sb.Append("  MDD: the floor's largest in-plane deflection in the span from the line through it at the span's\n" +
                       "  lines; ADVE: their average story drift. Eq. 12.3-1 permits the flexible idealisation where\n" +
                       "  MDD/ADVE > 2; the governing code decides.\n");
@@ -74,21 +71,12 @@ internal static class PlanFloorReport
     {
         if (hand.Count == 0 || r.Diaphragms is not { } d || !d.Variants.Contains("flexible")) return "";
         var p = r.Plan;
-        var u = p.Units;
-        string force = u.ForceSymbol;
-        string Fo(double v) => double.IsFinite(v) ? TextTable.Num(u.FromSI(v, Quantity.Force)) : "-";
         var sb = new StringBuilder();
         foreach (var c in p.Cases.Where(c => c.Direction is "x" or "y" && c.Eccentricity == 0))
         {
             sb.Append($"\nHand tributary split beside the FE flexible floor, case {c.Id}\n");
-            var t = new TextTable("story", "line", $"flexible [{force}]", $"hand [{force}]", "FE/hand-1", "gap from").Numeric(0, 2, 3, 4);
-            foreach (var h in hand.Where(h => h.Case == c.Id).OrderByDescending(h => h.Story))
-            {
-                var line = p.Lines.First(l => l.Id == h.Line);
-                if ((c.Direction == "x" ? line.Cos : line.Sin) == 0) continue;
-                t.Add(h.Story.ToString(), h.Line, Fo(h.Flexible), Fo(h.Hand), double.IsFinite(h.Gap) ? h.Gap.ToString("0.000") : "-", h.Cause == "" ? "-" : h.Cause);
-            }
-            sb.Append(t.Render());
+            sb.Append(TableView.Render(PlanTableViews.ShearEnvelope(r, d, hand, c.Id, c.Direction),
+                ["story", "line", "flexible", "hand tributary", "flexible/hand - 1", "gap cause"]));
         }
         if (sb.Length == 0) return "";
         sb.Append("  Hand: each floor as simple spans between its lines under a uniform load over its extent, an\n" +

@@ -120,17 +120,11 @@ internal static class PlanReport
             var lim = p.DriftLimit!;
             sb.Append($"\nCorner drift check, the governing case of each story over every case solved (A_x cases included; all in\n" +
                       $"plan-drift-checks.csv): δ = C_d·δ_e/I_e (ASCE 7-16 eq. 12.8-15), C_d = {lim.Cd}, I_e = {lim.Ie}, allowed {lim.AllowedRatio}\n");
-            var t = new TextTable("case", "story", "corner", $"δ [{len}]", "ratio", "allowed", "result").Numeric(1, 2, 3, 4, 5);
-            foreach (var d in r.DriftChecks.Where(d => d.Point is null).GroupBy(d => d.Story).OrderBy(g => g.Key).Select(g => g.MaxBy(d => d.Ratio / d.Allowed)!))
-                t.Add(d.Case, d.Story.ToString(), (d.Vertex + 1).ToString(), L(d.Amplified), TextTable.Num(d.Ratio), d.Allowed.ToString("0.000"), d.Within ? "within" : "exceeds");
-            sb.Append(t.Render());
+            sb.Append(TableView.Render(PlanTableViews.GoverningDriftChecks(r, cornersOnly: true, topFirst: false), ["case", "story", "corner", "amplified drift", "ratio", "allowed", "result"]));
             if (p.Points.Count > 0)
             {
                 sb.Append("Named points, the governing case of each story and point:\n");
-                var pt = new TextTable("point", "case", "story", $"δ [{len}]", "ratio", "allowed", "result").Numeric(2, 3, 4, 5);
-                foreach (var d in r.DriftChecks.Where(d => d.Point is not null).GroupBy(d => (d.Story, d.Point)).OrderBy(g => g.Key.Story).ThenBy(g => g.Key.Point, StringComparer.Ordinal).Select(g => g.MaxBy(d => d.Ratio / d.Allowed)!))
-                    pt.Add(d.Point!, d.Case, d.Story.ToString(), L(d.Amplified), TextTable.Num(d.Ratio), d.Allowed.ToString("0.000"), d.Within ? "within" : "exceeds");
-                sb.Append(pt.Render());
+                sb.Append(TableView.Render(PlanTableViews.GoverningPointDriftChecks(r), ["point", "case", "story", "amplified drift", "ratio", "allowed", "result"]));
             }
         }
         sb.Append(PlanFloorReport.Render(r, tributary));   // floors that bend: with a "floor" block only

@@ -31,20 +31,14 @@ internal static class PlanSeismicReport
         sb.Append(TableView.Render(PlanSeismicFiles.ElfTable(r, s), ["direction", "mode", "modal period", "Ta", "Cu*Ta", "period used", "Cs", "k", "V"]));
         foreach (var e in s.Elf)
             sb.Append($"  {e.Direction}: T = {e.PeriodNote}; Cs by {e.CsNote}; cases {string.Join(", ", e.Cases)}\n");
-        var ft = new TextTable("level", $"Fx along x [{force}]", $"Fy along y [{force}]").Numeric(1, 2);
-        for (int l = p.FloorCount; l >= 1; l--)
-            ft.Add(p.Levels[l].Id, Fo(s.Elf[0].LevelForces[l - 1]), Fo(s.Elf[1].LevelForces[l - 1]));
-        sb.Append(ft.Render());
+        sb.Append(TableView.Render(PlanTableViews.ElfForces(r, s), ["direction", "level", "Fx"]));
         sb.Append("  Applied at the centres of mass and shifted ± the accidental eccentricity; their story and line\n" +
                   "  shears, corner drifts and torsional irregularity are in the tables above.\n");
 
         if (s.Amplification.Count > 0)
         {
             sb.Append("\nAmplification of the accidental torsion A_x = (δmax / 1.2 δavg)², 1 to 3 (ASCE 7-16 §12.8.4.3)\n");
-            var at = new TextTable("dir", "level", $"δmax [{len}]", $"δavg [{len}]", "A_x", "applied").Numeric(2, 3, 4);
-            foreach (var a in s.Amplification.OrderBy(a => a.Direction).ThenByDescending(a => a.Level))
-                at.Add(a.Direction, p.Levels[a.Level].Id, L(a.MaxDisplacement), L(a.AverageDisplacement), P(a.Ax), a.Applied ? "yes" : "no");
-            sb.Append(at.Render());
+            sb.Append(TableView.Render(PlanTableViews.Amplification(r, s)));
             sb.Append("  Applied (cases <id>-x+ecc·Ax, <id>-x-ecc·Ax) only in a direction with a Type 1a or 1b torsional\n" +
                       "  irregularity (SDC C to F assumed: the governing code decides).\n");
         }
@@ -58,15 +52,14 @@ internal static class PlanSeismicReport
             var pts = new TextTable("mode", "analysis", "period [s]", "S_a [g]").Numeric(0, 2, 3);
             foreach (var m in sp.Directions[0].Modes) pts.Add(m.Mode.ToString(CultureInfo.InvariantCulture), m.Variant == "" ? "-" : "masses " + m.Variant, P(m.Period, "0.0000"), P(m.Sa, "0.0000"));
             sb.Append(pts.Render());
-            var stories = PlanSeismicFiles.SpectrumStoriesTable(r, sp);
-            var lines = PlanSeismicFiles.SpectrumLinesTable(r, sp);
             foreach (var d in sp.Directions)
             {
                 sb.Append($"\n  Along {d.Direction}: {d.ModesUsed} modes, {Pct(d.CumulativeShare)} of the mass (§12.9.1.1: at least 90 %); " +
                           $"V_t = {Fo(d.Scaling.BaseShearModal)}, V = {Fo(d.Scaling.BaseShearElf)} {force}\n");
                 sb.Append(Wrap("Scaling: " + d.Scaling.Why + ".", 100, "  "));
                 string dir = d.Direction;
-                sb.Append(TableView.Render(stories.WithRows(rows => rows.Where(x => (string)x[0] == dir).OrderByDescending(x => (int)x[1])),
+                var stories = PlanTableViews.SpectrumStories(r, sp, dir);
+                sb.Append(TableView.Render(stories,
                     ["story", "ELF shear", "modal shear", "scaled modal shear", "corner", "drift", "design drift Cd*drift/Ie", "design drift ratio",
                      "difference of combined displacements (not the drift)"]));
                 if (p.DriftLimit is { } lim)
@@ -76,22 +69,11 @@ internal static class PlanSeismicReport
                     sb.Append($"  Modal drift check, allowed δ/h {lim.AllowedRatio}: worst {P(worst.Ratio, "0.00000")} (story {worst.Story}); " +
                               $"{(over.Count == 0 ? "all within" : "EXCEEDS in stories " + string.Join(", ", over))}\n");
                 }
-                var tt = new TextTable("story", $"P_x [{force}]", "θ modal", "θ ELF", "θ max").Numeric(0, 1, 2, 3, 4);
-                foreach (var st in d.Stories.OrderByDescending(x => x.Story))
-                    tt.Add(st.Story.ToString(CultureInfo.InvariantCulture), Fo(st.Px), P(st.Theta, "0.0000"), P(st.ThetaElf, "0.0000"), P(st.ThetaMax));
-                sb.Append(tt.Render());
-                string mu = u.Label(Quantity.Moment);
-                string Mo(double v) => TextTable.Num(u.FromSI(v, Quantity.Moment));
-                sb.Append(TableView.Render(lines.WithRows(rows => rows.Where(x => (string)x[0] == dir && Along(p, (string)x[2], dir))
-                        .OrderByDescending(x => (int)x[1]).ThenBy(x => (string)x[2], StringComparer.Ordinal)),
+                sb.Append(TableView.Render(stories, ["story", "Px", "theta (modal)", "theta (ELF)", "theta max"]));
+                sb.Append(TableView.Render(PlanTableViews.SpectrumLines(r, sp, dir),
                     ["story", "line", "ELF shear", "modal shear", "scaled modal shear", "accidental torsion", "design shear", "design overturning"]));
-                var rt = new TextTable("line", "node", $"Rx [{force}]", $"Ry [{force}]", $"Mz [{mu}]").Numeric(2, 3, 4);
-                foreach (var lf in d.LineForces.Where(x => Along(p, x.Line, d.Direction)))
-                {
-                    var model = p.Lines.First(l => l.Id == lf.Line).Model;
-                    foreach (var x in lf.DesignReactions) rt.Add(lf.Line, model.Nodes[x.Node].Id, Fo(x.Fx), Fo(x.Fy), Mo(x.Mz));
-                }
-                sb.Append($"  Design reactions of the lines along {d.Direction} (scaled + accidental torsion; member end\n  forces in plan-spectrum-line-members.csv)\n").Append(rt.Render());
+                sb.Append($"  Design reactions of the lines along {d.Direction} (scaled + accidental torsion; member end\n  forces in plan-spectrum-line-members.csv)\n")
+                    .Append(TableView.Render(PlanTableViews.SpectrumLineReactions(r, sp, dir), ["line", "node", "Rx design", "Ry design", "Mz design"]));
             }
             sb.Append("  drift: at the worst outline corner, story drift per mode, combined, times the drift factor,\n" +
                       "  plus the static accidental torsion's (§12.9.1.5); δ = C_d·drift/I_e; Δ comb.: difference of\n" +
@@ -104,12 +86,6 @@ internal static class PlanSeismicReport
         }
         sb.Append($"  {SeismicPresets.Status}.\n  A computed aid for a licensed engineer, not a code check.\n");
         return sb.ToString();
-    }
-
-    private static bool Along(BuildingPlan p, string id, string dir)
-    {
-        var line = p.Lines.First(l => l.Id == id);
-        return dir == "x" ? Math.Abs(line.Cos) > 1e-9 : Math.Abs(line.Sin) > 1e-9;
     }
 
     private static string Pct(double v) => (100 * v).ToString("0.0", CultureInfo.InvariantCulture) + " %";

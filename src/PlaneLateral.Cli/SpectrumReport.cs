@@ -18,9 +18,8 @@ internal static class SpectrumReport
     {
         if (s is null) return "";
         var u = r.Model.Units;
-        string force = u.ForceSymbol, len = u.LengthSymbol;
+        string force = u.ForceSymbol;
         string Fo(double v) => TextTable.Num(u.FromSI(v, Quantity.Force));
-        string L(double v) => TextTable.Num(u.FromSI(v, Quantity.Length));
         var sb = new StringBuilder();
         var rs = s.Settings;
         sb.Append($"\nModal response spectrum (ASCE 7-16 §12.9.1): {rs.Rule.ToString().ToUpperInvariant()}, ζ = {rs.Damping}, C_d = {rs.Cd}, R = {s.R}, I_e = {s.Ie}\n");
@@ -34,20 +33,13 @@ internal static class SpectrumReport
         sb.Append("  Γ for the shape scaled so that φᵀMφ = total mass; base shear reduced by R/I_e.\n");
         sb.Append($"  V_t = {Fo(s.Scaling.BaseShearModal)}, V = {Fo(s.Scaling.BaseShearElf)} {force} (ELF base shear)\n");
         sb.Append(PlanSeismicReport.Wrap($"Scaling: {s.Scaling.Why}.", 100, "  "));
-        var t = new TextTable("story", $"ELF [{force}]", $"modal [{force}]", $"scaled [{force}]", $"drift [{len}]", $"δ [{len}]", "δ/h", $"Δ comb. [{len}]").Numeric(0, 1, 2, 3, 4, 5, 6, 7);
-        foreach (var st in s.Stories.OrderByDescending(x => x.Story))
-            t.Add(st.Story.ToString(CultureInfo.InvariantCulture), Fo(st.ElfShear), Fo(st.ModalShear), Fo(st.ScaledShear), L(st.Drift), L(st.DesignDrift), P(st.Ratio, "0.00000"),
-                L(st.DriftFromCombinedDisplacements));
-        sb.Append(t.Render());
+        var stories = SpectrumFiles.StoriesTable(r, s).WithRows(rows => rows.OrderByDescending(x => (int)x[0]));   // the file's table, the top story first
+        sb.Append(TableView.Render(stories, ["story", "ELF shear", "modal shear", "scaled modal shear", "drift", "design drift Cd*drift/Ie", "design drift ratio",
+            "difference of combined displacements (not the drift)"]));
         sb.Append("  drift: story drift per mode, combined, times the drift factor; δ = C_d·drift/I_e (§12.9.1.2);\n" +
                   "  Δ comb.: difference of the combined level displacements, shown only to compare (not the drift).\n");
 
-        string mu = u.Label(Quantity.Moment);
-        string Mo(double v) => TextTable.Num(u.FromSI(v, Quantity.Moment));
-        var ot = new TextTable("story", $"overturning [{mu}]", $"scaled [{mu}]", $"P_x [{force}]", "θ modal", "θ ELF", "θ max").Numeric(0, 1, 2, 3, 4, 5, 6);
-        foreach (var st in s.Stories.OrderByDescending(x => x.Story))
-            ot.Add(st.Story.ToString(CultureInfo.InvariantCulture), Mo(st.Overturning), Mo(s.Scaling.ForceFactor * st.Overturning), Fo(st.Px), P(st.Theta, "0.0000"), P(st.ThetaElf, "0.0000"), P(st.ThetaMax, "0.000"));
-        sb.Append(ot.Render());
+        sb.Append(TableView.Render(stories, ["story", "overturning moment (no sign)", "scaled overturning moment", "Px", "theta (modal)", "theta (ELF)", "theta max"]));
         sb.Append(PlanSeismicReport.Wrap($"Overturning: at each story's base, per mode, combined. θ = P_x·Δ·I_e/(V_x·h_sx·C_d) (ASCE 7-16 eq. 12.8-16) with Δ the design drift above and V_x the scaled story shear; P_x is {s.PxSource}.", 100, "  "));
         if (s.Reactions.Count > 0)
         {

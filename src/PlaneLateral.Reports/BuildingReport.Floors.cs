@@ -22,11 +22,10 @@ public static partial class BuildingReport
         {
             d.Text("Flexibility test of each floor span (ASCE 7-16 §12.3.1.3, eq. 12.3-1) on the semi-rigid floor under the story forces: MDD, the floor's largest in-plane " +
                 "deflection in the span measured from the straight line through the floor at the span's supporting lines; ADVE, the average story drift of those lines. " +
-                "MDD/ADVE > 2 permits the flexible idealisation; §12.3.1.1 and §12.3.1.2 classify some floors by condition. The governing code decides.");
-            d.Table("Floor flexibility test per span", ["level", "case", "along", "span between lines", $"from [{d.Len}]", $"to [{d.Len}]", $"MDD [{d.Len}]", $"ADVE [{d.Len}]", "MDD/ADVE", "by eq. 12.3-1"],
-                f.Flexibility.Select(x => (IReadOnlyList<string>)[d.Level(x.Level), x.Case, x.Direction, $"{(x.From == "" ? "free end" : x.From)} – {(x.To == "" ? "free end" : x.To)}",
-                    d.L(x.SpanFrom), d.L(x.SpanTo), Sci(d.U.FromSI(x.Mdd, Units.Quantity.Length)), Sci(d.U.FromSI(x.Adve, Units.Quantity.Length)), Ratio(x.Ratio), x.Flexible ? "flexible" : "not flexible"]),
-                4, 5, 6, 7, 8);
+                "MDD/ADVE > 2 permits the flexible idealisation; §12.3.1.1 and §12.3.1.2 classify some floors by condition. The governing code decides. " +
+                "A line left empty: the span ends at the floor's free end.");
+            d.Add(ReportTables.From(Output.PlanDiaphragmFiles.FlexibilityTable(d.R, f), "Floor flexibility test per span (plan-floor-flexibility.csv)",
+                ["level", "case", "loading", "from line", "to line", "span from", "span to", "MDD", "ADVE", "MDD/ADVE", "flexible by eq. 12.3-1"]));
         }
 
         foreach (var family in p.Cases.Where(c => c.Direction is "x" or "y").GroupBy(c => (c.Family, c.Direction)))

@@ -189,10 +189,8 @@ public static partial class BuildingReport
             d.Text($"δ = C_d·δ_e/I_e (ASCE 7-16 eq. 12.8-15) with C_d = {Ratio(lim.Cd, "0.###")}, I_e = {Ratio(lim.Ie, "0.###")}, at every corner of every story in every case " +
                 $"({r.DriftChecks.Count} results, {over} exceeding the allowable {Ratio(lim.AllowedRatio, "0.####")}); below, the governing result of each story. " +
                 "plan-drift-checks.csv holds them all.");
-            d.Table("Corner drift check, governing result per story", ["story", "case", "corner", $"x [{d.Len}]", $"y [{d.Len}]", $"δ_e [{d.Len}]", $"δ [{d.Len}]", $"height [{d.Len}]", "δ/h", "allowable", "result"],
-                r.DriftChecks.GroupBy(x => x.Story).OrderByDescending(g => g.Key).Select(g => g.MaxBy(x => x.Ratio / x.Allowed)!).Select(x => (IReadOnlyList<string>)[I(x.Story), x.Case,
-                    I(x.Vertex + 1), d.L(x.At.X), d.L(x.At.Y), d.L(x.Drift), d.L(x.Amplified), d.L(x.Height), Ratio(x.Ratio, "0.00000"), Ratio(x.Allowed, "0.####"), x.Within ? "within" : "exceeds"]),
-                0, 2, 3, 4, 5, 6, 7, 8, 9);
+            d.Add(ReportTables.From(Output.PlanTableViews.GoverningDriftChecks(r, cornersOnly: false, topFirst: true), "Corner drift check, governing result per story (plan-drift-checks.csv)",
+                ["story", "case", "corner", "x", "y", "elastic drift", "amplified drift", "height", "ratio", "allowed", "result"]));
         }
         if (r.Irregularity.Count > 0)
         {

@@ -38,9 +38,8 @@ public static partial class BuildingReport
 
         if (s.Amplification.Count > 0)
         {
-            d.Table("Amplification of the accidental torsion, A_x = (δ_max/1.2·δ_avg)², 1 to 3 (ASCE 7-16 §12.8.4.3, eq. 12.8-14)", ["along", "level", $"δ_max [{d.Len}]", $"δ_avg [{d.Len}]", "A_x", "applied"],
-                s.Amplification.OrderBy(a => a.Direction, StringComparer.Ordinal).ThenByDescending(a => a.Level).Select(a => (IReadOnlyList<string>)[a.Direction, d.Level(a.Level),
-                    d.L(a.MaxDisplacement), d.L(a.AverageDisplacement), Ratio(a.Ax), a.Applied ? "yes" : "no"]), 2, 3, 4);
+            d.Add(ReportTables.From(Output.PlanTableViews.Amplification(d.R, s),
+                "Amplification of the accidental torsion, A_x = (δ_max/1.2·δ_avg)², 1 to 3 (ASCE 7-16 §12.8.4.3, eq. 12.8-14; plan-amplification.csv)"));
             d.Text("Applied (the cases named …+ecc·Ax and …-ecc·Ax) only in a direction with a Type 1a or 1b torsional irregularity; that A_x applies only in Seismic Design Categories C to F is for the engineer to confirm.");
         }
 
@@ -58,12 +57,13 @@ public static partial class BuildingReport
             "(§12.9.1.5); δ = C_d·drift/I_e. The combined displacements' difference is shown beside it only to make plain that it is not the drift.");
         var modes = sp.Directions[0].Modes;
         d.Figure(SpectrumPlots.Spectrum(sp.Spectrum, modes.Select(m => m.Period).ToList(), modes.Select(m => $"T{m.Mode}").ToList(), "plan-spectrum.png"));
-        d.Table("Spectral accelerations at the modal periods", ["mode", "period [s]", "S_a [g]"],
-            sp.Directions[0].Modes.Select(m => (IReadOnlyList<string>)[I(m.Mode), Ratio(m.Period, "0.0000"), Ratio(m.Sa, "0.0000")]), 0, 1, 2);
+        d.Add(ReportTables.From(Output.PlanTableViews.SpectrumModes(d.R, sp, sp.Directions[0].Direction), "Spectral accelerations at the modal periods (plan-spectrum-modes.csv)",
+            ["mode", "period", "Sa"]));
         foreach (var dir in sp.Directions)
         {
-            d.Table($"Modes along {dir.Direction}: base shears of each mode (reduced by R/I_e)", ["mode", "period [s]", "Γ", $"V_x [{d.Force}]", $"V_y [{d.Force}]", $"torque [{d.MomentUnit}]"],
-                dir.Modes.Select(m => (IReadOnlyList<string>)[I(m.Mode), Ratio(m.Period, "0.0000"), Num(m.Gamma), d.Fo(m.BaseShearX), d.Fo(m.BaseShearY), d.M(m.BaseTorque)]), 0, 1, 2, 3, 4, 5);
+            d.Add(ReportTables.From(Output.PlanTableViews.SpectrumModes(d.R, sp, dir.Direction),
+                $"Modes along {dir.Direction}: base shears of each mode (reduced by R/I_e; plan-spectrum-modes.csv)",
+                ["mode", "period", "gamma", "base shear x", "base shear y", "base torque"]));
             d.Text($"Along {dir.Direction}: {dir.ModesUsed} modes, {Pct(dir.CumulativeShare)} of the mass; combined modal base shear V_t = {d.Fo(dir.Scaling.BaseShearModal)} {d.Force}, " +
                 $"ELF base shear V = {d.Fo(dir.Scaling.BaseShearElf)} {d.Force}; force factor {Ratio(dir.Scaling.ForceFactor, "0.0000")}, drift factor {Ratio(dir.Scaling.DriftFactor, "0.0000")}. " +
                 $"Scaling rule applied: {dir.Scaling.Why}. Equilibrium of the combined story forces: {Sci(dir.EquilibriumError)}.");
@@ -74,12 +74,12 @@ public static partial class BuildingReport
                     d.L(x.ModalDrift), d.L(x.TorsionDrift), d.L(x.Drift), d.L(x.DesignDrift), Ratio(x.Ratio, "0.00000"), lim is null ? "-" : Ratio(lim.AllowedRatio, "0.####"),
                     lim is null ? "no check" : x.Ratio <= lim.AllowedRatio ? "within" : "exceeds", d.L(x.DriftFromCombinedDisplacements)]),
                 0, 1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 12);
-            d.Table($"Line story shears along {dir.Direction}: ELF beside the modal (design = scaled + |accidental torsion|)", ["story", "line", $"ELF [{d.Force}]", $"modal [{d.Force}]", $"scaled [{d.Force}]", $"accidental torsion [{d.Force}]", $"design [{d.Force}]"],
-                dir.Lines.Where(l => Along(d.Line(l.Line), dir.Direction)).OrderByDescending(l => l.Story).ThenBy(l => l.Line, StringComparer.Ordinal)
-                    .Select(l => (IReadOnlyList<string>)[I(l.Story), l.Line, d.Fo(l.Elf), d.Fo(l.Modal), d.Fo(l.Scaled), d.Fo(l.Torsion), d.Fo(l.Design)]), 0, 2, 3, 4, 5, 6);
+            d.Add(ReportTables.From(Output.PlanTableViews.SpectrumLines(d.R, sp, dir.Direction),
+                $"Line story shears along {dir.Direction}: ELF beside the modal (design = scaled + |accidental torsion|; plan-spectrum-lines.csv)",
+                ["story", "line", "ELF shear", "modal shear", "scaled modal shear", "accidental torsion", "design shear"]));
         }
         d.Text("Lines across the excitation direction are in plan-spectrum-lines.csv, written by the solve command, with every story and mode of this section.");
     }
 
-    private static bool Along(PlanLine line, string dir) => dir == "x" ? Math.Abs(line.Cos) > 1e-9 : Math.Abs(line.Sin) > 1e-9;
+    private static bool Along(PlanLine line, string dir) => Output.PlanTableViews.Along(line, dir);
 }

@@ -178,10 +178,9 @@ public static partial class ModelReport
         if (b.DriftChecks.Count > 0)
         {
             blocks.Add(new Heading(2, Section("Drift checks")));
-            blocks.Add(new Paragraph("δ = C_d·δe/I_e per story (ASCE 7-16 eq. 12.8-15), ratio |δ|/h against the allowable ratio; margin = 1 − ratio/allowable. The table's footnotes and the rules around it are not applied: check them against the governing code."));
-            blocks.Add(new Table("Drift check results", ["check", "case", "story", $"δe [{len}]", $"δ [{len}]", "δ/h", "allowable", "margin", "result"],
-                b.DriftChecks.Select(d => (IReadOnlyList<string>)[d.Check.Id, d.CaseId, $"{d.Story.Index}", L(d.ElasticDrift), L(d.AmplifiedDrift), Pct(d.Ratio, "0.000"), Pct(d.Allowed, "0.##"), Pct(d.Margin, "0"), d.Passes ? "within" : "exceeds"]).ToList(),
-                [2, 3, 4, 5, 6, 7]));
+            blocks.Add(new Paragraph("δ = C_d·δe/I_e per story (ASCE 7-16 eq. 12.8-15), ratio |δ|/h against the allowable ratio; margin = 1 − ratio/allowable; every row as in drift-checks.csv. The table's footnotes and the rules around it are not applied: check them against the governing code."));
+            blocks.Add(ReportTables.From(BuildingTables.DriftChecks(run), "Drift check results",
+                ["check", "case", "story", "elastic drift", "amplified drift", "drift ratio", "allowed ratio", "margin", "result"]));
             foreach (var check in m.Building.DriftChecks)
                 Figure(ModelPlots.DriftProfile(lateral.Where(c => check.Cases.Contains(c.CaseId)).ToList(), b.DriftChecks, check, u));
         }
