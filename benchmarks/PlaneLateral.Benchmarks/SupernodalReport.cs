@@ -42,7 +42,7 @@ public static class SupernodalReport
             double tSym = sw.Elapsed.TotalSeconds;
             var cpu0 = Process.GetCurrentProcess().TotalProcessorTime;
             sw.Restart();
-            var f = solver.Factorize(a, perm);
+            using var f = solver.Factorize(a, perm); // disposed at the end of the pass: a large factor's native memory goes back
             double tFac = sw.Elapsed.TotalSeconds; // includes its own symbolic pass (tSym)
             double cpuFac = (Process.GetCurrentProcess().TotalProcessorTime - cpu0).TotalSeconds; // all threads, symbolic included
             var x = new double[a.Size];
