@@ -74,7 +74,7 @@ public class EndToEndBenchmarks
     [Benchmark(Description = "solve (factor + all cases)")]
     public double Solve()
     {
-        var factor = DefaultSolver.Create().Factorize(_k);
+        using var factor = DefaultSolver.Create().Factorize(_k);
         var u = new double[_k.Size];
         double s = 0;
         foreach (var b in _rhs) { factor.Solve(b, u); s += u[0]; }

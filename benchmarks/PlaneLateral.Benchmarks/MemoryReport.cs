@@ -37,7 +37,7 @@ public static class MemoryReport
         var solver = new SupernodalCholeskySolver(SupernodalOrdering.ApproximateMinimumDegree, threads);
         var c0 = Process.GetCurrentProcess().TotalProcessorTime;
         var sw = Stopwatch.StartNew();
-        var f = (SupernodalFactor)solver.Factorize(a);
+        using var f = (SupernodalFactor)solver.Factorize(a);
         double tFac = sw.Elapsed.TotalSeconds;
         double cpuFac = (Process.GetCurrentProcess().TotalProcessorTime - c0).TotalSeconds;
         Snapshot("factorised");

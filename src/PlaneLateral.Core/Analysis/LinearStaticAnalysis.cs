@@ -24,6 +24,18 @@ public sealed record AnalysisOptions
         options ??= new AnalysisOptions();
         return options.Solver is FactorOnceSolver ? options : options with { Solver = new FactorOnceSolver(options.Solver ?? DefaultSolver.Create()) };
     }
+
+    /// <summary>
+    /// <see cref="ForRun(AnalysisOptions?)"/>, and the run it made (null when <paramref name="options"/> already carried
+    /// one, whose maker owns it): a caller whose results keep no factor disposes it when done, so that a large factor's
+    /// native memory goes back at once (<see cref="FactorOnceSolver.Dispose"/>).
+    /// </summary>
+    public static AnalysisOptions ForOwnRun(AnalysisOptions? options, out FactorOnceSolver? made)
+    {
+        var run = ForRun(options);
+        made = ReferenceEquals(run.Solver, options?.Solver) ? null : (FactorOnceSolver)run.Solver!;
+        return run;
+    }
 }
 
 /// <summary>

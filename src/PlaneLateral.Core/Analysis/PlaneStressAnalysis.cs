@@ -107,7 +107,8 @@ public static class PlaneStressAnalysis
     public static PlaneAnalysisResult Run(PlaneStressProblem p, IReadOnlyList<PlaneLoadCase> cases, AnalysisOptions? options = null,
         IReadOnlyList<(string Id, IReadOnlyList<(int Case, double Factor)> Factors)>? combinations = null)
     {
-        options = AnalysisOptions.ForRun(options);   // the run's solver (the user's choice, or the default when none)
+        options = AnalysisOptions.ForOwnRun(options, out var made);   // the run's solver (the user's choice, or the default when none)
+        using var ownRun = made;   // a run made here is disposed on return (the result keeps no factor); a caller's run is the caller's
         var solver = options.Solver!;
         var mesh = p.Mesh;
         int n = mesh.NodeCount;

@@ -13,7 +13,7 @@ namespace PlaneLateral.Solvers;
 /// </summary>
 internal static class FactorMemory
 {
-    private const long HugePage = 2L << 20;
+    internal const long HugePage = 2L << 20;
     private const int MadviseHugePage = 14; // MADV_HUGEPAGE in <asm-generic/mman-common.h>
 
     /// <summary>Smallest array advised (8 MiB: below it the saving is small against the pinning).</summary>
@@ -31,18 +31,29 @@ internal static class FactorMemory
         var handle = GCHandle.Alloc(a, GCHandleType.Pinned); // on the pinned-object heap already: the address stays
         try
         {
-            long start = handle.AddrOfPinnedObject(), end = start + bytes;
-            long from = (start + HugePage - 1) & ~(HugePage - 1), to = end & ~(HugePage - 1);
-            if (to > from) _ = Madvise((nint)from, (nuint)(to - from), MadviseHugePage); // advice: a refusal changes nothing
-        }
-        catch (Exception e) when (e is DllNotFoundException or EntryPointNotFoundException)
-        {
-            // No libc madvise: an ordinary array.
+            AdviseHugePages(handle.AddrOfPinnedObject(), bytes);
         }
         finally
         {
             handle.Free();
         }
         return a;
+    }
+
+    /// <summary>Advises the whole huge pages inside [start, start + bytes) for transparent huge pages (Linux only; a
+    /// refusal, or no libc madvise, changes nothing).</summary>
+    internal static void AdviseHugePages(nint start, long bytes)
+    {
+        if (!OperatingSystem.IsLinux()) return;
+        long from = (start + HugePage - 1) & ~(HugePage - 1), to = (start + bytes) & ~(HugePage - 1);
+        if (to <= from) return;
+        try
+        {
+            _ = Madvise((nint)from, (nuint)(to - from), MadviseHugePage); // advice: a refusal changes nothing
+        }
+        catch (Exception e) when (e is DllNotFoundException or EntryPointNotFoundException)
+        {
+            // No libc madvise: ordinary pages.
+        }
     }
 }

@@ -9,11 +9,17 @@ namespace PlaneLateral.Solvers;
 /// The factors a run keeps are those an analysis needs anyway (the frame, each panel, K + K_G); they are released with
 /// the run. A factor is only ever solved on, never changed, so handing the same one out twice is safe.
 /// </para>
+/// <para>
+/// The run owns the factors it keeps: <see cref="Dispose"/> disposes them (a large supernodal factor gives its native
+/// memory back), so whoever made the run disposes it when no stage will solve again; a factor handed out must not be
+/// disposed by the stage that asked for it. A run never disposed leaves its factors to their finalizers.
+/// </para>
 /// </summary>
-public sealed class FactorOnceSolver : ISparseSpdSolver
+public sealed class FactorOnceSolver : ISparseSpdSolver, IDisposable
 {
     private readonly List<(SymmetricSparseMatrix Matrix, double Tolerance, ISparseSpdFactor Factor)> _kept = [];
     private readonly Lock _gate = new();
+    private bool _disposed;
 
     public FactorOnceSolver(ISparseSpdSolver inner)
     {
@@ -42,13 +48,33 @@ public sealed class FactorOnceSolver : ISparseSpdSolver
         ArgumentNullException.ThrowIfNull(matrix);
         lock (_gate)
         {
+            ObjectDisposedException.ThrowIf(_disposed, this);
             Requests++;
             foreach (var (m, tol, f) in _kept)
                 if (tol.Equals(relativePivotTolerance) && Same(m, matrix)) return f;
         }
         var factor = Inner.Factorize(matrix, relativePivotTolerance);
-        lock (_gate) _kept.Add((matrix, relativePivotTolerance, factor));
+        lock (_gate)
+        {
+            if (_disposed)
+            {
+                factor.Dispose();
+                throw new ObjectDisposedException(nameof(FactorOnceSolver));
+            }
+            _kept.Add((matrix, relativePivotTolerance, factor));
+        }
         return factor;
+    }
+
+    /// <summary>Disposes every factor the run kept; later factorisations throw <see cref="ObjectDisposedException"/>.</summary>
+    public void Dispose()
+    {
+        lock (_gate)
+        {
+            if (_disposed) return;
+            _disposed = true;
+            foreach (var (_, _, f) in _kept) f.Dispose();
+        }
     }
 
     private static bool Same(SymmetricSparseMatrix a, SymmetricSparseMatrix b) =>

@@ -41,7 +41,7 @@ internal static class FrontKernels
     /// <remarks>Every entry receives the same operations in the same order as with the whole front in one m×m block (the
     /// update of an entry is one product summed over the panel from zero, then subtracted), so the split changes no bit.</remarks>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    public static void PartialCholesky(double[] l, int off, int m, int k, double[] upd, ReadOnlySpan<double> originalDiagonal,
+    public static void PartialCholesky(Span<double> l, int off, int m, int k, Span<double> upd, ReadOnlySpan<double> originalDiagonal,
         double tol, double[] packBuffer, int threads, List<(int Column, double Pivot)> failures)
     {
         for (int c0 = 0; c0 < k; c0 += PanelWidth)
@@ -57,7 +57,7 @@ internal static class FrontKernels
                 if (!(kjj > 0.0) || !(d > tol * kjj) || !double.IsFinite(d) || !double.IsFinite(kjj))
                 {
                     failures.Add((c, d));
-                    Array.Clear(l, colStart, m - c);
+                    l.Slice(colStart, m - c).Clear();
                     l[colStart] = 1.0;
                     continue;
                 }
@@ -76,10 +76,10 @@ internal static class FrontKernels
     /// <summary>Column c of the panel, rows c..m−1: y −= x_p·l[c, p] for the panel columns p = c0..c−1 in order (one
     /// product, one subtraction each; the same order at every vector width).</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private static void PanelColumn(double[] l, int off, int m, int c0, int c)
+    private static void PanelColumn(Span<double> l, int off, int m, int c0, int c)
     {
         int len = m - c;
-        ref double lr = ref MemoryMarshal.GetArrayDataReference(l);
+        ref double lr = ref MemoryMarshal.GetReference(l);
         nuint y = (nuint)(off + c * m + c);
         nuint first = (nuint)(off + c0 * m + c); // column c0, row c
         nuint step = (nuint)m;
@@ -159,9 +159,9 @@ internal static class FrontKernels
     }
 
     /// <summary>x[from..from+n) *= s (element-wise: the same on every path).</summary>
-    private static void Scale(double[] x, int from, int n, double s)
+    private static void Scale(Span<double> x, int from, int n, double s)
     {
-        var span = x.AsSpan(from, n);
+        var span = x.Slice(from, n);
         for (int i = 0; i < span.Length; i++) span[i] *= s;
     }
 
@@ -172,13 +172,13 @@ internal static class FrontKernels
     /// one of row t0, column t0.
     /// </summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    internal static void RankUpdate(double[] src, int off, int m, int c0, int w, int t0, double[] c, int cOff, int ldc, int cols,
+    internal static unsafe void RankUpdate(Span<double> src, int off, int m, int c0, int w, int t0, Span<double> c, int cOff, int ldc, int cols,
         double[] pack, int threads)
     {
         int r = m - t0;
         int strips = (r + MR - 1) / MR;
         // Pack: strip s, column p → pack[(s·w + p)·8 .. +8), rows past the end zero.
-        ref double sr = ref MemoryMarshal.GetArrayDataReference(src);
+        ref double sr = ref MemoryMarshal.GetReference(src);
         ref double pr = ref MemoryMarshal.GetArrayDataReference(pack);
         if ((long)strips * w * MR > pack.Length) throw new ArgumentException("Packing buffer too small.", nameof(pack));
         for (int s = 0; s < strips; s++)
@@ -218,19 +218,25 @@ internal static class FrontKernels
                 bounds[ch] = cb;
             }
             bounds[chunks] = colBlocks;
-            Parallel.For(0, chunks, new ParallelOptions { MaxDegreeOfParallelism = threads },
-                ch => UpdateColumns(c, cOff, ldc, w, r, cols, pack, bounds[ch], bounds[ch + 1]));
+            // The workers see the same block through its address (a span cannot be captured): fixed for the duration.
+            fixed (double* cp = c)
+            {
+                nint at = (nint)cp;
+                int length = c.Length;
+                Parallel.For(0, chunks, new ParallelOptions { MaxDegreeOfParallelism = threads },
+                    ch => UpdateColumns(new Span<double>((void*)at, length), cOff, ldc, w, r, cols, pack, bounds[ch], bounds[ch + 1]));
+            }
         }
         else UpdateColumns(c, cOff, ldc, w, r, cols, pack, 0, colBlocks);
     }
 
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private static void UpdateColumns(double[] f, int cOff, int ldc, int w, int r, int cols, double[] pack, int cbFrom, int cbTo)
+    private static void UpdateColumns(Span<double> f, int cOff, int ldc, int w, int r, int cols, double[] pack, int cbFrom, int cbTo)
     {
         Span<double> tile = stackalloc double[MR * NR];
         ref double tr = ref MemoryMarshal.GetReference(tile);
         ref double pk = ref MemoryMarshal.GetArrayDataReference(pack);
-        ref double fr = ref MemoryMarshal.GetArrayDataReference(f);
+        ref double fr = ref MemoryMarshal.GetReference(f);
         if ((long)cOff + (long)(cols - 1) * ldc + r > f.Length) throw new ArgumentException("Update block out of range.", nameof(f));
         int bits = DenseKernels.VectorBits;
         for (int cb = cbFrom; cb < cbTo; cb++)

@@ -23,7 +23,10 @@ public interface ISparseSpdSolver
 }
 
 /// <summary>A factorisation P·K·Pᵀ = L·D·Lᵀ (or L·Lᵀ) ready to solve.</summary>
-public interface ISparseSpdFactor
+/// <remarks>Disposable: a factor that holds native memory (a large <see cref="SupernodalFactor"/>) gives it back on
+/// <see cref="IDisposable.Dispose"/>, after which it refuses to solve; factors held in ordinary arrays need nothing and
+/// by default do nothing. Whoever factorises owns the factor (a <see cref="FactorOnceSolver"/> owns those it keeps).</remarks>
+public interface ISparseSpdFactor : IDisposable
 {
     /// <summary>Order of the matrix.</summary>
     int Size { get; }
@@ -46,6 +49,9 @@ public interface ISparseSpdFactor
     /// scaled so that its largest absolute entry is 1.
     /// </summary>
     double[] MechanismShape(int failureIndex);
+
+    /// <summary>Nothing to release: the default for factors held in ordinary arrays.</summary>
+    void IDisposable.Dispose() { }
 }
 
 /// <summary>A pivot that failed during factorisation.</summary>

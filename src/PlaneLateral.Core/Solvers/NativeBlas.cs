@@ -117,23 +117,23 @@ public static class NativeBlas
     /// column, mechanism shape).
     /// </summary>
     /// <param name="save">Scratch of at least k·k doubles.</param>
-    internal static bool TryPartialCholesky(double[] l, int off, int m, int k, double[] upd, ReadOnlySpan<double> originalDiagonal,
+    internal static bool TryPartialCholesky(Span<double> l, int off, int m, int k, Span<double> upd, ReadOnlySpan<double> originalDiagonal,
         double tol, double[] save)
     {
         var lib = Library.Value ?? throw new InvalidOperationException("OpenBLAS is not loaded: " + _status);
-        for (int c = 0; c < k; c++) Array.Copy(l, off + (long)c * m, save, (long)c * k, k);
+        for (int c = 0; c < k; c++) l.Slice(off + c * m, k).CopyTo(save.AsSpan(c * k, k));
         byte uplo = (byte)'L';
         int n = k, lda = m, info = 0;
         lib.Potrf(ref uplo, ref n, ref l[off], ref lda, ref info, 1);
         bool ok = info == 0;
         for (int c = 0; ok && c < k; c++)
         {
-            double d0 = l[off + (long)c * m + c], d = d0 * d0, kjj = originalDiagonal[c];
+            double d0 = l[off + c * m + c], d = d0 * d0, kjj = originalDiagonal[c];
             ok = kjj > 0.0 && d > tol * kjj && double.IsFinite(d) && double.IsFinite(kjj);
         }
         if (!ok)
         {
-            for (int c = 0; c < k; c++) Array.Copy(save, (long)c * k, l, off + (long)c * m, k);
+            for (int c = 0; c < k; c++) save.AsSpan(c * k, k).CopyTo(l.Slice(off + c * m, k));
             return false;
         }
         int below = m - k;

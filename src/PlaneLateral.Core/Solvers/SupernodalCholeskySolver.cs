@@ -68,6 +68,9 @@ public sealed class SupernodalCholeskySolver : ISparseSpdSolver
     /// <summary>Threads the dense updates of large fronts may use.</summary>
     public int MaxThreads { get; }
 
+    /// <summary>Where the factorisation's large arrays live (<see cref="FactorBuffer"/>): by size unless a test asks.</summary>
+    internal FactorStorage Storage { get; init; }
+
     /// <inheritdoc />
     public string Description => "supernodal multifrontal Cholesky, " + Ordering switch
     {
@@ -100,7 +103,7 @@ public sealed class SupernodalCholeskySolver : ISparseSpdSolver
         var rows = parallel ? Task.Run(() => StrictLowerRows.Of(matrix)) : null;
         var ordering = ComputeOrdering(matrix);
         var lower = rows is null ? StrictLowerRows.Of(matrix) : rows.GetAwaiter().GetResult();
-        return SupernodalFactor.Create(matrix, ordering, relativePivotTolerance, MaxThreads, Kernels == DenseKernelBackend.OpenBlas, lower);
+        return SupernodalFactor.Create(matrix, ordering, relativePivotTolerance, MaxThreads, Kernels == DenseKernelBackend.OpenBlas, lower, Storage);
     }
 
     /// <summary>Factorises under a permutation supplied by the caller (<c>perm[new] = old</c>; it is postordered, which
@@ -111,7 +114,8 @@ public sealed class SupernodalCholeskySolver : ISparseSpdSolver
         ArgumentNullException.ThrowIfNull(permutation);
         if (permutation.Length != matrix.Size || !Orderings.IsPermutation(permutation))
             throw new ArgumentException("Not a permutation of the matrix's DOFs.", nameof(permutation));
-        return SupernodalFactor.Create(matrix, (int[])permutation.Clone(), relativePivotTolerance, MaxThreads, Kernels == DenseKernelBackend.OpenBlas);
+        return SupernodalFactor.Create(matrix, (int[])permutation.Clone(), relativePivotTolerance, MaxThreads, Kernels == DenseKernelBackend.OpenBlas,
+            storage: Storage);
     }
 
     /// <summary>Symbolic analysis only: the factor's size for a matrix under a permutation (for measurements).</summary>
@@ -137,15 +141,18 @@ internal static class FrontKernelsInfo
 }
 
 /// <summary>The supernodal factor P·K·Pᵀ = L·Lᵀ. Immutable; safe to use from several threads at once.</summary>
+/// <remarks>A large factor (values of <see cref="FactorBuffer.NativeMinBytes"/> or more) holds its values in native
+/// memory: <see cref="Dispose"/> gives it back at once, after which solves throw <see cref="ObjectDisposedException"/>;
+/// a factor never disposed is freed by a finalizer once unreachable.</remarks>
 public sealed class SupernodalFactor : ISparseSpdFactor
 {
     private readonly SupernodalSymbolic _s;
-    private readonly double[] _l;
+    private readonly FactorBuffer _l;
     private readonly bool[] _failed;   // by new index
     private readonly PivotFailure[] _failures;
     private readonly int[] _failurePosition;
 
-    private SupernodalFactor(SupernodalSymbolic s, double[] l, bool[] failed, PivotFailure[] failures, int[] positions)
+    private SupernodalFactor(SupernodalSymbolic s, FactorBuffer l, bool[] failed, PivotFailure[] failures, int[] positions)
     {
         _s = s;
         _l = l;
@@ -194,10 +201,18 @@ public sealed class SupernodalFactor : ISparseSpdFactor
     public long NumericBytes { get; private init; }
 
     /// <summary>The factor's stored values (supernode blocks, column-major), for the tests that compare kernels bit for bit.</summary>
-    internal ReadOnlySpan<double> Values => _l;
+    internal ReadOnlySpan<double> Values => _l.Span;
+
+    /// <summary>Whether the factor's values are in native memory (for tests and measurements).</summary>
+    internal bool ValuesNative => _l.IsNative;
 
     /// <summary>Bytes of the factor's values (<c>8 × Σ m·k</c>).</summary>
-    public long FactorBytes => _l.LongLength * sizeof(double);
+    public long FactorBytes => (long)_l.Length * sizeof(double);
+
+    /// <summary>Releases the factor's values (native memory given back at once; a solve running on another thread
+    /// finishes first). Later solves and mechanism shapes throw <see cref="ObjectDisposedException"/>; the sizes and
+    /// <see cref="PivotFailures"/> stay readable. Calling it again does nothing.</summary>
+    public void Dispose() => _l.Dispose();
 
     /// <summary>
     /// Per-worker scratch of the numeric factorisation: the update block of the current front, the packing buffer, the
@@ -205,13 +220,13 @@ public sealed class SupernodalFactor : ISparseSpdFactor
     /// analysis before any front is factorised, so nothing grows during the factorisation; kept between factorisations
     /// (weakly, so the collector may take them back) so that a run that factorises several matrices maps its scratch once.
     /// </summary>
-    private sealed class Workspace
+    private sealed class Workspace : IDisposable
     {
-        public double[] Upd = Array.Empty<double>();
+        public FactorBuffer Upd = FactorBuffer.Allocate(0, false);
         public double[] Pack = Array.Empty<double>();
         public int[] Map = Array.Empty<int>();
         public int[] Rel = Array.Empty<int>();
-        public double[] Stack = Array.Empty<double>();
+        public FactorBuffer Stack = FactorBuffer.Allocate(0, false);
         public long Top;
         public readonly List<int> StackSuper = new();
         public readonly List<long> StackOffset = new();
@@ -220,15 +235,25 @@ public sealed class SupernodalFactor : ISparseSpdFactor
         public double[] Save = Array.Empty<double>();
         public int NativeFronts;
 
-        public void Reserve(in Needs need, int n)
+        /// <param name="offHeap">Whether the update block and the stack go to native memory (<see cref="FactorBuffer"/>).</param>
+        public void Reserve(in Needs need, int n, bool offHeap)
         {
             if (Map.Length < n) Map = new int[n];
             // Written before read (the update block's triangle is cleared per front): uninitialised, large ones on huge pages.
-            if (Upd.LongLength < (long)need.MaxUpdate * need.MaxUpdate) Upd = FactorMemory.Allocate((long)need.MaxUpdate * need.MaxUpdate);
+            long updLen = (long)need.MaxUpdate * need.MaxUpdate;
+            if (Upd.Length < updLen || Upd.IsNative != offHeap)
+            {
+                Upd.Dispose();
+                Upd = FactorBuffer.Allocate(updLen, offHeap);
+            }
             int packLen = ((need.MaxFront + 7) / 8 + 1) * 8 * FrontKernels.PanelWidth;
             if (Pack.Length < packLen) Pack = new double[packLen];
             if (Rel.Length < need.MaxFront) Rel = new int[need.MaxFront];
-            if (Stack.LongLength < need.Stack) Stack = FactorMemory.Allocate(need.Stack);
+            if (Stack.Length < need.Stack || Stack.IsNative != offHeap)
+            {
+                Stack.Dispose();
+                Stack = FactorBuffer.Allocate(need.Stack, offHeap);
+            }
             if (need.Native && Save.LongLength < (long)need.MaxPivots * need.MaxPivots) Save = new double[(long)need.MaxPivots * need.MaxPivots];
             Top = 0;
             StackSuper.Clear();
@@ -237,7 +262,14 @@ public sealed class SupernodalFactor : ISparseSpdFactor
             NativeFronts = 0;
         }
 
-        public long Bytes => 8 * (Upd.LongLength + Pack.LongLength + Stack.LongLength + Save.LongLength) + 4L * (Map.Length + Rel.Length);
+        public long Bytes => 8 * ((long)Upd.Length + Pack.LongLength + Stack.Length + Save.LongLength) + 4L * (Map.Length + Rel.Length);
+
+        /// <summary>Frees the update block and the stack (native ones given back at once).</summary>
+        public void Dispose()
+        {
+            Upd.Dispose();
+            Stack.Dispose();
+        }
     }
 
     /// <summary>What a workspace must hold for a set of supernodes: largest front, largest update block, peak of the
@@ -293,12 +325,14 @@ public sealed class SupernodalFactor : ISparseSpdFactor
     {
         public SupernodalSymbolic S = null!;
         public int[] ColPtr = null!, Rows = null!, Source = null!;
-        public double[] Values = null!, Diag = null!, L = null!;
+        public double[] Values = null!, Diag = null!;
+        public FactorBuffer L = null!;
+        public bool OffHeap;
         public bool[] Failed = null!;
         public double Tol;
         public bool Native;
         public bool[] SubtreeRoot = null!;
-        public double[]?[] Handover = null!;
+        public FactorBuffer?[] Handover = null!;
         public int[] ChildHead = null!, ChildNext = null!;
     }
 
@@ -317,17 +351,26 @@ public sealed class SupernodalFactor : ISparseSpdFactor
     /// <para>With <paramref name="native"/> the fronts of at least <see cref="NativeMinFront"/> rows go to OpenBLAS, which
     /// threads each call itself; subtrees are then factorised one after the other, so that two threads of ours never
     /// call the library at once, and results are no longer bitwise independent of the library's thread count.</para>
+    /// <para>Large factorisations (<paramref name="storage"/>, <see cref="FactorBuffer.NativeMinBytes"/>) keep the factor,
+    /// the update blocks, the stacks and the handed-over update matrices in native memory: a handed-over matrix is freed as
+    /// soon as its parent has added it, the subtrees' workspaces before the top part's is mapped, the top part's before
+    /// returning. The arithmetic is the same on either storage, so are the bits.</para>
     /// </remarks>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static SupernodalFactor Create(SymmetricSparseMatrix a, int[] ordering, double tol, int threads, bool native = false,
-        StrictLowerRows? lower = null)
+        StrictLowerRows? lower = null, FactorStorage storage = FactorStorage.BySize)
     {
         var s = SupernodalSymbolic.Analyse(a, ordering, lower ?? StrictLowerRows.Of(a), threads > 1);
         int n = s.N, ns = s.SupernodeCount;
         if (s.StoredEntries > Array.MaxLength)
             throw new InvalidOperationException($"The factor needs {s.StoredEntries} entries, more than the largest array holds.");
         if (8 * s.StoredEntries >= CollectBeforeFactorBytes) CollectBeforeFactor();
-        var job = new NumericJob { S = s, L = FactorMemory.Allocate(s.StoredEntries), Failed = new bool[n], Tol = tol, Values = a.Values, Native = native };
+        bool offHeap = storage == FactorStorage.Native || (storage == FactorStorage.BySize && 8 * s.StoredEntries >= FactorBuffer.NativeMinBytes);
+        var job = new NumericJob
+        {
+            S = s, L = FactorBuffer.Allocate(s.StoredEntries, offHeap, pressure: true), OffHeap = offHeap, Failed = new bool[n], Tol = tol,
+            Values = a.Values, Native = native,
+        };
         // The matrix by column in the new numbering, as the symbolic phase grouped it (not kept by the factor).
         (job.ColPtr, job.Rows, job.Source) = (s.ColPtr!, s.RowsByCol!, s.SourceByCol!);
         (s.ColPtr, s.RowsByCol, s.SourceByCol) = (null, null, null);
@@ -380,7 +423,7 @@ public sealed class SupernodalFactor : ISparseSpdFactor
         }
         job.SubtreeRoot = new bool[ns];
         foreach (var (_, node) in roots) job.SubtreeRoot[node] = true;
-        job.Handover = new double[ns][];
+        job.Handover = new FactorBuffer?[ns];
         var tasks = roots.Select(r => r.Node).ToArray(); // heaviest first
 
         // Workspace sizes: every subtree workspace can take any subtree; the top part has its own.
@@ -400,14 +443,14 @@ public sealed class SupernodalFactor : ISparseSpdFactor
         var used = new List<Workspace>();
         for (int i = 0; i < workers && tasks.Length > 0; i++)
         {
-            var ws = TakeWorkspace();
-            ws.Reserve(subtreeNeeds, n);
+            var ws = offHeap ? new Workspace() : TakeWorkspace();
+            ws.Reserve(subtreeNeeds, n, offHeap);
             pool.Add(ws);
             used.Add(ws);
         }
         var failures = new List<(int Position, PivotFailure Failure)>();
         int nativeFronts = 0;
-        long bytes = 8 * job.L.LongLength + 8L * n + n + 12L * job.Rows.Length + 4L * (n + 1) + handoverBytes
+        long bytes = 8L * job.L.Length + 8L * n + n + 12L * job.Rows.Length + 4L * (n + 1) + handoverBytes
             + used.Sum(w => w.Bytes);
         void RunSubtree(int root)
         {
@@ -428,20 +471,31 @@ public sealed class SupernodalFactor : ISparseSpdFactor
         if (isTop.Any(x => x))
         {
             Workspace top;
-            if (used.Count > 0 && Needs.Max(subtreeNeeds, topNeeds) == subtreeNeeds) top = used[0];
+            bool shared = used.Count > 0 && Needs.Max(subtreeNeeds, topNeeds) == subtreeNeeds;
+            if (shared) top = used[0];
             else
             {
-                top = TakeWorkspace();
+                if (offHeap)
+                {
+                    // The subtrees are done (their stacks empty): their native memory goes back before the top part's is mapped.
+                    foreach (var ws in used) ws.Dispose();
+                    used.Clear();
+                }
+                top = offHeap ? new Workspace() : TakeWorkspace();
                 used.Add(top);
             }
-            top.Reserve(topNeeds, n);
-            bytes += top == used[0] && used.Count > 0 && Needs.Max(subtreeNeeds, topNeeds) == subtreeNeeds ? 0 : top.Bytes;
+            top.Reserve(topNeeds, n, offHeap);
+            bytes += shared ? 0 : top.Bytes;
             for (int t = 0; t < ns; t++)
                 if (isTop[t]) FactorSupernode(job, top, t, threads);
             failures.AddRange(top.Failures);
             nativeFronts += top.NativeFronts;
         }
-        foreach (var ws in used) ReturnWorkspace(ws);
+        // Native workspaces are freed (managed ones kept, weakly, for the next factorisation). After an exception the
+        // native blocks are left to their finalizers.
+        foreach (var ws in used)
+            if (offHeap) ws.Dispose();
+            else ReturnWorkspace(ws);
 
         var all = failures.OrderBy(f => f.Position).ToArray();
         return new SupernodalFactor(s, job.L, job.Failed, all.Select(f => f.Failure).ToArray(), all.Select(f => f.Position).ToArray())
@@ -461,8 +515,13 @@ public sealed class SupernodalFactor : ISparseSpdFactor
     /// before the numeric phase maps its arrays otherwise depends on the timing of its background thread (on a loaded
     /// machine it often had not). Issue 19: at 10⁶ unknowns the process's peak resident memory went from 2,071 to 1,768 MiB
     /// with it (docs/solver.md, "Process peak memory"). One collection of a heap of a few large arrays; changes no value.
+    /// <para>Aggressive mode (<see cref="GCCollectionMode.Aggressive"/>): a forced collection keeps the freed regions
+    /// mapped (committed) for later allocations, and the native factor (<see cref="FactorBuffer"/>) cannot reuse them, so
+    /// the collector is asked to give them back to the system; at 10⁶ unknowns this is what lets the native factor lower
+    /// the peak (native factor with a forced collection: 2,082 MiB peak working set; with an aggressive one: 1,369–1,434
+    /// MiB).</para>
     /// </summary>
-    private static void CollectBeforeFactor() => GC.Collect(2, GCCollectionMode.Forced, blocking: true, compacting: true);
+    private static void CollectBeforeFactor() => GC.Collect(2, GCCollectionMode.Aggressive, blocking: true, compacting: true);
 
     /// <summary>Assembles, factorises and passes on the front of supernode t: its pivot columns in place in the factor,
     /// its update block in the workspace, from where it goes onto the stack (or to the top part for a subtree root).</summary>
@@ -470,8 +529,8 @@ public sealed class SupernodalFactor : ISparseSpdFactor
     private static void FactorSupernode(NumericJob job, Workspace ws, int t, int threads)
     {
         var s = job.S;
-        var l = job.L;
-        var upd = ws.Upd;
+        var l = job.L.Span;
+        var upd = ws.Upd.Span;
         var map = ws.Map;
         var rel = ws.Rel;
         var colPtr = job.ColPtr;
@@ -486,8 +545,8 @@ public sealed class SupernodalFactor : ISparseSpdFactor
         for (int q = 0; q < nb; q++) map[s.PatternRows[ps + q]] = k + q;
         // The factor's block (allocated uninitialised: cleared here, just before use, while it goes into the cache) and the
         // update block's lower triangle are cleared.
-        Array.Clear(l, off, k * m);
-        for (int c = 0; c < nb; c++) Array.Clear(upd, c * nb + c, nb - c);
+        l.Slice(off, k * m).Clear();
+        for (int c = 0; c < nb; c++) upd.Slice(c * nb + c, nb - c).Clear();
 
         // The matrix columns of the supernode.
         for (int c = 0; c < k; c++)
@@ -505,15 +564,16 @@ public sealed class SupernodalFactor : ISparseSpdFactor
             long from = ws.StackOffset[depth];
             ws.StackSuper.RemoveAt(depth);
             ws.StackOffset.RemoveAt(depth);
-            ExtendAdd(s, c, ws.Stack, from, l, off, m, k, upd, map, rel);
+            ExtendAdd(s, c, ws.Stack.Span, (int)from, l, off, m, k, upd, map, rel);
             ws.Top = from;
         }
         for (int c = job.ChildHead[t]; c >= 0; c = job.ChildNext[c])
         {
             var h = job.Handover[c];
             if (h is null) continue;
-            ExtendAdd(s, c, h, 0, l, off, m, k, upd, map, rel);
+            ExtendAdd(s, c, h.Span, 0, l, off, m, k, upd, map, rel);
             job.Handover[c] = null;
+            h.Dispose(); // native: given back now
         }
 
         bool done = false;
@@ -536,17 +596,18 @@ public sealed class SupernodalFactor : ISparseSpdFactor
         }
 
         if (nb == 0 || s.Parent[t] < 0) return;
-        double[] dst;
+        Span<double> dst;
         long at;
         if (job.SubtreeRoot[t])
         {
-            dst = new double[Packed(nb)];
+            var h = FactorBuffer.Allocate(Packed(nb), job.OffHeap);
+            dst = h.Span;
             at = 0;
-            job.Handover[t] = dst;
+            job.Handover[t] = h;
         }
         else
         {
-            dst = ws.Stack;
+            dst = ws.Stack.Span;
             at = ws.Top;
             ws.StackSuper.Add(t);
             ws.StackOffset.Add(at);
@@ -554,7 +615,7 @@ public sealed class SupernodalFactor : ISparseSpdFactor
         }
         for (int c = 0; c < nb; c++)
         {
-            Array.Copy(upd, c * nb + c, dst, at, nb - c);
+            upd.Slice(c * nb + c, nb - c).CopyTo(dst.Slice((int)at, nb - c));
             at += nb - c;
         }
     }
@@ -562,13 +623,13 @@ public sealed class SupernodalFactor : ISparseSpdFactor
     /// <summary>Adds a child's update matrix (packed lower triangle at <paramref name="from"/> in <paramref name="src"/>) to
     /// the front: its columns among the pivot columns go to the factor's block, the others to the update block.</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private static void ExtendAdd(SupernodalSymbolic s, int c, double[] src, long from, double[] l, int off, int m, int k,
-        double[] upd, int[] map, int[] rel)
+    private static void ExtendAdd(SupernodalSymbolic s, int c, ReadOnlySpan<double> src, int from, Span<double> l, int off, int m, int k,
+        Span<double> upd, int[] map, int[] rel)
     {
         int cps = s.PatternStart[c], cn = s.PatternStart[c + 1] - cps;
         int nb = m - k;
         for (int q = 0; q < cn; q++) rel[q] = map[s.PatternRows[cps + q]];
-        long pos = from;
+        int pos = from;
         for (int ca = 0; ca < cn; ca++)
         {
             int dc = rel[ca];
@@ -592,21 +653,23 @@ public sealed class SupernodalFactor : ISparseSpdFactor
         int n = _s.N;
         if (b.Length != n || x.Length != n) throw new ArgumentException("Vector length differs from the factor size.");
         if (n == 0) return;
+        var l = _l.Enter(); // throws once disposed; a Dispose meanwhile waits for Exit
         double[] w = ArrayPool<double>.Shared.Rent(n);
         double[] buf = ArrayPool<double>.Shared.Rent(Math.Max(1, _s.MaxFront));
         try
         {
             var perm = _s.Perm;
             for (int i = 0; i < n; i++) w[i] = _failed[i] ? 0.0 : b[perm[i]];
-            Forward(w, buf);
+            Forward(l, w, buf);
             for (int i = 0; i < _failurePosition.Length; i++) w[_failurePosition[i]] = 0.0;
-            Backward(w, buf);
+            Backward(l, w, buf);
             for (int i = 0; i < n; i++) x[perm[i]] = _failed[i] ? 0.0 : w[i];
         }
         finally
         {
             ArrayPool<double>.Shared.Return(buf);
             ArrayPool<double>.Shared.Return(w);
+            _l.Exit();
         }
     }
 
@@ -623,7 +686,7 @@ public sealed class SupernodalFactor : ISparseSpdFactor
 
     /// <summary>L·y = w in place (new numbering).</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private void Forward(double[] w, double[] buf)
+    private void Forward(ReadOnlySpan<double> l, double[] w, double[] buf)
     {
         var s = _s;
         for (int t = 0; t < s.SupernodeCount; t++)
@@ -637,10 +700,10 @@ public sealed class SupernodalFactor : ISparseSpdFactor
             for (int c = 0; c < k; c++)
             {
                 long colBase = off + (long)c * m;
-                double y = buf[c] / _l[colBase + c];
+                double y = buf[c] / l[(int)colBase + c];
                 buf[c] = y;
                 if (y != 0.0 && c + 1 < m)
-                    DenseKernels.SubtractScaled(buf.AsSpan(c + 1, m - c - 1), y, _l.AsSpan((int)(colBase + c + 1), m - c - 1));
+                    DenseKernels.SubtractScaled(buf.AsSpan(c + 1, m - c - 1), y, l.Slice((int)(colBase + c + 1), m - c - 1));
             }
             Array.Copy(buf, 0, w, f0, k);
             for (int q = 0; q < nb; q++) w[s.PatternRows[ps + q]] += buf[k + q];
@@ -649,7 +712,7 @@ public sealed class SupernodalFactor : ISparseSpdFactor
 
     /// <summary>Lᵀ·z = w in place (new numbering).</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private void Backward(double[] w, double[] buf)
+    private void Backward(ReadOnlySpan<double> l, double[] w, double[] buf)
     {
         var s = _s;
         for (int t = s.SupernodeCount - 1; t >= 0; t--)
@@ -664,8 +727,8 @@ public sealed class SupernodalFactor : ISparseSpdFactor
             {
                 long colBase = off + (long)c * m;
                 double v = buf[c];
-                if (c + 1 < m) v -= DenseKernels.Dot(_l.AsSpan((int)(colBase + c + 1), m - c - 1), buf.AsSpan(c + 1, m - c - 1));
-                buf[c] = v / _l[colBase + c];
+                if (c + 1 < m) v -= DenseKernels.Dot(l.Slice((int)(colBase + c + 1), m - c - 1), buf.AsSpan(c + 1, m - c - 1));
+                buf[c] = v / l[(int)colBase + c];
             }
             Array.Copy(buf, 0, w, f0, k);
         }
@@ -686,7 +749,15 @@ public sealed class SupernodalFactor : ISparseSpdFactor
         var w = new double[n];
         w[k] = 1.0;
         var buf = new double[Math.Max(1, _s.MaxFront)];
-        Backward(w, buf);
+        var l = _l.Enter();
+        try
+        {
+            Backward(l, w, buf);
+        }
+        finally
+        {
+            _l.Exit();
+        }
         double max = 0.0;
         for (int i = 0; i < n; i++) max = Math.Max(max, Math.Abs(w[i]));
         var z = new double[n];
