@@ -19,7 +19,6 @@ internal static class SeismicReport
         var s = m.Seismic!;
         var u = m.Units;
         string len = u.LengthSymbol, force = u.ForceSymbol;
-        double L(double v) => u.FromSI(v, Quantity.Length);
         double F(double v) => u.FromSI(v, Quantity.Force);
         string P(double v) => v.ToString("0.000", CultureInfo.InvariantCulture);
         string T(double v) => v.ToString("0.0000", CultureInfo.InvariantCulture);
