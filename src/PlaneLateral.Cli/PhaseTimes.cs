@@ -5,8 +5,8 @@ namespace PlaneLateral.Cli;
 /// <summary>
 /// A phase timer for finding where a run's time goes (docs/benchmarks.md, "Where the frame's solve spends its time"):
 /// off unless the environment variable PLANELATERAL_PHASES is set (to anything), then every <see cref="Mark"/> prints
-/// one line to standard error: the phase's wall time, the process's CPU time in it, garbage collections and bytes
-/// allocated. Nothing else changes, and no output file ever carries a time.
+/// one line to standard error: the phase's wall time, the process's CPU time in it, garbage collections, the time the
+/// collector paused the program and bytes allocated. Nothing else changes, and no output file ever carries a time.
 /// </summary>
 internal static class PhaseTimes
 {
@@ -15,6 +15,7 @@ internal static class PhaseTimes
     private static TimeSpan lastCpu;
     private static int lastGc0, lastGc1, lastGc2;
     private static long lastBytes;
+    private static TimeSpan lastPause;
 
     /// <summary>Starts the clock (the first line then measures from the process's start to here).</summary>
     public static void Start()
@@ -34,8 +35,9 @@ internal static class PhaseTimes
         var cpu = Environment.CpuUsage.TotalTime;
         int g0 = GC.CollectionCount(0), g1 = GC.CollectionCount(1), g2 = GC.CollectionCount(2);
         long bytes = GC.GetTotalAllocatedBytes();
+        var pause = GC.GetTotalPauseDuration();
         Console.Error.Write($"phase {phase,-28} {Stopwatch.GetElapsedTime(last, now).TotalMilliseconds,8:F1} ms wall {(cpu - lastCpu).TotalMilliseconds,8:F1} ms CPU  " +
-            $"GC {g0 - lastGc0}/{g1 - lastGc1}/{g2 - lastGc2} (gen 0/1/2)  {(bytes - lastBytes) / 1048576.0,7:F1} MiB allocated\n");
+            $"GC {g0 - lastGc0}/{g1 - lastGc1}/{g2 - lastGc2} (gen 0/1/2) {(pause - lastPause).TotalMilliseconds,6:F1} ms paused  {(bytes - lastBytes) / 1048576.0,7:F1} MiB allocated\n");
         Reset();
     }
 
@@ -45,5 +47,6 @@ internal static class PhaseTimes
         lastCpu = Environment.CpuUsage.TotalTime;
         lastGc0 = GC.CollectionCount(0); lastGc1 = GC.CollectionCount(1); lastGc2 = GC.CollectionCount(2);
         lastBytes = GC.GetTotalAllocatedBytes();
+        lastPause = GC.GetTotalPauseDuration();
     }
 }
