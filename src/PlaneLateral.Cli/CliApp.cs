@@ -25,6 +25,7 @@ public static class CliApp
 
     private static int RunInvariant(string[] args, TextWriter stdout, TextWriter stderr)
     {
+        PhaseTimes.Start();   // off unless PLANELATERAL_PHASES is set
         using var inputs = CommandSupport.ProtectInputs(args);   // no output may replace a file named on the command line
         var root = BuildCommands(stdout, stderr);
         var widthOption = new Option<string?>("--width")
@@ -97,11 +98,14 @@ public static class CliApp
             stderr.Write(error + "\nNothing was written.\n");
             return ExitCodes.Usage;
         }
+        PhaseTimes.Mark("command line");
         // The file is read, hashed and parsed once, whichever kind it is (a planar model or a building in plan).
         if (!CommandSupport.TrySolve(() => ModelReader.ReadSource(modelPath), stderr, out var source, out int exit)) return exit;
+        PhaseTimes.Mark("read, hash, JSON tree");
         if (source.IsPlan) return PlanSolve.Run(modelPath, outDir, stdout, stderr, detail, strict: strict, source: source);   // a building in plan (docs/plan.md)
         if (!CommandSupport.TrySolve(() => ModelReader.Read(source), stderr, out var model, out exit)) return exit;
         if (CommandSupport.RefusedAsStrict(strict, model.Warnings, stderr)) return ExitCodes.BadModel;
+        PhaseTimes.Mark("model from the tree");
         bool solved = CommandSupport.TrySolve(() =>
         {
             var run = ModelRun.Run(model);   // every result, computed once; what follows only reads it
@@ -110,6 +114,7 @@ public static class CliApp
         }, stderr, out var solution, out exit);
         if (!solved) return exit;
         var (result, comparisons) = solution;
+        PhaseTimes.Mark("analysis");
 
         string folder = outDir ?? CommandSupport.DefaultFolder(modelPath);
         bool wrote = CommandSupport.TryWrite(() =>
@@ -119,6 +124,7 @@ public static class CliApp
             return AtomicFiles.WriteAll(folder, files);
         }, "results", stderr, out var written, out exit);
         if (!wrote) return exit;
+        PhaseTimes.Mark("results files");
 
         stderr.Write(ModelWarning.Lines(result.Model.Warnings));   // plausibility warnings (Model/Plausibility.cs)
         var text = new System.Text.StringBuilder($"PlaneLateral {ResultFiles.Version}: linear static analysis\n\n");
@@ -131,6 +137,7 @@ public static class CliApp
         else text.Append($"\nCaution: {ResultFiles.Caution}\n");
         text.Append($"\nResults written to {folder}: {string.Join(", ", written.Select(Path.GetFileName))}\n");
         stdout.Write(ConsoleText.Fit(text.ToString()));
+        PhaseTimes.Mark("console summary");
         return ExitCodes.Success;
     }
 

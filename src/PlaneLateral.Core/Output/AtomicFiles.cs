@@ -1,4 +1,5 @@
 using System.Diagnostics;
+using System.Runtime.ExceptionServices;
 using System.Text;
 using System.Text.RegularExpressions;
 
@@ -132,8 +133,13 @@ public static partial class AtomicFiles
     /// <returns>Full paths written, in the order given.</returns>
     /// <exception cref="IOException">The folder cannot be created or written; nothing was replaced.</exception>
     /// <remarks>An exception from a file's writer (any kind) removes every temporary file and replaces nothing; it is
-    /// passed on as it is, unless it is an I/O failure, which is reported as the folder's.</remarks>
-    public static IReadOnlyList<string> WriteAll(string directory, IReadOnlyList<OutputFile> files)
+    /// passed on as it is, unless it is an I/O failure, which is reported as the folder's. The temporary files are
+    /// written by up to <see cref="DefaultWriters"/> threads at once (each file whole by one thread, so its bytes are those of
+    /// a lone write); the renames follow on the calling thread, in the order given.</remarks>
+    public static IReadOnlyList<string> WriteAll(string directory, IReadOnlyList<OutputFile> files) =>
+        WriteAllWith(directory, files, DefaultWriters);
+
+    private static IReadOnlyList<string> WriteAllWith(string directory, IReadOnlyList<OutputFile> files, int writers)
     {
         try
         {
@@ -153,29 +159,20 @@ public static partial class AtomicFiles
             }
         RemoveStalePartials(directory);
 
-        var temps = new List<(string Temp, string Final)>();
-        try
+        // A folder standing where a file must go would stop the renames half-way: refuse before any target changes.
+        foreach (var f in files)
         {
-            foreach (var f in files)
-            {
-                string final = Path.Combine(directory, f.Name);
-                // A folder standing where a file must go would stop the renames half-way: refuse before any target changes.
-                if (Directory.Exists(final)) throw new IOException($"'{final}' is a folder, so the file {f.Name} cannot be written there");
-                string temp = Path.Combine(directory, $".{f.Name}.{Environment.ProcessId}-{Guid.NewGuid():N}.partial");
-                temps.Add((temp, final));
-                using (var fs = new FileStream(temp, FileMode.CreateNew, FileAccess.Write, FileShare.None, bufferSize: 1 << 16))
-                {
-                    f.WriteTo(fs);
-                    fs.Flush(flushToDisk: true);
-                }
-            }
+            string final = Path.Combine(directory, f.Name);
+            if (Directory.Exists(final)) throw new IOException($"'{final}' is a folder, so the file {f.Name} cannot be written there");
         }
-        catch (Exception e)
+        var temps = files.Select(f => (Temp: Path.Combine(directory, $".{f.Name}.{Environment.ProcessId}-{Guid.NewGuid():N}.partial"), Final: Path.Combine(directory, f.Name))).ToArray();
+        var failure = WriteTemporaries(files, temps.Select(t => t.Temp).ToArray(), writers);
+        if (failure is not null)
         {
             foreach (var (temp, _) in temps) TryDelete(temp);
-            if (e is IOException or UnauthorizedAccessException)
-                throw new IOException($"cannot write into the output folder '{directory}': {e.Message}", e);
-            throw;
+            if (failure is IOException or UnauthorizedAccessException)
+                throw new IOException($"cannot write into the output folder '{directory}': {failure.Message}", failure);
+            ExceptionDispatchInfo.Throw(failure);
         }
 
         int moved = 0;
@@ -186,7 +183,7 @@ public static partial class AtomicFiles
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
             foreach (var (temp, _) in temps.Skip(moved)) TryDelete(temp);
-            throw new IOException($"cannot put the files in place in '{directory}' ({moved} of {temps.Count} replaced): {e.Message}", e);
+            throw new IOException($"cannot put the files in place in '{directory}' ({moved} of {temps.Length} replaced): {e.Message}", e);
         }
         return temps.Select(t => t.Final).ToArray();
     }
