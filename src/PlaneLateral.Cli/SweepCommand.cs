@@ -138,31 +138,65 @@ internal static class SweepCommand
         // Progress only for a person watching: stderr is the console and a terminal.
         bool terminal = ReferenceEquals(stderr, Console.Error) && !Console.IsErrorRedirected;
         var progress = terminal ? new TerminalProgress(stderr, total) : null;
-        // The drawing library's one-time start beside the points, not after them (off the run's critical path).
-        var warmUp = Task.Run(SweepFiles.WarmUp);
+        // The drawing library's one-time start beside the points, not after them (off the run's critical path); begun
+        // already while the command line was read when the program was started for a sweep (StartWarmUp).
+        var warmUp = StartWarmUp();
         var result = AspectSweep.Run(spec, a.Models(), progress);
         progress?.Finish();
         try { warmUp.Wait(); }
         catch (AggregateException) { /* nothing drawn was kept: the figures below meet the same fault and report it */ }
 
         string folder = a.Out ?? Path.Combine(Directory.GetCurrentDirectory(), "planelateral-results", "sweep");
+        // Each file is made on its own task (the two figures on both processors at once); the console text is set while
+        // they draw, and each file is written as soon as its bytes are ready, the CSV first. The text is printed only
+        // once every file is in place, as before.
+        var files = SweepFiles.Start(result, $"PlaneLateral {ResultFiles.Version}");
+        var text = new StringWriter { NewLine = "\n" };
+        Summary(a, spec, result, text);
         IReadOnlyList<string> written;
         try
         {
-            written = OutputSet.WriteAll(folder, SweepFiles.Render(result, $"PlaneLateral {ResultFiles.Version}"));
+            written = AtomicFiles.WriteAll(folder, files.Select(f => OutputFile.Bytes(f.Name, f.Bytes)).ToArray());
         }
         catch (IOException ex)
         {
             stderr.Write($"{ex.Message}\nFix: choose a writable folder with --out. No sweep file was replaced.\n");
             return ExitCodes.OutputFailed;
         }
+        stdout.Write(text.ToString());
+        stdout.Write($"\nSweep written to {folder}: {string.Join(", ", written.Select(Path.GetFileName))}\n");
+        return ExitCodes.Success;
+    }
+
+    private static Task? s_warmUp;
+
+    /// <summary>
+    /// The drawing library's one-time start (<see cref="SweepFiles.WarmUp"/>) on a pool thread, begun once per process;
+    /// later calls return the same task.
+    /// </summary>
+    internal static Task StartWarmUp() => LazyInitializer.EnsureInitialized(ref s_warmUp, () => Task.Run(SweepFiles.WarmUp));
+
+    /// <summary>
+    /// Called first thing in the program: when it was started for a sweep (and not for its help), begins the drawing
+    /// library's start at once, on the second processor, while the first reads the command line and sets up the sweep
+    /// (otherwise idle time of a two-processor run). Any other command loads no drawing code here.
+    /// </summary>
+    internal static void StartWarmUpEarly(string[] args)
+    {
+        if (args.Length > 0 && args[0] == "sweep" && !args.Any(x => x is "-h" or "--help" or "-?" or "/?" or "/h"))
+            StartWarmUp();
+    }
+
+    /// <summary>The sweep's console text, all but the closing line that names the files written.</summary>
+    private static void Summary(SweepArgs a, SweepSpec spec, SweepResult result, TextWriter o)
+    {
         var u = spec.Units;
-        stdout.Write(spec.Opening is null ? $"PlaneLateral {ResultFiles.Version}: aspect-ratio sweep of a solid wall\n\n"
+        o.Write(spec.Opening is null ? $"PlaneLateral {ResultFiles.Version}: aspect-ratio sweep of a solid wall\n\n"
             : $"PlaneLateral {ResultFiles.Version}: aspect-ratio sweep of a wall with {spec.Opening.Words}\n\n");
-        stdout.Write($"Wall      l = {spec.Length.ToString("G6", CultureInfo.InvariantCulture)} {u.LengthSymbol}, t = {spec.Thickness.ToString("G6", CultureInfo.InvariantCulture)} {u.LengthSymbol}, f = {spec.FormFactor.ToString("G4", CultureInfo.InvariantCulture)}\n");
-        stdout.Write($"Material  {spec.MaterialName}: E = {spec.E.ToString("G6", CultureInfo.InvariantCulture)}, G = {spec.G.ToString("G6", CultureInfo.InvariantCulture)} {u.Label(Quantity.Stress)}\n");
-        if (spec.Footing is { } ft) stdout.Write($"Footing   {ft.Words(u)}; FE on its springs, hand = the fixed-base pier formula (FE/hand below 1: the footing's flexibility the hand ignores)\n");
-        stdout.Write($"Range     h/l {spec.From.ToString("G6", CultureInfo.InvariantCulture)} to {spec.To.ToString("G6", CultureInfo.InvariantCulture)}, {spec.Points} points ({a.Spacing}), {string.Join(" and ", spec.Ends.Select(SweepFiles.EndsName))}\n\n");
+        o.Write($"Wall      l = {spec.Length.ToString("G6", CultureInfo.InvariantCulture)} {u.LengthSymbol}, t = {spec.Thickness.ToString("G6", CultureInfo.InvariantCulture)} {u.LengthSymbol}, f = {spec.FormFactor.ToString("G4", CultureInfo.InvariantCulture)}\n");
+        o.Write($"Material  {spec.MaterialName}: E = {spec.E.ToString("G6", CultureInfo.InvariantCulture)}, G = {spec.G.ToString("G6", CultureInfo.InvariantCulture)} {u.Label(Quantity.Stress)}\n");
+        if (spec.Footing is { } ft) o.Write($"Footing   {ft.Words(u)}; FE on its springs, hand = the fixed-base pier formula (FE/hand below 1: the footing's flexibility the hand ignores)\n");
+        o.Write($"Range     h/l {spec.From.ToString("G6", CultureInfo.InvariantCulture)} to {spec.To.ToString("G6", CultureInfo.InvariantCulture)}, {spec.Points} points ({a.Spacing}), {string.Join(" and ", spec.Ends.Select(SweepFiles.EndsName))}\n\n");
         bool two = result.FeModels.Count > 1;
         var t = two
             ? new TextTable("ends", "h/l", "hand k", "FE k", "est. error", "FE/hand", "FE/flexure", "line FE/hand", "shear share (hand)", "verdict").Numeric(1, 2, 3, 4, 5, 6, 7, 8)
@@ -179,13 +213,11 @@ internal static class SweepCommand
             cells.Add(Studies.ComparisonRow.VerdictWords(p.Verdict, Studies.ComparedQuantity.Stiffness));
             t.Add([.. cells]);
         }
-        stdout.Write($"Stiffness in {u.Label(Quantity.TranslationalStiffness)}; FE = {result.FeModels[0]} (the reference){(two ? $"; line = {result.FeModels[1]}" : "")}{(spec.Opening is null ? "" : "; hand = the perforated-wall method, FE/flexure = FE over the method without shear deformation")}\n");
-        stdout.Write(t.Render());
-        stdout.Write("\nWhere each hand formula leaves the tolerance band of the reference:\n");
-        foreach (var d in SweepDepartures.Find(result)) stdout.Write($"  {d.Words(spec.From, spec.To)}\n");
-        stdout.Write($"\nCaution: {SweepFiles.Caution}\n");
-        stdout.Write($"\nSweep written to {folder}: {string.Join(", ", written.Select(Path.GetFileName))}\n");
-        return ExitCodes.Success;
+        o.Write($"Stiffness in {u.Label(Quantity.TranslationalStiffness)}; FE = {result.FeModels[0]} (the reference){(two ? $"; line = {result.FeModels[1]}" : "")}{(spec.Opening is null ? "" : "; hand = the perforated-wall method, FE/flexure = FE over the method without shear deformation")}\n");
+        o.Write(t.Render());
+        o.Write("\nWhere each hand formula leaves the tolerance band of the reference:\n");
+        foreach (var d in SweepDepartures.Find(result)) o.Write($"  {d.Words(spec.From, spec.To)}\n");
+        o.Write($"\nCaution: {SweepFiles.Caution}\n");
     }
 
     /// <summary>"sweep: 12 of 50 points" on one terminal line, rewritten in place.</summary>

@@ -15,15 +15,27 @@ public static class SweepFiles
     /// <summary>Below this h/l a pier is squat and plane sections are doubtful (common practice; docs/hand-methods.md §2).</summary>
     public const double SquatAspectRatio = 0.5;
 
-    /// <summary>File name → bytes of every sweep output, in a fixed order.</summary>
-    public static IReadOnlyList<(string Name, byte[] Bytes)> Render(SweepResult r, string producedBy)
+    /// <summary>The sweep's file names, in the order <see cref="Render"/> and <see cref="Start"/> give the files.</summary>
+    public const string CsvFileName = "sweep.csv", RatioFigureFileName = "sweep-ratio.png", ShearShareFigureFileName = "sweep-shear-share.png";
+
+    /// <summary>File name → bytes of every sweep output, in a fixed order (<see cref="Start"/>, waited for).</summary>
+    public static IReadOnlyList<(string Name, byte[] Bytes)> Render(SweepResult r, string producedBy) =>
+        Start(r, producedBy).Select(f => (f.Name, f.Bytes.GetAwaiter().GetResult())).ToArray();
+
+    /// <summary>
+    /// Starts every sweep output on its own task and returns at once: file name → its bytes when ready, in the order of
+    /// <see cref="Render"/> (sweep.csv, then the two figures). The figures are independent drawings, each on its own
+    /// plot and surface (nothing of the drawing library is shared between them but its loaded code and fonts), so on
+    /// two processors they are drawn at the same time, and a caller can write the CSV, or set its console text, while
+    /// they draw. No file's bytes depend on the processors or the order the tasks ran in.
+    /// </summary>
+    public static IReadOnlyList<(string Name, Task<byte[]> Bytes)> Start(SweepResult r, string producedBy)
     {
-        // The two figures are independent drawings on their own surfaces: drawn at the same time, on a second core
-        // when there is one (each PNG's bytes do not depend on it).
-        var shareTask = Task.Run(() => ShearShareFigure(r));
-        var ratio = RatioFigure(r);
-        var share = shareTask.GetAwaiter().GetResult();
-        return [OutputSet.Text("sweep.csv", Csv(r, producedBy)), (ratio.FileName, ratio.Png), (share.FileName, share.Png)];
+        // The dearest first: the ratio figure (more curves), the shear-share figure, then the CSV (under a millisecond).
+        var ratio = Task.Run(() => RatioFigure(r).Png);
+        var share = Task.Run(() => ShearShareFigure(r).Png);
+        var csv = Task.Run(() => OutputSet.Text(CsvFileName, Csv(r, producedBy)).Bytes);
+        return [(CsvFileName, csv), (RatioFigureFileName, ratio), (ShearShareFigureFileName, share)];
     }
 
     /// <summary>
@@ -180,7 +192,7 @@ public static class SweepFiles
         plot.ShowLegend(ScottPlot.Edge.Bottom);   // below the axes: the curves fill the whole plot area
         var png = PlotStyle.Png(plot);
         string departureWords = string.Join("; ", departures.Select(d => d.Words(s.From, s.To)));
-        return new Figure("sweep-ratio.png", "FE/hand stiffness against h/l",
+        return new Figure(RatioFigureFileName, "FE/hand stiffness against h/l",
             s.Opening is null
             ? $"Ratio of each FE model's lateral stiffness to the hand pier formula (flexure + shear), and of the reference ({r.FeModels[0]}) to the flexure-only formula (triangles), {Describe(s)}. Shaded: the tolerance band 1 ± {Pct(s.Tolerance)}. Dotted line: h/l = {SquatAspectRatio}, below which plane sections are doubtful (common practice). Densely dashed lines: where a hand formula leaves the band. {departureWords}. Timoshenko line members follow the same beam theory as the hand formula, so their ratio is 1 to rounding: that checks the arithmetic, not the theory; the plane-stress panel shares none of its assumptions."
             : $"Ratio of each FE model's lateral stiffness to the perforated-wall method (flexure + shear), and of the reference ({r.FeModels[0]}) to the same method without shear deformation (triangles), {Describe(s)}. Shaded: the tolerance band 1 ± {Pct(s.Tolerance)}. Dotted line: h/l = {SquatAspectRatio} of the whole wall (common practice). Densely dashed lines: where a hand value leaves the band. {departureWords}. The equivalent frame lets the spandrels bend, where the hand method holds them rigid; the plane-stress panel shares neither model's assumptions.",
@@ -221,7 +233,7 @@ public static class SweepFiles
         plot.Axes.SetLimitsY(0, 100);
         plot.ShowLegend(ScottPlot.Alignment.UpperRight);
         var png = PlotStyle.Png(plot);
-        return new Figure("sweep-shear-share.png", "Shear share against h/l",
+        return new Figure(ShearShareFigureFileName, "Shear share against h/l",
             $"Share of the top deflection that comes from shear deformation, {Describe(s)}. Lines: the hand formula's f·Ph/(AG) term over the total; markers: the FE models (from a second solve without shear deformation).",
             png, PlotStyle.Width, PlotStyle.Height);
     }

@@ -30,6 +30,10 @@ public sealed class OutputFile
     /// <summary>Finished bytes (text already encoded, a PNG, ...).</summary>
     public static OutputFile Bytes(string name, byte[] bytes) => new(name, s => s.Write(bytes));
 
+    /// <summary>Bytes still being made (e.g. a figure drawn on another thread): waited for when the file is written, so
+    /// the files before it in a set are written meanwhile. A fault of the task stops the set as a writer's exception does.</summary>
+    public static OutputFile Bytes(string name, Task<byte[]> bytes) => new(name, s => s.Write(bytes.GetAwaiter().GetResult()));
+
     /// <summary>
     /// A text written by <paramref name="write"/> into a writer over the file itself (UTF-8 without a byte-order mark,
     /// <c>NewLine</c> a line feed, invariant culture); the writer is flushed after it returns. An exception thrown by
