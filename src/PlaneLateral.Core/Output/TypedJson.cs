@@ -11,12 +11,24 @@ namespace PlaneLateral.Output;
 /// </summary>
 public static class TypedJson
 {
-    private static readonly JsonSerializer Serializer = JsonSerializer.Create(new JsonSerializerSettings
+    private static readonly JsonSerializer Serializer = Create(rowConverter: true);
+
+    /// <summary>
+    /// The serializer: invariant culture, a non-finite number as a string, nulls written; with
+    /// <paramref name="rowConverter"/>, the hot result rows are written by <see cref="ResultRowConverter"/> (the same text,
+    /// without reflection; false gives the reflection-only reference its test compares with).
+    /// </summary>
+    internal static JsonSerializer Create(bool rowConverter)
     {
-        Culture = CultureInfo.InvariantCulture,
-        FloatFormatHandling = FloatFormatHandling.String,
-        NullValueHandling = NullValueHandling.Include,
-    });
+        var settings = new JsonSerializerSettings
+        {
+            Culture = CultureInfo.InvariantCulture,
+            FloatFormatHandling = FloatFormatHandling.String,
+            NullValueHandling = NullValueHandling.Include,
+        };
+        if (rowConverter) settings.Converters.Add(new ResultRowConverter());
+        return JsonSerializer.Create(settings);
+    }
 
     /// <summary>The file's text for <paramref name="value"/>, built in memory (a small file).</summary>
     public static string Write(object value)
@@ -32,10 +44,12 @@ public static class TypedJson
     /// any size streams without its text or its objects all in memory. <paramref name="writer"/>'s <c>NewLine</c> should
     /// be a line feed (the writers of <see cref="OutputFile"/> and <see cref="Write(object)"/> are).
     /// </summary>
-    public static void Write(TextWriter writer, object value)
+    public static void Write(TextWriter writer, object value) => Write(writer, value, Serializer);
+
+    internal static void Write(TextWriter writer, object value, JsonSerializer serializer)
     {
         using (var w = new JsonTextWriter(writer) { Formatting = Formatting.Indented, Indentation = 2, CloseOutput = false })
-            Serializer.Serialize(w, value);
+            serializer.Serialize(w, value);
         writer.Write('\n');
     }
 
