@@ -1,3 +1,4 @@
+using System.Buffers;
 using System.Globalization;
 using System.Numerics;
 using Newtonsoft.Json;
@@ -6,13 +7,15 @@ using Newtonsoft.Json.Linq;
 namespace PlaneLateral.Model;
 
 /// <summary>
-/// Builds the compact <see cref="JsonNode"/> tree of a model text in one pass. It reads only text that
-/// <see cref="StrictJson.Check"/> has passed, and only the common case: no comments, no byte-order mark, no lone
-/// carriage return, no duplicate key, integers within 64 bits, no \u escape of a surrogate, nesting within 60 levels.
-/// For anything else it declines (returns null) and the model reader takes the JSON library's path, which gives
-/// today's diagnostics word for word, or its tree (<see cref="FromReference"/>). Where it reads, it gives the tree the
-/// JSON library gives: the same kinds (an integer is a number without '.', 'e' or 'E'; every other number a double
-/// parsed from its text with the invariant culture), values, names, lines and columns (tests/…/JsonTreeTests.cs).
+/// Builds the compact <see cref="JsonNode"/> tree of a model text in one pass, and checks as it goes that the text is
+/// JSON as RFC 8259 (Bray 2017) defines it. It reads only the common case: strict JSON with no comments, no byte-order
+/// mark, no lone carriage return, no duplicate key, integers within 64 bits, no \u escape of a surrogate, nesting
+/// within 60 levels. For anything else (every error included) it declines, returning null, and
+/// <see cref="ModelReader.ReadTree"/> takes the path it always took: <see cref="StrictJson.Check"/>, then the JSON
+/// library, whose messages, lines, columns and paths are therefore unchanged; a valid text read there becomes this tree
+/// through <see cref="FromReference"/>. Where it reads, it gives the tree the JSON library gives: the same kinds (an
+/// integer is a number without '.', 'e' or 'E'; every other number a double parsed from its text with the invariant
+/// culture), values, names, lines and columns (tests/PlaneLateral.Core.Tests/Input/JsonTreeTests.cs).
 /// </summary>
 internal sealed class JsonTreeReader
 {
@@ -46,7 +49,7 @@ internal sealed class JsonTreeReader
             return r._pos == json.Length ? root : null;
         }
         catch (Declined) { return null; }
-        catch (IndexOutOfRangeException) { return null; }   // text StrictJson would not have passed
+        catch (Exception e) when (e is IndexOutOfRangeException or ArgumentOutOfRangeException) { return null; }   // the text ends inside a value
     }
 
     private void SkipSpace()
@@ -77,13 +80,19 @@ internal sealed class JsonTreeReader
             case '{': node = ReadObject(depth + 1); break;
             case '[': node = ReadArray(depth + 1); break;
             case '"': node = JsonScalar.String(ReadString(false)); break;
-            case 't': _pos += 4; node = JsonScalar.Boolean(true); break;
-            case 'f': _pos += 5; node = JsonScalar.Boolean(false); break;
-            case 'n': _pos += 4; node = JsonScalar.Null(); break;
+            case 't': Literal("true"); node = JsonScalar.Boolean(true); break;
+            case 'f': Literal("false"); node = JsonScalar.Boolean(false); break;
+            case 'n': Literal("null"); node = JsonScalar.Null(); break;
             default: node = ReadNumber(); break;
         }
         if (node is not JsonMap and not JsonList) { node.Line = _line; node.Column = _pos - _lineStart; }
         return node;
+    }
+
+    private void Literal(string word)
+    {
+        if (string.CompareOrdinal(_s, _pos, word, 0, word.Length) != 0) throw Decline;
+        _pos += word.Length;   // what follows is checked by the caller: only a separator, a closing bracket or space
     }
 
     private JsonMap ReadObject(int depth)
@@ -163,25 +172,31 @@ internal sealed class JsonTreeReader
         return items;
     }
 
+    // The characters that end the plain run of a string: its closing quote, an escape, a control character (which
+    // RFC 8259 section 7 does not allow unescaped).
+    private static readonly SearchValues<char> StringStops = SearchValues.Create("\"\\\u0000\u0001\u0002\u0003\u0004\u0005\u0006\u0007\b\t\n\u000B\f\r\u000E\u000F\u0010\u0011\u0012\u0013\u0014\u0015\u0016\u0017\u0018\u0019\u001A\u001B\u001C\u001D\u001E\u001F");
+
     private string ReadString(bool intern)
     {
         var s = _s;
         int start = ++_pos;
-        int end = s.IndexOfAny(['"', '\\'], start);
-        if (end < 0) throw Decline;
+        int run = s.AsSpan(start).IndexOfAny(StringStops);
+        if (run < 0) throw Decline;
+        int end = start + run;
         if (s[end] == '"')
         {
             _pos = end + 1;
-            var span = s.AsSpan(start, end - start);
+            var span = s.AsSpan(start, run);
             return intern || span.Length <= 24 ? Intern(span) : span.ToString();
         }
         var sb = new System.Text.StringBuilder();
-        sb.Append(s, start, end - start);
+        sb.Append(s, start, run);
         int i = end;
         while (true)
         {
             char c = s[i];
             if (c == '"') break;
+            if (c < ' ') throw Decline;
             if (c != '\\') { sb.Append(c); i++; continue; }
             char e = s[i + 1];
             switch (e)
@@ -195,7 +210,9 @@ internal sealed class JsonTreeReader
                 case 'r': sb.Append('\r'); break;
                 case 't': sb.Append('\t'); break;
                 case 'u':
-                    int u = int.Parse(s.AsSpan(i + 2, 4), NumberStyles.AllowHexSpecifier, CultureInfo.InvariantCulture);
+                    var hex = s.AsSpan(i + 2, 4);
+                    if (!char.IsAsciiHexDigit(hex[0]) || !char.IsAsciiHexDigit(hex[1]) || !char.IsAsciiHexDigit(hex[2]) || !char.IsAsciiHexDigit(hex[3])) throw Decline;
+                    int u = int.Parse(hex, NumberStyles.AllowHexSpecifier, CultureInfo.InvariantCulture);
                     if (u >= 0xD800 && u <= 0xDFFF) throw Decline;
                     sb.Append((char)u);
                     i += 4;
@@ -217,26 +234,46 @@ internal sealed class JsonTreeReader
         return text;
     }
 
+    /// <summary>A number as RFC 8259 section 6 writes it: -?(0|[1-9][0-9]*)(.[0-9]+)?([eE][+-]?[0-9]+)?; anything else declines.</summary>
     private JsonScalar ReadNumber()
     {
         var s = _s;
         int start = _pos;
+        if (s[_pos] == '-') _pos++;
+        if (s[_pos] == '0') _pos++;
+        else if (s[_pos] is >= '1' and <= '9') Digits();
+        else throw Decline;
         bool fraction = false;
-        while (_pos < s.Length)
+        if (_pos < s.Length && s[_pos] == '.')
         {
-            char c = s[_pos];
-            if (c is >= '0' and <= '9' or '-' or '+') { _pos++; continue; }
-            if (c is '.' or 'e' or 'E') { fraction = true; _pos++; continue; }
-            break;
+            fraction = true;
+            _pos++;
+            if (!char.IsAsciiDigit(s[_pos])) throw Decline;
+            Digits();
         }
+        if (_pos < s.Length && s[_pos] is 'e' or 'E')
+        {
+            fraction = true;
+            _pos++;
+            if (s[_pos] is '+' or '-') _pos++;
+            if (!char.IsAsciiDigit(s[_pos])) throw Decline;
+            Digits();
+        }
+        // What follows (a letter, a digit after a leading zero, a second point) is checked by the caller, which
+        // takes only a separator, a closing bracket or space.
         var text = s.AsSpan(start, _pos - start);
-        if (text.Length == 0) throw Decline;
         if (!fraction)
         {
             if (long.TryParse(text, NumberStyles.AllowLeadingSign, CultureInfo.InvariantCulture, out long v)) return JsonScalar.Integer(v);
             throw Decline;   // wider than 64 bits: the JSON library's BigInteger (and its length limit)
         }
         return JsonScalar.Float(double.Parse(text, NumberStyles.Float, CultureInfo.InvariantCulture));
+    }
+
+    private void Digits()
+    {
+        var s = _s;
+        while (_pos < s.Length && char.IsAsciiDigit(s[_pos])) _pos++;
     }
 
     /// <summary>

@@ -68,11 +68,11 @@ public static partial class ModelReader
     internal static JsonNode ReadTree(string json, string fileName)
     {
         if (ModelLimits.CheckFileSize(fileName, json.Length) is { } tooLarge) throw new ModelInputException([tooLarge]);
+        // Strict JSON in the common case: checked and built in one pass (JsonTreeReader.cs). Anything else, and every
+        // error, takes the path below, so its messages, lines, columns and paths stay as they were.
+        if (JsonTreeReader.TryRead(json) is { } tree) return tree;
         var strict = StrictJson.Check(json);
         if (strict is { Lenient: true }) throw NotJson(fileName, strict);
-        // Strict JSON in the common case: the compact tree in one pass (JsonTreeReader.cs). Anything else, and every
-        // error, takes the JSON library's path below, so its messages, lines, columns and paths stay as they were.
-        if (strict is null && JsonTreeReader.TryRead(json) is { } tree) return tree;
         JToken root;
         try
         {
