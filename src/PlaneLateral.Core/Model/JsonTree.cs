@@ -35,6 +35,13 @@ internal abstract class JsonNode
 
     public abstract JsonKind Type { get; }
 
+    /// <summary>Makes this node the parent of <paramref name="items"/>, each with its index; returns them.</summary>
+    private protected JsonNode[] Adopt(JsonNode[] items)
+    {
+        for (int i = 0; i < items.Length; i++) { items[i].Parent = this; items[i].Index = i; }
+        return items;
+    }
+
     /// <summary>The path in the JSON library's form (<c>members[3].section</c>, <c>['a b']</c>); empty at the root.</summary>
     public string Path
     {
@@ -209,11 +216,7 @@ internal sealed class JsonMap : JsonNode
 
     public override JsonKind Type => JsonKind.Object;
 
-    internal void SetItems(JsonNode[] items)
-    {
-        _items = items;
-        for (int i = 0; i < items.Length; i++) { items[i].Parent = this; items[i].Index = i; }
-    }
+    internal void SetItems(JsonNode[] items) => _items = Adopt(items);
 
     public int Count => _items.Length;
 
@@ -251,11 +254,7 @@ internal sealed class JsonList : JsonNode, IReadOnlyList<JsonNode>
 
     public override JsonKind Type => JsonKind.Array;
 
-    internal void SetItems(JsonNode[] items)
-    {
-        _items = items;
-        for (int i = 0; i < items.Length; i++) { items[i].Parent = this; items[i].Index = i; }
-    }
+    internal void SetItems(JsonNode[] items) => _items = Adopt(items);
 
     public int Count => _items.Length;
     public JsonNode this[int index] => _items[index];
