@@ -184,7 +184,8 @@ public sealed class JsonTreeTests
     }
 
     /// <summary>Departures from RFC 8259 (Bray 2017: section 2 grammar and whitespace, section 6 numbers, section 7
-    /// strings) and truncated text: the fast reader declines each, so StrictJson and the JSON library report it.</summary>
+    /// strings), truncated text, and comments (allowed, but read on the library path): the fast reader declines each,
+    /// so StrictJson and the JSON library report or read it as before.</summary>
     [Theory]
     [InlineData("0144")]
     [InlineData("[0144]")]
