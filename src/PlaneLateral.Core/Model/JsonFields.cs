@@ -10,7 +10,10 @@ internal sealed class JsonFields
 {
     private readonly JsonMap _obj;
     private readonly DiagnosticSink _sink;
-    private readonly HashSet<string> _known = new(StringComparer.Ordinal);
+    // The keys asked for, in the order first asked: a short list (one is made per object of the file), with a set
+    // beside it once it is long (an object whose every key is asked, e.g. a comparison check's).
+    private readonly List<string> _known = new(8);
+    private HashSet<string>? _knownSet;
 
     public JsonFields(JsonMap obj, DiagnosticSink sink)
     {
@@ -28,20 +31,36 @@ internal sealed class JsonFields
     /// <summary>The value of <paramref name="key"/>, or null when absent. A JSON null is reported once and read as absent.</summary>
     public JsonNode? Token(string key)
     {
-        _known.Add(key);
+        Remember(key);
         if (!_obj.TryGetValue(key, out var t)) return null;
         if (t.Type != JsonKind.Null) return t;
-        if (_nullsReported.Add(key)) _sink.Add(t, $"'{key}' is null", "give a value, or leave the key out to take its default");
+        if ((_nullsReported ??= new(StringComparer.Ordinal)).Add(key)) _sink.Add(t, $"'{key}' is null", "give a value, or leave the key out to take its default");
         return null;
     }
 
-    private readonly HashSet<string> _nullsReported = new(StringComparer.Ordinal);
+    private HashSet<string>? _nullsReported;
+
+    private void Remember(string key)
+    {
+        if (Known(key)) return;
+        _known.Add(key);
+        if (_knownSet is not null) _knownSet.Add(key);
+        else if (_known.Count > 32) _knownSet = new HashSet<string>(_known, StringComparer.Ordinal);
+    }
+
+    private bool Known(string key)
+    {
+        if (_knownSet is not null) return _knownSet.Contains(key);
+        foreach (var k in _known)
+            if (string.Equals(k, key, StringComparison.Ordinal)) return true;
+        return false;
+    }
 
     /// <summary>Reports keys that none of the reads asked for (most often a typo).</summary>
     public void RejectUnknownKeys()
     {
         foreach (var p in _obj.Properties())
-            if (!_known.Contains(p.Name))
+            if (!Known(p.Name))
                 _sink.Add(p, $"unknown key '{p.Name}'{SuggestBudget.Suggest(p.Name, _known)}", $"use one of: {string.Join(", ", _known.Order(StringComparer.Ordinal))}; or remove it");
     }
 

@@ -213,6 +213,7 @@ internal sealed class JsonScalar : JsonNode
 internal sealed class JsonMap : JsonNode
 {
     private JsonNode[] _items = [];
+    private Dictionary<string, JsonNode>? _index;
 
     public override JsonKind Type => JsonKind.Object;
 
@@ -227,6 +228,18 @@ internal sealed class JsonMap : JsonNode
 
     public bool TryGetValue(string key, [System.Diagnostics.CodeAnalysis.NotNullWhen(true)] out JsonNode? value)
     {
+        if (_items.Length > 16)
+        {
+            // A large object: an index of its keys, made on the first look-up (the keys are unique: a duplicate never
+            // reaches a tree).
+            if (_index is null)
+            {
+                var index = new Dictionary<string, JsonNode>(_items.Length, StringComparer.Ordinal);
+                foreach (var n in _items) index[n.Name!] = n;
+                _index = index;
+            }
+            return _index.TryGetValue(key, out value);
+        }
         foreach (var n in _items)
             if ((object)n.Name! == key || string.Equals(n.Name, key, StringComparison.Ordinal)) { value = n; return true; }
         value = null;
