@@ -1,4 +1,3 @@
-using Newtonsoft.Json.Linq;
 
 namespace PlaneLateral.Model;
 
@@ -83,12 +82,12 @@ public static class ModelLimits
 
     /// <summary>Counts the top-level arrays (and the openings of each comparison) against the limits; reports each excess.</summary>
     /// <returns>True when a limit is exceeded.</returns>
-    internal static bool CheckCounts(JObject root, DiagnosticSink sink)
+    internal static bool CheckCounts(JsonMap root, DiagnosticSink sink)
     {
         bool over = false;
-        void Limit(JToken? t, int max, string what)
+        void Limit(JsonNode? t, int max, string what)
         {
-            if (t is JArray a && a.Count > max)
+            if (t is JsonList a && a.Count > max)
             {
                 sink.Add(a, $"the model has {a.Count} {what}, more than the {max} this version accepts",
                     $"keep to at most {max} {what}; a planar lateral model of a building needs far fewer");
@@ -99,26 +98,26 @@ public static class ModelLimits
         Limit(root["members"], MaxMembers, "members");
         Limit(root["stiffnessAt"], MaxStiffnessPoints, "stiffness points");
         Limit(root["comparisons"], MaxComparisons, "comparison checks");
-        int cases = (root["loadCases"] as JArray)?.Count ?? 0, combos = (root["combinations"] as JArray)?.Count ?? 0;
+        int cases = (root["loadCases"] as JsonList)?.Count ?? 0, combos = (root["combinations"] as JsonList)?.Count ?? 0;
         if (cases + combos > MaxCasesAndCombinations)
         {
             sink.Add(root["loadCases"] ?? root["combinations"], $"the model has {cases} load cases and {combos} combinations, more than the {MaxCasesAndCombinations} together this version accepts",
                 $"keep to at most {MaxCasesAndCombinations} load cases and combinations together; split the model's cases into several files");
             over = true;
         }
-        if (root["panels"] is JArray panels)
+        if (root["panels"] is JsonList panels)
             foreach (var p in panels)
-                if (p is JObject po && po["mesh"] is JObject mesh && mesh["maxNodes"] is JValue { Value: long or int or double } mn
+                if (p is JsonMap po && po["mesh"] is JsonMap mesh && mesh["maxNodes"] is JsonScalar { Value: long or int or double } mn
                     && Convert.ToDouble(mn.Value, System.Globalization.CultureInfo.InvariantCulture) > MaxPanelMeshNodes)
                 {
                     sink.Add(mn, $"'maxNodes' asks for a mesh of up to {mn.Value} nodes, more than the {MaxPanelMeshNodes} this version builds (memory grows with the mesh: a 1 mm mesh of a 5 m × 6 m wall would need tens of GB)",
                         $"give 'maxNodes' at most {MaxPanelMeshNodes}, and a larger element size or fewer refinements");
                     over = true;
                 }
-        if (root["panels"] is JArray meshed && meshed.Count > 0 && cases + combos > 0)
+        if (root["panels"] is JsonList meshed && meshed.Count > 0 && cases + combos > 0)
         {
             // Each panel's asked ceiling (the default when not given; a value out of range is reported at its own key).
-            long nodes = meshed.Sum(p => p is JObject po && po["mesh"] is JObject mesh && mesh["maxNodes"] is JValue { Value: long or int or double } mn
+            long nodes = meshed.Sum(p => p is JsonMap po && po["mesh"] is JsonMap mesh && mesh["maxNodes"] is JsonScalar { Value: long or int or double } mn
                 && Convert.ToDouble(mn.Value, System.Globalization.CultureInfo.InvariantCulture) is var v && v >= 1 && v <= MaxPanelMeshNodes
                 ? (long)v : PanelMeshSettings.Default.MaxNodes);
             long entries = nodes * (cases + combos);
@@ -129,26 +128,26 @@ public static class ModelLimits
                 over = true;
             }
         }
-        if (root["seismic"] is JObject seismic && seismic["weights"] is JArray weights && weights.Count > MaxMassDofs)
+        if (root["seismic"] is JsonMap seismic && seismic["weights"] is JsonList weights && weights.Count > MaxMassDofs)
         {
             sink.Add(weights, $"the seismic block weighs {weights.Count} levels, more than the {MaxMassDofs} whose periods this version computes (a dense eigenproblem of that size)",
                 $"keep to at most {MaxMassDofs} weighted levels; lump the weights of neighbouring levels");
             over = true;
         }
-        if (root["comparisons"] is JArray checks)
+        if (root["comparisons"] is JsonList checks)
             foreach (var c in checks)
-                if (c is JObject co) Limit(co["openings"], MaxOpeningsPerWall, "openings in one wall");
+                if (c is JsonMap co) Limit(co["openings"], MaxOpeningsPerWall, "openings in one wall");
         return over;
     }
 
     /// <summary>Counts the arrays of a building's <c>plan</c> against the limits before any line is read; reports each excess.</summary>
     /// <returns>True when a limit is exceeded.</returns>
-    internal static bool CheckPlanCounts(JObject plan, DiagnosticSink sink)
+    internal static bool CheckPlanCounts(JsonMap plan, DiagnosticSink sink)
     {
         bool over = false;
-        void Limit(JToken? t, int max, string what, string fix)
+        void Limit(JsonNode? t, int max, string what, string fix)
         {
-            if (t is JArray a && a.Count > max)
+            if (t is JsonList a && a.Count > max)
             {
                 sink.Add(a, $"the building has {a.Count} {what}, more than the {max} this version accepts", fix);
                 over = true;
@@ -166,7 +165,7 @@ public static class ModelLimits
     /// read and before any is condensed: reported at the plan's <c>lines</c> with the heaviest line named.
     /// </summary>
     /// <param name="solves">Solves per line: floors (condensation) + plan cases (recovery) + modes (spectrum), the generated cases counted.</param>
-    internal static void CheckPlanWork(IReadOnlyList<PlanLine> lines, int solves, JToken? at, DiagnosticSink sink)
+    internal static void CheckPlanWork(IReadOnlyList<PlanLine> lines, int solves, JsonNode? at, DiagnosticSink sink)
     {
         static long Size(PlanLine l) => l.Model.Nodes.Count + l.Model.Members.Count + l.Model.Panels.Sum(p => (long)p.Mesh.MaxNodes);
         long entries = lines.Sum(l => Size(l) * solves);

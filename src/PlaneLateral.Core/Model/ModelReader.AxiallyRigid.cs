@@ -1,4 +1,3 @@
-using Newtonsoft.Json.Linq;
 
 namespace PlaneLateral.Model;
 
@@ -9,10 +8,10 @@ public static partial class ModelReader
     private sealed partial class Builder
     {
         /// <summary>The "axiallyRigid" token of each member that has it, by member index.</summary>
-        private readonly Dictionary<int, JToken> _axiallyRigidTokens = [];
+        private readonly Dictionary<int, JsonNode> _axiallyRigidTokens = [];
 
         /// <summary>An axially rigid member must lie along x or y (its constraint shares one displacement of its ends).</summary>
-        private bool AlongAnAxis(Node a, Node b, JToken at, string id)
+        private bool AlongAnAxis(Node a, Node b, JsonNode at, string id)
         {
             double dx = Math.Abs(b.X - a.X), dy = Math.Abs(b.Y - a.Y), tol = 1e-9 * Math.Max(dx, dy);
             if (dx <= tol || dy <= tol) return true;

@@ -1,5 +1,4 @@
 using System.Globalization;
-using Newtonsoft.Json.Linq;
 using PlaneLateral.Units;
 
 namespace PlaneLateral.Model;
@@ -20,7 +19,7 @@ public static partial class ModelReader
         /// Reads the building keys. Members are changed in place when a cracked-section rule gives them modifiers.
         /// Returns <see cref="BuildingData.Empty"/> when the model has none of the keys.
         /// </summary>
-        private BuildingData ReadBuilding(JsonFields f, JObject root, List<Node> nodes, List<Member> members, List<Support> supports,
+        private BuildingData ReadBuilding(JsonFields f, JsonMap root, List<Node> nodes, List<Member> members, List<Support> supports,
             List<LoadCase> cases, List<Combination> combos)
         {
             var levelItems = f.Objects("levels", false, "give \"levels\" as an array of {\"id\": \"...\", \"elevation\": ...}");
@@ -28,12 +27,12 @@ public static partial class ModelReader
             var driftItems = f.Objects("driftChecks", false, "give \"driftChecks\" as an array of {\"id\": \"...\", \"cases\": [...], \"Cd\": ..., \"Ie\": ..., \"allowedRatio\": ...}");
 
             // Lines of resistance, by member id (the member objects are read again here; their types were checked there).
-            var memberObjects = new Dictionary<string, JObject>(StringComparer.Ordinal);
-            if (root["members"] is JArray ma)
+            var memberObjects = new Dictionary<string, JsonMap>(StringComparer.Ordinal);
+            if (root["members"] is JsonList ma)
                 foreach (var t in ma)
-                    if (t is JObject mo && mo["id"] is JValue { Type: JTokenType.String } idv)
+                    if (t is JsonMap mo && mo["id"] is JsonScalar { Type: JsonKind.String } idv)
                         memberObjects.TryAdd((string)idv!, mo);
-            var memberLines = members.Select(m => memberObjects.TryGetValue(m.Id, out var o) && o["line"] is JValue { Type: JTokenType.String } lv ? ((string)lv!).Trim() : "").ToList();
+            var memberLines = members.Select(m => memberObjects.TryGetValue(m.Id, out var o) && o["line"] is JsonScalar { Type: JsonKind.String } lv ? ((string)lv!).Trim() : "").ToList();
             var lines = memberLines.Where(l => l.Length > 0).Distinct(StringComparer.Ordinal).ToList();
 
             var levels = ReadLevels(levelItems, f.Token("levels"), nodes, supports);
@@ -60,9 +59,9 @@ public static partial class ModelReader
             return 1e-6 * Math.Max(size, 1.0);
         }
 
-        private List<Level> ReadLevels(IReadOnlyList<JObject> items, JToken? arrayToken, List<Node> nodes, List<Support> supports)
+        private List<Level> ReadLevels(IReadOnlyList<JsonMap> items, JsonNode? arrayToken, List<Node> nodes, List<Support> supports)
         {
-            var read = new List<(string Id, string Name, double Elev, bool Rigid, List<int> Nodes, string Selection, JObject At)>();
+            var read = new List<(string Id, string Name, double Elev, bool Rigid, List<int> Nodes, string Selection, JsonMap At)>();
             var seen = new HashSet<string>(StringComparer.Ordinal);
             double tol = ElevationTolerance(nodes);
             string len = _units.LengthSymbol;
@@ -82,13 +81,13 @@ public static partial class ModelReader
                 {
                     selection = "listed";
                     const string fix = "write \"nodes\": [\"<node id>\", ...], or leave it out to take every node at the level's elevation";
-                    if (nt is not JArray na) sink.Add(nt, "'nodes' must be an array of node ids", fix);
+                    if (nt is not JsonList na) sink.Add(nt, "'nodes' must be an array of node ids", fix);
                     else
                     {
                         if (na.Count == 0) sink.Add(na, $"level \"{id}\" lists no nodes", fix);
                         foreach (var nv in na)
                         {
-                            if (nv.Type != JTokenType.String) { sink.Add(nv, $"each entry of 'nodes' must be a node id string, found {JsonFields.Describe(nv)}", fix); continue; }
+                            if (nv.Type != JsonKind.String) { sink.Add(nv, $"each entry of 'nodes' must be a node id string, found {JsonFields.Describe(nv)}", fix); continue; }
                             var nid = (string)nv!;
                             if (!_nodes.TryGetValue(nid, out int n)) { sink.Add(nv, $"unknown node \"{nid}\"", $"use the id of a node listed under \"nodes\"{Suggest(nid, _nodes.Keys)}"); continue; }
                             if (chosen.Contains(n)) { sink.Add(nv, $"node \"{nid}\" is listed twice in level \"{id}\"", "list each node once"); continue; }
@@ -125,18 +124,18 @@ public static partial class ModelReader
                     if (!tiedBy.TryAdd(n, l.Id))
                         sink.Add(l.At, $"node \"{nodes[n].Id}\" is tied by the diaphragms of both level \"{tiedBy[n]}\" and level \"{l.Id}\"",
                             "a node can belong to one diaphragm only: take it out of one level's \"nodes\"");
-            if (arrayToken is JArray { Count: 1 } && read.Count == 1 && !read[0].Rigid)
+            if (arrayToken is JsonList { Count: 1 } && read.Count == 1 && !read[0].Rigid)
                 sink.Add(read[0].At, "a single level without a diaphragm defines no story and ties nothing", "add the other levels, or remove \"levels\"");
 
             var sorted = read.OrderBy(l => l.Elev).ToList();
             return sorted.Select((l, i) => new Level(i, l.Id, l.Name, l.Elev, l.Rigid, l.Nodes, l.Rigid ? l.Nodes : [], l.Selection)).ToList();
         }
 
-        private (CrackedSectionSettings?, List<ModifierAssignment>) ReadCrackedSections(JObject? o, List<Member> members,
-            Dictionary<string, JObject> memberObjects, List<string> lines, List<string> memberLines)
+        private (CrackedSectionSettings?, List<ModifierAssignment>) ReadCrackedSections(JsonMap? o, List<Member> members,
+            Dictionary<string, JsonMap> memberObjects, List<string> lines, List<string> memberLines)
         {
             var assignments = new List<ModifierAssignment>();
-            bool Explicit(Member m) => memberObjects.TryGetValue(m.Id, out var mo) && mo["modifiers"] is JObject;
+            bool Explicit(Member m) => memberObjects.TryGetValue(m.Id, out var mo) && mo["modifiers"] is JsonMap;
             if (o is null)
             {
                 foreach (var m in members)
@@ -167,12 +166,12 @@ public static partial class ModelReader
                     }
                     if (!members.Any(m => m.Role == p.Name))
                         sink.Add(p, $"no member has the role \"{p.Name}\"", $"give members \"role\": \"{p.Name}\", or remove this entry");
-                    if (p.Value is not JObject vo) { sink.Add(p.Value, $"'{p.Name}' must be an object such as {{\"I\": 0.35}}", "write {\"I\": ..., \"A\": ..., \"shearArea\": ...}"); continue; }
+                    if (p.Value is not JsonMap vo) { sink.Add(p.Value, $"'{p.Name}' must be an object such as {{\"I\": 0.35}}", "write {\"I\": ..., \"A\": ..., \"shearArea\": ...}"); continue; }
                     var vf = new JsonFields(vo, sink);
                     const string fix = "give a stiffness modifier > 0 and ≤ 1 (1 = as the section gives; e.g. 0.35 for a cracked wall's I)";
                     var mods = new StiffnessModifiers(vf.OptionalNumber("I", 1, fix), vf.OptionalNumber("A", 1, fix), vf.OptionalNumber("shearArea", 1, fix));
                     foreach (var k in new[] { "I", "A", "shearArea" })
-                        if (vf.Token(k) is { Type: JTokenType.Integer or JTokenType.Float } t && !((double)t > 0 && (double)t <= 1))
+                        if (vf.Token(k) is { Type: JsonKind.Integer or JsonKind.Float } t && !((double)t > 0 && (double)t <= 1))
                             sink.Add(t, $"stiffness modifier '{k}' for role \"{p.Name}\" must be greater than zero and not above 1, found {t}", fix);
                     vf.RejectUnknownKeys();
                     user[role] = mods;
@@ -185,11 +184,11 @@ public static partial class ModelReader
             {
                 const string fix = "write \"lines\": [\"<line of resistance>\", ...] naming lines given to members with \"line\"";
                 onLines = new HashSet<string>(StringComparer.Ordinal);
-                if (lt is not JArray la) sink.Add(lt, "'lines' must be an array of line names", fix);
+                if (lt is not JsonList la) sink.Add(lt, "'lines' must be an array of line names", fix);
                 else
                     foreach (var lv in la)
                     {
-                        if (lv.Type != JTokenType.String) { sink.Add(lv, $"each entry of 'lines' must be a string, found {JsonFields.Describe(lv)}", fix); continue; }
+                        if (lv.Type != JsonKind.String) { sink.Add(lv, $"each entry of 'lines' must be a string, found {JsonFields.Describe(lv)}", fix); continue; }
                         var name = (string)lv!;
                         if (!lines.Contains(name))
                             sink.Add(lv, $"unknown line \"{name}\": no member has \"line\": \"{name}\"",
@@ -226,7 +225,7 @@ public static partial class ModelReader
             return (settings, assignments);
         }
 
-        private List<DriftCheckSpec> ReadDriftChecks(IReadOnlyList<JObject> items, JToken? arrayToken, List<Level> levels, List<LoadCase> cases, List<Combination> combos)
+        private List<DriftCheckSpec> ReadDriftChecks(IReadOnlyList<JsonMap> items, JsonNode? arrayToken, List<Level> levels, List<LoadCase> cases, List<Combination> combos)
         {
             var list = new List<DriftCheckSpec>();
             if (items.Count == 0) return list;
@@ -243,11 +242,11 @@ public static partial class ModelReader
                 const string casesFix = "write \"cases\": [\"<load case or combination id>\", ...] (the cases whose elastic drift is amplified, usually the earthquake ones)";
                 var ct = f.Token("cases");
                 if (ct is null) sink.Add(o, "missing required key 'cases'", casesFix);
-                else if (ct is not JArray ca || ca.Count == 0) sink.Add(ct, "'cases' must be a non-empty array of ids", casesFix);
+                else if (ct is not JsonList ca || ca.Count == 0) sink.Add(ct, "'cases' must be a non-empty array of ids", casesFix);
                 else
                     foreach (var cv in ca)
                     {
-                        if (cv.Type != JTokenType.String) { sink.Add(cv, $"each entry of 'cases' must be an id string, found {JsonFields.Describe(cv)}", casesFix); continue; }
+                        if (cv.Type != JsonKind.String) { sink.Add(cv, $"each entry of 'cases' must be an id string, found {JsonFields.Describe(cv)}", casesFix); continue; }
                         var cid = (string)cv!;
                         if (!ids.Contains(cid)) sink.Add(cv, $"unknown load case or combination \"{cid}\"", $"use one of: {string.Join(", ", ids.Select(i => $"\"{i}\""))}{Suggest(cid, ids)}");
                         else if (chosen.Contains(cid)) sink.Add(cv, $"\"{cid}\" is listed twice", "list each case once");

@@ -1,5 +1,3 @@
-using Newtonsoft.Json;
-using Newtonsoft.Json.Linq;
 using PlaneLateral.Units;
 
 namespace PlaneLateral.Model;
@@ -15,9 +13,9 @@ public static partial class ModelReader
     /// check built from its own dimensions): such a model needs no frame, so nodes, members, supports and sections may be
     /// left out (docs/comparisons.md).
     /// </summary>
-    private static bool ComparisonsOnly(JObject root) =>
-        root.TryGetValue("comparisons", out var t) && t is JArray { Count: > 0 } a
-        && a.All(c => c is JObject o && o.TryGetValue("kind", out var k) && k.Type == JTokenType.String && SelfContainedKinds.Contains((string)k!))
+    private static bool ComparisonsOnly(JsonMap root) =>
+        root.TryGetValue("comparisons", out var t) && t is JsonList { Count: > 0 } a
+        && a.All(c => c is JsonMap o && o.TryGetValue("kind", out var k) && k.Type == JsonKind.String && SelfContainedKinds.Contains((string)k!))
         && !root.ContainsKey("nodes") && !root.ContainsKey("members");
 
     private sealed partial class Builder
@@ -26,48 +24,48 @@ public static partial class ModelReader
 
         private static readonly string[] CheckKinds = ["wall-line", "perforated-wall", "frame-stories", "shear-split", "coupled-wall", "panel-wall", "footing-wall"];
 
-        private CheckLocation Where(JToken t)
+        private CheckLocation Where(JsonNode t)
         {
             int line = 0, col = 0;
-            if (t is IJsonLineInfo li && li.HasLineInfo()) { line = li.LineNumber; col = li.LinePosition; }
+            line = t.Line; col = t.Column;
             return new CheckLocation(fileName, line, col, DiagnosticSink.PathOf(t));
         }
 
         /// <summary>An array of strings; each entry returned with its token for messages.</summary>
-        private List<(string Value, JToken At)> Strings(JsonFields f, string key, bool required, string fix)
+        private List<(string Value, JsonNode At)> Strings(JsonFields f, string key, bool required, string fix)
         {
-            var list = new List<(string, JToken)>();
+            var list = new List<(string, JsonNode)>();
             var t = f.Token(key);
             if (t is null) { if (required) sink.Add(f.Object, $"missing required key '{key}'", fix); return list; }
-            if (t is not JArray arr) { sink.Add(t, $"'{key}' must be an array, found {JsonFields.Describe(t)}", fix); return list; }
+            if (t is not JsonList arr) { sink.Add(t, $"'{key}' must be an array, found {JsonFields.Describe(t)}", fix); return list; }
             foreach (var item in arr)
             {
-                if (item.Type == JTokenType.String && !string.IsNullOrWhiteSpace((string)item!)) list.Add(((string)item!, item));
+                if (item.Type == JsonKind.String && !string.IsNullOrWhiteSpace((string)item!)) list.Add(((string)item!, item));
                 else sink.Add(item, $"each entry of '{key}' must be a non-empty string, found {JsonFields.Describe(item)}", fix);
             }
             if (arr.Count == 0 && required) sink.Add(arr, $"'{key}' is empty", fix);
             return list;
         }
 
-        private List<(double Value, JToken At)> Numbers(JsonFields f, string key, string fix)
+        private List<(double Value, JsonNode At)> Numbers(JsonFields f, string key, string fix)
         {
-            var list = new List<(double, JToken)>();
+            var list = new List<(double, JsonNode)>();
             var t = f.Token(key);
             if (t is null) return list;
-            if (t is not JArray arr) { sink.Add(t, $"'{key}' must be an array of numbers, found {JsonFields.Describe(t)}", fix); return list; }
+            if (t is not JsonList arr) { sink.Add(t, $"'{key}' must be an array of numbers, found {JsonFields.Describe(t)}", fix); return list; }
             foreach (var item in arr)
             {
-                if (item.Type is JTokenType.Integer or JTokenType.Float && double.IsFinite((double)item)) list.Add(((double)item, item));
+                if (item.Type is JsonKind.Integer or JsonKind.Float && double.IsFinite((double)item)) list.Add(((double)item, item));
                 else sink.Add(item, $"each entry of '{key}' must be a finite number, found {JsonFields.Describe(item)}", fix);
             }
             return list;
         }
 
-        private List<ComparisonCheck> ReadComparisons(IReadOnlyList<JObject> items, List<Member> members, List<Support> supports, List<LoadCase> cases)
+        private List<ComparisonCheck> ReadComparisons(IReadOnlyList<JsonMap> items, List<Member> members, List<Support> supports, List<LoadCase> cases)
         {
             var list = new List<ComparisonCheck>();
             var seen = new HashSet<string>(StringComparer.Ordinal);
-            var splits = new List<(ShearSplitCheck Check, List<JToken> LineTokens)>();
+            var splits = new List<(ShearSplitCheck Check, List<JsonNode> LineTokens)>();
             foreach (var o in items)
             {
                 var f = new JsonFields(o, sink);
@@ -131,9 +129,9 @@ public static partial class ModelReader
             return null;
         }
 
-        private List<(int Member, JToken At)> MemberRefs(JsonFields f, string key, string what)
+        private List<(int Member, JsonNode At)> MemberRefs(JsonFields f, string key, string what)
         {
-            var refs = new List<(int, JToken)>();
+            var refs = new List<(int, JsonNode)>();
             foreach (var (mid, tok) in Strings(f, key, true, $"list the ids of the {what} as strings, e.g. \"{key}\": [\"M1\", \"M2\"]"))
             {
                 if (_members.TryGetValue(mid, out int m)) refs.Add((m, tok));
@@ -155,7 +153,7 @@ public static partial class ModelReader
                 else ends.Add(ce);
             }
             if (!f.Has("ends")) ends.AddRange([CheckEnds.Cantilever, CheckEnds.FixedFixed]);
-            else if (f.Token("ends") is JArray { Count: 0 } noEnds) sink.Add(noEnds, "'ends' is empty, so the check would report nothing", efix);
+            else if (f.Token("ends") is JsonList { Count: 0 } noEnds) sink.Add(noEnds, "'ends' is empty, so the check would report nothing", efix);
             if (id is null || refs.Count == 0) return null;
 
             var nodes = _nodesList!;
@@ -224,7 +222,7 @@ public static partial class ModelReader
             var ends = endsText switch { "cantilever" => CheckEnds.Cantilever, "fixed-fixed" => CheckEnds.FixedFixed, _ => (CheckEnds)(-1) };
             if ((int)ends < 0) sink.Add(f.Token("ends"), $"unknown end condition \"{endsText}\"", efix);
 
-            var openings = new List<(OpeningSpec Spec, JObject At)>();
+            var openings = new List<(OpeningSpec Spec, JsonMap At)>();
             int n = 0;
             foreach (var oo in f.Objects("openings", false, "write \"openings\": [ {\"label\": \"door\", \"x\": ..., \"y\": 0, \"width\": ..., \"height\": ...} ]"))
             {
@@ -285,7 +283,7 @@ public static partial class ModelReader
         private FrameStoriesCheck? ReadFrameStories(JsonFields f, string? id, string desc, double? tol, CheckLocation at, List<Member> members, List<Support> supports)
         {
             var refs = MemberRefs(f, "members", "frame's columns and beams");
-            var storyList = new List<(double, JToken)>();
+            var storyList = new List<(double, JsonNode)>();
             const string sfix = "give \"stories\": [1, 2, ...], story numbers counted from the base (1 = ground story); leave it out to check every story";
             storyList = Numbers(f, "stories", sfix);
             string fu = _units.ForceSymbol;
@@ -296,8 +294,8 @@ public static partial class ModelReader
             var nodes = _nodesList!;
             bool ok = true;
             var seenMembers = new HashSet<int>();
-            var columns = new List<(Member M, JToken At)>();
-            var beams = new List<(Member M, JToken At)>();
+            var columns = new List<(Member M, JsonNode At)>();
+            var beams = new List<(Member M, JsonNode At)>();
             foreach (var (m, tok) in refs)
             {
                 var mem = members[m];
@@ -400,7 +398,7 @@ public static partial class ModelReader
                 else storyNumbers.Add((int)v);
             }
             if (!f.Has("stories")) storyNumbers.AddRange(Enumerable.Range(1, stories));
-            else if (f.Token("stories") is JArray { Count: 0 } noStories) { sink.Add(noStories, "'stories' is empty, so the check would report nothing", sfix); ok = false; }
+            else if (f.Token("stories") is JsonList { Count: 0 } noStories) { sink.Add(noStories, "'stories' is empty, so the check would report nothing", sfix); ok = false; }
             var forces = new List<double>();
             if (f.Has("pattern"))
             {
@@ -414,7 +412,7 @@ public static partial class ModelReader
             return new FrameStoriesCheck(id, desc, tol, at, frameMembers.Select(c => c.M.Index).ToArray(), levels, storyNumbers.Order().ToArray(), forces);
         }
 
-        private ShearSplitCheck? ReadShearSplit(JsonFields f, string? id, string desc, double? tol, CheckLocation at, List<(ShearSplitCheck, List<JToken>)> splits)
+        private ShearSplitCheck? ReadShearSplit(JsonFields f, string? id, string desc, double? tol, CheckLocation at, List<(ShearSplitCheck, List<JsonNode>)> splits)
         {
             var caseId = f.RequiredString("loadCase", "give the id of the load case whose story shears are split");
             int ci = -1;
@@ -425,7 +423,7 @@ public static partial class ModelReader
             }
             const string lfix = "write \"lines\": [ {\"label\": \"wall grid 1\", \"check\": \"<wall-line check id>\"}, {\"label\": \"frame grid 3\", \"check\": \"<frame-stories check id>\"} ]";
             var lines = new List<SplitLine>();
-            var tokens = new List<JToken>();
+            var tokens = new List<JsonNode>();
             var lineObjects = f.Objects("lines", true, lfix);
             foreach (var lo in lineObjects)
             {
@@ -438,7 +436,7 @@ public static partial class ModelReader
                 lines.Add(new SplitLine(label ?? cid, cid));
                 tokens.Add(lf.Token("check")!);
             }
-            if (f.Token("lines") is JArray && lineObjects.Count < 2) sink.Add(f.Token("lines"), "a shear split needs at least two lines", lfix);
+            if (f.Token("lines") is JsonList && lineObjects.Count < 2) sink.Add(f.Token("lines"), "a shear split needs at least two lines", lfix);
             if (id is null || ci < 0 || lines.Count < 2) return null;
             var check = new ShearSplitCheck(id, desc, tol, at, ci, lines);
             splits.Add((check, tokens));

@@ -1,4 +1,3 @@
-using Newtonsoft.Json.Linq;
 using PlaneLateral.Units;
 
 namespace PlaneLateral.Model;
@@ -55,7 +54,7 @@ public static partial class ModelReader
             string len = _units.LengthSymbol;
             const string pfix = "give \"piers\": [ {\"x\": 0, \"length\": ...}, {\"x\": ..., \"length\": ...} ], at least two, x = the pier's left edge from the wall's left end";
             var pierObjects = f.Objects("piers", true, pfix);
-            var piers = new List<(CoupledPierSpec Spec, JObject At)>();
+            var piers = new List<(CoupledPierSpec Spec, JsonMap At)>();
             int n = 0;
             foreach (var po in pierObjects)
             {
@@ -67,7 +66,7 @@ public static partial class ModelReader
                 pf.RejectUnknownKeys();
                 if (double.IsFinite(x) && l > 0) piers.Add((new CoupledPierSpec(label, x, l), po));
             }
-            if (f.Token("piers") is JArray pa && pa.Count < 2)
+            if (f.Token("piers") is JsonList pa && pa.Count < 2)
                 sink.Add(pa, $"a coupled wall needs at least two piers; found {pa.Count}", pfix);
 
             const string sfix = "give \"stories\" as a whole number ≥ 1 (one coupling beam at each floor and the roof)";

@@ -1,4 +1,3 @@
-using Newtonsoft.Json.Linq;
 using PlaneLateral.Units;
 
 namespace PlaneLateral.Model;
@@ -123,7 +122,7 @@ public static partial class ModelReader
             var seen = new HashSet<string>(StringComparer.Ordinal);
             foreach (var ft in footings.Where(x => x.Panel is not null))
             {
-                var at = ft.At as JObject;
+                var at = ft.At as JsonMap;
                 var panel = panels.FirstOrDefault(p => p.Id == ft.Panel);
                 if (panel is null) { sink.Add(at?["panel"] ?? at, $"no wall panel \"{ft.Panel}\" for footing \"{ft.Id}\" to stand under", $"give the id of one of the panels ({string.Join(", ", panels.Select(p => $"\"{p.Id}\""))})"); continue; }
                 if (!seen.Add(panel.Id)) sink.Add(at, $"a second footing under panel \"{panel.Id}\"", "give each panel at most one footing");
@@ -190,11 +189,11 @@ public static partial class ModelReader
             const string fix = "give \"springs\": [\"x\", \"y\", \"rz\"] (any of them; the default is all three): the directions the footing's springs replace the support's restraint";
             var t = f.Token("springs");
             if (t is null) return [Dof.X, Dof.Y, Dof.RZ];
-            if (t is not JArray a || a.Count == 0) { sink.Add(t, "'springs' must be a non-empty array of directions", fix); return null; }
+            if (t is not JsonList a || a.Count == 0) { sink.Add(t, "'springs' must be a non-empty array of directions", fix); return null; }
             var list = new List<Dof>();
             foreach (var item in a)
             {
-                Dof? d = item.Type == JTokenType.String ? (string?)item switch { "x" => Dof.X, "y" => Dof.Y, "rz" => Dof.RZ, _ => null } : null;
+                Dof? d = item.Type == JsonKind.String ? (string?)item switch { "x" => Dof.X, "y" => Dof.Y, "rz" => Dof.RZ, _ => null } : null;
                 if (d is null) { sink.Add(item, $"unknown direction {JsonFields.Describe(item)} in 'springs'", fix); return null; }
                 if (list.Contains(d.Value)) { sink.Add(item, $"direction \"{DirectionKey(d.Value)}\" is listed twice in 'springs'", fix); return null; }
                 list.Add(d.Value);

@@ -1,4 +1,3 @@
-using Newtonsoft.Json.Linq;
 using PlaneLateral.Units;
 
 namespace PlaneLateral.Model;
@@ -10,7 +9,7 @@ public static partial class ModelReader
     private sealed partial class Builder
     {
         /// <summary>Every link read, with its panel and its JSON object (for the checks that need the supports).</summary>
-        private readonly List<(string Panel, PanelLink Link, JObject At)> _panelLinks = [];
+        private readonly List<(string Panel, PanelLink Link, JsonMap At)> _panelLinks = [];
 
         /// <summary>Reads a panel's "links" (before the panel's unknown-key check).</summary>
         private List<PanelLink> ReadPanelLinks(JsonFields panel, string? panelId, double length, double height)
@@ -74,7 +73,7 @@ public static partial class ModelReader
         /// may not share a node with a floor tie, another link of the panel or its held base, and a frame node is
         /// linked to a panel once.
         /// </summary>
-        private void CheckPanelLinks(WallPanel panel, JObject panelObject)
+        private void CheckPanelLinks(WallPanel panel, JsonMap panelObject)
         {
             if (panel.Links.Count == 0) return;
             var plan = PanelLayout.Plan(panel);

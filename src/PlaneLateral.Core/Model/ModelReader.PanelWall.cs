@@ -1,4 +1,3 @@
-using Newtonsoft.Json.Linq;
 using PlaneLateral.Units;
 
 namespace PlaneLateral.Model;
@@ -10,7 +9,7 @@ public static partial class ModelReader
     private sealed partial class Builder
     {
         /// <summary>Panel-wall checks read with the token of their "panel" key; resolved once the panels are read.</summary>
-        private readonly List<(PanelWallCheck Check, JToken At)> _panelWalls = [];
+        private readonly List<(PanelWallCheck Check, JsonNode At)> _panelWalls = [];
 
         private PanelWallCheck? ReadPanelWall(JsonFields f, string? id, string desc, double? tol, CheckLocation at)
         {
@@ -28,12 +27,12 @@ public static partial class ModelReader
         /// method's end piers) is already required of every panel (PanelLayout). The panel's story forces are not used:
         /// the check measures stiffness.
         /// </summary>
-        private void CheckPanelWalls(JObject root, List<WallPanel> panels)
+        private void CheckPanelWalls(JsonMap root, List<WallPanel> panels)
         {
             if (_panelWalls.Count == 0) return;
             // Ids of panels written in the file, read or not: a panel that failed to read is reported already.
-            var written = root["panels"] is JArray arr
-                ? arr.OfType<JObject>().Select(o => o["id"]).Where(t => t?.Type == JTokenType.String).Select(t => (string)t!).ToHashSet(StringComparer.Ordinal)
+            var written = root["panels"] is JsonList arr
+                ? arr.OfType<JsonMap>().Select(o => o["id"]).Where(t => t?.Type == JsonKind.String).Select(t => (string)t!).ToHashSet(StringComparer.Ordinal)
                 : [];
             foreach (var (c, tok) in _panelWalls)
             {

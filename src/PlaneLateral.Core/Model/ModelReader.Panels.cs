@@ -1,4 +1,3 @@
-using Newtonsoft.Json.Linq;
 using PlaneLateral.Units;
 
 namespace PlaneLateral.Model;
@@ -9,9 +8,9 @@ public static partial class ModelReader
     private sealed partial class Builder
     {
         /// <summary>True when the file has a "panels" array: then nodes, members and supports may be absent.</summary>
-        private static bool HasPanels(JObject root) => root.TryGetValue("panels", out var t) && t is JArray { Count: > 0 };
+        private static bool HasPanels(JsonMap root) => root.TryGetValue("panels", out var t) && t is JsonList { Count: > 0 };
 
-        private List<WallPanel> ReadPanels(IReadOnlyList<JObject> items, List<Material> materials)
+        private List<WallPanel> ReadPanels(IReadOnlyList<JsonMap> items, List<Material> materials)
         {
             var list = new List<WallPanel>();
             var seen = new HashSet<string>(StringComparer.Ordinal);
@@ -47,10 +46,10 @@ public static partial class ModelReader
                 var levels = new List<double>();
                 if (f.Token("floorLevels") is { } lt)
                 {
-                    if (lt is JArray la)
+                    if (lt is JsonList la)
                         foreach (var v in la)
                         {
-                            if (v.Type is JTokenType.Integer or JTokenType.Float) levels.Add(SI((double)v, Quantity.Length));
+                            if (v.Type is JsonKind.Integer or JsonKind.Float) levels.Add(SI((double)v, Quantity.Length));
                             else sink.Add(v, $"a floor level must be a number, found {JsonFields.Describe(v)}", $"give heights above the panel base in {lu}");
                         }
                     else sink.Add(lt, $"'floorLevels' must be an array of heights, found {JsonFields.Describe(lt)}", $"write \"floorLevels\": [<height>, ...] in {lu}, above the base");
@@ -74,8 +73,8 @@ public static partial class ModelReader
                     }
                     double level = height;
                     var lv = lf.Token("level");
-                    if (lv is { Type: JTokenType.String } && (string)lv! == "top") level = height;
-                    else if (lv is { Type: JTokenType.Integer or JTokenType.Float })
+                    if (lv is { Type: JsonKind.String } && (string)lv! == "top") level = height;
+                    else if (lv is { Type: JsonKind.Integer or JsonKind.Float })
                     {
                         level = SI((double)lv, Quantity.Length);
                         if (!(Math.Abs(level - height) <= 1e-9 * height || levels.Any(l => Math.Abs(l - level) <= 1e-9 * height)))
@@ -110,14 +109,14 @@ public static partial class ModelReader
                     && levels.All(double.IsFinite);
                 if (!geometryRead) continue;
                 foreach (var q in PanelLayout.Check(panel, _units))   // lengths in the model's units
-                    sink.Add(o.SelectToken(q.Key) ?? o, $"panel \"{id}\": {q.Problem}", q.Fix);
+                    sink.Add(o.SelectPath(q.Key) ?? o, $"panel \"{id}\": {q.Problem}", q.Fix);
                 CheckPanelLinks(panel, o);
                 list.Add(panel);
             }
             return list;
         }
 
-        private PanelMeshSettings? ReadPanelMesh(JObject? o)
+        private PanelMeshSettings? ReadPanelMesh(JsonMap? o)
         {
             if (o is null) return PanelMeshSettings.Default;
             var f = new JsonFields(o, sink);

@@ -1,5 +1,4 @@
 using Newtonsoft.Json;
-using Newtonsoft.Json.Linq;
 using PlaneLateral.Units;
 
 namespace PlaneLateral.Model;
@@ -59,11 +58,11 @@ public static partial class ModelReader
         return plan with { Inputs = [source.Input, .. plan.Inputs] };
     }
 
-    private static BuildingPlan ParsePlanTree(JToken root, string fileName)
+    private static BuildingPlan ParsePlanTree(JsonNode root, string fileName)
     {
         SuggestBudget.Reset();
         var sink = new DiagnosticSink(fileName);
-        if (root is not JObject obj)
+        if (root is not JsonMap obj)
         {
             sink.Add(root, "a building file must be a JSON object {...}", "wrap the building in { } with \"formatVersion\", \"materials\" and \"plan\"");
             throw new ModelInputException(sink.Items);
@@ -113,7 +112,7 @@ public static partial class ModelReader
 
         public IReadOnlyList<Plausibility.PlanLineSource> LineSources => _lineSources;
 
-        public BuildingPlan? BuildPlan(JObject root)
+        public BuildingPlan? BuildPlan(JsonMap root)
         {
             var f = new JsonFields(root, sink);
             f.OptionalString("$schema", "give \"$schema\" as the path or address of the schema file, a string");
@@ -169,9 +168,9 @@ public static partial class ModelReader
             };
         }
 
-        private PlanPoint? ReadPoint(JToken t, string what)
+        private PlanPoint? ReadPoint(JsonNode t, string what)
         {
-            if (t is JArray { Count: 2 } a && a.All(v => v.Type is JTokenType.Integer or JTokenType.Float))
+            if (t is JsonList { Count: 2 } a && a.All(v => v.Type is JsonKind.Integer or JsonKind.Float))
             {
                 double x = (double)a[0], y = (double)a[1];
                 if (double.IsFinite(x) && double.IsFinite(y) && Math.Abs(x) <= JsonFields.MaxMagnitude && Math.Abs(y) <= JsonFields.MaxMagnitude)
@@ -181,10 +180,10 @@ public static partial class ModelReader
             return null;
         }
 
-        private List<PlanPoint>? ReadOutline(JToken t)
+        private List<PlanPoint>? ReadOutline(JsonNode t)
         {
             const string fix = "give the outline as [[x, y], [x, y], [x, y], ...]: at least three corners in order around the floor";
-            if (t is not JArray a || a.Count < 3) { sink.Add(t, "'outline' must be an array of at least three points", fix); return null; }
+            if (t is not JsonList a || a.Count < 3) { sink.Add(t, "'outline' must be an array of at least three points", fix); return null; }
             var pts = new List<PlanPoint>();
             foreach (var v in a) if (ReadPoint(v, "an outline corner") is { } q) pts.Add(q);
             if (pts.Count != a.Count) return null;
@@ -197,7 +196,7 @@ public static partial class ModelReader
         {
             var items = pf.Objects("levels", true, "add \"levels\": [{\"id\": \"base\", \"elevation\": 0}, {\"id\": \"roof\", \"elevation\": ..., \"weight\": ...}]");
             var seen = new HashSet<string>(StringComparer.Ordinal);
-            var raw = new List<(string Id, string Name, double Elevation, double Weight, PlanPoint? Mass, List<PlanPoint>? Outline, double Polar, JObject At)>();
+            var raw = new List<(string Id, string Name, double Elevation, double Weight, PlanPoint? Mass, List<PlanPoint>? Outline, double Polar, JsonMap At)>();
             foreach (var o in items)
             {
                 var f = new JsonFields(o, sink);
@@ -262,7 +261,7 @@ public static partial class ModelReader
                 if (forms.Count != 1)
                     sink.Add(o, forms.Count == 0 ? "the line has no structure" : $"the line has {string.Join(" and ", forms)}; give one",
                         "give exactly one of \"model\" (a planar model, inline or a file name), \"wall\" or \"storyStiffness\"");
-                var loc = new CheckLocation(fileName, ((IJsonLineInfo)o).LineNumber, ((IJsonLineInfo)o).LinePosition, DiagnosticSink.PathOf(o));
+                var loc = new CheckLocation(fileName, o.Line, o.Column, DiagnosticSink.PathOf(o));
                 if (id is null || at is null || !double.IsFinite(angle) || forms.Count != 1) { f.RejectUnknownKeys(); continue; }
                 string lid = id;
                 var units = _units;
@@ -281,13 +280,13 @@ public static partial class ModelReader
                         break;
                     default:
                         var mt = f.Token("model")!;
-                        if (mt.Type == JTokenType.String)
+                        if (mt.Type == JsonKind.String)
                         {
                             form = PlanLineForm.File;
                             model = ReadLineFile(mt, (string)mt!, out source, out var lineRoot);
                             if (model is not null && lineRoot is not null) _lineSources.Add(new(lid, model, lineRoot, source));
                         }
-                        else if (mt is JObject mo)
+                        else if (mt is JsonMap mo)
                         {
                             model = ModelLimits.CheckCounts(mo, sink) ? null : new Builder(sink, fileName) { _partOfBuilding = true }.Build(mo);
                             if (model is not null) _lineSources.Add(new(lid, model, mo, fileName));
@@ -342,18 +341,18 @@ public static partial class ModelReader
             var t = f.Token("direction");
             const string fix = "give \"direction\": \"x\", \"y\" or an angle in degrees from plan X towards plan Y (e.g. 45)";
             if (t is null) { sink.Add(f.Object, "missing required key 'direction'", fix); return double.NaN; }
-            if (t.Type == JTokenType.String)
+            if (t.Type == JsonKind.String)
                 return (string)t! switch { "x" => 0, "y" => Math.PI / 2, _ => Bad() };
-            if (t.Type is JTokenType.Integer or JTokenType.Float)
+            if (t.Type is JsonKind.Integer or JsonKind.Float)
             {
                 double deg = (double)t;
                 if (double.IsFinite(deg) && Math.Abs(deg) <= 360) return deg * Math.PI / 180;
             }
             return Bad();
-            double Bad() { sink.Add(t, $"unknown direction {t.ToString(Formatting.None)}", fix); return double.NaN; }
+            double Bad() { sink.Add(t, $"unknown direction {t.ToCompactJson()}", fix); return double.NaN; }
         }
 
-        private StructureModel? ReadWall(JObject? o, string id, double[] elevations, PlanPoint at, double angle, List<PlanLevel> levels)
+        private StructureModel? ReadWall(JsonMap? o, string id, double[] elevations, PlanPoint at, double angle, List<PlanLevel> levels)
         {
             if (o is null) return null;
             var f = new JsonFields(o, sink);
@@ -374,7 +373,7 @@ public static partial class ModelReader
                 sink.Add(f.Token("openings"), "a wall with openings cannot be one member per story", "write \"as\": \"panel\" (a plane-stress panel with its openings), or remove \"openings\"");
             if (!panel && f.Has("mesh") && asWord == "members")
                 sink.Add(f.Token("mesh"), "'mesh' belongs to the panel form, but the wall is members", "write \"as\": \"panel\", or remove \"mesh\"");
-            List<(PanelOpening Opening, JToken At)>? openings = panel ? ReadWallOpenings(f, elevations, length) : [];
+            List<(PanelOpening Opening, JsonNode At)>? openings = panel ? ReadWallOpenings(f, elevations, length) : [];
             var mesh = panel ? ReadPanelMesh(f.OptionalObject("mesh", "write \"mesh\": {\"element\": \"quad9\", \"elementsAcrossNarrowest\": 2}")) : null;
             f.RejectUnknownKeys();
             Material? material = null;
@@ -395,7 +394,7 @@ public static partial class ModelReader
             // at the compact wall's key that causes it: an opening's problem at that opening, a mesh problem at "mesh".
             foreach (var q in PanelLayout.Check(model.Panels[0], _units))   // lengths in the building file's units
             {
-                JToken where = o;
+                JsonNode where = o;
                 if (q.Key.StartsWith("openings[", StringComparison.Ordinal) && int.TryParse(q.Key[9..q.Key.IndexOf(']')], out int k) && k < openings.Count) where = openings[k].At;
                 else if (q.Key.StartsWith("mesh", StringComparison.Ordinal)) where = f.Token("mesh") ?? o;
                 sink.Add(where, $"wall \"{id}\" as a panel: {q.Problem}", q.Fix);
@@ -409,11 +408,11 @@ public static partial class ModelReader
         /// file's units, at the opening's keys: inside the wall's length with solid wall at both ends, below the top,
         /// within its story (not crossing a floor level). Null when one could not be read.
         /// </summary>
-        private List<(PanelOpening Opening, JToken At)>? ReadWallOpenings(JsonFields f, double[] elevations, double length)
+        private List<(PanelOpening Opening, JsonNode At)>? ReadWallOpenings(JsonFields f, double[] elevations, double length)
         {
             string lu = _units.LengthSymbol;
             string L(double si) => _units.FromSI(si, Quantity.Length).ToString("0.###", System.Globalization.CultureInfo.InvariantCulture) + " " + lu;
-            var list = new List<(PanelOpening, JToken)>();
+            var list = new List<(PanelOpening, JsonNode)>();
             bool ok = true;
             var ids = new HashSet<string>(StringComparer.Ordinal);
             int n = elevations.Length - 1;
@@ -432,13 +431,13 @@ public static partial class ModelReader
                 var stories = new List<int>();
                 if (g.Token("stories") is { } st)
                 {
-                    if (st is JArray sa && sa.Count > 0)
+                    if (st is JsonList sa && sa.Count > 0)
                         foreach (var v in sa)
                         {
-                            if (v.Type == JTokenType.Integer && (long)v >= 1 && (long)v <= n) stories.Add((int)(long)v);
-                            else { ok = false; sink.Add(v, $"story {v.ToString(Formatting.None)} is not a story of the building (1 to {n})", $"list story numbers from 1 (the lowest) to {n}"); }
+                            if (v.Type == JsonKind.Integer && (long)v >= 1 && (long)v <= n) stories.Add((int)(long)v);
+                            else { ok = false; sink.Add(v, $"story {v.ToCompactJson()} is not a story of the building (1 to {n})", $"list story numbers from 1 (the lowest) to {n}"); }
                         }
-                    else if (st.Type == JTokenType.String && (string)st! == "all") stories.AddRange(Enumerable.Range(1, n));
+                    else if (st.Type == JsonKind.String && (string)st! == "all") stories.AddRange(Enumerable.Range(1, n));
                     else { ok = false; sink.Add(st, $"'stories' must be a list of story numbers or \"all\", found {JsonFields.Describe(st)}", $"write \"stories\": [1, 2] (1 = the lowest) or \"all\""); }
                 }
                 g.RejectUnknownKeys();
@@ -476,21 +475,21 @@ public static partial class ModelReader
             return ok ? list : null;
         }
 
-        private StructureModel? ReadStoryStiffness(JToken t, string id, double[] elevations)
+        private StructureModel? ReadStoryStiffness(JsonNode t, string id, double[] elevations)
         {
             string fix = $"give one stiffness per story ({elevations.Length - 1}), story 1 first, in {_units.Label(Quantity.TranslationalStiffness)}";
-            if (t is not JArray a) { sink.Add(t, "'storyStiffness' must be an array of numbers", fix); return null; }
+            if (t is not JsonList a) { sink.Add(t, "'storyStiffness' must be an array of numbers", fix); return null; }
             if (a.Count != elevations.Length - 1) { sink.Add(t, $"'storyStiffness' has {a.Count} values for {elevations.Length - 1} stories", fix); return null; }
             var k = new List<double>();
             foreach (var v in a)
             {
-                if (v.Type is JTokenType.Integer or JTokenType.Float && (double)v > 0 && (double)v <= JsonFields.MaxMagnitude) k.Add(SI((double)v, Quantity.TranslationalStiffness));
+                if (v.Type is JsonKind.Integer or JsonKind.Float && (double)v > 0 && (double)v <= JsonFields.MaxMagnitude) k.Add(SI((double)v, Quantity.TranslationalStiffness));
                 else sink.Add(v, $"a story stiffness must be a number greater than zero, found {JsonFields.Describe(v)}", fix);
             }
             return k.Count == a.Count ? PlanLineModels.StoryStiffness(id, fileName, elevations, k, _units) : null;
         }
 
-        private StructureModel? ReadLineFile(JToken at, string relative, out string full, out JObject? lineRoot)
+        private StructureModel? ReadLineFile(JsonNode at, string relative, out string full, out JsonMap? lineRoot)
         {
             full = relative;
             lineRoot = null;
@@ -514,7 +513,7 @@ public static partial class ModelReader
                 sink.Add(at, $"the line file \"{relative}\" does not exist (looked for {candidate})", "check the file name; it is read relative to the building file");
                 return null;
             }
-            JToken root;
+            JsonNode root;
             try
             {
                 string text = ModelFile.ReadText(candidate, out var input);   // as every model: regular file, bounded, strict JSON
@@ -527,7 +526,7 @@ public static partial class ModelReader
                 _lineFileProblems.AddRange(e.Diagnostics);
                 return null;
             }
-            if (root is not JObject o) { sink.Add(at, $"the line file \"{relative}\" is not a JSON object", "give a planar model {...} in the file"); return null; }
+            if (root is not JsonMap o) { sink.Add(at, $"the line file \"{relative}\" is not a JSON object", "give a planar model {...} in the file"); return null; }
             var lineSink = new DiagnosticSink(candidate);
             if (ModelLimits.CheckCounts(o, lineSink)) { _lineFileProblems.AddRange(lineSink.Items); return null; }
             var m = new Builder(lineSink, candidate) { _partOfBuilding = true }.Build(o);
@@ -541,7 +540,7 @@ public static partial class ModelReader
         /// hold it, so its base must stand at the building's base and its floor levels and top at the building's levels.
         /// The tie index at each building level above the base, or null (with a diagnostic).
         /// </summary>
-        private int[]? MatchPanelLevels(StructureModel m, List<PlanLevel> levels, JObject at, string id, double tol, out int panel)
+        private int[]? MatchPanelLevels(StructureModel m, List<PlanLevel> levels, JsonMap at, string id, double tol, out int panel)
         {
             panel = -1;
             string want = string.Join(", ", levels.Skip(1).Select(l => _units.FromSI(l.Elevation - levels[0].Elevation, Quantity.Length).ToString("0.###", System.Globalization.CultureInfo.InvariantCulture)));
@@ -571,7 +570,7 @@ public static partial class ModelReader
         }
 
         /// <summary>The line's node at each building level above the base, or null (with a diagnostic) when its levels do not match.</summary>
-        private int[]? MatchLineLevels(StructureModel m, List<PlanLevel> levels, JObject at, string id, double tol)
+        private int[]? MatchLineLevels(StructureModel m, List<PlanLevel> levels, JsonMap at, string id, double tol)
         {
             // A panel without links stands beside the line's frame as a structure of its own (docs/panels.md): the floors
             // could not reach it through the frame's levels, and its stiffness would be silently left out.
@@ -631,10 +630,10 @@ public static partial class ModelReader
                     bool accidental = f.OptionalBool("accidentalTorsion", true, "give true (the default: also the two cases with the centre of mass shifted) or false");
                     var t = f.Token("forces")!;
                     var forces = new List<double>();
-                    if (t is JArray a && a.Count == floors)
+                    if (t is JsonList a && a.Count == floors)
                     {
                         foreach (var v in a)
-                            if (v.Type is JTokenType.Integer or JTokenType.Float && double.IsFinite((double)v) && Math.Abs((double)v) <= JsonFields.MaxMagnitude) forces.Add(SI((double)v, Quantity.Force));
+                            if (v.Type is JsonKind.Integer or JsonKind.Float && double.IsFinite((double)v) && Math.Abs((double)v) <= JsonFields.MaxMagnitude) forces.Add(SI((double)v, Quantity.Force));
                             else sink.Add(v, $"a floor force must be a number, found {JsonFields.Describe(v)}", $"give the force in {_units.ForceSymbol}");
                     }
                     else sink.Add(t, $"'forces' must be an array of {floors} numbers (one per floor, lowest first)", $"give one force per level above the base, in {_units.ForceSymbol}");

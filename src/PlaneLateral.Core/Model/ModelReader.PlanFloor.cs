@@ -1,5 +1,3 @@
-using Newtonsoft.Json;
-using Newtonsoft.Json.Linq;
 using PlaneLateral.Units;
 
 namespace PlaneLateral.Model;
@@ -10,7 +8,7 @@ public static partial class ModelReader
     private sealed partial class Builder
     {
         /// <summary>The "floor" blocks of the building's levels, by level id, in file order.</summary>
-        private readonly List<(string Level, JObject Block)> _floorBlocks = [];
+        private readonly List<(string Level, JsonMap Block)> _floorBlocks = [];
 
         private List<PlanFloor> ReadFloors(List<PlanLevel> levels, List<PlanLine> lines)
         {
@@ -59,7 +57,7 @@ public static partial class ModelReader
                 f.RejectUnknownKeys();
                 if (li == 0) sink.Add(o, $"level \"{levelId}\" is the base, which carries no floor", "give \"floor\" on the levels above the base");
                 if (kind is null || li < 1) continue;
-                var loc = new CheckLocation(fileName, ((IJsonLineInfo)o).LineNumber, ((IJsonLineInfo)o).LinePosition, DiagnosticSink.PathOf(o));
+                var loc = new CheckLocation(fileName, o.Line, o.Column, DiagnosticSink.PathOf(o));
                 var floor = new PlanFloor(li, kind.Value, t, e, g, shear, openings, loc);
                 bool hasSection = double.IsFinite(t) || double.IsFinite(e);
                 if (hasSection && !(double.IsFinite(t) && double.IsFinite(e) && double.IsFinite(g)))
@@ -78,7 +76,7 @@ public static partial class ModelReader
         /// (lines at an angle count for both in the semi-rigid floor; the flexible floor's tributary split needs lines
         /// along X or Y).
         /// </summary>
-        private void CheckFloorLines(JObject o, string levelId, FloorKind kind, List<PlanLine> lines, bool hasSection)
+        private void CheckFloorLines(JsonMap o, string levelId, FloorKind kind, List<PlanLine> lines, bool hasSection)
         {
             if (kind == FloorKind.Flexible && lines.FirstOrDefault(l => l.Cos != 0 && l.Sin != 0) is { } slanted)
                 sink.Add(o, $"line \"{slanted.Id}\" stands at an angle under the flexible floor of level \"{levelId}\"", "a flexible floor shares its load by simple spans between lines along X or Y: turn the line to \"x\" or \"y\", or make the floor rigid or semi-rigid");
@@ -92,7 +90,7 @@ public static partial class ModelReader
         }
 
         /// <summary>Openings lie inside the floor's extent, and the floor stays whole across every cut.</summary>
-        private void CheckOpenings(JObject o, PlanLevel level, List<PlanOpening> openings)
+        private void CheckOpenings(JsonMap o, PlanLevel level, List<PlanOpening> openings)
         {
             if (openings.Count == 0) return;
             var outline = level.Outline;

@@ -1,4 +1,3 @@
-using Newtonsoft.Json.Linq;
 using PlaneLateral.Units;
 
 namespace PlaneLateral.Model;
@@ -35,7 +34,7 @@ public static partial class ModelReader
             if (f.OptionalObject("seismic", SeismicFix) is not { } o) return null;
             var sf = new JsonFields(o, sink);
             var caseToken = sf.Token("loadCase");
-            string? caseId = caseToken is JValue { Type: JTokenType.String } cv ? (string)cv! : null;
+            string? caseId = caseToken is JsonScalar { Type: JsonKind.String } cv ? (string)cv! : null;
             var levels = building.Levels;
             if (levels.Count < 2)
                 sink.Add(o, "the seismic block needs stories, and the model has fewer than two levels", "add \"levels\" with the base (\"diaphragm\": \"none\") and every floor above it");
@@ -66,7 +65,7 @@ public static partial class ModelReader
             if (levels.Count >= 2 && weightItems.Count > 0)
             {
                 for (int i = 1; i < levels.Count; i++)
-                    if (!given.ContainsKey(i) && !weightItems.Any(wo => wo["level"] is JValue { Type: JTokenType.String } v && (string)v! == levels[i].Id))
+                    if (!given.ContainsKey(i) && !weightItems.Any(wo => wo["level"] is JsonScalar { Type: JsonKind.String } v && (string)v! == levels[i].Id))
                         sink.Add(sf.Token("weights"), $"level \"{levels[i].Id}\" (story {i}) has no weight", $"add {{\"level\": \"{levels[i].Id}\", \"weight\": ...}} in {fu} (0 when the level carries none)");
                 if (given.Count == levels.Count - 1 && given.Values.Sum() <= 0)
                     sink.Add(sf.Token("weights"), "every story weight is zero, so there is no mass", "give the seismic weight of each level");

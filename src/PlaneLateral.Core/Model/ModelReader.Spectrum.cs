@@ -1,4 +1,3 @@
-using Newtonsoft.Json.Linq;
 using PlaneLateral.Units;
 
 namespace PlaneLateral.Model;
@@ -10,7 +9,7 @@ public static partial class ModelReader
     private sealed partial class Builder
     {
         /// <summary>The "spectrum" object: S_DS, S_D1, R, I_e, T_L and the optional S_1.</summary>
-        private SpectralValues ReadSpectralValues(JObject spectrumObj)
+        private SpectralValues ReadSpectralValues(JsonMap spectrumObj)
         {
             var pf = new JsonFields(spectrumObj, sink);
             double InRange(string key, double lo, double hi, bool loOpen, string what, double fallback = double.NaN)
@@ -39,7 +38,7 @@ public static partial class ModelReader
             const string periodFix = "give \"period\": \"capped\" (the eigen period, not above Cu·Ta; the default), \"computed\", \"approximate\", or a period in s";
             if (sf.Token("period") is { } pt)
             {
-                if (pt.Type is JTokenType.Integer or JTokenType.Float)
+                if (pt.Type is JsonKind.Integer or JsonKind.Float)
                 {
                     period = PeriodUse.Given;
                     givenPeriod = sf.RequiredNumber("period", periodFix);
@@ -81,12 +80,12 @@ public static partial class ModelReader
             if (f.Token("points") is { } pt)
             {
                 const string fix = "give \"points\": [[T, Sa], ...] with T in s strictly increasing from ≥ 0 and S_a in g ≥ 0";
-                if (pt is not JArray a || a.Count < 2) sink.Add(pt, "'points' must be an array of at least two [T, Sa] pairs", fix);
+                if (pt is not JsonList a || a.Count < 2) sink.Add(pt, "'points' must be an array of at least two [T, Sa] pairs", fix);
                 else
                 {
                     foreach (var p in a)
                     {
-                        if (p is JArray { Count: 2 } q && q.All(v => v.Type is JTokenType.Integer or JTokenType.Float) && double.IsFinite((double)q[0]) && double.IsFinite((double)q[1]))
+                        if (p is JsonList { Count: 2 } q && q.All(v => v.Type is JsonKind.Integer or JsonKind.Float) && double.IsFinite((double)q[0]) && double.IsFinite((double)q[1]))
                         {
                             double t = (double)q[0], sa = (double)q[1];
                             if (t < 0 || sa < 0) { sink.Add(p, $"the spectrum point [{Num(t)}, {Num(sa)}] has a negative value", fix); continue; }

@@ -43,10 +43,10 @@ public static partial class ModelReader
     /// <summary>Validates a planar model read by <see cref="ReadSource"/>; the same result as <see cref="ReadFile"/> on its path.</summary>
     public static StructureModel Read(ModelSource source) => ParseTree(source.Root, source.Path) with { Inputs = [source.Input] };
 
-    private static StructureModel ParseTree(JToken root, string fileName)
+    private static StructureModel ParseTree(JsonNode root, string fileName)
     {
         var sink = new DiagnosticSink(fileName);
-        if (root is not JObject obj)
+        if (root is not JsonMap obj)
         {
             sink.Add(root, $"the model must be a JSON object {{...}}, found {JsonFields.Describe(root)}", "wrap the model in { } with keys such as \"formatVersion\", \"nodes\" and \"members\"");
             throw new ModelInputException(sink.Items);
@@ -65,9 +65,12 @@ public static partial class ModelReader
     /// builder would accept are refused first, StrictJson.cs), no text after the top-level value, no duplicate keys.
     /// </summary>
     /// <exception cref="ModelInputException">The text is too large or not valid JSON, with line, column and path.</exception>
-    internal static JToken ReadTree(string json, string fileName)
+    internal static JsonNode ReadTree(string json, string fileName)
     {
         if (ModelLimits.CheckFileSize(fileName, json.Length) is { } tooLarge) throw new ModelInputException([tooLarge]);
+        // Strict JSON in the common case: checked and built in one pass (JsonTreeReader.cs). Anything else, and every
+        // error, takes the path below, so its messages, lines, columns and paths stay as they were.
+        if (JsonTreeReader.TryRead(json) is { } tree) return tree;
         var strict = StrictJson.Check(json);
         if (strict is { Lenient: true }) throw NotJson(fileName, strict);
         JToken root;
@@ -90,7 +93,7 @@ public static partial class ModelReader
                 "the file is not valid JSON: " + StripLocation(e.Message), "correct the JSON syntax at that place (a missing comma, quote or bracket is the usual cause)")]);
         }
         if (strict is not null) throw NotJson(fileName, strict);
-        return root;
+        return JsonTreeReader.FromReference(root);
     }
 
     private static ModelInputException NotJson(string fileName, StrictJson.Problem p) =>
@@ -107,7 +110,7 @@ public static partial class ModelReader
     {
         private UnitSystem _units = UnitSystem.KipInch;
         private readonly Dictionary<string, Material> _materials = new(StringComparer.Ordinal);
-        private readonly Dictionary<string, (Section Section, JObject At)> _sections = new(StringComparer.Ordinal);
+        private readonly Dictionary<string, (Section Section, JsonMap At)> _sections = new(StringComparer.Ordinal);
         private readonly Dictionary<string, int> _nodes = new(StringComparer.Ordinal);
         private readonly Dictionary<string, int> _members = new(StringComparer.Ordinal);
         private readonly Dictionary<string, int> _cases = new(StringComparer.Ordinal);
@@ -117,7 +120,7 @@ public static partial class ModelReader
 
         private double SI(double v, Quantity q) => _units.ToSI(v, q);
 
-        public StructureModel? Build(JObject root)
+        public StructureModel? Build(JsonMap root)
         {
             var f = new JsonFields(root, sink);
             f.OptionalString("$schema", "give \"$schema\" as the path or address of the schema file, a string");
@@ -138,7 +141,7 @@ public static partial class ModelReader
             var supports = ReadSupports(supportsArr);
             CheckAxiallyRigid(members, supports, nodes);   // ModelReader.AxiallyRigid.cs
             var footings = ReadFootings(f, supports, members, nodes);   // footing springs replace support restraints (ModelReader.Footings.cs)
-            if (f.Token("supports") is JArray { Count: 0 } emptySupports && !hasPanels)
+            if (f.Token("supports") is JsonList { Count: 0 } emptySupports && !hasPanels)
                 sink.Add(emptySupports, "the model has no supports, so it is free to move as a rigid body", "add at least one support, e.g. {\"node\": \"<base node>\", \"type\": \"fixed\"}");
             var cases = ReadLoadCases(f.Objects("loadCases", false, "give \"loadCases\" as an array of objects"), members);
             ReadSeismicCase(f, cases);
@@ -186,8 +189,8 @@ public static partial class ModelReader
             const string fix = "add \"formatVersion\": 1 at the top of the model";
             if (t is null) { sink.Add(f.Object, "missing required key 'formatVersion'", fix); return; }
             // Compared as a JSON value: an integer wider than 64 bits is a BigInteger and must not be cast to long.
-            if (t is not JValue { Value: long v } || v != FormatVersion)
-                sink.Add(t, $"'formatVersion' is {(t.Type is JTokenType.Integer or JTokenType.Float ? JsonFields.NumberText(t) : t.ToString(Formatting.None))}; this version of PlaneLateral reads format version {FormatVersion}", fix);
+            if (t is not JsonScalar { Value: long v } || v != FormatVersion)
+                sink.Add(t, $"'formatVersion' is {(t.Type is JsonKind.Integer or JsonKind.Float ? JsonFields.NumberText(t) : t.ToCompactJson())}; this version of PlaneLateral reads format version {FormatVersion}", fix);
         }
 
         private void ReadUnits(JsonFields f)
@@ -229,7 +232,7 @@ public static partial class ModelReader
             return SI(v, q);
         }
 
-        private List<Material> ReadMaterials(IReadOnlyList<JObject> items)
+        private List<Material> ReadMaterials(IReadOnlyList<JsonMap> items)
         {
             var list = new List<Material>();
             var seen = new HashSet<string>(StringComparer.Ordinal);
@@ -270,7 +273,7 @@ public static partial class ModelReader
             return list;
         }
 
-        private List<Section> ReadSections(IReadOnlyList<JObject> items)
+        private List<Section> ReadSections(IReadOnlyList<JsonMap> items)
         {
             var list = new List<Section>();
             var seen = new HashSet<string>(StringComparer.Ordinal);
@@ -316,8 +319,8 @@ public static partial class ModelReader
             const string fix = "give \"shearFactor\" as a number ≥ 1 (1.2 is the usual value for a rectangle) or the string \"cowper\"";
             if (t is not null)
             {
-                if (t.Type == JTokenType.String && (string)t! == "cowper") rule = ShearAreaRule.CowperRectangle;
-                else if (t.Type is JTokenType.Integer or JTokenType.Float && (double)t >= 1.0 && double.IsFinite((double)t)) factor = (double)t;
+                if (t.Type == JsonKind.String && (string)t! == "cowper") rule = ShearAreaRule.CowperRectangle;
+                else if (t.Type is JsonKind.Integer or JsonKind.Float && (double)t >= 1.0 && double.IsFinite((double)t)) factor = (double)t;
                 else sink.Add(t, $"'shearFactor' must be a number ≥ 1 or \"cowper\", found {JsonFields.Describe(t)}", fix);
             }
             return new Section(id ?? "", "rectangle", b * d, b * d * d * d / 12.0, rule, double.NaN, factor, d);
@@ -351,7 +354,7 @@ public static partial class ModelReader
             return new Section(id ?? "", "general", a, i, ShearAreaRule.Given, asv, double.NaN, depth);
         }
 
-        private List<Node> ReadNodes(IReadOnlyList<JObject> items)
+        private List<Node> ReadNodes(IReadOnlyList<JsonMap> items)
         {
             var list = new List<Node>();
             var seen = new HashSet<string>(StringComparer.Ordinal);
@@ -404,7 +407,7 @@ public static partial class ModelReader
 
         private static string Suggest(string id, IEnumerable<string> known) => SuggestBudget.Suggest(id, known);
 
-        private List<Member> ReadMembers(IReadOnlyList<JObject> items, List<Node> nodes)
+        private List<Member> ReadMembers(IReadOnlyList<JsonMap> items, List<Node> nodes)
         {
             var list = new List<Member>();
             var seen = new HashSet<string>(StringComparer.Ordinal);
@@ -421,7 +424,7 @@ public static partial class ModelReader
                     sink.Add(f.Token("kind"), $"unknown member kind \"{kindText}\"", "use \"beam-column\" (axial, shear and bending; the default) or \"brace\" (axial only)");
 
                 var secId = f.RequiredString("section", "give the id of a section listed under \"sections\"");
-                (Section Section, JObject At) sec = default;
+                (Section Section, JsonMap At) sec = default;
                 if (secId is not null && !_sections.TryGetValue(secId, out sec) && !_unusable.Contains("section:" + secId))
                     sink.Add(f.Token("section"), $"unknown section \"{secId}\"", $"use the id of a section listed under \"sections\"{Suggest(secId, _sections.Keys)}");
                 var mat = ReadMaterialRef(f);
@@ -430,12 +433,12 @@ public static partial class ModelReader
                 if (f.Token("momentReleases") is { } rel)
                 {
                     const string fix = "write \"momentReleases\": [\"start\"], [\"end\"] or [\"start\", \"end\"]";
-                    if (rel is not JArray ra) sink.Add(rel, "'momentReleases' must be an array", fix);
+                    if (rel is not JsonList ra) sink.Add(rel, "'momentReleases' must be an array", fix);
                     else
                         foreach (var r in ra)
                         {
-                            if (r.Type == JTokenType.String && (string)r! == "start") relStart = true;
-                            else if (r.Type == JTokenType.String && (string)r! == "end") relEnd = true;
+                            if (r.Type == JsonKind.String && (string)r! == "start") relStart = true;
+                            else if (r.Type == JsonKind.String && (string)r! == "end") relEnd = true;
                             else sink.Add(r, $"unknown end {JsonFields.Describe(r)} in 'momentReleases'", fix);
                         }
                 }
@@ -457,7 +460,7 @@ public static partial class ModelReader
                     const string fix = "give a stiffness modifier > 0 (1 = as the section gives; e.g. 0.35 for a cracked wall's I)";
                     mods = new StiffnessModifiers(mf.OptionalNumber("I", 1, fix), mf.OptionalNumber("A", 1, fix), mf.OptionalNumber("shearArea", 1, fix));
                     foreach (var k in new[] { "I", "A", "shearArea" })
-                        if (mf.Token(k) is { } mt && mt.Type is JTokenType.Integer or JTokenType.Float && !((double)mt > 0))
+                        if (mf.Token(k) is { } mt && mt.Type is JsonKind.Integer or JsonKind.Float && !((double)mt > 0))
                             sink.Add(mt, $"stiffness modifier '{k}' must be greater than zero, found {mt}", fix);
                     mf.RejectUnknownKeys();
                 }
@@ -492,7 +495,7 @@ public static partial class ModelReader
             return list;
         }
 
-        private List<Support> ReadSupports(IReadOnlyList<JObject> items)
+        private List<Support> ReadSupports(IReadOnlyList<JsonMap> items)
         {
             var list = new List<Support>();
             var seen = new HashSet<int>();
@@ -520,10 +523,10 @@ public static partial class ModelReader
                 {
                     const string fix = "write \"restrain\": [\"x\", \"y\", \"rz\"] (any of them), with \"type\": \"custom\"";
                     if (type != "custom") sink.Add(rt, "'restrain' is only read with \"type\": \"custom\"", fix);
-                    else if (rt is not JArray ra) sink.Add(rt, "'restrain' must be an array", fix);
+                    else if (rt is not JsonList ra) sink.Add(rt, "'restrain' must be an array", fix);
                     else
                         foreach (var d in ra)
-                            switch (d.Type == JTokenType.String ? (string?)d : null)
+                            switch (d.Type == JsonKind.String ? (string?)d : null)
                             {
                                 case "x": rx = true; break;
                                 case "y": ry = true; break;
@@ -556,7 +559,7 @@ public static partial class ModelReader
             return list;
         }
 
-        private List<LoadCase> ReadLoadCases(IReadOnlyList<JObject> items, List<Member> members)
+        private List<LoadCase> ReadLoadCases(IReadOnlyList<JsonMap> items, List<Member> members)
         {
             var list = new List<LoadCase>();
             var seen = new HashSet<string>(StringComparer.Ordinal);
@@ -651,9 +654,9 @@ public static partial class ModelReader
         }
 
         private List<Node>? _nodesList;
-        private readonly List<JObject> _nodeObjects = [];
+        private readonly List<JsonMap> _nodeObjects = [];
 
-        private List<Combination> ReadCombinations(IReadOnlyList<JObject> items, List<LoadCase> cases)
+        private List<Combination> ReadCombinations(IReadOnlyList<JsonMap> items, List<LoadCase> cases)
         {
             var list = new List<Combination>();
             var seen = new HashSet<string>(cases.Select(c => c.Id), StringComparer.Ordinal);
@@ -677,7 +680,7 @@ public static partial class ModelReader
                             sink.Add(p, $"unknown load case \"{p.Name}\"", $"use the id of a load case listed under \"loadCases\"{Suggest(p.Name, _cases.Keys)}");
                             continue;
                         }
-                        if (p.Value.Type is not (JTokenType.Integer or JTokenType.Float) || !double.IsFinite((double)p.Value))
+                        if (p.Value.Type is not (JsonKind.Integer or JsonKind.Float) || !double.IsFinite((double)p.Value))
                         {
                             sink.Add(p.Value, $"the factor on \"{p.Name}\" must be a finite number, found {JsonFields.Describe(p.Value)}", fix);
                             continue;
@@ -692,7 +695,7 @@ public static partial class ModelReader
             return list;
         }
 
-        private List<StiffnessPoint> ReadStiffnessPoints(IReadOnlyList<JObject> items, List<Support> supports)
+        private List<StiffnessPoint> ReadStiffnessPoints(IReadOnlyList<JsonMap> items, List<Support> supports)
         {
             var list = new List<StiffnessPoint>();
             foreach (var o in items)

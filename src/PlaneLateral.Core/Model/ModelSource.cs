@@ -1,4 +1,3 @@
-using Newtonsoft.Json.Linq;
 
 namespace PlaneLateral.Model;
 
@@ -9,7 +8,7 @@ namespace PlaneLateral.Model;
 /// </summary>
 public sealed class ModelSource
 {
-    internal ModelSource(string path, InputFile input, JToken root)
+    internal ModelSource(string path, InputFile input, JsonNode root)
     {
         Path = path;
         Input = input;
@@ -23,8 +22,8 @@ public sealed class ModelSource
     public InputFile Input { get; }
 
     /// <summary>The JSON tree, with line information.</summary>
-    internal JToken Root { get; }
+    internal JsonNode Root { get; }
 
     /// <summary>True for a building in plan: a JSON object with the top-level key <see cref="ModelReader.PlanKey"/> (as <see cref="ModelReader.IsPlanFile"/>).</summary>
-    public bool IsPlan => Root is JObject o && o.ContainsKey(ModelReader.PlanKey);
+    public bool IsPlan => Root is JsonMap o && o.ContainsKey(ModelReader.PlanKey);
 }

@@ -1,4 +1,3 @@
-using Newtonsoft.Json.Linq;
 using PlaneLateral.Units;
 
 namespace PlaneLateral.Model;
@@ -9,9 +8,9 @@ namespace PlaneLateral.Model;
 internal static partial class Plausibility
 {
     /// <summary>A line of a building given as a planar model: its id, the model read, its JSON object and the file it is in.</summary>
-    internal sealed record PlanLineSource(string Id, StructureModel Model, JObject Root, string File);
+    internal sealed record PlanLineSource(string Id, StructureModel Model, JsonMap Root, string File);
 
-    public static IReadOnlyList<ModelWarning> CheckPlan(BuildingPlan plan, JObject root, string file, IReadOnlyList<PlanLineSource> lines)
+    public static IReadOnlyList<ModelWarning> CheckPlan(BuildingPlan plan, JsonMap root, string file, IReadOnlyList<PlanLineSource> lines)
     {
         var shell = new StructureModel
         {
@@ -33,7 +32,7 @@ internal static partial class Plausibility
                 Add(root, "the building file has no \"units\" key, so every number is read in kip and inch (the documented default): E in ksi, lengths in inches",
                     "if the numbers are in other units, add \"units\": {\"force\": \"kip\", \"length\": \"ft\"} (or the units they are in)");
             Materials();
-            var p = root["plan"] as JObject;
+            var p = root["plan"] as JsonMap;
             var levelTokens = Array(p?["levels"]).ToList();
             for (int k = 1; k < plan.Levels.Count; k++)
             {
@@ -46,7 +45,7 @@ internal static partial class Plausibility
                     _u.FromSI(plan.Size, Quantity.Length), Quantity.Length, MinExtent, MaxExtent, "buildings");
             foreach (var line in Array(p?["lines"]))
             {
-                if (line["wall"] is not JObject wall) continue;
+                if (line["wall"] is not JsonMap wall) continue;
                 string id = (string?)line["id"] ?? "?";
                 double? t = Value(wall["thickness"]), len = Value(wall["length"]);
                 if (t is double tv) Range(wall["thickness"], $"thickness of wall line \"{id}\"", tv, Quantity.Length, MinWallThickness, MaxWallThickness, "wall thicknesses");

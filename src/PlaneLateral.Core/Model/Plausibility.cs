@@ -1,7 +1,5 @@
 using System.Globalization;
 using System.Text.RegularExpressions;
-using Newtonsoft.Json;
-using Newtonsoft.Json.Linq;
 using PlaneLateral.Units;
 
 namespace PlaneLateral.Model;
@@ -31,7 +29,7 @@ internal static partial class Plausibility
     internal const double MinWallThickness = 0.025, MaxWallThickness = 3.0;  // panels and wall checks
     internal const double MinLevelWeight = 100.0, MaxLevelWeight = 1e9;      // N: 0.1 kN to 1,000,000 kN per level
 
-    public static IReadOnlyList<ModelWarning> Check(StructureModel m, JObject root, string file) => new Checker(m, root, file).Run();
+    public static IReadOnlyList<ModelWarning> Check(StructureModel m, JsonMap root, string file) => new Checker(m, root, file).Run();
 
     [GeneratedRegex(@"^W([XYL]|\d)*([-_ .].*)?$")] private static partial Regex WindId();
     [GeneratedRegex(@"^(E|EQ|EX|EY|QE)\d*([-_ .].*)?$")] private static partial Regex SeismicId();
@@ -43,11 +41,11 @@ internal static partial class Plausibility
 
     private static bool Has(string s, string w) => s.Contains(w, StringComparison.OrdinalIgnoreCase);
 
-    private sealed partial class Checker(StructureModel m, JObject root, string file)
+    private sealed partial class Checker(StructureModel m, JsonMap root, string file)
     {
         private readonly List<ModelWarning> _items = [];
         private readonly UnitSystem _u = m.Units;
-        private readonly bool _hasUnits = root["units"] is JObject;
+        private readonly bool _hasUnits = root["units"] is JsonMap;
 
         public IReadOnlyList<ModelWarning> Run()
         {
@@ -67,17 +65,17 @@ internal static partial class Plausibility
             return _items;
         }
 
-        private void Add(JToken? at, string problem, string fix)
+        private void Add(JsonNode? at, string problem, string fix)
         {
             int line = 0, col = 0;
-            if (at is IJsonLineInfo li && li.HasLineInfo()) { line = li.LineNumber; col = li.LinePosition; }
+            if (at is not null) { line = at.Line; col = at.Column; }
             _items.Add(new ModelWarning(file, line, col, at is null ? "" : DiagnosticSink.PathOf(at), problem, fix));
         }
 
-        private static IEnumerable<JObject> Array(JToken? t) => t is JArray a ? a.OfType<JObject>() : [];
+        private static IEnumerable<JsonMap> Array(JsonNode? t) => t is JsonList a ? a.OfType<JsonMap>() : [];
 
-        private static double? Value(JToken? t) =>
-            t is { Type: JTokenType.Integer or JTokenType.Float } && double.IsFinite((double)t) ? (double)t : null;
+        private static double? Value(JsonNode? t) =>
+            t is { Type: JsonKind.Integer or JsonKind.Float } && double.IsFinite((double)t) ? (double)t : null;
 
         // ---- values against the ranges -------------------------------------------------------------------------
 
@@ -112,10 +110,10 @@ internal static partial class Plausibility
             if (xs.Count >= 2)
             {
                 double size = Math.Max(xs.Max() - xs.Min(), ys.Max() - ys.Min());
-                var at = root["nodes"] is JArray { Count: > 0 } ? root["nodes"] : root["panels"];
+                var at = root["nodes"] is JsonList { Count: > 0 } ? root["nodes"] : root["panels"];
                 if (size > 0) Range(at, "the structure's largest dimension (width or height)", _u.FromSI(size, Quantity.Length), Quantity.Length, MinExtent, MaxExtent, "buildings");
             }
-            var members = (root["members"] as JArray)?.OfType<JObject>().ToList() ?? [];
+            var members = (root["members"] as JsonList)?.OfType<JsonMap>().ToList() ?? [];
             var longOnes = m.Members.Where(x => Length(x) > MaxMemberLength).ToList();
             if (longOnes.Count > 0 && longOnes[0].Index < members.Count)
             {
@@ -152,7 +150,7 @@ internal static partial class Plausibility
                     below = tops[k];
                     // A panel without floor levels may be several stories tall: only a story too low is judged there.
                     if (p.FloorLevels.Count == 0 && h >= MinStory) continue;
-                    var at = k < p.FloorLevels.Count ? (panels[i]["floorLevels"] as JArray)?[k] : panels[i]["height"];
+                    var at = k < p.FloorLevels.Count ? (panels[i]["floorLevels"] as JsonList)?[k] : panels[i]["height"];
                     if (Range(at, $"the height of story {k + 1} of panel \"{p.Id}\"", _u.FromSI(h, Quantity.Length), Quantity.Length, MinStory, MaxStory, "building stories")) break;
                 }
                 if (panels[i]["thickness"] is { } tt && Value(tt) is { } tv)
@@ -162,14 +160,14 @@ internal static partial class Plausibility
 
         private void Weights()
         {
-            if (root["seismic"] is not JObject s) return;
+            if (root["seismic"] is not JsonMap s) return;
             foreach (var o in Array(s["weights"]))
                 if (o["weight"] is { } t && Value(t) is { } v && v > 0)
                     if (Range(t, $"the weight of level \"{o["level"]}\"", v, Quantity.Force, MinLevelWeight, MaxLevelWeight, "building floors")) break;
         }
 
         /// <summary>Warns when <paramref name="value"/> (file units) is outside [lo, hi] (SI); true when it warned.</summary>
-        private bool Range(JToken? at, string what, double value, Quantity q, double lo, double hi, string of)
+        private bool Range(JsonNode? at, string what, double value, Quantity q, double lo, double hi, string of)
         {
             double si = _u.ToSI(value, q);
             if (!double.IsFinite(si) || si == 0 || (Math.Abs(si) >= lo && Math.Abs(si) <= hi)) return false;
@@ -289,7 +287,7 @@ internal static partial class Plausibility
         {
             var elevations = m.Nodes.Select(n => n.Y).Distinct().Order().ToArray();
             var sections = m.Sections.ToDictionary(s => s.Id, StringComparer.Ordinal);
-            var sectionTokens = Array(root["sections"]).Where(o => o["id"] is { Type: JTokenType.String }).GroupBy(o => (string)o["id"]!).ToDictionary(g => g.Key, g => g.First(), StringComparer.Ordinal);
+            var sectionTokens = Array(root["sections"]).Where(o => o["id"] is { Type: JsonKind.String }).GroupBy(o => (string)o["id"]!).ToDictionary(g => g.Key, g => g.First(), StringComparer.Ordinal);
             var warned = new HashSet<string>(StringComparer.Ordinal);
             foreach (var x in m.Members)
             {
@@ -311,7 +309,7 @@ internal static partial class Plausibility
         private void LevelsAwayFromNodes()
         {
             var levels = m.Building.Levels;
-            var tokens = Array(root["levels"]).Where(o => o["id"] is { Type: JTokenType.String }).GroupBy(o => (string)o["id"]!).ToDictionary(g => g.Key, g => g.First(), StringComparer.Ordinal);
+            var tokens = Array(root["levels"]).Where(o => o["id"] is { Type: JsonKind.String }).GroupBy(o => (string)o["id"]!).ToDictionary(g => g.Key, g => g.First(), StringComparer.Ordinal);
             for (int k = 0; k < levels.Count; k++)
             {
                 var l = levels[k];
@@ -379,11 +377,11 @@ internal static partial class Plausibility
             {
                 string cid = (string?)check["id"] ?? "";
                 var spec = m.Building.DriftChecks.FirstOrDefault(d => d.Id == cid);
-                if (spec is null || check["cases"] is not JArray cases) continue;
+                if (spec is null || check["cases"] is not JsonList cases) continue;
                 bool seismicEquation = spec.Cd != 1 || spec.Ie != 1 || spec.LimitSource.Contains(BuildingPresets.DriftTable, StringComparison.Ordinal);
                 foreach (var t in cases)
                 {
-                    if (t.Type != JTokenType.String) continue;
+                    if (t.Type != JsonKind.String) continue;
                     string name = (string)t!;
                     // The load cases in it, with a non-zero factor.
                     var parts = ids.TryGetValue(name, out int ci) ? [ci]
