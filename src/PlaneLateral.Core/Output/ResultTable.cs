@@ -55,17 +55,30 @@ public sealed class ResultTable
         foreach (var comment in Comments) w.Write(CsvText.Comment(comment));
         w.Write(string.Join(",", Columns.Select(c => CsvText.Cell(c.Header))));   // a header holding an id (a level, a line) is escaped like any text cell
         w.Write('\n');
+        Span<char> digits = stackalloc char[32];   // "G12" and an int need at most 19 and 11 characters
         foreach (var row in Rows)
         {
             for (int i = 0; i < row.Count; i++)
             {
                 if (i > 0) w.Write(',');
-                w.Write(row[i] switch
+                // Numbers are formatted into a buffer, not a string each: a large table writes hundreds of thousands.
+                switch (row[i])
                 {
-                    double v => double.IsFinite(v) ? v.ToString("G12", CultureInfo.InvariantCulture) : "n/a",
-                    int n => n.ToString(CultureInfo.InvariantCulture),
-                    var cell => CsvText.Cell(cell?.ToString() ?? ""),
-                });
+                    case double v when !double.IsFinite(v):
+                        w.Write("n/a");
+                        break;
+                    case double v:
+                        if (v.TryFormat(digits, out int nd, "G12", CultureInfo.InvariantCulture)) w.Write(digits[..nd]);
+                        else w.Write(v.ToString("G12", CultureInfo.InvariantCulture));
+                        break;
+                    case int k:
+                        if (k.TryFormat(digits, out int nk, default, CultureInfo.InvariantCulture)) w.Write(digits[..nk]);
+                        else w.Write(k.ToString(CultureInfo.InvariantCulture));
+                        break;
+                    case var cell:
+                        w.Write(CsvText.Cell(cell?.ToString() ?? ""));
+                        break;
+                }
             }
             w.Write('\n');
         }
