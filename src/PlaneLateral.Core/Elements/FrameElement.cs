@@ -161,7 +161,9 @@ public sealed class FrameElement
     public double[] GlobalEquivalentLoads(IReadOnlyList<MemberLoad> loads)
     {
         if (loads.Count == 0) return new double[6];
-        var (_, fc) = SmallMatrix.Condense(_kFlexible, FlexibleLoads(loads), _released);
+        var flexible = FlexibleLoads(loads);
+        // With no release the condensation leaves the loads as they are: skip it (and its copy of K) on the common path.
+        var fc = _released.Length == 0 ? flexible : SmallMatrix.Condense(_kFlexible, flexible, _released).F;
         var fNode = SmallMatrix.TransposeTimes(_offset, fc);
         var fr = RigidZoneLoads(loads);
         for (int i = 0; i < 6; i++) fNode[i] += fr[i];
