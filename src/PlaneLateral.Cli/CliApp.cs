@@ -103,7 +103,7 @@ public static class CliApp
         if (!CommandSupport.TrySolve(() => ModelReader.ReadSource(modelPath), stderr, out var source, out int exit)) return exit;
         PhaseTimes.Mark("read, hash, JSON tree");
         if (source.IsPlan) return PlanSolve.Run(modelPath, outDir, stdout, stderr, detail, strict: strict, source: source);   // a building in plan (docs/plan.md)
-        if (!CommandSupport.TrySolve(() => ModelReader.Read(source), stderr, out var model, out exit)) return exit;
+        if (!TryReadModel(source, stderr, out var model, out exit)) return exit;
         if (CommandSupport.RefusedAsStrict(strict, model.Warnings, stderr)) return ExitCodes.BadModel;
         PhaseTimes.Mark("model from the tree");
         bool solved = CommandSupport.TrySolve(() =>
@@ -158,4 +158,12 @@ public static class CliApp
             return ExitCodes.BadModel;
         }
     }
+
+    /// <summary>
+    /// The planar model read from <paramref name="source"/>'s tree. Its own method, so that no closure of the caller holds
+    /// the source: the tree is garbage once the model is built, instead of being kept (and marked and moved by every
+    /// collection) through the analysis and the writing of the files.
+    /// </summary>
+    private static bool TryReadModel(ModelSource source, TextWriter stderr, out StructureModel model, out int exit) =>
+        CommandSupport.TrySolve(() => ModelReader.Read(source), stderr, out model, out exit);
 }
