@@ -135,18 +135,20 @@ public static class PlaneStressAnalysis
         ]);
 
         // Element matrices, kept for recovery when there is a case or combination to recover; with none (a stiffness
-        // alone, e.g. each sweep point's meshes) each is assembled and dropped at once, so it dies young instead of
-        // being carried through the collections the assembly triggers. The sums are the same either way.
+        // alone, e.g. each sweep point's meshes) every element is computed into one buffer and assembled from it, so
+        // the assembly allocates no matrix per element. The sums are the same either way.
         int ne = mesh.Elements.Length, nn = mesh.Element.NodeCount;
         bool recover = cases.Count > 0 || combinations is { Count: > 0 };
         var ke = new double[recover ? ne : 0][,];
         var eqs = new int[recover ? ne : 0][];
         var elementEqs = new int[2 * nn];
+        var kElement = new double[2 * nn, 2 * nn];   // the one buffer every element is computed in, when none is kept
         var builder = new SymmetricMatrixBuilder(dofs.FreeCount, ne * nn * (2 * nn + 1));
         for (int e = 0; e < ne; e++)
         {
             var (x, y) = mesh.ElementCoordinates(e);
-            var kElement = mesh.Element.Stiffness(x, y, p.Material);
+            if (recover) kElement = mesh.Element.Stiffness(x, y, p.Material);
+            else mesh.Element.Stiffness(x, y, p.Material, kElement);
             if (recover) elementEqs = new int[2 * nn];
             for (int a = 0; a < nn; a++)
             {
