@@ -4,7 +4,8 @@
 #      build and the Native AOT build (wall and CPU time, pairwise, interleaved);
 #   2. the supernodal solver against CHOLMOD (cholmod_bench.c beside this script) on the same Matrix Market files at
 #      about 10^4, 10^5 and 10^6 unknowns: analysis + factorisation + solve, and peak memory at 10^6;
-#   3. the default sweep on 2 processors against 1 (taskset), pairwise wall time.
+#   3. the default sweep on 2 processors against 1 (taskset), pairwise wall time, for the ReadyToRun build and the
+#      Native AOT build (what `dotnet tool install` gives on x64 Linux), each run's three files compared byte for byte.
 # Prints one Markdown table (target, measured ratio: median and min–max of the pairs or rounds, met or not) and the
 # machine's facts. From the repository root:
 #   bash benchmarks/ratios/run.sh [--quick] [--out FILE] [--skip-startup] [--skip-aot] [--skip-cholmod] [--skip-sweep]
@@ -76,6 +77,20 @@ if [[ $skip_startup == 0 || $skip_cholmod == 0 ]]; then
   B=(dotnet "$root/benchmarks/PlaneLateral.Benchmarks/bin/Release/net10.0/PlaneLateral.Benchmarks.dll")
 fi
 
+# The Native AOT build, published once for the start-up rows and the sweep rows.
+native=""
+if [[ $skip_aot == 1 ]]; then
+  notes+=("Native AOT build skipped (--skip-aot)")
+elif [[ $skip_startup == 0 || $skip_sweep == 0 ]]; then
+  say "publishing the Native AOT build (profile native-linux-x64)"
+  if dotnet publish src/PlaneLateral.Cli -c Release -p:PublishProfile=native-linux-x64 -o "$work/native" -v q -nologo >"$work/publish-aot.log" 2>&1 \
+     && [[ -x $work/native/planelateral ]]; then
+    native=$work/native/planelateral
+  else
+    notes+=("Native AOT build skipped: \`dotnet publish -p:PublishProfile=native-linux-x64\` failed ($(grep -m1 -E 'error' "$work/publish-aot.log" | sed 's/^ *//' | cut -c1-160 || echo 'see its log'))")
+  fi
+fi
+
 # ---- 1. Start-up ----------------------------------------------------------------------------------------------------
 if [[ $skip_startup == 0 ]]; then
   say "start-up: hello-world, frame model, builds"
@@ -88,17 +103,7 @@ if [[ $skip_startup == 0 ]]; then
   frame=$work/frame.json
   "${B[@]}" frame-json 20 60 "$frame" >/dev/null
   builds=("ReadyToRun:$P")
-  if [[ $skip_aot == 0 ]]; then
-    say "publishing the Native AOT build (profile native-linux-x64)"
-    if dotnet publish src/PlaneLateral.Cli -c Release -p:PublishProfile=native-linux-x64 -o "$work/native" -v q -nologo >"$work/publish-aot.log" 2>&1 \
-       && [[ -x $work/native/planelateral ]]; then
-      builds+=("Native AOT:$work/native/planelateral")
-    else
-      notes+=("Native AOT build skipped: \`dotnet publish -p:PublishProfile=native-linux-x64\` failed ($(grep -m1 -E 'error' "$work/publish-aot.log" | sed 's/^ *//' | cut -c1-160 || echo 'see its log'))")
-    fi
-  else
-    notes+=("Native AOT build skipped (--skip-aot)")
-  fi
+  [[ -n $native ]] && builds+=("Native AOT:$native")
   mkdir -p "$work/demo" "$work/st"
   # one warm-up round, then $pairs rounds: each program run right after a hello-world run
   for ((i = 0; i <= pairs; i++)); do
@@ -201,15 +206,31 @@ if [[ $skip_sweep == 0 ]]; then
   if [[ $procs -lt 2 ]]; then
     notes+=("Default sweep skipped: one processor")
   else
-    say "default sweep: 2 processors against 1"
+    sweep_builds=("ReadyToRun:$P")
+    [[ -n $native ]] && sweep_builds+=("Native AOT:$native")
+    say "default sweep: 2 processors against 1 ($(printf '%s, ' "${sweep_builds[@]%%:*}" | sed 's/, $//'))"
     mkdir -p "$work/sw"
+    # one warm-up pair per build, then $sweep_pairs pairs, the builds interleaved; every run's files compared with the first's
     for ((i = 0; i <= sweep_pairs; i++)); do
       [[ $i == 0 ]] && sfx=warm || sfx=log
-      M run "$work/sw/two.$sfx" taskset -c 0,1 "$P" sweep --out "$work/sweep2"
-      M run "$work/sw/one.$sfx" taskset -c 0 "$P" sweep --out "$work/sweep1"
+      for b in "${sweep_builds[@]}"; do
+        name=${b%%:*}; exe=${b#*:}; tag=${name// /}
+        for c in two one; do
+          [[ $c == two ]] && cpus=0,1 || cpus=0
+          rm -rf "$work/sweep-$tag-$c"
+          M run "$work/sw/$c-$tag.$sfx" taskset -c $cpus "$exe" sweep --out "$work/sweep-$tag-$c"
+          [[ -d $work/sweep-ref ]] || cp -r "$work/sweep-$tag-$c" "$work/sweep-ref"
+          diff -r -q "$work/sweep-ref" "$work/sweep-$tag-$c" >/dev/null || sweep_differs="$name on ${cpus//,/ and } processor(s)"
+        done
+      done
     done
-    row "Default sweep (\`planelateral sweep\`, whole process): wall time on 1 processor ÷ on 2" "$(M ratio "$work/sw/one.log" "$work/sw/two.log" wall)" ge 1.8
-    details+=("- default sweep: 2 processors median wall $(M median "$work/sw/two.log" wall) s (CPU $(M median "$work/sw/two.log" cpu) s), 1 processor $(M median "$work/sw/one.log" wall) s (CPU $(M median "$work/sw/one.log" cpu) s)")
+    for b in "${sweep_builds[@]}"; do
+      name=${b%%:*}; tag=${name// /}
+      row "Default sweep (\`planelateral sweep\`, whole process), $name: wall time on 1 processor ÷ on 2" "$(M ratio "$work/sw/one-$tag.log" "$work/sw/two-$tag.log" wall)" ge 1.8
+      details+=("- default sweep, $name: 2 processors median wall $(M median "$work/sw/two-$tag.log" wall) s (CPU $(M median "$work/sw/two-$tag.log" cpu) s), 1 processor $(M median "$work/sw/one-$tag.log" wall) s (CPU $(M median "$work/sw/one-$tag.log" cpu) s)")
+    done
+    if [[ -n ${sweep_differs:-} ]]; then notes+=("Default sweep: the files of a run ($sweep_differs) differ from the first run's")
+    else details+=("- default sweep: every run's three files byte-identical (\`diff -r\`), both builds, 1 and 2 processors"); fi
   fi
 fi
 

@@ -128,6 +128,7 @@ internal static class SweepCommand
     {
         var problems = new List<string>();
         var spec = ToSpec(a, problems);
+        PhaseTimes.Mark("command line, sweep spec");   // off unless PLANELATERAL_PHASES is set
         if (spec is null)
         {
             foreach (var p in problems) stderr.Write($"sweep: {p}\n");
@@ -143,8 +144,10 @@ internal static class SweepCommand
         var warmUp = StartWarmUp();
         var result = AspectSweep.Run(spec, a.Models(), progress);
         progress?.Finish();
+        PhaseTimes.Mark("points");
         try { warmUp.Wait(); }
         catch (AggregateException) { /* nothing drawn was kept: the figures below meet the same fault and report it */ }
+        PhaseTimes.Mark("drawing library ready");
 
         string folder = a.Out ?? Path.Combine(Directory.GetCurrentDirectory(), "planelateral-results", "sweep");
         // Each file is made on its own task (the two figures on both processors at once); the console text is set while
@@ -163,8 +166,10 @@ internal static class SweepCommand
             stderr.Write($"{ex.Message}\nFix: choose a writable folder with --out. No sweep file was replaced.\n");
             return ExitCodes.OutputFailed;
         }
+        PhaseTimes.Mark("figures, CSV, files written");
         stdout.Write(text.ToString());
         stdout.Write($"\nSweep written to {folder}: {string.Join(", ", written.Select(Path.GetFileName))}\n");
+        PhaseTimes.Mark("console text");
         return ExitCodes.Success;
     }
 

@@ -134,22 +134,29 @@ public static class PlaneStressAnalysis
             .. p.VerticalTies.Select(t => (IReadOnlyList<(int, Dof)>)t.Select(i => (i, Dof.Y)).ToArray()),
         ]);
 
-        // Element matrices, kept for recovery.
+        // Element matrices, kept for recovery when there is a case or combination to recover; with none (a stiffness
+        // alone, e.g. each sweep point's meshes) every element is computed into one buffer and assembled from it, so
+        // the assembly allocates no matrix per element. The sums are the same either way.
         int ne = mesh.Elements.Length, nn = mesh.Element.NodeCount;
-        var ke = new double[ne][,];
-        var eqs = new int[ne][];
+        bool recover = cases.Count > 0 || combinations is { Count: > 0 };
+        var ke = new double[recover ? ne : 0][,];
+        var eqs = new int[recover ? ne : 0][];
+        var elementEqs = new int[2 * nn];
+        var kElement = new double[2 * nn, 2 * nn];   // the one buffer every element is computed in, when none is kept
         var builder = new SymmetricMatrixBuilder(dofs.FreeCount, ne * nn * (2 * nn + 1));
         for (int e = 0; e < ne; e++)
         {
             var (x, y) = mesh.ElementCoordinates(e);
-            ke[e] = mesh.Element.Stiffness(x, y, p.Material);
-            eqs[e] = new int[2 * nn];
+            if (recover) kElement = mesh.Element.Stiffness(x, y, p.Material);
+            else mesh.Element.Stiffness(x, y, p.Material, kElement);
+            if (recover) elementEqs = new int[2 * nn];
             for (int a = 0; a < nn; a++)
             {
-                eqs[e][2 * a] = dofs.Equation(mesh.Elements[e][a], Dof.X);
-                eqs[e][2 * a + 1] = dofs.Equation(mesh.Elements[e][a], Dof.Y);
+                elementEqs[2 * a] = dofs.Equation(mesh.Elements[e][a], Dof.X);
+                elementEqs[2 * a + 1] = dofs.Equation(mesh.Elements[e][a], Dof.Y);
             }
-            builder.AddElement(eqs[e], ke[e]);
+            if (recover) { ke[e] = kElement; eqs[e] = elementEqs; }
+            builder.AddElement(elementEqs, kElement);
         }
         var k = builder.Build();
         var factor = solver.Factorize(k, options.PivotTolerance);

@@ -100,25 +100,35 @@ public sealed class EnvelopeCholeskySolver : ISparseSpdSolver
 /// <summary>
 /// The factor P·K·Pᵀ = L·D·Lᵀ held in row-oriented envelope storage. Immutable; safe to use from several threads at once.
 /// </summary>
+/// <remarks>
+/// L's entries, up to <see cref="SymmetricMatrixBuilder.PooledLength"/> of them, are held in an array rented from
+/// <see cref="ArrayPool{T}.Shared"/> and given back on <see cref="Dispose"/>, so that a thread factorising one system after
+/// another (the sweep's points, a convergence study's meshes, each disposed with its run) reuses the same memory instead
+/// of a fresh large-object array each time; a larger L is an ordinary array left to the collector. After
+/// <see cref="Dispose"/> the factor refuses to solve (<see cref="ObjectDisposedException"/>); it must not be disposed
+/// while a solve on it is running.
+/// </remarks>
 public sealed class EnvelopeFactor : ISparseSpdFactor
 {
     private readonly int _n;
     private readonly int[] _perm;       // perm[new] = old
     private readonly int[] _rowStart;   // row i of L (columns first[i] .. i-1) is _l[_rowStart[i] .. _rowStart[i+1])
-    private readonly double[] _l;
+    private double[]? _l;               // null once disposed
+    private readonly bool _pooled;      // _l was rented from the shared pool
     private readonly double[] _d;
     private readonly bool[] _failed;    // by new index
     private readonly PivotFailure[] _failures;
     private readonly int[] _failurePosition;   // new index of each failure
     private readonly double[][] _failureRows;  // row of L at the failed pivot, before it was zeroed
 
-    private EnvelopeFactor(int n, int[] perm, int[] rowStart, double[] l, double[] d, bool[] failed,
+    private EnvelopeFactor(int n, int[] perm, int[] rowStart, double[] l, bool pooled, double[] d, bool[] failed,
         PivotFailure[] failures, int[] failurePosition, double[][] failureRows)
     {
         _n = n;
         _perm = perm;
         _rowStart = rowStart;
         _l = l;
+        _pooled = pooled;
         _d = d;
         _failed = failed;
         _failures = failures;
@@ -130,10 +140,10 @@ public sealed class EnvelopeFactor : ISparseSpdFactor
     public int Size => _n;
 
     /// <inheritdoc />
-    public long FactorNonZeros => (long)_l.Length + _n;
+    public long FactorNonZeros => (long)_rowStart[_n] + _n;
 
     /// <summary>Off-diagonal entries stored (the envelope size |Env| of P·K·Pᵀ).</summary>
-    public long EnvelopeSize => _l.Length;
+    public long EnvelopeSize => _rowStart[_n];
 
     /// <summary>The ordering used, <c>perm[new] = old</c> (a copy).</summary>
     public int[] Permutation => (int[])_perm.Clone();
@@ -159,7 +169,9 @@ public sealed class EnvelopeFactor : ISparseSpdFactor
                 throw new InvalidOperationException($"Envelope of {total}+ entries exceeds the largest array; use a better ordering.");
             rowStart[i + 1] = (int)total;
         }
-        var l = new double[total];
+        bool pooled = total <= SymmetricMatrixBuilder.PooledLength;
+        var l = pooled ? ArrayPool<double>.Shared.Rent((int)total) : new double[total];
+        if (pooled) Array.Clear(l, 0, (int)total);   // a rented array holds what its last user left
         var d = new double[n];
 
         // Scatter the lower triangle of P·K·Pᵀ into the envelope (duplicates, if any, summed).
@@ -229,13 +241,14 @@ public sealed class EnvelopeFactor : ISparseSpdFactor
             else d[i] = di;
         }
 
-        return new EnvelopeFactor(n, perm, rowStart, l, d, failed, failures.ToArray(), positions.ToArray(), rows.ToArray());
+        return new EnvelopeFactor(n, perm, rowStart, l, pooled, d, failed, failures.ToArray(), positions.ToArray(), rows.ToArray());
     }
 
     /// <inheritdoc />
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public void Solve(ReadOnlySpan<double> b, Span<double> x)
     {
+        var l = _l ?? throw Disposed();
         if (b.Length != _n || x.Length != _n) throw new ArgumentException("Vector length differs from the factor size.");
         if (_n == 0) return;
         double[] rented = ArrayPool<double>.Shared.Rent(_n);
@@ -245,7 +258,6 @@ public sealed class EnvelopeFactor : ISparseSpdFactor
             for (int i = 0; i < _n; i++) w[i] = _failed[i] ? 0.0 : b[_perm[i]];
 
             // L·y = P·b (row-oriented: one dot product per row).
-            var l = _l;
             var rs = _rowStart;
             for (int i = 0; i < _n; i++)
             {
@@ -287,6 +299,7 @@ public sealed class EnvelopeFactor : ISparseSpdFactor
     /// </remarks>
     public double[] MechanismShape(int failureIndex)
     {
+        var l = _l ?? throw Disposed();
         if ((uint)failureIndex >= (uint)_failures.Length) throw new ArgumentOutOfRangeException(nameof(failureIndex));
         int k = _failurePosition[failureIndex];
         double[] lk = _failureRows[failureIndex];
@@ -298,7 +311,7 @@ public sealed class EnvelopeFactor : ISparseSpdFactor
         {
             int len = _rowStart[i + 1] - _rowStart[i];
             double wi = w[i];
-            if (len > 0 && wi != 0.0) DenseKernels.SubtractScaled(w.AsSpan(i - len, len), wi, _l.AsSpan(_rowStart[i], len));
+            if (len > 0 && wi != 0.0) DenseKernels.SubtractScaled(w.AsSpan(i - len, len), wi, l.AsSpan(_rowStart[i], len));
         }
         double max = 0.0;
         for (int i = 0; i <= k; i++) max = Math.Max(max, Math.Abs(w[i]));
@@ -306,4 +319,13 @@ public sealed class EnvelopeFactor : ISparseSpdFactor
         for (int i = 0; i <= k; i++) z[_perm[i]] = _failed[i] && i != k ? 0.0 : w[i] / max;
         return z;
     }
+
+    /// <summary>Gives L's array back to the shared pool when it came from there; later solves throw <see cref="ObjectDisposedException"/>.</summary>
+    public void Dispose()
+    {
+        var l = Interlocked.Exchange(ref _l, null);
+        if (l is not null && _pooled) ArrayPool<double>.Shared.Return(l);
+    }
+
+    private static ObjectDisposedException Disposed() => new(nameof(EnvelopeFactor), "the factor was disposed (its run ended); factorise again.");
 }

@@ -58,8 +58,16 @@ public sealed class LagrangeQuad9 : IPlaneElement
 
     public double[,] Stiffness(ReadOnlySpan<double> x, ReadOnlySpan<double> y, PlaneStressMaterial material)
     {
-        var d = material.D();
         var k = new double[18, 18];
+        Stiffness(x, y, material, k);
+        return k;
+    }
+
+    public void Stiffness(ReadOnlySpan<double> x, ReadOnlySpan<double> y, PlaneStressMaterial material, double[,] k)
+    {
+        if (k.GetLength(0) != 18 || k.GetLength(1) != 18) throw new ArgumentException("the stiffness buffer must be 18 × 18", nameof(k));
+        var d = material.D();
+        Array.Clear(k);
         Span<double> b = stackalloc double[3 * 18];
         var g = GaussLegendre.Points3;
         var w = GaussLegendre.Weights3;
@@ -71,7 +79,6 @@ public sealed class LagrangeQuad9 : IPlaneElement
             }
         for (int i = 0; i < 18; i++)
             for (int j = 0; j < i; j++) { double v = 0.5 * (k[i, j] + k[j, i]); k[i, j] = v; k[j, i] = v; }
-        return k;
     }
 
     /// <summary>Stresses at the 3×3 Gauss points, ordered η outer, ξ inner (both ascending).</summary>

@@ -42,6 +42,17 @@ public interface IPlaneElement
     /// <summary>Element stiffness (N/m), 2n×2n, for node coordinates x, y (m) counter-clockwise.</summary>
     double[,] Stiffness(ReadOnlySpan<double> x, ReadOnlySpan<double> y, PlaneStressMaterial material);
 
+    /// <summary>
+    /// The element stiffness (N/m) written into <paramref name="k"/> (2n×2n, every entry overwritten): the same values as
+    /// <see cref="Stiffness(ReadOnlySpan{double}, ReadOnlySpan{double}, PlaneStressMaterial)"/>, for a caller that
+    /// assembles one element after another into the same buffer instead of a new array each.
+    /// </summary>
+    void Stiffness(ReadOnlySpan<double> x, ReadOnlySpan<double> y, PlaneStressMaterial material, double[,] k)
+    {
+        var s = Stiffness(x, y, material);
+        Array.Copy(s, k, s.Length);
+    }
+
     /// <summary>Stresses at the element's Gauss points, for element displacements ue (m).</summary>
     PlaneStressPoint[] GaussStresses(ReadOnlySpan<double> x, ReadOnlySpan<double> y, PlaneStressMaterial material, ReadOnlySpan<double> ue);
 
